@@ -1,0 +1,146 @@
+package engine
+
+import "math"
+
+// Side names a side of the ship.
+type Side int
+
+const (
+	Port      Side = -1
+	Starboard Side = 1
+)
+
+func (s Side) String() string {
+	if s == Port {
+		return "port"
+	}
+	return "starboard"
+}
+
+// Clearance is the least height of a line along the ship (the deck edge or
+// the margin line) above the water: where and on which side.
+type Clearance struct {
+	HeightM float64 // above the water along the true vertical; negative: immersed
+	XM      float64
+	Side    Side
+}
+
+// StationFreeboard is the freeboard to the deck at side at one station.
+type StationFreeboard struct {
+	XM                   float64
+	PortM, StarboardM    float64
+	DeckZM, HalfBreadthM float64
+}
+
+// OpeningClearance is an opening's height above the water.
+type OpeningClearance struct {
+	Opening
+	HeightM float64 // along the true vertical; negative: immersed
+}
+
+// Immersed reports whether the opening is under water.
+func (o OpeningClearance) Immersed() bool { return o.HeightM < 0 }
+
+// Position is a solved floating position.
+type Position struct {
+	Plane Plane // the water surface in the ship frame
+
+	DraftAftM, DraftMidM, DraftFwdM float64 // centreline, at AP, amidships, FP
+	TrimM                           float64 // draft aft − draft forward
+	HeelDeg                         float64 // positive starboard down
+
+	DisplacementT float64 // mass afloat, floodwater held included
+	VolumeM3      float64 // displaced by the hull still buoyant
+
+	LCBM, TCBM, VCBM float64 // centre of buoyancy
+	LCGM, TCGM, KGM  float64 // centre of gravity (solid), floodwater held included
+	FSCM             float64 // free-surface correction ΣFSM/Δ, m
+
+	WaterplaneAreaM2 float64 // intact waterplane (lost parts removed), projected
+	LCFM, TCFM       float64 // its centroid
+	BMTM, BMLM       float64 // its second moments about its own centroidal axes ÷ V
+	KMTM             float64 // VCB + BMT
+	GMM              float64 // metacentric height in this position, corrected for free surface
+	GMLM             float64 // longitudinal metacentric height
+
+	DeckEdge   Clearance
+	MarginLine Clearance
+	Freeboards []StationFreeboard
+	Openings   []OpeningClearance
+
+	Iterations int
+}
+
+// position works out everything reported at a solved state.
+//
+// GM in the final position: BMT − BG − FSC, where BMT = I_T/V with I_T the
+// second moment of the waterplane still intact about its own centroidal axis
+// along the ship's length, measured in the inclined plane, and BG the
+// height of G above B along the true vertical. Upright this is
+// KB + BM − KG − FSC, the ordinary fluid GM.
+func (pr *Problem) position(s state, it int) Position {
+	p := s.p
+	h := pr.v.Hull
+	L := h.LengthM
+	W := pr.massT
+	pos := Position{Plane: p, Iterations: it, DisplacementT: W}
+	pos.DraftAftM = p.A
+	pos.DraftMidM = p.A + p.B*L/2
+	pos.DraftFwdM = p.A + p.B*L
+	pos.TrimM = pos.DraftAftM - pos.DraftFwdM
+	pos.HeelDeg = math.Atan(p.C) * 180 / math.Pi
+	e := s.e
+	pos.VolumeM3 = e.V
+	pos.LCBM, pos.TCBM, pos.VCBM = e.Centroid()
+	pos.LCGM, pos.TCGM, pos.KGM = s.gx[0], s.gx[1], s.gx[2]
+
+	fsm := s.fsm
+	for _, im := range s.heldIm {
+		if im.AW > 0 {
+			fsm += pr.rho * (im.IYY - im.SY*im.SY/im.AW)
+		}
+	}
+	pos.FSCM = fsm / W
+
+	pos.WaterplaneAreaM2 = e.AW
+	if e.AW > 0 && e.V > 0 {
+		pos.LCFM, pos.TCFM = e.SX/e.AW, e.SY/e.AW
+		it := e.IYY - e.AW*pos.TCFM*pos.TCFM
+		il := e.IXX - e.AW*pos.LCFM*pos.LCFM
+		b2, c2 := p.B*p.B, p.C*p.C
+		n := 1 + b2 + c2
+		// From the xy projection to the inclined plane: area scales by √n,
+		// transverse distances by √(n/(1+B²)), longitudinal by √(n/(1+C²)).
+		pos.BMTM = it * n / (1 + b2) * math.Sqrt(n) / e.V
+		pos.BMLM = il * n / (1 + c2) * math.Sqrt(n) / e.V
+		bg := ((pos.LCGM-pos.LCBM)*(-p.B) + (pos.TCGM-pos.TCBM)*(-p.C) + (pos.KGM - pos.VCBM)) / math.Sqrt(n)
+		pos.GMM = pos.BMTM - bg - pos.FSCM
+		pos.GMLM = pos.BMLM - bg
+		pos.KMTM = pos.VCBM + pos.BMTM
+	}
+
+	pos.DeckEdge = Clearance{HeightM: math.Inf(1)}
+	pos.MarginLine = Clearance{HeightM: math.Inf(1)}
+	for i := range h.stations {
+		x, hb, z := h.DeckEdge(i)
+		sf := StationFreeboard{XM: x, DeckZM: z, HalfBreadthM: hb,
+			PortM: p.Height(x, -hb, z), StarboardM: p.Height(x, hb, z)}
+		pos.Freeboards = append(pos.Freeboards, sf)
+		for _, c := range []struct {
+			side Side
+			fb   float64
+			ml   float64
+		}{{Port, sf.PortM, p.Height(x, -hb, z-pr.v.MarginLineM)}, {Starboard, sf.StarboardM, p.Height(x, hb, z-pr.v.MarginLineM)}} {
+			if c.fb < pos.DeckEdge.HeightM {
+				pos.DeckEdge = Clearance{c.fb, x, c.side}
+			}
+			if c.ml < pos.MarginLine.HeightM {
+				pos.MarginLine = Clearance{c.ml, x, c.side}
+			}
+		}
+	}
+	for _, o := range pr.v.Openings {
+		pos.Openings = append(pos.Openings, OpeningClearance{o, p.Height(o.X, o.Y, o.Z)})
+	}
+	return pos
+}

@@ -1,0 +1,128 @@
+package engine
+
+import "math"
+
+// Point is a point of a transverse section: Y to starboard, Z up, metres.
+type Point struct{ Y, Z float64 }
+
+// areaMoments accumulates the area and first moments of a polygon in the
+// (y, z) plane and the chords that the waterline cuts from it.
+//
+// A is ∮ in the counter-clockwise sense, SY = ∫∫ y dA and SZ = ∫∫ z dA
+// (shoelace formulas). W, WY and WYY are ∫ dy, ∫ y dy and ∫ y² dy along the
+// waterline's chords, projected on the y axis: the waterplane's breadth and its
+// first and second moments at this x.
+type areaMoments struct {
+	A, SY, SZ   float64
+	W, WY, WYY float64
+}
+
+// clipBelow walks the polygon whose vertex k is p0[k] + s·dp[k] and keeps the
+// part with z − c·y < h (below the waterline of slope c = tan(heel) and height
+// h on the centreline). It returns the clipped polygon's moments without
+// building it (a streaming Sutherland–Hodgman clip). The polygon must be
+// counter-clockwise; a non-convex one is handled correctly, the extra edges
+// that the clip makes along the waterline cancelling in the sums.
+//
+// Special cases: an empty polygon gives zero moments; with h = +Inf the whole
+// polygon is kept and W, WY, WYY are zero.
+func clipBelow(p0, dp []Point, s, c, h float64) areaMoments {
+	var m areaMoments
+	n := len(p0)
+	if n == 0 {
+		return m
+	}
+	var (
+		first, prev Point
+		have        bool
+	)
+	emit := func(q Point) {
+		if have {
+			cr := prev.Y*q.Z - q.Y*prev.Z
+			m.A += cr
+			m.SY += (prev.Y + q.Y) * cr
+			m.SZ += (prev.Z + q.Z) * cr
+		} else {
+			first = q
+			have = true
+		}
+		prev = q
+	}
+	last := Point{p0[n-1].Y + s*dp[n-1].Y, p0[n-1].Z + s*dp[n-1].Z}
+	dLast := last.Z - c*last.Y - h
+	for k := 0; k < n; k++ {
+		cur := Point{p0[k].Y + s*dp[k].Y, p0[k].Z + s*dp[k].Z}
+		dCur := cur.Z - c*cur.Y - h
+		inLast, inCur := dLast < 0, dCur < 0
+		if inLast != inCur {
+			t := dLast / (dLast - dCur)
+			q := Point{last.Y + t*(cur.Y-last.Y), last.Z + t*(cur.Z-last.Z)}
+			emit(q)
+			y := q.Y
+			if inLast { // leaving the water: the chord starts here
+				m.W += y
+				m.WY += y * y / 2
+				m.WYY += y * y * y / 3
+			} else { // entering: the chord ends here
+				m.W -= y
+				m.WY -= y * y / 2
+				m.WYY -= y * y * y / 3
+			}
+		}
+		if inCur {
+			emit(cur)
+		}
+		last, dLast = cur, dCur
+	}
+	if have {
+		cr := prev.Y*first.Z - first.Y*prev.Z
+		m.A += cr
+		m.SY += (prev.Y + first.Y) * cr
+		m.SZ += (prev.Z + first.Z) * cr
+	}
+	m.A /= 2
+	m.SY /= 6
+	m.SZ /= 6
+	return m
+}
+
+// polygonMoments returns area and first moments of a whole polygon.
+func polygonMoments(p []Point) areaMoments {
+	dp := make([]Point, len(p))
+	return clipBelow(p, dp, 0, 0, math.Inf(1))
+}
+
+// halfPlane is the region ny·y + nz·z ≤ k of a section.
+type halfPlane struct{ ny, nz, k float64 }
+
+// clipPolygon returns the part of p inside hp (Sutherland–Hodgman) and a
+// signature of which vertices were inside, so that two clips of polygons
+// with corresponding vertices can be told to have the same topology.
+func clipPolygon(p []Point, hp halfPlane) ([]Point, uint64) {
+	var out []Point
+	var sig uint64 = 1469598103934665603
+	n := len(p)
+	if n == 0 {
+		return nil, sig
+	}
+	last := p[n-1]
+	dLast := hp.ny*last.Y + hp.nz*last.Z - hp.k
+	for _, cur := range p {
+		dCur := hp.ny*cur.Y + hp.nz*cur.Z - hp.k
+		inLast, inCur := dLast <= 0, dCur <= 0
+		bit := uint64(0)
+		if inCur {
+			bit = 1
+		}
+		sig = (sig ^ bit) * 1099511628211
+		if inLast != inCur {
+			t := dLast / (dLast - dCur)
+			out = append(out, Point{last.Y + t*(cur.Y-last.Y), last.Z + t*(cur.Z-last.Z)})
+		}
+		if inCur {
+			out = append(out, cur)
+		}
+		last, dLast = cur, dCur
+	}
+	return out, sig
+}

@@ -1,0 +1,261 @@
+package engine
+
+import (
+	"math"
+	"sort"
+)
+
+// Plane is the free water surface z = A + B·x + C·y in the ship frame.
+// A is the centreline draft at the aft perpendicular (m), B = −trim/L and
+// C = tan(heel), heel positive starboard down.
+type Plane struct{ A, B, C float64 }
+
+// Z returns the height of the plane above the baseline at (x, y).
+func (p Plane) Z(x, y float64) float64 { return p.A + p.B*x + p.C*y }
+
+// Height returns the signed distance of the point (x, y, z) above the plane,
+// measured along the true vertical (the plane's normal): positive above the
+// water, negative immersed.
+func (p Plane) Height(x, y, z float64) float64 {
+	return (z - p.Z(x, y)) / math.Sqrt(1+p.B*p.B+p.C*p.C)
+}
+
+// HeelRad returns the heel, atan(C).
+func (p Plane) HeelRad() float64 { return math.Atan(p.C) }
+
+// slab is a piece of a solid between x0 and x1 whose section polygon has
+// vertex k at p0[k] + (x − x0)·dp[k]: a ruled surface.
+type slab struct {
+	x0, x1 float64
+	p0, dp []Point
+	full   Immersion // the whole slab, waterplane terms zero
+	zmin   float64
+	zmax   float64
+	ymax   float64 // largest |y| of any vertex
+}
+
+func newSlab(x0, x1 float64, a, b []Point) slab {
+	if len(a) != len(b) {
+		panic("engine: slab ends with different vertex counts")
+	}
+	s := slab{x0: x0, x1: x1, p0: append([]Point(nil), a...), dp: make([]Point, len(a))}
+	dx := x1 - x0
+	s.zmin, s.zmax = math.Inf(1), math.Inf(-1)
+	for k := range a {
+		if dx > 0 {
+			s.dp[k] = Point{(b[k].Y - a[k].Y) / dx, (b[k].Z - a[k].Z) / dx}
+		}
+		for _, q := range []Point{a[k], b[k]} {
+			s.zmin = math.Min(s.zmin, q.Z)
+			s.zmax = math.Max(s.zmax, q.Z)
+			s.ymax = math.Max(s.ymax, math.Abs(q.Y))
+		}
+	}
+	s.full = s.integrate(Plane{A: math.Inf(1)}, x0, x1)
+	return s
+}
+
+// section returns the slab's polygon at x (x0 ≤ x ≤ x1).
+func (s *slab) section(x float64) []Point {
+	out := make([]Point, len(s.p0))
+	t := x - s.x0
+	for k := range s.p0 {
+		out[k] = Point{s.p0[k].Y + t*s.dp[k].Y, s.p0[k].Z + t*s.dp[k].Z}
+	}
+	return out
+}
+
+// Two-point Gauss–Legendre nodes and weights on [0, 1]: exact for cubics.
+var (
+	gaussNode   = [2]float64{0.5 - 0.5/math.Sqrt(3), 0.5 + 0.5/math.Sqrt(3)}
+	gaussWeight = [2]float64{0.5, 0.5}
+)
+
+// integrate adds the slab's part below p between xa and xb (inside the slab)
+// with two-point Gauss–Legendre.
+func (s *slab) integrate(p Plane, xa, xb float64) Immersion {
+	var im Immersion
+	dx := xb - xa
+	if dx <= 0 {
+		return im
+	}
+	for g := range gaussNode {
+		x := xa + gaussNode[g]*dx
+		w := gaussWeight[g] * dx
+		m := clipBelow(s.p0, s.dp, x-s.x0, p.C, p.A+p.B*x)
+		im.V += w * m.A
+		im.MX += w * x * m.A
+		im.MY += w * m.SY
+		im.MZ += w * m.SZ
+		im.AW += w * m.W
+		im.SX += w * x * m.W
+		im.SY += w * m.WY
+		im.IXX += w * x * x * m.W
+		im.IXY += w * x * m.WY
+		im.IYY += w * m.WYY
+	}
+	return im
+}
+
+// below returns the slab's immersion below p, split at every x where a
+// vertex crosses the plane so each piece is smooth.
+func (s *slab) below(p Plane) Immersion {
+	// Quick answers for a slab wholly above or below the plane.
+	n := len(s.p0)
+	dx := s.x1 - s.x0
+	allAbove, allBelow := true, true
+	var cuts [64]float64
+	roots := cuts[:0]
+	for k := 0; k < n; k++ {
+		d0 := s.p0[k].Z - p.C*s.p0[k].Y - p.A - p.B*s.x0
+		z1, y1 := s.p0[k].Z+dx*s.dp[k].Z, s.p0[k].Y+dx*s.dp[k].Y
+		d1 := z1 - p.C*y1 - p.A - p.B*s.x1
+		if d0 < 0 || d1 < 0 {
+			allAbove = false
+		}
+		if d0 > 0 || d1 > 0 {
+			allBelow = false
+		}
+		if (d0 < 0 && d1 > 0) || (d0 > 0 && d1 < 0) {
+			roots = append(roots, s.x0+dx*d0/(d0-d1))
+		}
+	}
+	if allAbove {
+		return Immersion{}
+	}
+	if allBelow {
+		return s.full
+	}
+	if len(roots) > 1 {
+		sort.Float64s(roots)
+	}
+	var im Immersion
+	xa := s.x0
+	for _, r := range roots {
+		if r-xa > 1e-12*(1+math.Abs(r)) {
+			im.add(s.integrate(p, xa, r), 1)
+			xa = r
+		}
+	}
+	im.add(s.integrate(p, xa, s.x1), 1)
+	return im
+}
+
+// Immersion holds the integrals of a solid below a plane.
+//
+// V = ∭ dV, (MX, MY, MZ) = ∭ (x, y, z) dV: volume and first moments.
+// The waterplane terms are over the solid's cut by the plane, projected on
+// the xy plane: AW = ∬ dA, (SX, SY) = ∬ (x, y) dA and the second moments
+// IXX = ∬ x² dA, IXY = ∬ xy dA, IYY = ∬ y² dA, all about the origin of the
+// ship frame. They are the derivatives of V and the first moments with
+// respect to the plane's A, B and C (see jacobian in equilibrium.go).
+type Immersion struct {
+	V, MX, MY, MZ              float64
+	AW, SX, SY, IXX, IXY, IYY float64
+}
+
+func (im *Immersion) add(o Immersion, f float64) {
+	im.V += f * o.V
+	im.MX += f * o.MX
+	im.MY += f * o.MY
+	im.MZ += f * o.MZ
+	im.AW += f * o.AW
+	im.SX += f * o.SX
+	im.SY += f * o.SY
+	im.IXX += f * o.IXX
+	im.IXY += f * o.IXY
+	im.IYY += f * o.IYY
+}
+
+// Centroid returns the centre of volume (LCB, TCB, VCB for a hull); zero for
+// an empty immersion.
+func (im Immersion) Centroid() (x, y, z float64) {
+	if im.V <= 0 {
+		return 0, 0, 0
+	}
+	return im.MX / im.V, im.MY / im.V, im.MZ / im.V
+}
+
+// Solid is a closed body described by slabs along x: a hull or a
+// compartment. Its zero value is an empty solid.
+type Solid struct {
+	slabs []slab
+	whole Immersion
+	xmin  float64
+	xmax  float64
+	zmin  float64
+	zmax  float64
+}
+
+func newSolid(slabs []slab) *Solid {
+	s := &Solid{slabs: slabs, xmin: math.Inf(1), xmax: math.Inf(-1), zmin: math.Inf(1), zmax: math.Inf(-1)}
+	for i := range slabs {
+		s.whole.add(slabs[i].full, 1)
+		s.xmin = math.Min(s.xmin, slabs[i].x0)
+		s.xmax = math.Max(s.xmax, slabs[i].x1)
+		s.zmin = math.Min(s.zmin, slabs[i].zmin)
+		s.zmax = math.Max(s.zmax, slabs[i].zmax)
+	}
+	return s
+}
+
+// Below returns the integrals of the part of the solid below the plane p.
+func (s *Solid) Below(p Plane) Immersion {
+	var im Immersion
+	if s == nil {
+		return im
+	}
+	for i := range s.slabs {
+		sl := &s.slabs[i]
+		// Whole-slab bounds test: the plane's lowest and highest z over the
+		// slab's box.
+		zlo := p.A + math.Min(p.B*sl.x0, p.B*sl.x1) - math.Abs(p.C)*sl.ymax
+		zhi := p.A + math.Max(p.B*sl.x0, p.B*sl.x1) + math.Abs(p.C)*sl.ymax
+		switch {
+		case sl.zmin >= zhi:
+			continue
+		case sl.zmax <= zlo:
+			im.add(sl.full, 1)
+		default:
+			im.add(sl.below(p), 1)
+		}
+	}
+	return im
+}
+
+// Volume returns the whole solid's volume (m³).
+func (s *Solid) Volume() float64 {
+	if s == nil {
+		return 0
+	}
+	return s.whole.V
+}
+
+// Whole returns the integrals of the whole solid (waterplane terms zero).
+func (s *Solid) Whole() Immersion {
+	if s == nil {
+		return Immersion{}
+	}
+	return s.whole
+}
+
+// Extent returns the solid's x and z ranges.
+func (s *Solid) Extent() (xmin, xmax, zmin, zmax float64) {
+	return s.xmin, s.xmax, s.zmin, s.zmax
+}
+
+// SectionAt returns the solid's section polygons at x (counter-clockwise,
+// in the (y, z) plane); nil where the solid does not reach. A section may be
+// several polygons where slabs meet at x; the first slab that holds x wins.
+func (s *Solid) SectionAt(x float64) []Point {
+	if s == nil {
+		return nil
+	}
+	for i := range s.slabs {
+		sl := &s.slabs[i]
+		if x >= sl.x0 && x <= sl.x1 {
+			return sl.section(x)
+		}
+	}
+	return nil
+}
