@@ -36,7 +36,9 @@ type NoEquilibrium struct {
 	Reason  string
 }
 
-func (e *NoEquilibrium) Error() string { return "no equilibrium: vessel " + e.Outcome.String() + ": " + e.Reason }
+func (e *NoEquilibrium) Error() string {
+	return "no equilibrium: vessel " + e.Outcome.String() + ": " + e.Reason
+}
 
 // openSpace is a compartment open to the sea (lost buoyancy).
 type openSpace struct {

@@ -13,7 +13,7 @@ type Point struct{ Y, Z float64 }
 // waterline's chords, projected on the y axis: the waterplane's breadth and its
 // first and second moments at this x.
 type areaMoments struct {
-	A, SY, SZ   float64
+	A, SY, SZ  float64
 	W, WY, WYY float64
 }
 

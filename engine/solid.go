@@ -150,7 +150,7 @@ func (s *slab) below(p Plane) Immersion {
 // ship frame. They are the derivatives of V and the first moments with
 // respect to the plane's A, B and C (see jacobian in equilibrium.go).
 type Immersion struct {
-	V, MX, MY, MZ              float64
+	V, MX, MY, MZ             float64
 	AW, SX, SY, IXX, IXY, IYY float64
 }
 

@@ -32,8 +32,8 @@ type Weight struct {
 // Opening is a point through which water would spread further into the
 // ship once immersed: a vent, an air pipe, a door.
 type Opening struct {
-	Name string
-	Kind string // free text: "vent", "air pipe", "door", …
+	Name         string
+	Kind         string // free text: "vent", "air pipe", "door", …
 	X, Y, Z      float64
 	Weathertight bool // closed weathertight: does not count as a downflooding point
 }
@@ -46,7 +46,8 @@ type Vessel struct {
 	Weights      []Weight
 	Compartments []*Compartment
 	Openings     []Opening
-	MarginLineM  float64 // margin line's depth below the deck at side, m
+	MarginLineM  float64  // margin line's depth below the deck at side, m
+	CriteriaSets []string // the criteria sets she is held to (see criteria.go)
 
 	tanks []tankLoad // contents of each compartment at its fill, upright
 }
@@ -75,6 +76,7 @@ func NewVessel(v Vessel) (*Vessel, error) {
 	v.Weights = append([]Weight(nil), v.Weights...)
 	v.Compartments = append([]*Compartment(nil), v.Compartments...)
 	v.Openings = append([]Opening(nil), v.Openings...)
+	v.CriteriaSets = append([]string(nil), v.CriteriaSets...)
 	v.tanks = make([]tankLoad, len(v.Compartments))
 	for i, c := range v.Compartments {
 		if c == nil || c.solid == nil {

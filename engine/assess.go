@@ -1,0 +1,103 @@
+package engine
+
+// This file holds the result types that the screen and the command line
+// show, and Assess, which computes all of them for one keystroke.
+
+// HandWorking is the small-angle lost-buoyancy method for a box-shaped
+// vessel, every step kept so that it can be shown. The fields named in the
+// conventions' "hand" JSON object come first. (Computed in hand.go.)
+type HandWorking struct {
+	SinkageM  float64 // lost volume ÷ intact waterplane still intact
+	DraftM    float64 // mean draft after sinkage
+	CFShiftM  float64 // size of the transverse shift of the centre of flotation
+	KBM       float64
+	BMM       float64 // I about the new centroidal axis ÷ V (intact volume)
+	KMM       float64
+	GMM       float64 // KM − KG − FSC
+	HeelDeg   float64 // atan(transverse shift of CF... see hand.go) , positive starboard down
+	DraftAftM float64
+	DraftFwdM float64
+	TrimM     float64
+
+	Steps []HandStep // the working, in order
+}
+
+// HandStep is one line of the hand method's working.
+type HandStep struct {
+	Label   string  // what is found, in the trade's words
+	Formula string  // how, with the numbers put in
+	Value   float64 // the result
+	Unit    string
+}
+
+// Severity orders flags: a Danger flag means the picture has changed for
+// the worse (water spreading, no equilibrium); a Caution flag means a figure
+// is less to be trusted or a limit is near; Info is for the record.
+type Severity int
+
+const (
+	Info Severity = iota
+	Caution
+	Danger
+)
+
+func (s Severity) String() string {
+	switch s {
+	case Danger:
+		return "danger"
+	case Caution:
+		return "caution"
+	}
+	return "info"
+}
+
+// Flag is a condition the officer must know about, with a short code of
+// heelwatch's own and a plain sentence. (Raised in flags.go.)
+type Flag struct {
+	Code     string
+	Severity Severity
+	Message  string
+}
+
+// GZCurve is the righting-lever curve of a condition at free trim and
+// constant displacement, heeled towards one side. (Computed in gz.go.)
+type GZCurve struct {
+	Toward  Side      // the side she is heeled towards
+	HeelDeg []float64 // heel towards that side, from 0, ascending (always ≥ 0)
+	GZM     []float64 // righting lever at each heel, positive righting
+
+	EquilibriumDeg  float64 // first heel where GZ rises through zero (the angle she lies at)
+	GZMaxM          float64
+	GZMaxDeg        float64
+	VanishingDeg    float64 // angle of vanishing stability (90 if GZ stays positive)
+	RangeDeg        float64 // range of positive stability beyond the equilibrium
+	DeckEdgeDeg     float64 // heel at which the deck edge first immerses (NaN-free: 90 if never)
+	DownfloodingDeg float64 // heel at which the first unprotected opening immerses (90 if none)
+	Downflooding    string  // that opening's name, "" if none
+}
+
+// CriterionResult is one stability criterion applied to a condition.
+// (Evaluated in criteria.go.)
+type CriterionResult struct {
+	Set         string  // the criteria set, e.g. "IMO IS Code 2008 A 2.2"
+	Code        string  // short code of heelwatch's own
+	Requirement string  // the requirement in words, e.g. "area under GZ 0–30° ≥ 0.055 m·rad"
+	Required    float64 // the limit
+	Actual      float64 // the value found
+	Unit        string
+	Pass        bool
+	Margin      float64 // actual − required, signed so that positive passes
+	Source      string  // the regulation and, where it is recalled, "(memory)"
+}
+
+// Assessment is everything one keystroke recomputes for a damage state.
+type Assessment struct {
+	Damage   Damage
+	Position *Position      // nil when there is no equilibrium
+	NoEq     *NoEquilibrium // why not, when Position is nil
+	Hand     *HandWorking   // nil when the hand method does not apply
+	HandWhy  string         // why it does not apply
+	GZ       *GZCurve       // nil when there is no equilibrium
+	Criteria []CriterionResult
+	Flags    []Flag
+}
