@@ -14,7 +14,7 @@ type HandWorking struct {
 	BMM       float64 // I about the new centroidal axis ÷ V (intact volume)
 	KMM       float64
 	GMM       float64 // KM − KG − FSC
-	HeelDeg   float64 // atan(transverse shift of CF... see hand.go) , positive starboard down
+	HeelDeg   float64 // list: atan(transverse shift of G or CF ÷ GM, see hand.go), positive starboard down
 	DraftAftM float64
 	DraftFwdM float64
 	TrimM     float64
@@ -100,4 +100,23 @@ type Assessment struct {
 	GZ       *GZCurve       // nil when there is no equilibrium
 	Criteria []CriterionResult
 	Flags    []Flag
+}
+
+// Assess computes everything shown for damage state d of v: the floating
+// position and, as they apply, the hand method, the GZ curve, the criteria
+// and the flags.
+func Assess(v *Vessel, d Damage) Assessment {
+	a := Assessment{Damage: append(Damage(nil), d...)}
+	pos, err := Solve(v, d)
+	if err != nil {
+		if ne, ok := err.(*NoEquilibrium); ok {
+			a.NoEq = ne
+		} else {
+			a.NoEq = &NoEquilibrium{NotConverged, err.Error()}
+		}
+	} else {
+		a.Position = &pos
+	}
+	// The hand method, GZ curve, criteria and flags join here as they land.
+	return a
 }
