@@ -33,56 +33,61 @@ func clipBelow(p0, dp []Point, s, c, h float64) areaMoments {
 		return m
 	}
 	var (
-		first, prev Point
-		have        bool
+		firstY, firstZ, prevY, prevZ float64
+		have                         bool
+		a2, sy6, sz6                 float64
 	)
-	emit := func(q Point) {
-		if have {
-			cr := prev.Y*q.Z - q.Y*prev.Z
-			m.A += cr
-			m.SY += (prev.Y + q.Y) * cr
-			m.SZ += (prev.Z + q.Z) * cr
-		} else {
-			first = q
-			have = true
-		}
-		prev = q
-	}
-	last := Point{p0[n-1].Y + s*dp[n-1].Y, p0[n-1].Z + s*dp[n-1].Z}
-	dLast := last.Z - c*last.Y - h
+	lastY, lastZ := p0[n-1].Y+s*dp[n-1].Y, p0[n-1].Z+s*dp[n-1].Z
+	dLast := lastZ - c*lastY - h
 	for k := 0; k < n; k++ {
-		cur := Point{p0[k].Y + s*dp[k].Y, p0[k].Z + s*dp[k].Z}
-		dCur := cur.Z - c*cur.Y - h
+		curY, curZ := p0[k].Y+s*dp[k].Y, p0[k].Z+s*dp[k].Z
+		dCur := curZ - c*curY - h
 		inLast, inCur := dLast < 0, dCur < 0
 		if inLast != inCur {
 			t := dLast / (dLast - dCur)
-			q := Point{last.Y + t*(cur.Y-last.Y), last.Z + t*(cur.Z-last.Z)}
-			emit(q)
-			y := q.Y
-			if inLast { // leaving the water: the chord starts here
-				m.W += y
-				m.WY += y * y / 2
-				m.WYY += y * y * y / 3
+			qY, qZ := lastY+t*(curY-lastY), lastZ+t*(curZ-lastZ)
+			if have {
+				cr := prevY*qZ - qY*prevZ
+				a2 += cr
+				sy6 += (prevY + qY) * cr
+				sz6 += (prevZ + qZ) * cr
+			} else {
+				firstY, firstZ, have = qY, qZ, true
+			}
+			prevY, prevZ = qY, qZ
+			y2 := qY * qY
+			if inLast { // leaving the water: a chord starts here
+				m.W += qY
+				m.WY += y2 / 2
+				m.WYY += y2 * qY / 3
 			} else { // entering: the chord ends here
-				m.W -= y
-				m.WY -= y * y / 2
-				m.WYY -= y * y * y / 3
+				m.W -= qY
+				m.WY -= y2 / 2
+				m.WYY -= y2 * qY / 3
 			}
 		}
 		if inCur {
-			emit(cur)
+			if have {
+				cr := prevY*curZ - curY*prevZ
+				a2 += cr
+				sy6 += (prevY + curY) * cr
+				sz6 += (prevZ + curZ) * cr
+			} else {
+				firstY, firstZ, have = curY, curZ, true
+			}
+			prevY, prevZ = curY, curZ
 		}
-		last, dLast = cur, dCur
+		lastY, lastZ, dLast = curY, curZ, dCur
 	}
 	if have {
-		cr := prev.Y*first.Z - first.Y*prev.Z
-		m.A += cr
-		m.SY += (prev.Y + first.Y) * cr
-		m.SZ += (prev.Z + first.Z) * cr
+		cr := prevY*firstZ - firstY*prevZ
+		a2 += cr
+		sy6 += (prevY + firstY) * cr
+		sz6 += (prevZ + firstZ) * cr
 	}
-	m.A /= 2
-	m.SY /= 6
-	m.SZ /= 6
+	m.A = a2 / 2
+	m.SY = sy6 / 6
+	m.SZ = sz6 / 6
 	return m
 }
 
