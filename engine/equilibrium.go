@@ -375,11 +375,25 @@ func Solve(v *Vessel, d Damage) (Position, error) {
 // nearest heel where GZ passes from negative to positive, refined by Newton.
 // Bounded: at most a few hundred evaluations.
 func (pr *Problem) Equilibrium() (Position, error) {
+	return pr.EquilibriumFrom(Plane{}, false)
+}
+
+// EquilibriumFrom is Equilibrium with Newton started from guess when warm is
+// true (a nearby solved plane, as in a flooding run): fewer steps, same
+// answer and the same fallbacks.
+func (pr *Problem) EquilibriumFrom(guess Plane, warm bool) (Position, error) {
 	need := pr.massT / pr.rho
 	if !(pr.vmax > 0) || need >= pr.vmax*(1-1e-9) {
 		return Position{}, &NoEquilibrium{Sinks, fmt.Sprintf("she weighs %.0f t but the hull left intact can float at most %.0f t", pr.massT, math.Max(pr.vmax, 0)*pr.rho)}
 	}
 	start := pr.upright()
+	if warm && !math.IsNaN(guess.A+guess.B+guess.C) && math.Abs(math.Atan(guess.C)) < maxHeel {
+		if s, it, ok := pr.newton(guess, false); ok {
+			if pos := pr.position(s, it); pos.GMM > 0 {
+				return pos, nil
+			}
+		}
+	}
 	s, it, ok := pr.newton(start, false)
 	if ok {
 		pos := pr.position(s, it)
@@ -418,7 +432,7 @@ func (pr *Problem) Equilibrium() (Position, error) {
 	}
 	// Refine: secant guess, then full Newton; fall back to bisection in heel.
 	t := best.rlo / (best.rlo - best.rhi)
-	guess := Plane{best.plo.A + t*(best.phi.A-best.plo.A), best.plo.B + t*(best.phi.B-best.plo.B), 0}
+	guess = Plane{best.plo.A + t*(best.phi.A-best.plo.A), best.plo.B + t*(best.phi.B-best.plo.B), 0}
 	guess.C = math.Tan(best.lo + t*(best.hi-best.lo))
 	lo, hi := math.Min(best.lo, best.hi), math.Max(best.lo, best.hi)
 	if s, it, ok := pr.newton(guess, false); ok {
