@@ -60,34 +60,42 @@ type Flag struct {
 }
 
 // GZCurve is the righting-lever curve of a condition at free trim and
-// constant displacement, heeled towards one side. (Computed in gz.go.)
+// constant displacement, heeled towards one side. (Computed in gz.go;
+// AreaMRad, At and MaxBetween read it.)
 type GZCurve struct {
 	Toward  Side      // the side she is heeled towards
-	HeelDeg []float64 // heel towards that side, from 0, ascending (always ≥ 0)
+	HeelDeg []float64 // heel towards that side, from 0, ascending (always ≥ 0); steps ≤ 1°
 	GZM     []float64 // righting lever at each heel, positive righting
 
-	EquilibriumDeg  float64 // first heel where GZ rises through zero (the angle she lies at)
-	GZMaxM          float64
-	GZMaxDeg        float64
-	VanishingDeg    float64 // angle of vanishing stability (90 if GZ stays positive)
-	RangeDeg        float64 // range of positive stability beyond the equilibrium
-	DeckEdgeDeg     float64 // heel at which the deck edge first immerses (NaN-free: 90 if never)
-	DownfloodingDeg float64 // heel at which the first unprotected opening immerses (90 if none)
+	EquilibriumDeg  float64 // heel where she lies (from the solved position; 0 towards the other side of an upright ship)
+	GZMaxM          float64 // largest GZ on the curve (spline maximum)
+	GZMaxDeg        float64 // the heel where it occurs
+	VanishingDeg    float64 // angle of vanishing stability: first fall of GZ through zero beyond the equilibrium; the curve's last heel (89.5) if GZ stays positive
+	Vanishes        bool    // GZ falls through zero within the curve (false: VanishingDeg is only the curve's end)
+	RangeDeg        float64 // range of positive stability beyond the equilibrium: VanishingDeg − EquilibriumDeg
+	DeckEdgeDeg     float64 // heel at which the deck edge first immerses (0 if immersed already; 90 if not by the curve's end)
+	DownfloodingDeg float64 // heel at which the first non-weathertight opening immerses (0 if immersed already; 90 if none)
 	Downflooding    string  // that opening's name, "" if none
+
+	Note  string   // why the curve ends early, "" when it runs its full span
+	Other *GZCurve // upright ship only: the curve towards the other side (this one is the worse); nil otherwise
 }
 
 // CriterionResult is one stability criterion applied to a condition.
 // (Evaluated in criteria.go.)
 type CriterionResult struct {
-	Set         string  // the criteria set, e.g. "IMO IS Code 2008 A 2.2"
-	Code        string  // short code of heelwatch's own
+	Set         string  // the criteria set's id, e.g. "is-code-2008"
+	Code        string  // short code of heelwatch's own, unique within the set
 	Requirement string  // the requirement in words, e.g. "area under GZ 0–30° ≥ 0.055 m·rad"
 	Required    float64 // the limit
 	Actual      float64 // the value found
 	Unit        string
+	AtMost      bool // the actual must not exceed the limit (otherwise it must reach it)
 	Pass        bool
-	Margin      float64 // actual − required, signed so that positive passes
+	Margin      float64 // actual − required (required − actual when AtMost): positive or zero passes
 	Source      string  // the regulation and, where it is recalled, "(memory)"
+	Indicator   bool    // a figure to read, not a criterion the ship is held to (SOLAS s)
+	Note        string  // how the actual was taken, where that needs saying; "" otherwise
 }
 
 // Assessment is everything one keystroke recomputes for a damage state.

@@ -1,0 +1,540 @@
+package engine
+
+import (
+	"errors"
+	"fmt"
+	"math"
+)
+
+// This file computes the righting-lever (GZ) curve of a condition and what
+// is read off it: the equilibrium angle, GZmax, the range, the angle of
+// vanishing stability, areas, and the deck-edge and downflooding angles.
+
+const (
+	// gzStepDeg is the curve's step in heel.
+	gzStepDeg = 1.0
+	// gzMinEndDeg is the heel the curve reaches at least, even when GZ has
+	// vanished before it (the conventions ask for at least 60°).
+	gzMinEndDeg = 60.0
+	// uprightDeg: an equilibrium heel smaller than this counts as upright,
+	// and the curve is computed towards both sides.
+	uprightDeg = 1e-6
+	// gzEndDeg is the largest heel the curve reaches: the solver's limit
+	// (maxHeel), solved a hair inside it so that round-off cannot put it out.
+	gzEndDeg = 89.5
+)
+
+// RightingLevers computes the righting-lever curve of problem pr, whose
+// free-floating position is eq (from pr.Equilibrium), at free trim and
+// constant displacement.
+//
+// Method: at each heel θ = 0°, 1°, 2°, … the draft and trim are solved for
+// (pr.AtHeel: the buoyancy of the hull less, for every compartment open to
+// the sea, μ times its part below the water at that attitude; floodwater held
+// in compartments moves with the attitude) and GZ is the engine's lever,
+// positive righting; with the heel towards the side she lies, GZ at 0° is
+// negative for a listed ship (the heeling moment of her off-centre weight or
+// lost buoyancy). Each heel starts from the previous planes extrapolated
+// quadratically. The curve runs to at least 60° and on to the angle of
+// vanishing stability or to 89.5° (the solver's limit), whichever is first.
+// The angle of vanishing stability is refined by the Illinois method on
+// solved heels and added to the curve as a sample; GZmax by the curve's
+// spline (see AreaMRad). The deck-edge and downflooding angles come from the
+// solved planes: the first heel at which a deck-edge point at a station
+// (either side; the deck edge is straight between stations, so none can
+// immerse first between them) or a non-weathertight opening goes below the
+// water, found by bisection on planes interpolated (cubic in heel) between
+// the samples.
+//
+// Side: towards the side of eq.HeelDeg. When she is upright (|heel| <
+// 1e-6°) both sides are computed; the curve returned is the worse, the one
+// with the smaller area from the equilibrium to the lesser of the angle of
+// vanishing stability and the downflooding angle (starboard on a tie), and
+// its Other field holds the curve towards the other side.
+//
+// Errors: a *NoEquilibrium with Outcome NotConverged if draft and trim
+// cannot be found at 0° or 1°. If they cannot be found at a larger heel the
+// curve ends at the last heel solved and Note says so.
+func RightingLevers(pr *Problem, eq Position) (*GZCurve, error) {
+	if pr == nil {
+		panic("engine: RightingLevers of a nil problem")
+	}
+	if math.IsNaN(eq.HeelDeg) || math.Abs(eq.HeelDeg) > gzEndDeg {
+		return nil, fmt.Errorf("equilibrium heel %v° is not a heel the curve can start from", eq.HeelDeg)
+	}
+	switch {
+	case eq.HeelDeg >= uprightDeg:
+		return pr.leverCurve(Starboard, eq)
+	case eq.HeelDeg <= -uprightDeg:
+		return pr.leverCurve(Port, eq)
+	}
+	sb, err := pr.leverCurve(Starboard, eq)
+	if err != nil {
+		return nil, err
+	}
+	ps, err := pr.leverCurve(Port, eq)
+	if err != nil {
+		return nil, err
+	}
+	if ps.reserve() < sb.reserve()*(1-1e-9) {
+		sb, ps = ps, sb
+	}
+	sb.Other = ps
+	return sb, nil
+}
+
+// reserve is the area from the equilibrium to the lesser of the angle of
+// vanishing stability and the downflooding angle (m·rad): what RightingLevers
+// compares to choose the worse side.
+func (c *GZCurve) reserve() float64 {
+	return c.AreaMRad(c.EquilibriumDeg, math.Min(c.VanishingDeg, c.DownfloodingDeg))
+}
+
+// leverCurve computes the curve towards side.
+func (pr *Problem) leverCurve(side Side, eq Position) (*GZCurve, error) {
+	sgn := float64(side)
+	c := &GZCurve{Toward: side}
+	if eq.HeelDeg*sgn > 0 {
+		c.EquilibriumDeg = math.Abs(eq.HeelDeg)
+	}
+	const rad = math.Pi / 180
+	planes := make([]Plane, 0, 96)
+	c.HeelDeg = make([]float64, 0, 96)
+	c.GZM = make([]float64, 0, 96)
+	push := func(deg, gz float64, p Plane) {
+		c.HeelDeg = append(c.HeelDeg, deg)
+		c.GZM = append(c.GZM, gz)
+		planes = append(planes, p)
+	}
+	start := pr.upright()
+	start.B = eq.Plane.B
+	found := false
+	for k := 0; ; k++ {
+		deg := math.Min(float64(k)*gzStepDeg, gzEndDeg)
+		guess := extrapolatePlane(c.HeelDeg, planes, deg, start)
+		s, err := pr.atHeel(sgn*math.Min(deg*rad, maxHeel*(1-1e-13)), guess)
+		if err != nil {
+			if len(c.HeelDeg) < 2 {
+				return nil, err
+			}
+			c.Note = fmt.Sprintf("no draft and trim found at %.1f° of heel: the curve ends at %.1f°", deg, c.HeelDeg[len(c.HeelDeg)-1])
+			break
+		}
+		gz := sgn * pr.lever(s)
+		n := len(c.HeelDeg)
+		if !found && n > 0 && c.GZM[n-1] > 0 && gz <= 0 && c.HeelDeg[n-1] >= c.EquilibriumDeg-1e-9 {
+			found = true
+			c.Vanishes = true
+			vd, vgz, vp := pr.vanishing(sgn, c.HeelDeg[n-1], deg, c.GZM[n-1], gz, planes[n-1], s.p)
+			c.VanishingDeg = vd
+			if vd-c.HeelDeg[n-1] > 1e-3 && deg-vd > 1e-3 {
+				push(vd, vgz, vp)
+			}
+		}
+		push(deg, gz, s.p)
+		if deg >= gzEndDeg || (found && deg >= gzMinEndDeg) {
+			break
+		}
+	}
+	last := c.HeelDeg[len(c.HeelDeg)-1]
+	if !found {
+		c.VanishingDeg = last
+	}
+	c.RangeDeg = math.Max(0, c.VanishingDeg-c.EquilibriumDeg)
+	c.GZMaxM, c.GZMaxDeg = c.MaxBetween(0, last)
+
+	h := pr.v.Hull
+	var deck []immersionPoint
+	for i := range h.stations {
+		x, hb, z := h.DeckEdge(i)
+		deck = append(deck, immersionPoint{x: x, y: hb, z: z}, immersionPoint{x: x, y: -hb, z: z})
+	}
+	c.DeckEdgeDeg, _ = firstImmersion(sgn, c.HeelDeg, planes, deck)
+	var open []immersionPoint
+	for _, o := range pr.v.Openings {
+		if !o.Weathertight {
+			open = append(open, immersionPoint{o.X, o.Y, o.Z, o.Name})
+		}
+	}
+	var name string
+	c.DownfloodingDeg, name = firstImmersion(sgn, c.HeelDeg, planes, open)
+	c.Downflooding = name
+	return c, nil
+}
+
+// vanishing refines the heel in (aDeg, bDeg) where GZ falls through zero
+// (fa > 0 ≥ fb) by the Illinois variant of regula falsi on solved heels,
+// each started from the planes interpolated linearly. It returns the heel
+// (degrees), GZ there (≈ 0) and the plane. At most 40 solves; it stops when
+// GZ is within 1e-12 m of zero or the bracket is under 1e-10°.
+func (pr *Problem) vanishing(sgn, aDeg, bDeg, fa, fb float64, pa, pb Plane) (float64, float64, Plane) {
+	bestDeg, bestGZ, bestP := bDeg, fb, pb
+	if fa < -fb {
+		bestDeg, bestGZ, bestP = aDeg, fa, pa
+	}
+	retained := 0
+	for i := 0; i < 40 && bDeg-aDeg > 1e-10; i++ {
+		t := fa / (fa - fb)
+		x := aDeg + t*(bDeg-aDeg)
+		g := Plane{pa.A + t*(pb.A-pa.A), pa.B + t*(pb.B-pa.B), 0}
+		s, err := pr.atHeel(sgn*math.Min(x*math.Pi/180, maxHeel*(1-1e-13)), g)
+		if err != nil {
+			break
+		}
+		fx := sgn * pr.lever(s)
+		if math.Abs(fx) < math.Abs(bestGZ) {
+			bestDeg, bestGZ, bestP = x, fx, s.p
+		}
+		if math.Abs(fx) <= 1e-12 {
+			break
+		}
+		if fx > 0 {
+			aDeg, fa, pa = x, fx, s.p
+			if retained == 1 {
+				fb /= 2
+			}
+			retained = 1
+		} else {
+			bDeg, fb, pb = x, fx, s.p
+			if retained == -1 {
+				fa /= 2
+			}
+			retained = -1
+		}
+	}
+	return bestDeg, bestGZ, bestP
+}
+
+// extrapolatePlane returns a starting plane for heel deg from the last
+// solved planes: quadratic (Lagrange) in heel through the last three, linear
+// through two, the one itself, or start when there are none.
+func extrapolatePlane(heels []float64, planes []Plane, deg float64, start Plane) Plane {
+	n := len(planes)
+	switch {
+	case n == 0:
+		return start
+	case n == 1:
+		return planes[0]
+	case n == 2:
+		return lagrangePlane(heels, planes, 0, 2, deg)
+	}
+	return lagrangePlane(heels, planes, n-3, n, deg)
+}
+
+// lagrangePlane interpolates A and B of planes[i0:i1] at deg (the Lagrange
+// polynomial through those samples); C is left zero.
+func lagrangePlane(heels []float64, planes []Plane, i0, i1 int, deg float64) Plane {
+	var out Plane
+	for i := i0; i < i1; i++ {
+		w := 1.0
+		for j := i0; j < i1; j++ {
+			if j != i {
+				w *= (deg - heels[j]) / (heels[i] - heels[j])
+			}
+		}
+		out.A += w * planes[i].A
+		out.B += w * planes[i].B
+	}
+	return out
+}
+
+// immersionPoint is a point that the curve watches go under water.
+type immersionPoint struct {
+	x, y, z float64
+	name    string
+}
+
+// firstImmersion returns the first heel (degrees) on the curve at which one
+// of pts is below the water, and that point's name: 0 if one is below at the
+// first sample, 90 and "" if none goes under by the curve's end or pts is
+// empty. Between samples the plane is the cubic (four-point Lagrange)
+// interpolation of A and B in heel, with C = tan(heel) exact, and the heel is
+// found by bisection to 1e-12°.
+func firstImmersion(sgn float64, heels []float64, planes []Plane, pts []immersionPoint) (float64, string) {
+	if len(pts) == 0 {
+		return 90, ""
+	}
+	lowest := func(p Plane) (float64, int) {
+		m, im := math.Inf(1), -1
+		for i, q := range pts {
+			if h := p.Height(q.x, q.y, q.z); h < m {
+				m, im = h, i
+			}
+		}
+		return m, im
+	}
+	for k := range heels {
+		h, i := lowest(planes[k])
+		if !(h < 0) {
+			continue
+		}
+		if k == 0 {
+			return heels[0], pts[i].name
+		}
+		i0 := max(0, k-2)
+		i1 := min(len(heels), i0+4)
+		i0 = max(0, i1-4)
+		at := func(deg float64) Plane {
+			p := lagrangePlane(heels, planes, i0, i1, deg)
+			p.C = math.Tan(sgn * deg * math.Pi / 180)
+			return p
+		}
+		lo, hi := heels[k-1], heels[k]
+		for it := 0; it < 60 && hi-lo > 1e-12; it++ {
+			mid := (lo + hi) / 2
+			if hm, im := lowest(at(mid)); hm < 0 {
+				hi, i = mid, im
+			} else {
+				lo = mid
+			}
+		}
+		return hi, pts[i].name
+	}
+	return 90, ""
+}
+
+// errShortCurve is the panic message for a malformed curve.
+var errShortCurve = errors.New("engine: GZCurve with HeelDeg and GZM of different lengths or heels not ascending")
+
+// spline returns the curve's interpolating spline in radians of heel.
+func (c *GZCurve) spline() cubicSpline {
+	if len(c.HeelDeg) != len(c.GZM) {
+		panic(errShortCurve)
+	}
+	x := make([]float64, len(c.HeelDeg))
+	for i, d := range c.HeelDeg {
+		x[i] = d * math.Pi / 180
+		if i > 0 && !(x[i] > x[i-1]) {
+			panic(errShortCurve)
+		}
+	}
+	return fitSpline(x, c.GZM)
+}
+
+// At returns GZ (m) at heelDeg by the curve's spline (see AreaMRad), the
+// heel clamped to the curve's span; 0 for an empty curve.
+func (c *GZCurve) At(heelDeg float64) float64 {
+	return c.spline().at(heelDeg * math.Pi / 180)
+}
+
+// AreaMRad returns the area under the curve from fromDeg to toDeg, in
+// metre-radians: ∫ GZ dθ with θ in radians.
+//
+// The samples are joined by the not-a-knot cubic spline (piecewise cubic,
+// twice continuously differentiable, exact for cubics; its error in the
+// area is of order h⁴ for a smooth curve, h the step) and the spline is
+// integrated exactly, the ends of the range included wherever they fall.
+// The range is clipped to the curve's span: nothing is counted beyond its
+// last heel. An empty or reversed range gives 0.
+func (c *GZCurve) AreaMRad(fromDeg, toDeg float64) float64 {
+	if !(toDeg > fromDeg) {
+		return 0
+	}
+	return c.spline().integral(fromDeg*math.Pi/180, toDeg*math.Pi/180)
+}
+
+// MaxBetween returns the largest GZ (m) of the curve's spline between
+// fromDeg and toDeg (clipped to the curve's span) and the heel where it
+// occurs (degrees). For an empty curve or range it returns 0, fromDeg.
+func (c *GZCurve) MaxBetween(fromDeg, toDeg float64) (gzM, atDeg float64) {
+	sp := c.spline()
+	if len(sp.x) == 0 {
+		return 0, fromDeg
+	}
+	a := math.Max(fromDeg*math.Pi/180, sp.x[0])
+	b := math.Min(toDeg*math.Pi/180, sp.x[len(sp.x)-1])
+	if !(b >= a) {
+		return 0, fromDeg
+	}
+	x, y := sp.max(a, b)
+	return y, x * 180 / math.Pi
+}
+
+// cubicSpline is a piecewise cubic in Hermite form: values y and slopes s
+// at the knots x (ascending).
+type cubicSpline struct {
+	x, y, s []float64
+}
+
+// fitSpline returns the not-a-knot cubic spline through (x, y): the cubic
+// pieces of the first two and of the last two intervals are one cubic each
+// (de Boor, A Practical Guide to Splines, ch. IV). The slopes solve the
+// tridiagonal system of continuity of the second derivative:
+// hᵢ sᵢ₋₁ + 2(hᵢ₋₁+hᵢ) sᵢ + hᵢ₋₁ sᵢ₊₁ = 3(hᵢ δᵢ₋₁ + hᵢ₋₁ δᵢ), with end rows
+// h₁ s₀ + (h₀+h₁) s₁ = [h₁(2h₁+3h₀)δ₀ + h₀² δ₁]/(h₀+h₁) and its mirror.
+// Two points give the chord, three the parabola.
+func fitSpline(x, y []float64) cubicSpline {
+	n := len(x)
+	sp := cubicSpline{x: x, y: y, s: make([]float64, n)}
+	switch n {
+	case 0, 1:
+		return sp
+	case 2:
+		d := (y[1] - y[0]) / (x[1] - x[0])
+		sp.s[0], sp.s[1] = d, d
+		return sp
+	case 3:
+		// The parabola through three points: slopes from divided differences.
+		h0, h1 := x[1]-x[0], x[2]-x[1]
+		d0, d1 := (y[1]-y[0])/h0, (y[2]-y[1])/h1
+		c2 := (d1 - d0) / (h0 + h1)
+		sp.s[0] = d0 - c2*h0
+		sp.s[1] = d0 + c2*h0
+		sp.s[2] = d1 + c2*h1
+		return sp
+	}
+	h := make([]float64, n-1)
+	d := make([]float64, n-1)
+	for i := range h {
+		h[i] = x[i+1] - x[i]
+		d[i] = (y[i+1] - y[i]) / h[i]
+	}
+	lo := make([]float64, n) // sub-diagonal (row i, column i−1)
+	di := make([]float64, n)
+	up := make([]float64, n) // super-diagonal (row i, column i+1)
+	r := make([]float64, n)
+	di[0], up[0] = h[1], h[0]+h[1]
+	r[0] = (h[1]*(2*h[1]+3*h[0])*d[0] + h[0]*h[0]*d[1]) / (h[0] + h[1])
+	for i := 1; i < n-1; i++ {
+		lo[i], di[i], up[i] = h[i], 2*(h[i-1]+h[i]), h[i-1]
+		r[i] = 3 * (h[i]*d[i-1] + h[i-1]*d[i])
+	}
+	p, q := h[n-3], h[n-2]
+	lo[n-1], di[n-1] = p+q, p
+	r[n-1] = (p*(2*p+3*q)*d[n-2] + q*q*d[n-3]) / (p + q)
+	// Thomas algorithm.
+	for i := 1; i < n; i++ {
+		m := lo[i] / di[i-1]
+		di[i] -= m * up[i-1]
+		r[i] -= m * r[i-1]
+	}
+	sp.s[n-1] = r[n-1] / di[n-1]
+	for i := n - 2; i >= 0; i-- {
+		sp.s[i] = (r[i] - up[i]*sp.s[i+1]) / di[i]
+	}
+	return sp
+}
+
+// interval returns the index i of the piece [x[i], x[i+1]] that holds t.
+func (sp cubicSpline) interval(t float64) int {
+	lo, hi := 0, len(sp.x)-2
+	for lo < hi {
+		m := (lo + hi + 1) / 2
+		if sp.x[m] <= t {
+			lo = m
+		} else {
+			hi = m - 1
+		}
+	}
+	return lo
+}
+
+// piece evaluates piece i at local u ∈ [0, 1]: value and derivative in x.
+func (sp cubicSpline) piece(i int, u float64) (float64, float64) {
+	h := sp.x[i+1] - sp.x[i]
+	y0, y1, s0, s1 := sp.y[i], sp.y[i+1], sp.s[i]*h, sp.s[i+1]*h
+	u2, u3 := u*u, u*u*u
+	v := y0*(2*u3-3*u2+1) + s0*(u3-2*u2+u) + y1*(3*u2-2*u3) + s1*(u3-u2)
+	dv := y0*(6*u2-6*u) + s0*(3*u2-4*u+1) + y1*(6*u-6*u2) + s1*(3*u2-2*u)
+	return v, dv / h
+}
+
+// pieceIntegral is ∫ from x[i] to x[i] + u·h of piece i.
+func (sp cubicSpline) pieceIntegral(i int, u float64) float64 {
+	h := sp.x[i+1] - sp.x[i]
+	y0, y1, s0, s1 := sp.y[i], sp.y[i+1], sp.s[i]*h, sp.s[i+1]*h
+	u2, u3, u4 := u*u, u*u*u, u*u*u*u
+	return h * (y0*(u4/2-u3+u) + s0*(u4/4-2*u3/3+u2/2) + y1*(u3-u4/2) + s1*(u4/4-u3/3))
+}
+
+func (sp cubicSpline) at(t float64) float64 {
+	switch len(sp.x) {
+	case 0:
+		return 0
+	case 1:
+		return sp.y[0]
+	}
+	t = math.Max(sp.x[0], math.Min(t, sp.x[len(sp.x)-1]))
+	i := sp.interval(t)
+	v, _ := sp.piece(i, (t-sp.x[i])/(sp.x[i+1]-sp.x[i]))
+	return v
+}
+
+// integral is ∫ₐᵇ of the spline, the range clipped to the knots.
+func (sp cubicSpline) integral(a, b float64) float64 {
+	if len(sp.x) < 2 {
+		return 0
+	}
+	a = math.Max(a, sp.x[0])
+	b = math.Min(b, sp.x[len(sp.x)-1])
+	if !(b > a) {
+		return 0
+	}
+	prim := func(t float64) float64 { // ∫ from x[i] to t, and the index
+		i := sp.interval(t)
+		return sp.pieceIntegral(i, (t-sp.x[i])/(sp.x[i+1]-sp.x[i]))
+	}
+	ia, ib := sp.interval(a), sp.interval(b)
+	if ia == ib {
+		return prim(b) - prim(a)
+	}
+	sum := sp.pieceIntegral(ia, 1) - prim(a)
+	for i := ia + 1; i < ib; i++ {
+		sum += sp.pieceIntegral(i, 1)
+	}
+	return sum + prim(b)
+}
+
+// max returns where on [a, b] (inside the knots) the spline is largest:
+// the ends and every interior root of each piece's derivative (a quadratic
+// in u) are compared.
+func (sp cubicSpline) max(a, b float64) (float64, float64) {
+	if len(sp.x) == 1 {
+		return sp.x[0], sp.y[0]
+	}
+	bx, by := a, sp.at(a)
+	try := func(t float64) {
+		if t >= a && t <= b {
+			if v := sp.at(t); v > by {
+				bx, by = t, v
+			}
+		}
+	}
+	try(b)
+	for i := sp.interval(a); i <= sp.interval(b) && i < len(sp.x)-1; i++ {
+		try(sp.x[i])
+		h := sp.x[i+1] - sp.x[i]
+		y0, y1, s0, s1 := sp.y[i], sp.y[i+1], sp.s[i]*h, sp.s[i+1]*h
+		// d/du of the piece: qa u² + qb u + qc.
+		qa := 6*y0 + 3*s0 - 6*y1 + 3*s1
+		qb := -6*y0 - 4*s0 + 6*y1 - 2*s1
+		qc := s0
+		for _, u := range quadRoots(qa, qb, qc) {
+			if u > 0 && u < 1 {
+				try(sp.x[i] + u*h)
+			}
+		}
+	}
+	return bx, by
+}
+
+// quadRoots returns the real roots of a u² + b u + c (a linear or constant
+// equation when a = 0), computed without cancellation.
+func quadRoots(a, b, c float64) []float64 {
+	if a == 0 {
+		if b == 0 {
+			return nil
+		}
+		return []float64{-c / b}
+	}
+	disc := b*b - 4*a*c
+	if disc < 0 {
+		return nil
+	}
+	q := -(b + math.Copysign(math.Sqrt(disc), b)) / 2
+	out := []float64{q / a}
+	if q != 0 {
+		out = append(out, c/q)
+	}
+	return out
+}
