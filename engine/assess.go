@@ -19,6 +19,23 @@ type HandWorking struct {
 	DraftFwdM float64
 	TrimM     float64
 
+	// The rest of the working, for the screen and for checks.
+	VolumeM3       float64 // V = Δ/ρ, the displaced volume, unchanged by the damage
+	IntactDraftM   float64 // T₀ = V/(L·B)
+	LostVolumeM3   float64 // Σ μ × the open spaces' volume below T₀
+	LostAreaM2     float64 // Σ μ × plan area of the open spaces cut by the new waterline
+	WaterplaneM2   float64 // the waterplane still intact at the new draft
+	LCFM, TCFM     float64 // its centroid, the new centre of flotation (TCFM signed)
+	ITM4, ILM4     float64 // its second moments about its own centroidal axes
+	IXYM4          float64 // its product of inertia about them (neglected by the method)
+	LCBM, TCBM     float64 // centre of buoyancy of the remaining body at the new draft, level
+	BMLM, GMLM     float64
+	KGM, FSCM      float64
+	DraftMidM      float64 // centreline draft amidships
+	CoupledHeelDeg float64 // heel with I_xy kept (heel and trim solved together)
+	CoupledTrimM   float64 // trim likewise
+	Waterline      Plane   // the method's final waterline in the ship frame
+
 	Steps []HandStep // the working, in order
 }
 
