@@ -1,0 +1,177 @@
+package main
+
+import (
+	"flag"
+	"fmt"
+	"io"
+	"math"
+	"strings"
+	"text/tabwriter"
+
+	"heelwatch/engine"
+	"heelwatch/vessels"
+)
+
+const checkHelp = `heelwatch check: validate vessel files and summarise each on one screen.
+
+Usage:
+  heelwatch check [FILE|NAME ...]
+
+With no argument it checks --vessel, or the bundled %q. Every problem in a
+file is listed with its line and key. For a good file it prints the hull's
+dimensions, the loading condition, the intact floating position and the
+compartments with their volume, use, permeability and contents.
+
+Exit status: 0 every file is good and floats intact; 1 a file has problems;
+2 bad usage; 3 a good file whose loading condition does not float intact.
+`
+
+func runCheck(args []string, stdout, stderr io.Writer) int {
+	fs := flag.NewFlagSet("heelwatch check", flag.ContinueOnError)
+	fs.SetOutput(stderr)
+	fs.Usage = func() {}
+	vessel := fs.String("vessel", "", "")
+	help := func(w io.Writer) { fmt.Fprintf(w, checkHelp, vessels.Default) }
+	files, err := parseInterleaved(fs, args)
+	if err != nil {
+		return usageError(err, stdout, stderr, "check", help)
+	}
+	if len(files) == 0 {
+		files = []string{*vessel}
+	}
+	worst := exitOK
+	for i, f := range files {
+		if i > 0 {
+			fmt.Fprintln(stdout)
+		}
+		v, info, status := openVessel(f, stderr)
+		if status == exitOK {
+			status = summarise(stdout, v, info)
+		}
+		// Bad input outranks no equilibrium: it is the first thing to fix.
+		if status == exitInput || (status == exitNoEq && worst == exitOK) {
+			worst = status
+		}
+	}
+	return worst
+}
+
+// summarise prints one screen about a good vessel file and returns exitNoEq
+// when its loading condition does not float intact.
+func summarise(w io.Writer, v *engine.Vessel, info *vessels.Info) int {
+	h := v.Hull
+	fmt.Fprintf(w, "%s — %s: no problems found\n", v.Name, source(info))
+	if info.Description != "" {
+		fmt.Fprintf(w, "  %s\n", firstLine(info.Description))
+	}
+	tw := tabwriter.NewWriter(w, 0, 0, 2, ' ', 0)
+	shape := "box"
+	if !h.Box {
+		shape = fmt.Sprintf("sections, %d stations", len(h.Stations()))
+	}
+	fmt.Fprintf(tw, "  hull\t%s; length %.2f m, breadth %.2f m, depth %.2f m\n", shape, h.LengthM, h.BreadthM, h.DepthM)
+	fmt.Fprintf(tw, "  water\t%.3f t/m³\n", v.WaterDensity)
+
+	var fixed, tanks float64
+	for _, wt := range v.Weights {
+		fixed += wt.MassT
+	}
+	for i := range v.Compartments {
+		m, _, _, _, _ := v.TankContents(i)
+		tanks += m
+	}
+	if info.Condition != "" {
+		fmt.Fprintf(tw, "  condition\t%s\n", info.Condition)
+	}
+	fmt.Fprintf(tw, "  %s\t%s %.1f t + tank contents %.1f t = %.1f t\n", "weights", plural(len(v.Weights), "weight"), fixed, tanks, fixed+tanks)
+	pos, err := engine.Solve(v, v.Intact())
+	status := exitOK
+	if err != nil {
+		fmt.Fprintf(tw, "  intact\tNO EQUILIBRIUM: %v\n", err)
+		status = exitNoEq
+	} else {
+		fmt.Fprintf(tw, "  intact\tdisplacement %.1f t; drafts aft %.3f m, amidships %.3f m, forward %.3f m\n", pos.DisplacementT, pos.DraftAftM, pos.DraftMidM, pos.DraftFwdM)
+		fmt.Fprintf(tw, "  \ttrim %s; heel %s; GM %.3f m (KM %.3f m, KG %.3f m, FSC %.3f m)\n", trimText(pos.TrimM), heelText(pos.HeelDeg), pos.GMM, pos.KMTM, pos.KGM, pos.FSCM)
+		fmt.Fprintf(tw, "  freeboard\tleast to deck edge %.3f m at x %.1f m, %s\n", pos.DeckEdge.HeightM, pos.DeckEdge.XM, pos.DeckEdge.Side)
+	}
+	wt := 0
+	for _, o := range v.Openings {
+		if o.Weathertight {
+			wt++
+		}
+	}
+	fmt.Fprintf(tw, "  openings\t%d (%d closed weathertight); margin line %.3f m below the deck at side\n", len(v.Openings), wt, v.MarginLineM)
+	crit := "none"
+	if len(v.CriteriaSets) > 0 {
+		crit = strings.Join(v.CriteriaSets, ", ")
+	}
+	fmt.Fprintf(tw, "  criteria\t%s\n", crit)
+	tw.Flush()
+
+	fmt.Fprintf(w, "\n  %s\n", plural(len(v.Compartments), "compartment"))
+	tw = tabwriter.NewWriter(w, 0, 0, 2, ' ', 0)
+	fmt.Fprintln(tw, "  name\tuse\tμ\tvolume m³\tcontents")
+	var total float64
+	for i, c := range v.Compartments {
+		vol := c.Volume()
+		total += vol
+		mu := fmt.Sprintf("%.2f", c.Permeability)
+		if i < len(info.Compartments) && info.Compartments[i].DefaultPermeabilityFromUse {
+			mu += "*"
+		}
+		fmt.Fprintf(tw, "  %s\t%s\t%s\t%9.1f\t%s\n", c.Name, dash(c.Use), mu, vol, contents(v, i))
+	}
+	fmt.Fprintf(tw, "  total\t\t\t%9.1f\t\n", total)
+	tw.Flush()
+	fmt.Fprintln(w, "  * permeability from the compartment's use")
+	return status
+}
+
+// contents says what a tank holds: liquid, fill and mass.
+func contents(v *engine.Vessel, i int) string {
+	c := v.Compartments[i]
+	if c.Liquid == nil || c.Liquid.Fill <= 0 {
+		return "—"
+	}
+	m, _, _, _, fsm := v.TankContents(i)
+	s := fmt.Sprintf("%s %.0f %% %.1f t", dash(c.Liquid.Name), 100*c.Liquid.Fill, m)
+	if fsm > 0 {
+		s += fmt.Sprintf(", FSM %.1f t·m", fsm)
+	}
+	return s
+}
+
+func dash(s string) string {
+	if s == "" {
+		return "—"
+	}
+	return s
+}
+
+func firstLine(s string) string {
+	s = strings.TrimSpace(s)
+	if i := strings.IndexByte(s, '\n'); i >= 0 {
+		s = s[:i]
+	}
+	return s
+}
+
+func heelText(deg float64) string {
+	switch {
+	case math.Abs(deg) < 0.005:
+		return "0.00° upright"
+	case deg > 0:
+		return fmt.Sprintf("%.2f° to starboard", deg)
+	}
+	return fmt.Sprintf("%.2f° to port", -deg)
+}
+
+func trimText(m float64) string {
+	switch {
+	case math.Abs(m) < 0.0005:
+		return "0.000 m even keel"
+	case m > 0:
+		return fmt.Sprintf("%.3f m by the stern", m)
+	}
+	return fmt.Sprintf("%.3f m by the head", -m)
+}

@@ -1,0 +1,161 @@
+package main
+
+import (
+	"flag"
+	"fmt"
+	"io"
+	"math"
+	"strconv"
+	"strings"
+
+	"heelwatch/engine"
+	"heelwatch/tui/report"
+	"heelwatch/vessels"
+)
+
+const solveHelp = `heelwatch solve: where the ship floats with compartments open to the sea.
+
+Usage:
+  heelwatch solve [--vessel FILE|NAME] [--open A,B] [--perm NAME=μ,...] [--format F]
+
+Flags:
+  --vessel FILE|NAME  the vessel file, or a bundled vessel's name (default %q)
+  --open A,B          compartments open to the sea (lost buoyancy), by the names
+                      in the vessel file; repeat the flag or separate with commas
+  --perm NAME=μ,...   permeability of an open compartment for this solve,
+                      0 < μ ≤ 1, in place of the file's (e.g. --perm "Hold 2=0.85")
+  --format F          text (default), json or markdown
+
+The answer is the direct solution from the hull geometry at the actual heel
+and trim, with the hand method (lost buoyancy, small angles) beside it where
+it applies, the flags, and the criteria the vessel is held to.
+
+Exit status: 0 solved; 1 bad vessel file; 2 bad usage (an unknown compartment,
+a permeability out of range); 3 no equilibrium (she sinks or capsizes).
+`
+
+func runSolve(args []string, stdout, stderr io.Writer) int {
+	fs := flag.NewFlagSet("heelwatch solve", flag.ContinueOnError)
+	fs.SetOutput(stderr)
+	fs.Usage = func() {}
+	vessel := fs.String("vessel", vessels.Default, "")
+	var open, perm listFlag
+	fs.Var(&open, "open", "")
+	fs.Var(&perm, "perm", "")
+	format := fs.String("format", "text", "")
+	help := func(w io.Writer) { fmt.Fprintf(w, solveHelp, vessels.Default) }
+	pos, err := parseInterleaved(fs, args)
+	if err != nil {
+		return usageError(err, stdout, stderr, "solve", help)
+	}
+	if len(pos) > 0 {
+		fmt.Fprintf(stderr, "heelwatch solve: unexpected argument %q: name the vessel with --vessel and compartments with --open\n", pos[0])
+		return exitUsage
+	}
+	write, ok := writers[*format]
+	if !ok {
+		fmt.Fprintf(stderr, "heelwatch solve: --format %q: use text, json or markdown\n", *format)
+		return exitUsage
+	}
+
+	v, info, status := openVessel(*vessel, stderr)
+	if status != exitOK {
+		return status
+	}
+	d, msg := damageOf(v, open, perm)
+	if msg != "" {
+		fmt.Fprintln(stderr, "heelwatch solve:", msg)
+		return exitUsage
+	}
+	a := engine.Assess(v, d)
+	r := report.New(v, source(info), a, now(), version)
+	r.Condition = info.Condition
+	r.Open = inOrderGiven(open)
+	if err := write(stdout, r); err != nil {
+		fmt.Fprintln(stderr, "heelwatch solve: writing the report:", err)
+		return exitFailed
+	}
+	if a.Position == nil {
+		why := "no equilibrium"
+		if a.NoEq != nil {
+			why = a.NoEq.Error()
+		}
+		fmt.Fprintf(stderr, "heelwatch solve: %s\n", why)
+		return exitNoEq
+	}
+	return exitOK
+}
+
+// writers are the report formats of solve.
+var writers = map[string]func(io.Writer, report.Report) error{
+	"text":     report.Text,
+	"json":     report.JSON,
+	"markdown": report.Markdown,
+}
+
+// damageOf turns --open and --perm into a damage state of v. It returns a
+// message saying what is wrong when a name or a value cannot be used.
+func damageOf(v *engine.Vessel, open, perm []string) (engine.Damage, string) {
+	index := map[string]int{}
+	for i, c := range v.Compartments {
+		index[c.Name] = i
+	}
+	d := v.Intact()
+	for _, name := range open {
+		i, ok := index[name]
+		if !ok {
+			return nil, unknownName("--open", name, v)
+		}
+		d[i].Open = true
+	}
+	for _, item := range perm {
+		eq := strings.LastIndexByte(item, '=')
+		if eq < 0 {
+			return nil, fmt.Sprintf("--perm %q: write NAME=μ, e.g. --perm %q", item, v.Compartments[0].Name+"=0.85")
+		}
+		name, val := strings.TrimSpace(item[:eq]), strings.TrimSpace(item[eq+1:])
+		i, ok := index[name]
+		if !ok {
+			return nil, unknownName("--perm", name, v)
+		}
+		mu, err := strconv.ParseFloat(val, 64)
+		if err != nil || math.IsNaN(mu) || !(mu > 0 && mu <= 1) {
+			return nil, fmt.Sprintf("--perm %q: permeability %q must be a number with 0 < μ ≤ 1", name, val)
+		}
+		if !d[i].Open {
+			return nil, fmt.Sprintf("--perm %q: that compartment is not open to the sea; add it to --open", name)
+		}
+		d[i].Permeability = mu
+	}
+	return d, ""
+}
+
+// inOrderGiven returns the names in the order first given, once each.
+func inOrderGiven(names []string) []string {
+	seen := map[string]bool{}
+	var out []string
+	for _, n := range names {
+		if !seen[n] {
+			seen[n] = true
+			out = append(out, n)
+		}
+	}
+	return out
+}
+
+// unknownName refuses a compartment name by name and lists the valid ones.
+func unknownName(flagName, name string, v *engine.Vessel) string {
+	var b strings.Builder
+	fmt.Fprintf(&b, "%s: %q is not a compartment of %s.", flagName, name, v.Name)
+	for _, c := range v.Compartments {
+		if strings.EqualFold(c.Name, name) {
+			fmt.Fprintf(&b, " Did you mean %q? Names must match exactly.", c.Name)
+			break
+		}
+	}
+	b.WriteString(" The compartments are:")
+	for _, c := range v.Compartments {
+		fmt.Fprintf(&b, "\n  %s", c.Name)
+	}
+	return b.String()
+}

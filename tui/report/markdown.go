@@ -1,0 +1,228 @@
+package report
+
+import (
+	"io"
+	"strings"
+)
+
+// Markdown writes r as a Markdown report that an officer can print or
+// paste into the log: the vessel and condition, the compartments open, the
+// floating position, freeboards, openings, flags, criteria, the hand
+// method's working, the cautions and the time it was made.
+func Markdown(w io.Writer, r Report) error {
+	e := &errWriter{w: w}
+	a := r.Assessment
+	doc := Build(r)
+
+	e.line("# Flooding assessment: ", md(orDash(r.VesselName)))
+	e.line()
+	e.line("| | |")
+	e.line("|---|---|")
+	e.line("| Vessel | ", md(orDash(r.VesselName)), " |")
+	if r.VesselFile != "" {
+		e.line("| Vessel file | `", strings.ReplaceAll(r.VesselFile, "`", "'"), "` |")
+	}
+	e.line("| Made | ", madeWords(r.Made), " |")
+	e.line("| Computed by | heelwatch ", md(orDash(r.Version)), " |")
+	outcome := "floats"
+	if a.Position == nil {
+		outcome = "**no equilibrium: " + r.Outcome() + "**"
+	}
+	e.line("| Outcome | ", outcome, " |")
+	e.line("| Highest flag | ", r.Severity(), " |")
+	e.line()
+
+	e.line("## Condition")
+	e.line()
+	if r.Condition != "" {
+		e.line("Loading condition: ", md(r.Condition), ".")
+		e.line()
+	}
+	if len(r.Open) == 0 {
+		e.line("No compartment is open to the sea: this is the intact loading condition.")
+	} else {
+		e.line("Compartments open to the sea (lost buoyancy, each with its permeability μ):")
+		e.line()
+		e.line("| Compartment | Use | μ | Volume |")
+		e.line("|---|---|--:|--:|")
+		for _, o := range doc.OpenCompartments {
+			e.line("| ", md(o.Name), " | ", md(orDash(o.Use)), " | ", num(float64(o.Permeability), 2, ""), " | ", num(float64(o.VolumeM3), 1, "m³"), " |")
+		}
+	}
+	e.line()
+
+	e.line("## Floating position")
+	e.line()
+	p := a.Position
+	if p == nil {
+		e.line("**No floating position exists: she ", r.Outcome(), ".**")
+		if a.NoEq != nil && a.NoEq.Reason != "" {
+			e.line()
+			e.line(md(a.NoEq.Reason))
+		}
+		e.line()
+	} else {
+		e.line("Direct solution from the hull geometry, at the actual heel and trim.")
+		e.line()
+		e.line("| Figure | Value |")
+		e.line("|---|--:|")
+		rows := [][2]string{
+			{"Draft aft (AP)", num(p.DraftAftM, 3, "m")},
+			{"Draft amidships", num(p.DraftMidM, 3, "m")},
+			{"Draft forward (FP)", num(p.DraftFwdM, 3, "m")},
+			{"Trim", trimWords(p.TrimM)},
+			{"Heel", heelWords(p.HeelDeg)},
+			{"GM (free-surface corrected)", num(p.GMM, 3, "m")},
+			{"KM", num(p.KMTM, 3, "m")},
+			{"KG", num(p.KGM, 3, "m")},
+			{"Free-surface correction", num(p.FSCM, 3, "m")},
+			{"GM longitudinal", num(p.GMLM, 1, "m")},
+			{"Displacement", num(p.DisplacementT, 1, "t")},
+			{"Buoyant volume", num(p.VolumeM3, 1, "m³")},
+		}
+		for _, row := range rows {
+			e.line("| ", row[0], " | ", row[1], " |")
+		}
+		e.line()
+
+		e.line("## Freeboard")
+		e.line()
+		e.line("- Least freeboard to the deck edge: ", clearanceWords(p.DeckEdge))
+		e.line("- Margin line: ", clearanceWords(p.MarginLine))
+		if len(p.Freeboards) > 0 {
+			e.line()
+			e.line("| Station x | Deck at side | Port | Starboard |")
+			e.line("|--:|--:|--:|--:|")
+			for _, f := range p.Freeboards {
+				e.line("| ", num(f.XM, 1, "m"), " | ", num(f.DeckZM, 2, "m"), " | ", num(f.PortM, 3, "m"), " | ", num(f.StarboardM, 3, "m"), " |")
+			}
+		}
+		e.line()
+
+		e.line("## Openings")
+		e.line()
+		if len(p.Openings) == 0 {
+			e.line("The vessel file lists no openings.")
+		} else {
+			e.line("Nearest the water first; a negative height is under water.")
+			e.line()
+			e.line("| Opening | Kind | x | y | z | Height above water | State |")
+			e.line("|---|---|--:|--:|--:|--:|---|")
+			for _, o := range openingsByHeight(p) {
+				state := "clear"
+				if o.Immersed() {
+					state = "**immersed**"
+				}
+				if o.Weathertight {
+					state += ", weathertight"
+				}
+				e.line("| ", md(o.Name), " | ", md(orDash(o.Kind)), " | ", num(o.X, 1, "m"), " | ", num(o.Y, 1, "m"), " | ", num(o.Z, 1, "m"), " | ", num(o.HeightM, 3, "m"), " | ", state, " |")
+			}
+		}
+		e.line()
+	}
+
+	e.line("## Flags")
+	e.line()
+	fl := r.Flags()
+	if len(fl) == 0 {
+		e.line("None.")
+	} else {
+		e.line("| Severity | Code | What it means |")
+		e.line("|---|---|---|")
+		for _, f := range fl {
+			sev := f.Severity.String()
+			if sev == "danger" {
+				sev = "**danger**"
+			}
+			e.line("| ", sev, " | `", f.Code, "` | ", md(f.Message), " |")
+		}
+	}
+	e.line()
+
+	if g := a.GZ; g != nil && len(g.HeelDeg) > 0 {
+		e.line("## Righting levers")
+		e.line()
+		e.line("Free trim, constant displacement, heeled to ", g.Toward.String(), ".")
+		e.line()
+		df := num(g.DownfloodingDeg, 1, "°")
+		if g.Downflooding != "" {
+			df += " (" + md(g.Downflooding) + ")"
+		}
+		e.line("- Equilibrium: ", num(g.EquilibriumDeg, 1, "°"), "; GZ max ", num(g.GZMaxM, 3, "m"), " at ", num(g.GZMaxDeg, 1, "°"))
+		e.line("- Vanishing stability: ", num(g.VanishingDeg, 1, "°"), "; range beyond equilibrium ", num(g.RangeDeg, 1, "°"))
+		e.line("- Deck edge immerses at ", num(g.DeckEdgeDeg, 1, "°"), "; downflooding at ", df)
+		e.line()
+		e.line("| Heel | GZ |")
+		e.line("|--:|--:|")
+		for _, i := range gzRows(g, 5) {
+			e.line("| ", num(g.HeelDeg[i], 1, "°"), " | ", num(g.GZM[i], 3, "m"), " |")
+		}
+		e.line()
+	}
+
+	e.line("## Criteria")
+	e.line()
+	if len(a.Criteria) == 0 {
+		e.line("No criteria were evaluated for this state.")
+	} else {
+		e.line("| Result | Set | Requirement | Required | Actual | Margin | Source |")
+		e.line("|---|---|---|--:|--:|--:|---|")
+		for _, c := range a.Criteria {
+			res := "pass"
+			if !c.Pass {
+				res = "**FAIL**"
+			}
+			e.line("| ", res, " | ", md(c.Set), " | ", md(c.Requirement), " | ", num(c.Required, 3, c.Unit), " | ", num(c.Actual, 3, c.Unit), " | ", signed(c.Margin, 3, c.Unit), " | ", md(c.Source), " |")
+		}
+	}
+	e.line()
+
+	e.line("## Hand method")
+	e.line()
+	if h := a.Hand; h == nil {
+		why := a.HandWhy
+		if why == "" {
+			why = "not worked for this state"
+		}
+		e.line("The small-angle lost-buoyancy method was not applied: ", md(why), ".")
+	} else {
+		e.line("Small-angle lost-buoyancy method for a box-shaped vessel, step by step:")
+		e.line()
+		e.line("| Step | Working | Result |")
+		e.line("|---|---|--:|")
+		for _, s := range h.Steps {
+			e.line("| ", md(s.Label), " | ", md(s.Formula), " | ", num(s.Value, 3, s.Unit), " |")
+		}
+		e.line()
+		e.line("| | Hand method | Direct solution |")
+		e.line("|---|--:|--:|")
+		dash := func(f func() string) string {
+			if p == nil {
+				return "—"
+			}
+			return f()
+		}
+		e.line("| Mean draft | ", num(h.DraftM, 3, "m"), " | ", dash(func() string { return num(p.DraftMidM, 3, "m") }), " |")
+		e.line("| Draft aft | ", num(h.DraftAftM, 3, "m"), " | ", dash(func() string { return num(p.DraftAftM, 3, "m") }), " |")
+		e.line("| Draft forward | ", num(h.DraftFwdM, 3, "m"), " | ", dash(func() string { return num(p.DraftFwdM, 3, "m") }), " |")
+		e.line("| Heel | ", heelWords(h.HeelDeg), " | ", dash(func() string { return heelWords(p.HeelDeg) }), " |")
+		e.line("| GM | ", num(h.GMM, 3, "m"), " | ", dash(func() string { return num(p.GMM, 3, "m") }), " |")
+	}
+	e.line()
+
+	e.line("## Cautions")
+	e.line()
+	for _, c := range Cautions {
+		e.line("- ", c)
+	}
+	e.line()
+	e.line("*Made ", madeWords(r.Made), " by heelwatch ", md(orDash(r.Version)), ".*")
+	return e.err
+}
+
+// md escapes text for a Markdown table cell or line.
+func md(s string) string {
+	r := strings.NewReplacer("|", `\|`, "\n", " ", "*", `\*`, "_", `\_`, "`", "'")
+	return r.Replace(s)
+}

@@ -1,0 +1,260 @@
+// Package report renders one assessed damage state of a vessel (an
+// engine.Assessment) for people and for programs: as aligned plain text for
+// the terminal, as Markdown for printing or pasting into the log, and as the
+// JSON object of heelwatch's `solve` contract.
+//
+// The renderers only show: every figure comes from the engine. Fields of the
+// Assessment that are empty (no hand method, no GZ curve yet, no criteria)
+// are shown as absent, never invented. Non-finite numbers never reach the
+// output: JSON writes them as null and text as "—".
+//
+// Units are those of the engine's names: metres, tonnes, degrees, m³.
+package report
+
+import (
+	"fmt"
+	"io"
+	"math"
+	"sort"
+	"strings"
+	"time"
+
+	"heelwatch/engine"
+)
+
+// Report is one assessed state of a vessel with the facts a record needs:
+// which vessel, from where, which compartments are open and at what
+// permeability, when it was made and by which version of heelwatch.
+// Build it with New, or fill it by hand.
+type Report struct {
+	VesselName string
+	VesselFile string // where the vessel came from: a path, or "bundled:NAME"
+	Condition  string // the loading condition's name, "" if the file gives none
+
+	// Vessel, when set, gives each compartment's use, volume and own
+	// permeability to the renderers. Optional.
+	Vessel *engine.Vessel
+
+	Open           []string           // compartments open to the sea, in the order chosen
+	Permeabilities map[string]float64 // μ in force for each open compartment
+
+	Assessment engine.Assessment
+	Made       time.Time // when the assessment was made (shown in UTC)
+	Version    string    // heelwatch's version
+}
+
+// New returns the Report of assessment a of vessel v: the open
+// compartments and their permeabilities are read from a.Damage.
+func New(v *engine.Vessel, file string, a engine.Assessment, made time.Time, version string) Report {
+	r := Report{VesselName: v.Name, VesselFile: file, Vessel: v, Assessment: a,
+		Made: made, Version: version, Permeabilities: map[string]float64{}}
+	for i, c := range v.Compartments {
+		if i >= len(a.Damage) || !a.Damage[i].Open {
+			continue
+		}
+		r.Open = append(r.Open, c.Name)
+		r.Permeabilities[c.Name] = permeabilityOf(c, a.Damage[i])
+	}
+	return r
+}
+
+func permeabilityOf(c *engine.Compartment, s engine.SpaceState) float64 {
+	if s.Permeability > 0 && s.Permeability <= 1 {
+		return s.Permeability
+	}
+	return c.Permeability
+}
+
+// Cautions are the words that go with every report: what heelwatch is for
+// and what governs instead of it.
+var Cautions = []string{
+	"heelwatch is decision support only. It computes from the hull geometry in the vessel file; it is not an approved loading instrument.",
+	"The ship's approved stability information and loading instrument, the master's judgement, class rules and flag-state requirements govern.",
+	"Follow local codes and licensed practice first. Check every figure against the ship's own documents before acting on it.",
+}
+
+// Outcome is how the state ends: "floats", or why not ("sinks",
+// "capsizes", "not converged").
+func (r Report) Outcome() string {
+	a := r.Assessment
+	if a.Position != nil {
+		return "floats"
+	}
+	if a.NoEq != nil {
+		return a.NoEq.Outcome.String()
+	}
+	return "not converged"
+}
+
+// Flags returns the assessment's flags, with one added when there is no
+// equilibrium and no danger flag already says so.
+func (r Report) Flags() []engine.Flag {
+	fl := append([]engine.Flag(nil), r.Assessment.Flags...)
+	if r.Assessment.Position != nil {
+		return fl
+	}
+	for _, f := range fl {
+		if f.Severity == engine.Danger {
+			return fl
+		}
+	}
+	msg := "No floating position exists for this state."
+	if ne := r.Assessment.NoEq; ne != nil {
+		switch ne.Outcome {
+		case engine.Sinks:
+			msg = "She sinks: the weight exceeds all the buoyancy left (" + ne.Reason + ")."
+		case engine.Capsizes:
+			msg = "She capsizes: no position of stable equilibrium short of 90° heel (" + ne.Reason + ")."
+		default:
+			msg = "No floating position was found (" + ne.Reason + "); treat the state as dangerous."
+		}
+	}
+	return append(fl, engine.Flag{Code: "no-equilibrium", Severity: engine.Danger, Message: msg})
+}
+
+// Severity is the highest severity among the flags, or "none".
+func (r Report) Severity() string {
+	fl := r.Flags()
+	if len(fl) == 0 {
+		return "none"
+	}
+	s := engine.Info
+	for _, f := range fl {
+		if f.Severity > s {
+			s = f.Severity
+		}
+	}
+	return s.String()
+}
+
+// compartment returns the named compartment of r.Vessel, or nil.
+func (r Report) compartment(name string) *engine.Compartment {
+	if r.Vessel == nil {
+		return nil
+	}
+	for _, c := range r.Vessel.Compartments {
+		if c.Name == name {
+			return c
+		}
+	}
+	return nil
+}
+
+// finite reports whether x is neither NaN nor infinite.
+func finite(x float64) bool { return !math.IsNaN(x) && !math.IsInf(x, 0) }
+
+// num formats x with prec decimals and unit, or "—" when x is not finite.
+func num(x float64, prec int, unit string) string {
+	if !finite(x) {
+		return "—"
+	}
+	if x == 0 || math.Abs(x) < 0.5*math.Pow(10, -float64(prec)) {
+		x = 0 // no "-0.000"
+	}
+	s := fmt.Sprintf("%.*f", prec, x)
+	if unit == "" {
+		return s
+	}
+	if unit == "°" {
+		return s + unit
+	}
+	return s + " " + unit
+}
+
+// heelWords says a heel in degrees with its side.
+func heelWords(deg float64) string {
+	switch {
+	case !finite(deg):
+		return "—"
+	case math.Abs(deg) < 0.005:
+		return "0.00° upright"
+	case deg > 0:
+		return num(deg, 2, "°") + " to starboard"
+	}
+	return num(-deg, 2, "°") + " to port"
+}
+
+// trimWords says a trim in metres with its sense.
+func trimWords(m float64) string {
+	switch {
+	case !finite(m):
+		return "—"
+	case math.Abs(m) < 0.0005:
+		return "0.000 m even keel"
+	case m > 0:
+		return num(m, 3, "m") + " by the stern"
+	}
+	return num(-m, 3, "m") + " by the head"
+}
+
+// clearanceWords says a least clearance: height, where and which side.
+func clearanceWords(c engine.Clearance) string {
+	if !finite(c.HeightM) {
+		return "—"
+	}
+	s := num(c.HeightM, 3, "m") + " at x " + num(c.XM, 1, "m") + ", " + c.Side.String()
+	if c.HeightM < 0 {
+		s += " (immersed)"
+	}
+	return s
+}
+
+// openingsByHeight returns the openings nearest the water first.
+func openingsByHeight(p *engine.Position) []engine.OpeningClearance {
+	o := append([]engine.OpeningClearance(nil), p.Openings...)
+	sort.SliceStable(o, func(i, j int) bool { return o[i].HeightM < o[j].HeightM })
+	return o
+}
+
+// gzRows picks the computed points of the curve to tabulate: those at
+// multiples of step degrees, or, if the curve's heels do not fall on them,
+// about a dozen spread along it. Every row is a point the engine computed.
+func gzRows(g *engine.GZCurve, step float64) []int {
+	n := len(g.HeelDeg)
+	if len(g.GZM) < n {
+		n = len(g.GZM)
+	}
+	var rows []int
+	for i := 0; i < n; i++ {
+		q := g.HeelDeg[i] / step
+		if math.Abs(q-math.Round(q)) < 1e-6 {
+			rows = append(rows, i)
+		}
+	}
+	if len(rows) >= 3 || n == 0 {
+		return rows
+	}
+	rows = rows[:0]
+	k := (n + 11) / 12
+	for i := 0; i < n; i += k {
+		rows = append(rows, i)
+	}
+	if rows[len(rows)-1] != n-1 {
+		rows = append(rows, n-1)
+	}
+	return rows
+}
+
+// madeWords is the time made, in UTC to the second.
+func madeWords(t time.Time) string {
+	if t.IsZero() {
+		return "—"
+	}
+	return t.UTC().Format("2006-01-02 15:04:05 UTC")
+}
+
+// errWriter remembers the first write error so renderers can print freely.
+type errWriter struct {
+	w   io.Writer
+	err error
+}
+
+func (e *errWriter) printf(format string, a ...any) {
+	if e.err == nil {
+		_, e.err = fmt.Fprintf(e.w, format, a...)
+	}
+}
+
+func (e *errWriter) line(parts ...string) {
+	e.printf("%s\n", strings.Join(parts, ""))
+}

@@ -1,0 +1,197 @@
+package report
+
+import (
+	"io"
+	"strings"
+)
+
+// Text writes r as a compact plain-text report for the terminal: aligned
+// columns, a unit on every figure, nothing but ASCII and a few common
+// symbols (°, μ, ³, —).
+func Text(w io.Writer, r Report) error {
+	e := &errWriter{w: w}
+	a := r.Assessment
+	head := "heelwatch " + orDash(r.Version) + " · " + orDash(r.VesselName)
+	if r.VesselFile != "" {
+		head += " · " + r.VesselFile
+	}
+	e.line(head)
+	e.line("made ", madeWords(r.Made))
+	if r.Condition != "" {
+		e.line("loading condition: ", r.Condition)
+	}
+	e.line()
+
+	if len(r.Open) == 0 {
+		e.line("Open to the sea: none (intact)")
+	} else {
+		e.line("Open to the sea: ", plural(len(r.Open), "compartment"))
+		t := table{right: []bool{false, false, true, true}}
+		for _, o := range Build(r).OpenCompartments {
+			t.add(o.Name, orDash(o.Use), "μ "+num(float64(o.Permeability), 2, ""), num(float64(o.VolumeM3), 1, "m³"))
+		}
+		writeLines(e, t.lines("  "))
+	}
+	e.line()
+
+	p := a.Position
+	if p == nil {
+		e.line("Floating position: NONE — she ", r.Outcome())
+		if a.NoEq != nil {
+			e.line("  ", a.NoEq.Reason)
+		}
+	} else {
+		e.line("Floating position (direct, from the hull geometry)")
+		t := table{}
+		t.add("draft aft", num(p.DraftAftM, 3, "m"))
+		t.add("draft amidships", num(p.DraftMidM, 3, "m"))
+		t.add("draft forward", num(p.DraftFwdM, 3, "m"))
+		t.add("trim", trimWords(p.TrimM))
+		t.add("heel", heelWords(p.HeelDeg))
+		t.add("GM", num(p.GMM, 3, "m"))
+		t.add("KM", num(p.KMTM, 3, "m"))
+		t.add("KG", num(p.KGM, 3, "m"))
+		t.add("free-surface corr.", num(p.FSCM, 3, "m"))
+		t.add("displacement", num(p.DisplacementT, 1, "t"))
+		t.add("deck edge", clearanceWords(p.DeckEdge))
+		t.add("margin line", clearanceWords(p.MarginLine))
+		writeLines(e, t.lines("  "))
+		if len(p.Openings) > 0 {
+			e.line()
+			e.line("Openings, nearest the water first (height above water)")
+			t := table{right: []bool{false, false, true, false}}
+			for _, o := range openingsByHeight(p) {
+				note := ""
+				if o.Immersed() {
+					note = "IMMERSED"
+				}
+				if o.Weathertight {
+					note = strings.TrimSpace(note + " weathertight")
+				}
+				t.add(o.Name, orDash(o.Kind), num(o.HeightM, 3, "m"), note)
+			}
+			writeLines(e, t.lines("  "))
+		}
+	}
+
+	if g := a.GZ; g != nil && len(g.HeelDeg) > 0 {
+		e.line()
+		e.line("Righting levers, heeled to ", g.Toward.String())
+		t := table{right: []bool{false, true, false, true}}
+		t.add("GZ max", num(g.GZMaxM, 3, "m")+" at "+num(g.GZMaxDeg, 1, "°"), "vanishing", num(g.VanishingDeg, 1, "°"))
+		t.add("equilibrium", num(g.EquilibriumDeg, 1, "°"), "range", num(g.RangeDeg, 1, "°"))
+		df := num(g.DownfloodingDeg, 1, "°")
+		if g.Downflooding != "" {
+			df += " (" + g.Downflooding + ")"
+		}
+		t.add("deck edge", num(g.DeckEdgeDeg, 1, "°"), "downflooding", df)
+		writeLines(e, t.lines("  "))
+		rows := gzRows(g, 10)
+		heel, gz := []string{"heel °"}, []string{"GZ m"}
+		for _, i := range rows {
+			heel = append(heel, num(g.HeelDeg[i], 0, ""))
+			gz = append(gz, num(g.GZM[i], 3, ""))
+		}
+		c := table{right: make([]bool, len(heel))}
+		for i := 1; i < len(heel); i++ {
+			c.right[i] = true
+		}
+		c.add(heel...)
+		c.add(gz...)
+		writeLines(e, c.lines("  "))
+	}
+
+	if len(a.Criteria) > 0 {
+		e.line()
+		e.line("Criteria")
+		t := table{right: []bool{false, false, true, true, true}}
+		for _, c := range a.Criteria {
+			t.add(passWord(c.Pass), c.Requirement, "actual "+num(c.Actual, 3, c.Unit), "margin "+signed(c.Margin, 3, c.Unit), c.Set)
+		}
+		writeLines(e, t.lines("  "))
+	}
+
+	e.line()
+	if h := a.Hand; h != nil {
+		e.line("Hand method (lost buoyancy, small angles)")
+		t := table{right: []bool{false, false, true}}
+		for _, s := range h.Steps {
+			t.add(s.Label, s.Formula, num(s.Value, 3, s.Unit))
+		}
+		writeLines(e, t.lines("  "))
+		c := table{right: []bool{false, true, true}}
+		c.add("", "hand", "direct")
+		if p != nil {
+			c.add("mean draft", num(h.DraftM, 3, "m"), num(p.DraftMidM, 3, "m"))
+			c.add("draft aft", num(h.DraftAftM, 3, "m"), num(p.DraftAftM, 3, "m"))
+			c.add("draft forward", num(h.DraftFwdM, 3, "m"), num(p.DraftFwdM, 3, "m"))
+			c.add("heel", heelWords(h.HeelDeg), heelWords(p.HeelDeg))
+			c.add("GM", num(h.GMM, 3, "m"), num(p.GMM, 3, "m"))
+		} else {
+			c.add("mean draft", num(h.DraftM, 3, "m"), "—")
+			c.add("heel", heelWords(h.HeelDeg), "—")
+			c.add("GM", num(h.GMM, 3, "m"), "—")
+		}
+		writeLines(e, c.lines("  "))
+	} else {
+		why := a.HandWhy
+		if why == "" {
+			why = "not worked for this state"
+		}
+		e.line("Hand method: ", why)
+	}
+
+	e.line()
+	fl := r.Flags()
+	if len(fl) == 0 {
+		e.line("Flags: none")
+	} else {
+		e.line("Flags")
+		t := table{}
+		for _, f := range fl {
+			t.add(strings.ToUpper(f.Severity.String()), f.Code, f.Message)
+		}
+		writeLines(e, t.lines("  "))
+	}
+	e.line()
+	for _, c := range Cautions {
+		e.line(c)
+	}
+	return e.err
+}
+
+func writeLines(e *errWriter, lines []string) {
+	for _, l := range lines {
+		e.line(l)
+	}
+}
+
+func orDash(s string) string {
+	if s == "" {
+		return "—"
+	}
+	return s
+}
+
+func plural(n int, word string) string {
+	if n == 1 {
+		return "1 " + word
+	}
+	return num(float64(n), 0, "") + " " + word + "s"
+}
+
+func passWord(ok bool) string {
+	if ok {
+		return "PASS"
+	}
+	return "FAIL"
+}
+
+// signed formats x with an explicit sign.
+func signed(x float64, prec int, unit string) string {
+	s := num(x, prec, unit)
+	if finite(x) && !strings.HasPrefix(s, "-") && s != num(0, prec, unit) {
+		return "+" + s
+	}
+	return s
+}
