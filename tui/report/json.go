@@ -149,7 +149,14 @@ type Hand struct {
 	DraftFwdM Num `json:"draft_fwd_m"`
 	TrimM     Num `json:"trim_m"`
 
-	Steps []StepDoc `json:"steps"`
+	DraftMidM        Num       `json:"draft_mid_m"`
+	LostVolumeM3     Num       `json:"lost_volume_m3"`
+	LostAreaM2       Num       `json:"lost_area_m2"`
+	WaterplaneAreaM2 Num       `json:"waterplane_area_m2"`
+	LCFM             Num       `json:"lcf_m"`
+	TCFM             Num       `json:"tcf_m"`
+	GMLM             Num       `json:"gml_m"`
+	Steps            []StepDoc `json:"steps"`
 }
 
 // StepDoc is one line of the hand method's working.
@@ -232,9 +239,12 @@ func Build(r Report) Document {
 		}
 	}
 	if h := a.Hand; h != nil {
-		d.Hand = &Hand{Num(h.SinkageM), Num(h.DraftM), Num(h.CFShiftM), Num(h.KBM), Num(h.BMM),
-			Num(h.KMM), Num(h.GMM), Num(h.HeelDeg), Num(h.DraftAftM), Num(h.DraftFwdM), Num(h.TrimM),
-			[]StepDoc{}}
+		d.Hand = &Hand{SinkageM: Num(h.SinkageM), DraftM: Num(h.DraftM), CFShiftM: Num(h.CFShiftM),
+			KBM: Num(h.KBM), BMM: Num(h.BMM), KMM: Num(h.KMM), GMM: Num(h.GMM), HeelDeg: Num(h.HeelDeg),
+			DraftAftM: Num(h.DraftAftM), DraftFwdM: Num(h.DraftFwdM), TrimM: Num(h.TrimM),
+			DraftMidM: Num(h.DraftMidM), LostVolumeM3: Num(h.LostVolumeM3), LostAreaM2: Num(h.LostAreaM2),
+			WaterplaneAreaM2: Num(h.WaterplaneM2), LCFM: Num(h.LCFM), TCFM: Num(h.TCFM), GMLM: Num(h.GMLM),
+			Steps: []StepDoc{}}
 		for _, s := range h.Steps {
 			d.Hand.Steps = append(d.Hand.Steps, StepDoc{s.Label, s.Formula, Num(s.Value), s.Unit})
 		}

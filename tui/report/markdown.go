@@ -58,7 +58,7 @@ func Markdown(w io.Writer, r Report) error {
 		e.line("**No floating position exists: she ", r.Outcome(), ".**")
 		if a.NoEq != nil && a.NoEq.Reason != "" {
 			e.line()
-			e.line(md(a.NoEq.Reason))
+			e.line(md(sentence(a.NoEq.Reason)), ".")
 		}
 		e.line()
 	} else {
@@ -203,9 +203,11 @@ func Markdown(w io.Writer, r Report) error {
 			}
 			return f()
 		}
-		e.line("| Mean draft | ", num(h.DraftM, 3, "m"), " | ", dash(func() string { return num(p.DraftMidM, 3, "m") }), " |")
+		e.line("| Mean draft after sinkage | ", num(h.DraftM, 3, "m"), " | ", dash(func() string { return num(p.DraftMidM, 3, "m") + " (amidships)" }), " |")
 		e.line("| Draft aft | ", num(h.DraftAftM, 3, "m"), " | ", dash(func() string { return num(p.DraftAftM, 3, "m") }), " |")
+		e.line("| Draft amidships | ", num(h.DraftMidM, 3, "m"), " | ", dash(func() string { return num(p.DraftMidM, 3, "m") }), " |")
 		e.line("| Draft forward | ", num(h.DraftFwdM, 3, "m"), " | ", dash(func() string { return num(p.DraftFwdM, 3, "m") }), " |")
+		e.line("| Trim | ", trimWords(h.TrimM), " | ", dash(func() string { return trimWords(p.TrimM) }), " |")
 		e.line("| Heel | ", heelWords(h.HeelDeg), " | ", dash(func() string { return heelWords(p.HeelDeg) }), " |")
 		e.line("| GM | ", num(h.GMM, 3, "m"), " | ", dash(func() string { return num(p.GMM, 3, "m") }), " |")
 	}

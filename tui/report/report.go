@@ -86,8 +86,8 @@ func (r Report) Outcome() string {
 	return "not converged"
 }
 
-// Flags returns the assessment's flags, with one added when there is no
-// equilibrium and no danger flag already says so.
+// Flags returns the assessment's flags, with one added (the engine's code
+// for it) when there is no equilibrium and no danger flag already says so.
 func (r Report) Flags() []engine.Flag {
 	fl := append([]engine.Flag(nil), r.Assessment.Flags...)
 	if r.Assessment.Position != nil {
@@ -98,18 +98,18 @@ func (r Report) Flags() []engine.Flag {
 			return fl
 		}
 	}
-	msg := "No floating position exists for this state."
+	code, msg := engine.FlagNotSolved, "No floating position was found: treat the state as dangerous."
 	if ne := r.Assessment.NoEq; ne != nil {
 		switch ne.Outcome {
 		case engine.Sinks:
-			msg = "She sinks: the weight exceeds all the buoyancy left (" + ne.Reason + ")."
+			code, msg = engine.FlagWillSink, "There is no floating position: she sinks ("+ne.Reason+")."
 		case engine.Capsizes:
-			msg = "She capsizes: no position of stable equilibrium short of 90° heel (" + ne.Reason + ")."
+			code, msg = engine.FlagWillCapsize, "There is no position of rest: she capsizes ("+ne.Reason+")."
 		default:
-			msg = "No floating position was found (" + ne.Reason + "); treat the state as dangerous."
+			msg = "No floating position was found (" + ne.Reason + "): treat the state as dangerous."
 		}
 	}
-	return append(fl, engine.Flag{Code: "no-equilibrium", Severity: engine.Danger, Message: msg})
+	return append(fl, engine.Flag{Code: code, Severity: engine.Danger, Message: msg})
 }
 
 // Severity is the highest severity among the flags, or "none".
@@ -257,4 +257,12 @@ func (e *errWriter) printf(format string, a ...any) {
 
 func (e *errWriter) line(parts ...string) {
 	e.printf("%s\n", strings.Join(parts, ""))
+}
+
+// sentence starts s with a capital letter.
+func sentence(s string) string {
+	for i, r := range s {
+		return strings.ToUpper(string(r)) + s[i+len(string(r)):]
+	}
+	return s
 }

@@ -132,7 +132,7 @@ func TestNoEquilibrium(t *testing.T) {
 	if d.Equilibrium != nil || d.Outcome != "sinks" || d.Severity != "danger" {
 		t.Errorf("equilibrium %v outcome %q severity %q", d.Equilibrium, d.Outcome, d.Severity)
 	}
-	if len(d.Flags) != 1 || d.Flags[0].Code != "no-equilibrium" || !strings.Contains(d.Flags[0].Message, "sinks") {
+	if len(d.Flags) != 1 || d.Flags[0].Code != engine.FlagWillSink || !strings.Contains(d.Flags[0].Message, "sinks") {
 		t.Errorf("flags %+v", d.Flags)
 	}
 	// A danger flag from the engine replaces the renderer's own.

@@ -38,7 +38,7 @@ func Text(w io.Writer, r Report) error {
 	if p == nil {
 		e.line("Floating position: NONE — she ", r.Outcome())
 		if a.NoEq != nil {
-			e.line("  ", a.NoEq.Reason)
+			e.line("  ", sentence(a.NoEq.Reason), ".")
 		}
 	} else {
 		e.line("Floating position (direct, from the hull geometry)")
@@ -121,17 +121,18 @@ func Text(w io.Writer, r Report) error {
 		writeLines(e, t.lines("  "))
 		c := table{right: []bool{false, true, true}}
 		c.add("", "hand", "direct")
-		if p != nil {
-			c.add("mean draft", num(h.DraftM, 3, "m"), num(p.DraftMidM, 3, "m"))
-			c.add("draft aft", num(h.DraftAftM, 3, "m"), num(p.DraftAftM, 3, "m"))
-			c.add("draft forward", num(h.DraftFwdM, 3, "m"), num(p.DraftFwdM, 3, "m"))
-			c.add("heel", heelWords(h.HeelDeg), heelWords(p.HeelDeg))
-			c.add("GM", num(h.GMM, 3, "m"), num(p.GMM, 3, "m"))
-		} else {
-			c.add("mean draft", num(h.DraftM, 3, "m"), "—")
-			c.add("heel", heelWords(h.HeelDeg), "—")
-			c.add("GM", num(h.GMM, 3, "m"), "—")
+		direct := func(f func() string) string {
+			if p == nil {
+				return "—"
+			}
+			return f()
 		}
+		c.add("draft aft", num(h.DraftAftM, 3, "m"), direct(func() string { return num(p.DraftAftM, 3, "m") }))
+		c.add("draft amidships", num(h.DraftMidM, 3, "m"), direct(func() string { return num(p.DraftMidM, 3, "m") }))
+		c.add("draft forward", num(h.DraftFwdM, 3, "m"), direct(func() string { return num(p.DraftFwdM, 3, "m") }))
+		c.add("trim", trimWords(h.TrimM), direct(func() string { return trimWords(p.TrimM) }))
+		c.add("heel", heelWords(h.HeelDeg), direct(func() string { return heelWords(p.HeelDeg) }))
+		c.add("GM", num(h.GMM, 3, "m"), direct(func() string { return num(p.GMM, 3, "m") }))
 		writeLines(e, c.lines("  "))
 	} else {
 		why := a.HandWhy
