@@ -28,29 +28,34 @@ const (
 // free-floating position is eq (from pr.Equilibrium), at free trim and
 // constant displacement.
 //
-// Method: at each heel θ = 0°, 1°, 2°, … the draft and trim are solved for
-// (pr.AtHeel: the buoyancy of the hull less, for every compartment open to
-// the sea, μ times its part below the water at that attitude; floodwater held
-// in compartments moves with the attitude) and GZ is the engine's lever,
-// positive righting; with the heel towards the side she lies, GZ at 0° is
-// negative for a listed ship (the heeling moment of her off-centre weight or
-// lost buoyancy). Each heel starts from the previous planes extrapolated
-// quadratically. The curve runs to at least 60° and on to the angle of
-// vanishing stability or to 89.5° (the solver's limit), whichever is first.
-// The angle of vanishing stability is refined by the Illinois method on
-// solved heels and added to the curve as a sample; GZmax by the curve's
-// spline (see AreaMRad). The deck-edge and downflooding angles come from the
-// solved planes: the first heel at which a deck-edge point at a station
-// (either side; the deck edge is straight between stations, so none can
-// immerse first between them) or a non-weathertight opening goes below the
-// water, found by bisection on planes interpolated (cubic in heel) between
+// Method: at each heel θ = 0°, 1°, 2°, … draft and trim are solved for
+// (the buoyancy of the hull less, for every compartment open to the sea, μ
+// times its part below the water at that attitude; floodwater held in
+// compartments moves with the attitude) and GZ is the engine's lever,
+// positive righting (see lever). With the heel towards the side she lies,
+// GZ at 0° is negative for a listed ship: the heeling moment of her
+// off-centre weight or lost buoyancy. Each heel starts from the cubic
+// Hermite extrapolation of the last two solved planes and their exact rates
+// of change with heel, so most heels cost one evaluation (see leverAt). The
+// curve runs to at least 60° and on to the angle of vanishing stability or
+// to 89.5° (the solver's limit), whichever is first. The angle of vanishing
+// stability is refined by the Illinois method on solved heels and added to
+// the curve as a sample; GZmax is the maximum of the curve's spline (see
+// AreaMRad). The deck-edge and downflooding angles come from the solved
+// planes: the first heel at which a deck-edge point at a station (either
+// side; the deck edge is straight between stations, so none can immerse
+// first between them) or a non-weathertight opening goes below the water,
+// found by bisection on planes interpolated (cubic Hermite in heel) between
 // the samples.
 //
 // Side: towards the side of eq.HeelDeg. When she is upright (|heel| <
 // 1e-6°) both sides are computed; the curve returned is the worse, the one
 // with the smaller area from the equilibrium to the lesser of the angle of
 // vanishing stability and the downflooding angle (starboard on a tie), and
-// its Other field holds the curve towards the other side.
+// its Other field holds the curve towards the other side. When the whole
+// condition is its own mirror image (G on the centreline, flooded spaces in
+// mirror pairs) the port curve is the starboard one mirrored, with only the
+// openings looked at again.
 //
 // Errors: a *NoEquilibrium with Outcome NotConverged if draft and trim
 // cannot be found at 0° or 1°. If they cannot be found at a larger heel the
@@ -64,16 +69,20 @@ func RightingLevers(pr *Problem, eq Position) (*GZCurve, error) {
 	}
 	switch {
 	case eq.HeelDeg >= uprightDeg:
-		return pr.leverCurve(Starboard, eq)
+		c, _, err := pr.leverCurve(Starboard, eq)
+		return c, err
 	case eq.HeelDeg <= -uprightDeg:
-		return pr.leverCurve(Port, eq)
+		c, _, err := pr.leverCurve(Port, eq)
+		return c, err
 	}
-	sb, err := pr.leverCurve(Starboard, eq)
+	sb, sol, err := pr.leverCurve(Starboard, eq)
 	if err != nil {
 		return nil, err
 	}
-	ps, err := pr.leverCurve(Port, eq)
-	if err != nil {
+	var ps *GZCurve
+	if pr.symmetric() {
+		ps = pr.mirrored(sb, sol)
+	} else if ps, _, err = pr.leverCurve(Port, eq); err != nil {
 		return nil, err
 	}
 	if ps.reserve() < sb.reserve()*(1-1e-9) {
@@ -90,48 +99,60 @@ func (c *GZCurve) reserve() float64 {
 	return c.AreaMRad(c.EquilibriumDeg, math.Min(c.VanishingDeg, c.DownfloodingDeg))
 }
 
-// leverCurve computes the curve towards side.
-func (pr *Problem) leverCurve(side Side, eq Position) (*GZCurve, error) {
+// solvedHeel is one solved sample: the plane and the rates of change of its
+// A and B with heel (per degree, towards the curve's side) from the exact
+// Jacobian, by the implicit-function theorem: ∂f/∂(A,B)·d(A,B)/dC = −∂f/∂C.
+type solvedHeel struct {
+	p          Plane
+	dA, dB     float64
+	haveSlopes bool
+}
+
+// leverCurve computes the curve towards side, and returns the solved
+// samples (index-aligned with the curve's heels).
+func (pr *Problem) leverCurve(side Side, eq Position) (*GZCurve, []solvedHeel, error) {
 	sgn := float64(side)
 	c := &GZCurve{Toward: side}
 	if eq.HeelDeg*sgn > 0 {
 		c.EquilibriumDeg = math.Abs(eq.HeelDeg)
 	}
-	const rad = math.Pi / 180
-	planes := make([]Plane, 0, 96)
+	sol := make([]solvedHeel, 0, 96)
 	c.HeelDeg = make([]float64, 0, 96)
 	c.GZM = make([]float64, 0, 96)
-	push := func(deg, gz float64, p Plane) {
+	push := func(deg, gz float64, sh solvedHeel) {
 		c.HeelDeg = append(c.HeelDeg, deg)
 		c.GZM = append(c.GZM, gz)
-		planes = append(planes, p)
+		sol = append(sol, sh)
 	}
 	start := pr.upright()
 	start.B = eq.Plane.B
 	found := false
 	for k := 0; ; k++ {
 		deg := math.Min(float64(k)*gzStepDeg, gzEndDeg)
-		guess := extrapolatePlane(c.HeelDeg, planes, deg, start)
-		s, err := pr.atHeel(sgn*math.Min(deg*rad, maxHeel*(1-1e-13)), guess)
+		guess := start
+		if n := len(sol); n > 0 {
+			guess = hermitePlane(c.HeelDeg, sol, max(0, n-2), deg)
+		}
+		sh, lever, err := pr.leverAt(sgn, deg, guess)
 		if err != nil {
 			if len(c.HeelDeg) < 2 {
-				return nil, err
+				return nil, nil, err
 			}
 			c.Note = fmt.Sprintf("no draft and trim found at %.1f° of heel: the curve ends at %.1f°", deg, c.HeelDeg[len(c.HeelDeg)-1])
 			break
 		}
-		gz := sgn * pr.lever(s)
+		gz := sgn * lever
 		n := len(c.HeelDeg)
 		if !found && n > 0 && c.GZM[n-1] > 0 && gz <= 0 && c.HeelDeg[n-1] >= c.EquilibriumDeg-1e-9 {
 			found = true
 			c.Vanishes = true
-			vd, vgz, vp := pr.vanishing(sgn, c.HeelDeg[n-1], deg, c.GZM[n-1], gz, planes[n-1], s.p)
+			vd, vgz, vs := pr.vanishing(sgn, c.HeelDeg[n-1], deg, c.GZM[n-1], gz, sol[n-1].p, sh.p)
 			c.VanishingDeg = vd
 			if vd-c.HeelDeg[n-1] > 1e-3 && deg-vd > 1e-3 {
-				push(vd, vgz, vp)
+				push(vd, vgz, vs)
 			}
 		}
-		push(deg, gz, s.p)
+		push(deg, gz, sh)
 		if deg >= gzEndDeg || (found && deg >= gzMinEndDeg) {
 			break
 		}
@@ -149,28 +170,103 @@ func (pr *Problem) leverCurve(side Side, eq Position) (*GZCurve, error) {
 		x, hb, z := h.DeckEdge(i)
 		deck = append(deck, immersionPoint{x: x, y: hb, z: z}, immersionPoint{x: x, y: -hb, z: z})
 	}
-	c.DeckEdgeDeg, _ = firstImmersion(sgn, c.HeelDeg, planes, deck)
+	c.DeckEdgeDeg, _ = firstImmersion(sgn, c.HeelDeg, sol, deck)
+	pr.downflooding(c, sol)
+	return c, sol, nil
+}
+
+// downflooding sets the curve's downflooding angle and opening from its
+// solved samples.
+func (pr *Problem) downflooding(c *GZCurve, sol []solvedHeel) {
 	var open []immersionPoint
 	for _, o := range pr.v.Openings {
 		if !o.Weathertight {
 			open = append(open, immersionPoint{o.X, o.Y, o.Z, o.Name})
 		}
 	}
-	var name string
-	c.DownfloodingDeg, name = firstImmersion(sgn, c.HeelDeg, planes, open)
-	c.Downflooding = name
-	return c, nil
+	c.DownfloodingDeg, c.Downflooding = firstImmersion(float64(c.Toward), c.HeelDeg, sol, open)
+}
+
+// mirrored returns the curve towards the other side of a problem that is
+// symmetric about the centreline (see symmetric): the same levers at the
+// mirrored planes (A, B, −C); only the openings, which need not be
+// symmetric, are looked at again.
+func (pr *Problem) mirrored(c *GZCurve, sol []solvedHeel) *GZCurve {
+	m := *c
+	m.Toward = -c.Toward
+	m.Other = nil
+	m.HeelDeg = append([]float64(nil), c.HeelDeg...)
+	m.GZM = append([]float64(nil), c.GZM...)
+	ms := make([]solvedHeel, len(sol))
+	for i, s := range sol {
+		ms[i] = s
+		ms[i].p.C = -s.p.C
+	}
+	pr.downflooding(&m, ms)
+	return &m
+}
+
+// symmetric reports whether the problem is its own mirror image about the
+// centreline, so that the curve to port is the curve to starboard: the hull
+// is symmetric by construction; G must lie on the centreline (to 1e-9 of
+// the breadth) and the compartments open to the sea, and those holding
+// floodwater, must come in mirror pairs (or straddle the centreline
+// symmetrically) with the same permeability and water.
+func (pr *Problem) symmetric() bool {
+	B := pr.v.Hull.BreadthM
+	tol := 1e-9 * B
+	if math.Abs(pr.load.TCGM) > tol {
+		return false
+	}
+	mirror := func(a, b Box) bool {
+		return math.Abs(a.X0-b.X0) <= tol && math.Abs(a.X1-b.X1) <= tol &&
+			math.Abs(a.Z0-b.Z0) <= tol && math.Abs(a.Z1-b.Z1) <= tol &&
+			math.Abs(a.Y0+b.Y1) <= tol && math.Abs(a.Y1+b.Y0) <= tol
+	}
+	type space struct {
+		box     Box
+		mu, vol float64
+	}
+	check := func(sp []space) bool {
+		used := make([]bool, len(sp))
+		for i := range sp {
+			if used[i] {
+				continue
+			}
+			ok := false
+			for j := i; j < len(sp); j++ {
+				if !used[j] && mirror(sp[i].box, sp[j].box) && sp[i].mu == sp[j].mu &&
+					math.Abs(sp[i].vol-sp[j].vol) <= 1e-12*(1+sp[i].vol) {
+					used[i], used[j], ok = true, true, true
+					break
+				}
+			}
+			if !ok {
+				return false
+			}
+		}
+		return true
+	}
+	var open, held []space
+	for k, i := range pr.openIx {
+		open = append(open, space{pr.v.Compartments[i].Box, pr.open[k].mu, 0})
+	}
+	for k, i := range pr.heldIx {
+		held = append(held, space{pr.v.Compartments[i].Box, pr.held[k].mu, pr.held[k].vol})
+	}
+	return check(open) && check(held)
 }
 
 // vanishing refines the heel in (aDeg, bDeg) where GZ falls through zero
 // (fa > 0 ≥ fb) by the Illinois variant of regula falsi on solved heels,
 // each started from the planes interpolated linearly. It returns the heel
-// (degrees), GZ there (≈ 0) and the plane. At most 40 solves; it stops when
-// GZ is within 1e-12 m of zero or the bracket is under 1e-10°.
-func (pr *Problem) vanishing(sgn, aDeg, bDeg, fa, fb float64, pa, pb Plane) (float64, float64, Plane) {
-	bestDeg, bestGZ, bestP := bDeg, fb, pb
+// (degrees), GZ there (≈ 0) and the solved sample. At most 40 solves; it
+// stops when GZ is within 1e-12 m of zero or the bracket is under 1e-10°.
+func (pr *Problem) vanishing(sgn, aDeg, bDeg, fa, fb float64, pa, pb Plane) (float64, float64, solvedHeel) {
+	bestDeg, bestGZ := bDeg, fb
+	best := solvedHeel{p: pb}
 	if fa < -fb {
-		bestDeg, bestGZ, bestP = aDeg, fa, pa
+		bestDeg, bestGZ, best = aDeg, fa, solvedHeel{p: pa}
 	}
 	retained := 0
 	for i := 0; i < 40 && bDeg-aDeg > 1e-10; i++ {
@@ -183,7 +279,7 @@ func (pr *Problem) vanishing(sgn, aDeg, bDeg, fa, fb float64, pa, pb Plane) (flo
 		}
 		fx := sgn * pr.lever(s)
 		if math.Abs(fx) < math.Abs(bestGZ) {
-			bestDeg, bestGZ, bestP = x, fx, s.p
+			bestDeg, bestGZ, best = x, fx, slopes(s, sgn)
 		}
 		if math.Abs(fx) <= 1e-12 {
 			break
@@ -202,40 +298,101 @@ func (pr *Problem) vanishing(sgn, aDeg, bDeg, fa, fb float64, pa, pb Plane) (flo
 			retained = -1
 		}
 	}
-	return bestDeg, bestGZ, bestP
+	return bestDeg, bestGZ, best
 }
 
-// extrapolatePlane returns a starting plane for heel deg from the last
-// solved planes: quadratic (Lagrange) in heel through the last three, linear
-// through two, the one itself, or start when there are none.
-func extrapolatePlane(heels []float64, planes []Plane, deg float64, start Plane) Plane {
-	n := len(planes)
-	switch {
-	case n == 0:
-		return start
-	case n == 1:
-		return planes[0]
-	case n == 2:
-		return lagrangePlane(heels, planes, 0, 2, deg)
+// slopes returns the solved sample of state s with the rates of change of
+// A and B per degree of heel towards sgn's side.
+func slopes(s state, sgn float64) solvedHeel {
+	sh := solvedHeel{p: s.p}
+	j := s.j
+	d, ok := solve2([2][2]float64{{j[0][0], j[0][1]}, {j[1][0], j[1][1]}}, [2]float64{-j[0][2], -j[1][2]})
+	if ok {
+		k := (1 + s.p.C*s.p.C) * sgn * math.Pi / 180 // dC per degree
+		sh.dA, sh.dB, sh.haveSlopes = d[0]*k, d[1]*k, true
 	}
-	return lagrangePlane(heels, planes, n-3, n, deg)
+	return sh
 }
 
-// lagrangePlane interpolates A and B of planes[i0:i1] at deg (the Lagrange
-// polynomial through those samples); C is left zero.
-func lagrangePlane(heels []float64, planes []Plane, i0, i1 int, deg float64) Plane {
-	var out Plane
-	for i := i0; i < i1; i++ {
-		w := 1.0
-		for j := i0; j < i1; j++ {
-			if j != i {
-				w *= (deg - heels[j]) / (heels[i] - heels[j])
-			}
+// hermitePlane returns A and B at deg from the samples i and i+1 (or i
+// alone): the cubic Hermite polynomial of their values and slopes, used
+// both to extrapolate a starting plane and to interpolate between samples.
+// Where a slope is missing the chord stands in for it. C is left zero.
+func hermitePlane(heels []float64, sol []solvedHeel, i int, deg float64) Plane {
+	a := sol[i]
+	if i+1 >= len(sol) {
+		t := deg - heels[i]
+		if !a.haveSlopes {
+			return Plane{A: a.p.A, B: a.p.B}
 		}
-		out.A += w * planes[i].A
-		out.B += w * planes[i].B
+		return Plane{A: a.p.A + t*a.dA, B: a.p.B + t*a.dB}
 	}
-	return out
+	b := sol[i+1]
+	h := heels[i+1] - heels[i]
+	chA, chB := (b.p.A-a.p.A)/h, (b.p.B-a.p.B)/h
+	sa, sb := [2]float64{chA, chB}, [2]float64{chA, chB}
+	if a.haveSlopes {
+		sa = [2]float64{a.dA, a.dB}
+	}
+	if b.haveSlopes {
+		sb = [2]float64{b.dA, b.dB}
+	}
+	u := (deg - heels[i]) / h
+	u2, u3 := u*u, u*u*u
+	h00, h10, h01, h11 := 2*u3-3*u2+1, u3-2*u2+u, 3*u2-2*u3, u3-u2
+	return Plane{
+		A: h00*a.p.A + h10*h*sa[0] + h01*b.p.A + h11*h*sb[0],
+		B: h00*a.p.B + h10*h*sa[1] + h01*b.p.B + h11*h*sb[1],
+	}
+}
+
+// leverLinearM bounds the last Newton step (in draft, and in trim × length)
+// after which leverAt stops: the lever is then taken at the Newton iterate
+// by its first-order change, an error of the order of the step squared
+// times the curvature of the moments: under 1e-9 m on the tests' hulls.
+const leverLinearM = 1e-4
+
+// leverAt solves draft and trim at heel deg towards sgn's side from guess
+// and returns the solved sample and the engine's lever there (positive when
+// buoyancy acts to starboard of G; see lever).
+//
+// Method: Newton's method on the residuals of volume and of the
+// longitudinal moment (pr.eval, exact Jacobian). Once a step is smaller than
+// leverLinearM it is taken without a further evaluation: the plane is the
+// Newton iterate and the lever its first-order value there,
+// [f₂ − ∂f₂/∂(A,B)·Δ] / [(V − ∂V/∂(A,B)·Δ)·√(1+C²)]. So a good guess costs
+// one evaluation. A large or singular step, or no convergence in six,
+// hands over to pr.atHeel (line-searched Newton to the solver's own
+// tolerance).
+func (pr *Problem) leverAt(sgn, deg float64, guess Plane) (solvedHeel, float64, error) {
+	heelRad := sgn * math.Min(deg*math.Pi/180, maxHeel*(1-1e-13))
+	g := guess
+	g.C = math.Tan(heelRad)
+	L, D := pr.v.Hull.LengthM, pr.v.Hull.DepthM
+	for it := 0; it < 6; it++ {
+		s := pr.eval(g, true)
+		d, ok := solve2([2][2]float64{{s.j[0][0], s.j[0][1]}, {s.j[1][0], s.j[1][1]}}, [2]float64{s.f[0], s.f[1]})
+		step := math.Max(math.Abs(d[0]), math.Abs(d[1])*L)
+		if !ok || !(step < D/4) {
+			break
+		}
+		if step <= leverLinearM {
+			f2 := s.f[2] - s.j[2][0]*d[0] - s.j[2][1]*d[1]
+			v := s.e.V - s.j[0][0]*d[0] - s.j[0][1]*d[1]
+			if !(v > 0) {
+				break
+			}
+			sh := slopes(s, sgn)
+			sh.p = Plane{g.A - d[0], g.B - d[1], g.C}
+			return sh, f2 / (v * math.Sqrt(1+g.C*g.C)), nil
+		}
+		g = Plane{g.A - d[0], g.B - d[1], g.C}
+	}
+	s, err := pr.atHeel(heelRad, guess)
+	if err != nil {
+		return solvedHeel{p: s.p}, 0, err
+	}
+	return slopes(s, sgn), pr.lever(s), nil
 }
 
 // immersionPoint is a point that the curve watches go under water.
@@ -247,10 +404,10 @@ type immersionPoint struct {
 // firstImmersion returns the first heel (degrees) on the curve at which one
 // of pts is below the water, and that point's name: 0 if one is below at the
 // first sample, 90 and "" if none goes under by the curve's end or pts is
-// empty. Between samples the plane is the cubic (four-point Lagrange)
-// interpolation of A and B in heel, with C = tan(heel) exact, and the heel is
-// found by bisection to 1e-12°.
-func firstImmersion(sgn float64, heels []float64, planes []Plane, pts []immersionPoint) (float64, string) {
+// empty. Between samples the plane's A and B are the cubic Hermite
+// interpolation of the samples' values and slopes in heel, C = tan(heel)
+// exact, and the heel is found by bisection to 1e-12°.
+func firstImmersion(sgn float64, heels []float64, sol []solvedHeel, pts []immersionPoint) (float64, string) {
 	if len(pts) == 0 {
 		return 90, ""
 	}
@@ -264,18 +421,15 @@ func firstImmersion(sgn float64, heels []float64, planes []Plane, pts []immersio
 		return m, im
 	}
 	for k := range heels {
-		h, i := lowest(planes[k])
+		h, i := lowest(sol[k].p)
 		if !(h < 0) {
 			continue
 		}
 		if k == 0 {
 			return heels[0], pts[i].name
 		}
-		i0 := max(0, k-2)
-		i1 := min(len(heels), i0+4)
-		i0 = max(0, i1-4)
 		at := func(deg float64) Plane {
-			p := lagrangePlane(heels, planes, i0, i1, deg)
+			p := hermitePlane(heels, sol, k-1, deg)
 			p.C = math.Tan(sgn * deg * math.Pi / 180)
 			return p
 		}
