@@ -97,7 +97,9 @@ func (pr *Problem) position(s state, it int) Position {
 	fsm := s.fsm
 	for _, im := range s.heldIm {
 		if im.AW > 0 {
-			fsm += pr.rho * (im.IYY - im.SY*im.SY/im.AW)
+			// Measured in the inclined free surface, as BMT is below.
+			n := 1 + p.B*p.B + p.C*p.C
+			fsm += pr.rho * (im.IYY - im.SY*im.SY/im.AW) * n / (1 + p.B*p.B) * math.Sqrt(n)
 		}
 	}
 	pos.FSCM = fsm / W
