@@ -159,6 +159,7 @@ func (s *scanner) header() string {
 	for k, seg := range segs {
 		path = joinPath(path, seg)
 		if array && k == len(segs)-1 {
+			s.note(path, line) // the first entry stands for the whole array
 			s.ix.aot[path]++
 			path += "[" + itoa(s.ix.aot[path]) + "]"
 		} else if n := s.ix.aot[path]; n > 0 {

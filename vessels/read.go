@@ -410,7 +410,7 @@ func (r *reader) compartments(ts []*table, hull *engine.Hull) ([]*engine.Compart
 		}
 		c, err := engine.NewCompartment(hull, name, box)
 		if err != nil {
-			r.addf(t.path, "%q holds no part of the hull: its box x %v, y %v, z %v lies outside the shell", name, bx, by, bz)
+			r.addf(t.path, "%q holds no part of the hull: its box x [%g, %g], y [%g, %g], z [%g, %g] lies outside the shell", name, bx[0], bx[1], by[0], by[1], bz[0], bz[1])
 			continue
 		}
 		c.Use = use
