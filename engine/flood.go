@@ -35,7 +35,7 @@ const FloodHeadTolM = 1e-3
 // Bounds that keep a run finite.
 const (
 	floodMaxTries  = 4000 // trial steps of the integrator, accepted or not
-	floodLocateIts = 12   // solves to place one event inside a step
+	floodLocateIts = 16   // solves to place one event inside a step
 	floodRelTol    = 1e-8 // integrator: relative error per step on the water volume
 	floodAbsTol    = 1e-8 // … and absolute, as a fraction of the compartment's capacity
 	floodFloorFrac = 1e-9 // least water held, as a fraction of the capacity (see FloodRun)
@@ -70,9 +70,11 @@ type FloodCase struct {
 	// Criteria, when set, judges a solved condition: it is called at the
 	// end of every accepted step, at each intermediate stage and at each
 	// row of the table, and a criterion that passed and then fails is an
-	// event placed inside the step. Each call costs what the criteria cost
-	// (a GZ curve is some 60–90 solves). The damage d holds the water of
-	// that moment as SpaceState.WaterM3 of the flooded compartment.
+	// event placed inside the step (indicators, such as SOLAS s, are shown
+	// but make no event). Each call costs what the criteria cost (a GZ
+	// curve is some 60–90 solves). The damage d holds the water of that
+	// moment as SpaceState.WaterM3 of the flooded compartment. FloodCriteria
+	// gives one that applies the vessel's own criteria sets.
 	Criteria func(v *Vessel, d Damage, pos Position) []CriterionResult
 }
 
@@ -400,11 +402,14 @@ func NewFloodRun(c FloodCase) (*FloodRun, error) {
 	if !(h.Cd > 0 && h.Cd <= 1) {
 		return nil, fmt.Errorf("flooding %q: discharge coefficient %v is outside (0, 1]", comp.Name, h.Cd)
 	}
-	xmin, xmax, zmin, zmax := comp.solid.Extent()
-	const slack = 0.05
-	if h.XM < xmin-slack || h.XM > xmax+slack || h.YM < comp.Box.Y0-slack || h.YM > comp.Box.Y1+slack || h.ZM < zmin-slack || h.ZM > zmax+slack {
+	// The hole must lead into the compartment: its centre within the
+	// compartment's box (a hair of slack for round-off).
+	xmin, xmax, zmin, _ := comp.solid.Extent()
+	b := comp.Box
+	const slack = 1e-6
+	if h.XM < b.X0-slack || h.XM > b.X1+slack || h.YM < b.Y0-slack || h.YM > b.Y1+slack || h.ZM < b.Z0-slack || h.ZM > b.Z1+slack {
 		return nil, fmt.Errorf("flooding %q: hole at x %.2f, y %.2f, z %.2f m is outside the compartment (x %.2f…%.2f, y %.2f…%.2f, z %.2f…%.2f m)",
-			comp.Name, h.XM, h.YM, h.ZM, xmin, xmax, comp.Box.Y0, comp.Box.Y1, zmin, zmax)
+			comp.Name, h.XM, h.YM, h.ZM, b.X0, b.X1, b.Y0, b.Y1, b.Z0, b.Z1)
 	}
 	var pump float64
 	for _, p := range c.Pumps {
@@ -665,7 +670,7 @@ func (r *FloodRun) startEvents(e floodEval) {
 	if r.c.Criteria != nil {
 		r.lastCr = r.c.Criteria(r.v, r.damageAt(e.water), e.pos)
 		for _, cr := range r.lastCr {
-			if !cr.Pass {
+			if !cr.Pass && !cr.Indicator {
 				r.failed[cr.Code] = true
 				r.addEvent(CriterionFails, cr.Code, 0, e, fmt.Sprintf("%s fails from the start (%s)", cr.Requirement, cr.Set))
 			}
@@ -729,7 +734,7 @@ func (r *FloodRun) crossings(rec stepRec, e0, e1 floodEval) {
 		}
 		for _, c := range cr1 {
 			b, had := before[c.Code]
-			if c.Pass || r.failed[c.Code] {
+			if c.Pass || c.Indicator || r.failed[c.Code] {
 				continue
 			}
 			r.failed[c.Code] = true
@@ -763,8 +768,9 @@ func (r *FloodRun) crossings(rec stepRec, e0, e1 floodEval) {
 // locate places the zero of g inside step rec, where g goes from g0 > 0 to
 // g1 ≤ 0, by the Illinois method on the step fraction θ, the volume at θ
 // from the step's cubic Hermite interpolant and each g from a solve. At
-// most floodLocateIts solves; it stops when |g| < 0.1 mm or the bracket is a
-// millionth of the step.
+// most floodLocateIts solves; it stops when |g| is 1e-7 of its larger end
+// value or the bracket is a millionth of the step. The time returned is on
+// the far side of the zero (g ≤ 0 there).
 func (r *FloodRun) locate(rec stepRec, g0, g1 float64, g func(e *floodEval) float64) (float64, floodEval) {
 	a, b, ga, gb := 0.0, 1.0, g0, g1
 	best := r.evals[len(r.evals)-1]
@@ -795,7 +801,7 @@ func (r *FloodRun) locate(rec stepRec, g0, g1 float64, g func(e *floodEval) floa
 			}
 			side = 1
 		}
-		if math.Abs(gt) < 1e-4 {
+		if math.Abs(gt) <= 1e-7*math.Max(g0, -g1) {
 			break
 		}
 	}
@@ -1003,6 +1009,28 @@ func (r *FloodRun) timeOfVolume(w float64) (float64, bool) {
 		return rec.t0 + (a+b)/2*(rec.t1-rec.t0), true
 	}
 	return 0, false
+}
+
+// FloodCriteria returns a FloodCase.Criteria that judges each condition by
+// the vessel's own criteria sets (Vessel.CriteriaSets): its righting-lever
+// curve by RightingLevers, then EvaluateCriteria, the condition counted as
+// damaged (water held). shipType is as in CriteriaCase. A condition whose
+// curve cannot be computed gets no results (nil), and so no event.
+func FloodCriteria(shipType string) func(v *Vessel, d Damage, pos Position) []CriterionResult {
+	return func(v *Vessel, d Damage, pos Position) []CriterionResult {
+		if len(v.CriteriaSets) == 0 {
+			return nil
+		}
+		curve, err := RightingLevers(NewProblem(v, d), pos)
+		if err != nil {
+			return nil
+		}
+		res, err := EvaluateCriteria(v.CriteriaSets, CriteriaCase{Curve: curve, Eq: pos, Damaged: IsDamaged(d), ShipType: shipType})
+		if err != nil {
+			return nil
+		}
+		return res
+	}
 }
 
 // RunFlood runs case c to its end, calling progress (if not nil) after each

@@ -548,3 +548,58 @@ func TestFloodStepIterator(t *testing.T) {
 		t.Errorf("iterator: %v %.6f s %d steps; RunFlood: %v %.6f s %d steps", a.End, a.EqualiseS, n, b.End, b.EqualiseS, b.Steps)
 	}
 }
+
+// TestFloodCriterionEvent: a criterion given through the hook fails inside
+// a step and the event is placed where it fails. On the centre box (see
+// TestFloodCentreBoxClosedForm) a test criterion "mean draft ≤ T0 + s" fails
+// when the water held reaches A_wp·s (wall-sided sinkage, practice) and
+// the time is Torricelli's closed form with head T0 − A_wp·s/A_e.
+func TestFloodCriterionEvent(t *testing.T) {
+	b := flBox{L: 100, B: 20, D: 10, T: 5, KG: 4, comps: []flComp{{"centre void", Box{45, 55, -4, 4, 0, 10}, 1}}}
+	v := b.vessel(t)
+	ae := 1 / (1/80.0 - 1/2000.0)
+	for _, c := range []struct {
+		name    string
+		sinkage float64
+		tolS    float64
+		tolM3   float64
+	}{
+		{"10 cm", 0.10, 0.05, 0.01},
+		{"18 cm", 0.18, 0.05, 0.01},
+	} {
+		t.Run(c.name, func(t *testing.T) {
+			limit := b.T + c.sinkage
+			calls := 0
+			judge := func(v *Vessel, d Damage, pos Position) []CriterionResult {
+				calls++
+				m := limit - pos.DraftMidM
+				return []CriterionResult{{Set: "test", Code: "mean-draft", Requirement: "mean draft ≤ limit", Required: limit,
+					Actual: pos.DraftMidM, Unit: "m", AtMost: true, Pass: m >= 0, Margin: m}}
+			}
+			rep, err := RunFlood(FloodCase{Vessel: v, Hole: Hole{AreaM2: 0.05, XM: 50}, Criteria: judge}, nil)
+			if err != nil {
+				t.Fatal(err)
+			}
+			w := 2000 * c.sinkage
+			want := flTorricelliTime(ae, 0.6, 0.05, b.T, b.T-w/ae) // Torricelli (practice)
+			var ev *FloodEvent
+			for i := range rep.Events {
+				if rep.Events[i].Kind == CriterionFails {
+					ev = &rep.Events[i]
+				}
+			}
+			if ev == nil || ev.Name != "mean-draft" {
+				t.Fatalf("no criterion event: %+v", rep.Events)
+			}
+			if !flClose(ev.TimeS, want, c.tolS) || !flClose(ev.WaterM3, w, c.tolM3) {
+				t.Errorf("fails at %.3f s with %.4f m³; closed form %.3f s with %.4f m³", ev.TimeS, ev.WaterM3, want, w)
+			}
+			for _, s := range rep.Stages {
+				if len(s.Criteria) != 1 || s.Criteria[0].Pass != (s.Position.DraftMidM <= limit) {
+					t.Errorf("stage %.0f %%: criteria %+v", 100*s.Fraction, s.Criteria)
+				}
+			}
+			t.Logf("%d criteria calls", calls)
+		})
+	}
+}
