@@ -49,12 +49,15 @@ func TestBelowPlusAboveIsWhole(t *testing.T) {
 		name        string
 		hull, upsid *engine.Hull
 		volume      float64 // the whole, independently
+		tol         float64 // relative to the whole (volume, moments) or to the plan's L·B and its powers (waterplane)
 	}{
-		{"box", box, box, L * B * D}, // practice: L·B·D; the box is its own flip
-		{"Wigley 21×11", refWigley(t, L, B, T, D, 21, 11), refFlippedWigley(t, L, B, T, D, 21, 11), 0},
-		{"Wigley 41×41", refWigley(t, L, B, T, D, 41, 41), refFlippedWigley(t, L, B, T, D, 41, 41), 0},
+		// practice: L·B·D; the box is its own flip, and exact to round-off.
+		{"box", box, box, L * B * D, 1e-11},
+		// Twisted ruled slabs: both parts carry the slab quadrature's error
+		// (see TestRuledSlabQuadrature), which does not cancel.
+		{"Wigley 21×11", refWigley(t, L, B, T, D, 21, 11), refFlippedWigley(t, L, B, T, D, 21, 11), 0, 2e-7},
+		{"Wigley 41×41", refWigley(t, L, B, T, D, 41, 41), refFlippedWigley(t, L, B, T, D, 41, 41), 0, 2e-8},
 	}
-	const tol = 1e-11 // relative to the whole (volume, moments) or to L·B (waterplane)
 	rng := rand.New(rand.NewSource(11))
 	for _, h := range hulls {
 		whole := h.hull.Solid().Whole()
@@ -87,7 +90,7 @@ func TestBelowPlusAboveIsWhole(t *testing.T) {
 			for _, s := range sums {
 				e := math.Abs(s.got-s.want) / s.norm
 				worst = math.Max(worst, e)
-				if !(e <= tol) {
+				if !(e <= h.tol) {
 					t.Errorf("%s at %+v: %s below + above %.15g, whole %.15g", h.name, p, s.name, s.got, s.want)
 				}
 			}
