@@ -1,0 +1,226 @@
+package tui
+
+import (
+	"fmt"
+	"math"
+	"strings"
+
+	"github.com/charmbracelet/lipgloss"
+
+	"heelwatch/engine"
+)
+
+// figure is one line of the floating position: what, the figure now, a few
+// words on where or which way, and the change since intact.
+type figure struct {
+	label, value, note, delta string
+	alarm                     bool // the figure itself is bad news (immersed, negative)
+}
+
+// figures are the floating-position lines for the current result, blanked
+// when there is none.
+func (m model) figures() []figure {
+	labels := []string{"Draft aft", "Draft mid", "Draft fwd", "Heel", "Trim", "GM", "Displacement", "Deck edge", "Opening"}
+	var p, b *engine.Position
+	if m.cur != nil {
+		p = m.cur.Position
+	}
+	if m.base != nil {
+		b = m.base.Position
+	}
+	if p == nil {
+		out := make([]figure, len(labels))
+		for i, l := range labels {
+			out[i] = figure{label: l, value: blank, delta: blank}
+		}
+		return out
+	}
+	dif := func(f func(*engine.Position) float64, prec int) string {
+		if b == nil {
+			return blank
+		}
+		return signed(f(p)-f(b), prec)
+	}
+	metres := func(v float64) string { return withUnit(num(v, 2), "m") }
+	out := []figure{
+		{label: "Draft aft", value: metres(p.DraftAftM), delta: dif(func(q *engine.Position) float64 { return q.DraftAftM }, 2)},
+		{label: "Draft mid", value: metres(p.DraftMidM), delta: dif(func(q *engine.Position) float64 { return q.DraftMidM }, 2)},
+		{label: "Draft fwd", value: metres(p.DraftFwdM), delta: dif(func(q *engine.Position) float64 { return q.DraftFwdM }, 2)},
+	}
+	heel := figure{label: "Heel", value: num(math.Abs(p.HeelDeg), 1) + "°", note: heelSide(p.HeelDeg), delta: blank}
+	if b != nil {
+		heel.delta = heelShort(p.HeelDeg - b.HeelDeg)
+	}
+	trim := figure{label: "Trim", value: metres(math.Abs(p.TrimM)), note: trimSense(p.TrimM),
+		delta: dif(func(q *engine.Position) float64 { return q.TrimM }, 2)}
+	gm := figure{label: "GM", value: metres(p.GMM), note: "KM " + num(p.KMTM, 2) + " m",
+		delta: dif(func(q *engine.Position) float64 { return q.GMM }, 2), alarm: !(p.GMM > 0)}
+	disp := figure{label: "Displacement", value: withUnit(num(p.DisplacementT, 0), "t"),
+		delta: dif(func(q *engine.Position) float64 { return q.DisplacementT }, 0)}
+	out = append(out, heel, trim, gm, disp)
+
+	de := p.DeckEdge
+	deck := figure{label: "Deck edge", value: metres(de.HeightM), delta: blank}
+	if finite(de.HeightM) {
+		deck.note = sideShort(de.Side) + ", x " + num(de.XM, 1) + " m"
+		if de.HeightM < 0 {
+			deck.note = "UNDER " + deck.note
+			deck.alarm = true
+		}
+		if b != nil && finite(b.DeckEdge.HeightM) {
+			deck.delta = signed(de.HeightM-b.DeckEdge.HeightM, 2)
+		}
+	} else {
+		deck.value = blank
+	}
+	out = append(out, deck)
+
+	op := figure{label: "Opening", value: blank, note: "none in the file", delta: blank}
+	k := m.derived.nearest
+	wt := false
+	if k < 0 {
+		k, wt = m.derived.nearestAll, true
+	}
+	if k >= 0 && k < len(p.Openings) {
+		o := p.Openings[k]
+		op.value = metres(o.HeightM)
+		op.note = o.Name
+		if wt {
+			op.note += " (weathertight)"
+		}
+		op.alarm = o.HeightM < 0
+		if b != nil && k < len(b.Openings) {
+			op.delta = signed(o.HeightM-b.Openings[k].HeightM, 2)
+		}
+	}
+	return append(out, op)
+}
+
+func withUnit(s, unit string) string {
+	if s == blank {
+		return s
+	}
+	return s + " " + unit
+}
+
+func heelSide(deg float64) string {
+	t := heelText(deg)
+	if i := strings.Index(t, "° "); i >= 0 {
+		return t[i+len("° "):]
+	}
+	return t
+}
+
+func trimSense(m float64) string {
+	t := trimText(m)
+	if i := strings.Index(t, " m "); i >= 0 {
+		return t[i+len(" m "):]
+	}
+	return t
+}
+
+func sideShort(s engine.Side) string {
+	if s == engine.Port {
+		return "port"
+	}
+	return "stbd"
+}
+
+// figuresView draws the floating position in w columns, figLines lines.
+func (m model) figuresView(w int) []string {
+	st := m.st
+	const labelW, valueW, deltaW = 12, 8, 7
+	noteW := max(0, w-labelW-valueW-deltaW-3)
+	const since = "since intact"
+	head := fitLine(st.Heading.Render("FLOATING POSITION"), w-len(since)-1) + " " + st.Dim.Render(since)
+	lines := []string{head}
+	for _, f := range m.figures() {
+		vs, ns := st.Value, st.Text
+		if f.alarm {
+			vs, ns = st.Danger, st.Danger
+		}
+		lines = append(lines, st.Dim.Render(pad(f.label, labelW))+" "+vs.Render(padLeft(f.value, valueW))+" "+
+			ns.Render(pad(f.note, noteW))+" "+st.Change.Render(padLeft(f.delta, deltaW)))
+	}
+	return fit(lines, w, figLines)
+}
+
+// flagsView lists the flags, most severe first, one line each, in w × h.
+func (m model) flagsView(w, h int) []string {
+	st := m.st
+	if h <= 0 {
+		return nil
+	}
+	flags := m.derived.flags
+	var lines []string
+	if len(flags) == 0 {
+		if m.cur == nil {
+			return fit([]string{st.Dim.Render("computing the intact condition…")}, w, h)
+		}
+		return fit([]string{st.Dim.Render("no flags raised")}, w, h)
+	}
+	for i, f := range flags {
+		if i == h-1 && len(flags) > h {
+			lines = append(lines, st.Dim.Render(fmt.Sprintf("… %d more: see criteria (tab)", len(flags)-i)))
+			break
+		}
+		lines = append(lines, flagLine(st, f))
+	}
+	return fit(lines, w, h)
+}
+
+// flagLine is one flag: a mark by its severity, its code and its sentence.
+func flagLine(st Styles, f engine.Flag) string {
+	mark, s := "· ", st.Info
+	switch f.Severity {
+	case engine.Danger:
+		mark, s = "‼ ", st.Danger
+	case engine.Caution:
+		mark, s = "! ", st.Caution
+	}
+	return s.Render(mark+f.Code) + st.Text.Render(": "+f.Message)
+}
+
+// bannerView says plainly that there is no floating position: she sinks,
+// she capsizes, or the solver found none; the reason and the flags follow.
+func (m model) bannerView(w, h int) []string {
+	st := m.st
+	what := "NO FLOATING POSITION FOUND"
+	reason := m.failure
+	if m.cur != nil && m.cur.NoEq != nil {
+		switch m.cur.NoEq.Outcome {
+		case engine.Sinks:
+			what = "SHE SINKS"
+		case engine.Capsizes:
+			what = "SHE CAPSIZES"
+		}
+		reason = m.cur.NoEq.Reason
+	}
+	if m.failure != "" {
+		what = "THE COMPUTATION FAILED"
+		reason = "engine failure: " + m.failure + " (the figures are blanked; undo the last change)"
+	}
+	bar := st.Banner.Width(w).Align(lipgloss.Center)
+	lines := []string{bar.Render(""), bar.Render(what + " — figures blanked"), bar.Render("")}
+	for _, l := range wrap(reason, w) {
+		lines = append(lines, st.Danger.Render(l))
+	}
+	for _, f := range m.derived.flags {
+		for _, l := range wrap(f.Message, w-2) {
+			lines = append(lines, flagLineText(st, f, l))
+		}
+	}
+	return fit(lines, w, h)
+}
+
+func flagLineText(st Styles, f engine.Flag, l string) string {
+	if f.Severity == engine.Danger {
+		return st.Danger.Render("‼ " + l)
+	}
+	return st.Caution.Render("! " + l)
+}
+
+// noPosition reports whether the current result has no floating position.
+func (m model) noPosition() bool {
+	return m.failure != "" || (m.cur != nil && m.cur.Position == nil)
+}

@@ -1,0 +1,581 @@
+package tui
+
+import (
+	"fmt"
+	"math"
+	"strconv"
+	"strings"
+	"sync/atomic"
+	"time"
+
+	"github.com/charmbracelet/bubbles/help"
+	"github.com/charmbracelet/bubbles/key"
+	"github.com/charmbracelet/bubbles/spinner"
+	"github.com/charmbracelet/bubbles/textinput"
+	tea "github.com/charmbracelet/bubbletea"
+	"github.com/charmbracelet/lipgloss"
+
+	"heelwatch/engine"
+	"heelwatch/vessels"
+)
+
+// space is what the list shows of one compartment beyond the engine's values.
+type space struct {
+	group string
+	use   string
+	pump  float64 // m³/h, 0 if none
+	hole  bool
+}
+
+// change is one edit of the damage state, waiting for its figures.
+type change struct {
+	at   time.Time
+	what string
+}
+
+// Messages.
+type (
+	// resultMsg carries the assessment of the damage state of one
+	// sequence number. Skipped is set when a newer change had already been
+	// made before the computation started, so it was not done.
+	resultMsg struct {
+		seq     int
+		a       engine.Assessment
+		skipped bool
+		failure string // the engine failed (a recovered panic)
+	}
+	// baselineMsg carries the intact assessment, the reference for every
+	// "since intact" figure.
+	baselineMsg struct{ a engine.Assessment }
+	logErrMsg   struct{ err error }
+	reportMsg   struct {
+		path string
+		err  error
+	}
+)
+
+// model is the dashboard. It holds its parts as concrete values; Update
+// never computes physics (that runs in recompute's Cmd) and View only draws.
+type model struct {
+	v      *engine.Vessel
+	spaces []space
+	into   []int // the compartment each opening leads into (leadsInto)
+	opts   Options
+	now    func() time.Time
+
+	keys     keyMap
+	help     help.Model
+	spin     spinner.Model
+	spinning bool
+	animate  bool // false in tests: no spinner ticks
+	input    textinput.Model
+	editing  bool
+	inputErr string
+
+	rend    *lipgloss.Renderer
+	palette int
+	st      Styles
+	inks    map[ink]lipgloss.Style
+
+	damage engine.Damage
+	undo   []undoEntry
+
+	seq     int           // the newest change's number
+	latest  *atomic.Int64 // the same, for the Cmds to read
+	shown   int           // the number of the change whose figures are shown
+	cur     *engine.Assessment
+	base    *engine.Assessment
+	derived derived
+	failure string
+
+	changes map[int]change
+	results map[int]string
+	logNext int
+	log     []string // on screen, newest last
+	file    *eventLog
+	wantRep bool
+
+	rows     []listRow
+	sel      int
+	offset   int
+	picture  int
+	showHand bool
+	width    int
+	height   int
+	lay      layout
+}
+
+type undoEntry struct {
+	damage engine.Damage
+	what   string
+}
+
+// Pictures a narrow screen shows one at a time.
+const (
+	picSection = iota
+	picProfile
+	picGZ
+	picCriteria
+	numPictures
+)
+
+
+// newModel builds the dashboard for v. info may be nil.
+func newModel(v *engine.Vessel, info *vessels.Info, opts Options) model {
+	m := model{
+		v:       v,
+		opts:    opts,
+		now:     time.Now,
+		keys:    newKeyMap(),
+		help:    help.New(),
+		spin:    spinner.New(spinner.WithSpinner(spinner.MiniDot)),
+		animate: true,
+		input:   textinput.New(),
+		rend:    lipgloss.DefaultRenderer(),
+		damage:  v.Intact(),
+		latest:  new(atomic.Int64),
+		changes: map[int]change{},
+		results: map[int]string{},
+		logNext: 1,
+		width:   80,
+		height:  24,
+	}
+	m.into = leadsInto(v)
+	m.derived = derive(v, m.into, nil)
+	m.spaces = make([]space, len(v.Compartments))
+	for i, c := range v.Compartments {
+		s := space{use: c.Use}
+		if info != nil && i < len(info.Compartments) {
+			ci := info.Compartments[i]
+			s.group, s.pump, s.hole = ci.Group, ci.PumpM3h, ci.Hole != nil
+			if ci.Use != "" {
+				s.use = ci.Use
+			}
+		}
+		if s.group == "" {
+			s.group = zoneOf(v, c)
+		}
+		m.spaces[i] = s
+	}
+	m.rows = listRows(m.spaces)
+	m.input.Prompt = ""
+	m.input.CharLimit = 8
+	m.input.Placeholder = "0.85"
+	for i, n := range paletteNames {
+		if n == opts.Palette {
+			m.palette = i
+		}
+	}
+	m.setStyles()
+	m.resize()
+	return m
+}
+
+// zoneOf places a compartment without a group by where it lies along the
+// ship: the third of the length that holds its middle.
+func zoneOf(v *engine.Vessel, c *engine.Compartment) string {
+	L := v.Hull.LengthM
+	x := (c.Box.X0 + c.Box.X1) / 2
+	switch {
+	case x < L/3:
+		return "aft"
+	case x > 2*L/3:
+		return "forward"
+	}
+	return "midships"
+}
+
+func (m *model) setStyles() {
+	m.st = newStyles(m.rend, paletteFor(paletteNames[m.palette]))
+	m.inks = m.st.pictureInks()
+	m.help.Styles = m.st.Help
+	m.spin.Style = m.st.Busy
+	m.input.PromptStyle = m.st.Prompt
+	m.input.TextStyle = m.st.Value
+}
+
+// Init computes the intact condition, the reference for every change.
+func (m model) Init() tea.Cmd {
+	v := m.v
+	return func() (msg tea.Msg) {
+		defer func() {
+			if r := recover(); r != nil {
+				msg = resultMsg{seq: 0, failure: fmt.Sprint(r)}
+			}
+		}()
+		return baselineMsg{engine.Assess(v, v.Intact())}
+	}
+}
+
+// pending reports whether the figures shown are not yet those of the
+// newest change.
+func (m model) pending() bool { return m.base == nil || m.shown != m.seq }
+
+// Update handles one message.
+func (m model) Update(msg tea.Msg) (tea.Model, tea.Cmd) {
+	switch msg := msg.(type) {
+	case tea.WindowSizeMsg:
+		m.width, m.height = msg.Width, msg.Height
+		m.resize()
+		return m, nil
+
+	case baselineMsg:
+		a := msg.a
+		m.base = &a
+		if m.seq == 0 {
+			m.cur = &a
+			m.derived = derive(m.v, m.into, m.cur)
+			m.ensureVisible()
+		}
+		line := "start, all intact → " + m.outcome(&a) + " (drafts aft/mid/fwd)"
+		return m, m.addLog(m.now(), line)
+
+	case resultMsg:
+		return m.takeResult(msg)
+
+	case logErrMsg:
+		m.log = append(m.log, m.now().Format("15:04:05")+" event log file: "+msg.err.Error())
+		return m, nil
+
+	case reportMsg:
+		line := "report written to " + msg.path
+		if msg.err != nil {
+			line = "report not written: " + msg.err.Error()
+		}
+		return m, m.addLog(m.now(), line)
+
+	case spinner.TickMsg:
+		if !m.pending() {
+			m.spinning = false
+			return m, nil
+		}
+		var cmd tea.Cmd
+		m.spin, cmd = m.spin.Update(msg)
+		return m, cmd
+
+	case tea.KeyMsg:
+		if m.editing {
+			return m.editKey(msg)
+		}
+		return m.key(msg)
+	}
+	return m, nil
+}
+
+func (m model) key(msg tea.KeyMsg) (tea.Model, tea.Cmd) {
+	k := m.keys
+	n := len(m.v.Compartments)
+	switch {
+	case key.Matches(msg, k.Quit):
+		return m, tea.Quit
+	case key.Matches(msg, k.Help):
+		m.help.ShowAll = !m.help.ShowAll
+		m.resize()
+	case key.Matches(msg, k.Up):
+		if m.sel > 0 {
+			m.sel--
+		}
+		m.ensureVisible()
+	case key.Matches(msg, k.Down):
+		if m.sel < n-1 {
+			m.sel++
+		}
+		m.ensureVisible()
+	case key.Matches(msg, k.Top):
+		m.sel = 0
+		m.ensureVisible()
+	case key.Matches(msg, k.Bottom):
+		m.sel = max(n-1, 0)
+		m.ensureVisible()
+	case key.Matches(msg, k.Picture):
+		m.picture = (m.picture + 1) % numPictures
+	case key.Matches(msg, k.Hand):
+		m.showHand = !m.showHand
+	case key.Matches(msg, k.Palette):
+		m.palette = (m.palette + 1) % len(paletteNames)
+		m.setStyles()
+	case key.Matches(msg, k.Report):
+		if m.pending() {
+			m.wantRep = true
+			return m, nil
+		}
+		return m, m.writeReport()
+	case n == 0:
+		return m, nil
+	case key.Matches(msg, k.Flood):
+		d := cloneDamage(m.damage)
+		c := m.v.Compartments[m.sel]
+		var what string
+		if d[m.sel].Open || d[m.sel].WaterM3 > 0 {
+			d[m.sel].Open, d[m.sel].WaterM3 = false, 0
+			what = c.Name + " closed up (intact)"
+		} else {
+			d[m.sel].Open = true
+			what = c.Name + " opened to sea (μ " + muText(m.mu(d, m.sel)) + ")"
+		}
+		return m.apply(d, what)
+	case key.Matches(msg, k.MuUp), key.Matches(msg, k.MuDown):
+		step := 0.05
+		if key.Matches(msg, k.MuDown) {
+			step = -0.05
+		}
+		old := m.mu(m.damage, m.sel)
+		mu := math.Round((old+step)*100) / 100
+		mu = math.Min(1, math.Max(0.05, mu))
+		if mu == old {
+			return m, nil
+		}
+		return m.setMu(mu)
+	case key.Matches(msg, k.MuSet):
+		m.editing = true
+		m.inputErr = ""
+		m.input.SetValue("")
+		m.input.Placeholder = muText(m.mu(m.damage, m.sel))
+		m.resize()
+		return m, m.input.Focus()
+	case key.Matches(msg, k.Undo):
+		if len(m.undo) == 0 {
+			return m, nil
+		}
+		u := m.undo[len(m.undo)-1]
+		m.undo = m.undo[:len(m.undo)-1]
+		return m.commit(u.damage, "undo: "+u.what)
+	case key.Matches(msg, k.Reset):
+		if len(m.damage) == 0 || allZero(m.damage) {
+			return m, nil
+		}
+		return m.apply(m.v.Intact(), "all compartments intact (reset)")
+	}
+	return m, nil
+}
+
+// editKey handles keys while an exact permeability is being typed.
+func (m model) editKey(msg tea.KeyMsg) (tea.Model, tea.Cmd) {
+	switch msg.Type {
+	case tea.KeyEsc:
+		m.editing = false
+		m.input.Blur()
+		m.resize()
+		return m, nil
+	case tea.KeyCtrlC:
+		return m, tea.Quit
+	case tea.KeyEnter:
+		mu, err := parseMu(m.input.Value())
+		if err != nil {
+			m.inputErr = err.Error()
+			return m, nil
+		}
+		m.editing = false
+		m.input.Blur()
+		m.resize()
+		if mu == m.mu(m.damage, m.sel) {
+			return m, nil
+		}
+		return m.setMu(mu)
+	}
+	var cmd tea.Cmd
+	m.input, cmd = m.input.Update(msg)
+	m.inputErr = ""
+	return m, cmd
+}
+
+// parseMu reads a typed permeability: a fraction ("0.85", ",85" or "0,85")
+// or a percentage ("85%"), 0 < μ ≤ 1, rounded to 0.001.
+func parseMu(s string) (float64, error) {
+	t := strings.TrimSpace(strings.ReplaceAll(s, ",", "."))
+	pct := strings.HasSuffix(t, "%")
+	t = strings.TrimSpace(strings.TrimSuffix(t, "%"))
+	if t == "" {
+		return 0, fmt.Errorf("type a permeability between 0.01 and 1, e.g. 0.85 or 85%%")
+	}
+	v, err := strconv.ParseFloat(t, 64)
+	if err != nil || !finite(v) {
+		return 0, fmt.Errorf("%q is not a number: type e.g. 0.85 or 85%%", s)
+	}
+	if pct {
+		v /= 100
+	}
+	v = math.Round(v*1000) / 1000
+	if !(v > 0 && v <= 1) {
+		return 0, fmt.Errorf("%s is outside 0 < μ ≤ 1 (the fraction of the space that water can fill)", strings.TrimSpace(s))
+	}
+	return v, nil
+}
+
+// setMu sets the selected compartment's permeability.
+func (m model) setMu(mu float64) (tea.Model, tea.Cmd) {
+	d := cloneDamage(m.damage)
+	old := m.mu(d, m.sel)
+	d[m.sel].Permeability = mu
+	c := m.v.Compartments[m.sel]
+	what := fmt.Sprintf("%s μ %s → %s", c.Name, muText(old), muText(mu))
+	if !d[m.sel].Open {
+		what += " (intact: counts when it is opened)"
+	}
+	return m.apply(d, what)
+}
+
+// mu returns the permeability compartment i has under d.
+func (m model) mu(d engine.Damage, i int) float64 {
+	if i < len(d) {
+		if p := d[i].Permeability; p > 0 && p <= 1 {
+			return p
+		}
+	}
+	return m.v.Compartments[i].Permeability
+}
+
+// apply makes d the damage state, keeping the old one for undo.
+func (m model) apply(d engine.Damage, what string) (tea.Model, tea.Cmd) {
+	m.undo = append(m.undo, undoEntry{m.damage, what})
+	if len(m.undo) > 500 {
+		m.undo = m.undo[1:]
+	}
+	return m.commit(d, what)
+}
+
+// commit makes d the damage state and starts its computation: the change
+// gets the next sequence number, and only the result of the newest number
+// is ever shown.
+func (m model) commit(d engine.Damage, what string) (tea.Model, tea.Cmd) {
+	m.damage = d
+	m.seq++
+	m.latest.Store(int64(m.seq))
+	m.changes[m.seq] = change{at: m.now(), what: what}
+	return m, tea.Batch(recompute(m.v, cloneDamage(d), m.seq, m.latest), m.startSpinner())
+}
+
+// recompute returns the Cmd that assesses damage state d, change number seq.
+// It does nothing when a newer change was made before it started (the
+// result could never be shown), and it turns an engine failure into a
+// message instead of taking the screen down.
+func recompute(v *engine.Vessel, d engine.Damage, seq int, latest *atomic.Int64) tea.Cmd {
+	return func() (msg tea.Msg) {
+		if latest != nil && latest.Load() != int64(seq) {
+			return resultMsg{seq: seq, skipped: true}
+		}
+		defer func() {
+			if r := recover(); r != nil {
+				msg = resultMsg{seq: seq, failure: fmt.Sprint(r)}
+			}
+		}()
+		return resultMsg{seq: seq, a: engine.Assess(v, d)}
+	}
+}
+
+// takeResult shows a result if it is the newest and logs every change in
+// the order it was made.
+func (m model) takeResult(r resultMsg) (tea.Model, tea.Cmd) {
+	var cmds []tea.Cmd
+	if r.seq == m.seq && !r.skipped {
+		if r.failure != "" {
+			m.failure = r.failure
+			m.cur = nil
+		} else {
+			a := r.a
+			m.cur, m.failure = &a, ""
+		}
+		m.shown = r.seq
+		m.derived = derive(m.v, m.into, m.cur)
+		m.ensureVisible()
+		if m.wantRep {
+			m.wantRep = false
+			cmds = append(cmds, m.writeReport())
+		}
+	}
+	if r.seq >= m.logNext {
+		switch {
+		case r.skipped:
+			m.results[r.seq] = "passed over for the next change"
+		case r.failure != "":
+			m.results[r.seq] = "engine failure: " + r.failure
+		default:
+			m.results[r.seq] = m.outcome(&r.a)
+		}
+	}
+	for {
+		res, ok := m.results[m.logNext]
+		if !ok {
+			break
+		}
+		ch := m.changes[m.logNext]
+		delete(m.results, m.logNext)
+		delete(m.changes, m.logNext)
+		m.logNext++
+		cmds = append(cmds, m.addLog(ch.at, ch.what+" → "+res))
+	}
+	return m, tea.Batch(cmds...)
+}
+
+// outcome is a result in one line for the log: heel and drafts, or why
+// there is no floating position.
+func (m model) outcome(a *engine.Assessment) string {
+	if a.Position == nil {
+		if a.NoEq != nil {
+			return "NO EQUILIBRIUM: she " + a.NoEq.Outcome.String() + " (" + a.NoEq.Reason + ")"
+		}
+		return "no floating position"
+	}
+	p := a.Position
+	return fmt.Sprintf("heel %s, drafts %s/%s/%s m", heelShort(p.HeelDeg),
+		num(p.DraftAftM, 2), num(p.DraftMidM, 2), num(p.DraftFwdM, 2))
+}
+
+// addLog puts a line in the event log on screen and, with a log file, in
+// the file's queue; the Cmd it returns writes and syncs the file.
+func (m *model) addLog(at time.Time, line string) tea.Cmd {
+	m.log = append(m.log, at.Format("15:04:05")+" "+line)
+	if len(m.log) > 200 {
+		m.log = m.log[len(m.log)-200:]
+	}
+	if m.file == nil {
+		return nil
+	}
+	m.file.add(at.Format(time.RFC3339) + "  " + line)
+	f := m.file
+	return func() tea.Msg {
+		if err := f.flush(); err != nil {
+			return logErrMsg{err}
+		}
+		return nil
+	}
+}
+
+func (m *model) startSpinner() tea.Cmd {
+	if !m.animate || m.spinning {
+		return nil
+	}
+	m.spinning = true
+	return m.spin.Tick
+}
+
+func (m model) vesselName() string {
+	if m.opts.VesselName != "" {
+		return m.opts.VesselName
+	}
+	return m.v.Name
+}
+
+// cloneDamage copies a damage state.
+func cloneDamage(d engine.Damage) engine.Damage { return append(engine.Damage(nil), d...) }
+
+// allZero reports whether d is the intact state with every compartment at
+// its own permeability.
+func allZero(d engine.Damage) bool {
+	for _, s := range d {
+		if s != (engine.SpaceState{}) {
+			return false
+		}
+	}
+	return true
+}
+
+// allIntact reports whether no compartment is open or holds water.
+func allIntact(d engine.Damage) bool {
+	for _, s := range d {
+		if s.Open || s.WaterM3 > 0 {
+			return false
+		}
+	}
+	return true
+}

@@ -1,0 +1,105 @@
+package tui
+
+import (
+	"fmt"
+	"os"
+	"path/filepath"
+	"time"
+
+	tea "github.com/charmbracelet/bubbletea"
+
+	"heelwatch/engine"
+	"heelwatch/tui/report"
+	"heelwatch/vessels"
+)
+
+// Options are the dashboard's settings from the command line.
+type Options struct {
+	// LogFile, when set, receives every change with its time and the
+	// resulting heel and drafts, appended and synced as it happens.
+	LogFile string
+	// Palette is "day", "night" or "mono"; NO_COLOR in the environment
+	// forces "mono". Empty means day.
+	Palette string
+	// VesselName is shown in the header; empty means the vessel's own name.
+	VesselName string
+	// VesselFile is where the vessel came from, for the report: a path, or
+	// "bundled:NAME".
+	VesselFile string
+	// ReportDir is where the report key writes its Markdown file; empty
+	// means the working directory.
+	ReportDir string
+	// Version is heelwatch's version, printed in the report.
+	Version string
+}
+
+// Run shows the dashboard for v until the officer quits. info, which may be
+// nil, gives the compartments' groups, pumps and holes.
+func Run(v *engine.Vessel, info *vessels.Info, opts Options) error {
+	if v == nil {
+		return fmt.Errorf("tui: no vessel to show")
+	}
+	if os.Getenv("NO_COLOR") != "" {
+		opts.Palette = "mono"
+	}
+	m := newModel(v, info, opts)
+	if opts.LogFile != "" {
+		lg, err := openEventLog(opts.LogFile)
+		if err != nil {
+			return fmt.Errorf("event log: %w", err)
+		}
+		m.file = lg
+		defer lg.close()
+	}
+	_, err := tea.NewProgram(m, tea.WithAltScreen()).Run()
+	if m.file != nil {
+		if cerr := m.file.close(); err == nil && cerr != nil {
+			err = fmt.Errorf("event log: %w", cerr)
+		}
+	}
+	return err
+}
+
+// writeReport returns the Cmd that writes the Markdown report of the
+// figures shown to a new file in ReportDir.
+func (m model) writeReport() tea.Cmd {
+	if m.cur == nil {
+		return nil
+	}
+	made := m.now()
+	r := report.New(m.v, m.opts.VesselFile, *m.cur, made, m.opts.Version)
+	if m.opts.VesselName != "" {
+		r.VesselName = m.opts.VesselName
+	}
+	dir := m.opts.ReportDir
+	return func() tea.Msg {
+		base := "heelwatch-report-" + made.Format("20060102-150405")
+		var f *os.File
+		var err error
+		var path string
+		for k := 1; k < 100; k++ {
+			name := base + ".md"
+			if k > 1 {
+				name = fmt.Sprintf("%s-%d.md", base, k)
+			}
+			path = filepath.Join(dir, name)
+			f, err = os.OpenFile(path, os.O_WRONLY|os.O_CREATE|os.O_EXCL, 0o644)
+			if !os.IsExist(err) {
+				break
+			}
+		}
+		if err != nil {
+			return reportMsg{path, err}
+		}
+		err = report.Markdown(f, r)
+		if serr := f.Sync(); err == nil {
+			err = serr
+		}
+		if cerr := f.Close(); err == nil {
+			err = cerr
+		}
+		return reportMsg{path, err}
+	}
+}
+
+var _ = time.Now

@@ -1,0 +1,212 @@
+package tui
+
+import (
+	"fmt"
+	"math"
+
+	"github.com/charmbracelet/lipgloss"
+
+	"heelwatch/engine"
+)
+
+// The shade that fills a flooded space in the pictures.
+const floodShade = '░'
+
+// pictureInks maps the inks of a picture to the styles of the palette.
+func (st Styles) pictureInks() map[ink]lipgloss.Style {
+	return map[ink]lipgloss.Style{
+		inkAxis: st.Axis, inkFlood: st.Flood, inkBulkhead: st.Bulkhead, inkWater: st.Waterline,
+		inkHull: st.Hull, inkCurve: st.Curve, inkSpace: st.Space, inkMark: st.Mark,
+		inkOpening: st.Opening, inkOpeningWet: st.OpeningWet, inkText: st.Dim,
+	}
+}
+
+// axisW is the width of the vertical scale left of a picture.
+const axisW = 5
+
+// framed puts a vertical scale left of a picture's canvas, labelled at
+// round values of the world's y, and returns the canvas's lines.
+func (m model) framed(c *canvas, yStep float64, yFmt func(float64) string) []string {
+	st := m.st
+	body := c.render(m.inks)
+	left := make([]string, c.h)
+	if yStep > 0 {
+		for v := math.Ceil(c.y0/yStep) * yStep; v <= c.y1; v += yStep {
+			cy := c.cellY(v)
+			if cy >= 0 && cy < c.h && left[cy] == "" {
+				left[cy] = yFmt(v)
+			}
+		}
+	}
+	out := make([]string, 0, c.h+1)
+	for i := range body {
+		tickMark := "┤"
+		if left[i] == "" {
+			tickMark = "│"
+		}
+		out = append(out, st.Axis.Render(padLeft(left[i], axisW-1)+tickMark)+body[i])
+	}
+	return out
+}
+
+// scaleLine writes tick labels under a canvas: each at the column of its
+// world x, skipped where it would overlap the one before.
+// The unit is written at the right end.
+func scaleLine(c *canvas, marks []tick, unit string) string {
+	line := []rune(fmt.Sprintf("%*s", axisW+c.w, ""))
+	u := []rune(unit)
+	end := len(line) - len(u) - 1
+	next := 0
+	for _, t := range marks {
+		cx := axisW + c.cellX(t.at)
+		r := []rune(t.text)
+		start := cx - len(r)/2
+		if start < next || start < 0 || start+len(r) > end {
+			continue
+		}
+		copy(line[start:], r)
+		next = start + len(r) + 1
+	}
+	if end >= 0 {
+		copy(line[end+1:], u)
+	}
+	return string(line)
+}
+
+type tick struct {
+	at   float64
+	text string
+}
+
+// sectionX is where the section is cut: the middle of the selected
+// compartment, or where the deck edge is nearest the water when the vessel
+// has no compartments.
+func (m model) sectionX() float64 {
+	L := m.v.Hull.LengthM
+	x := L / 2
+	if len(m.v.Compartments) > 0 {
+		b := m.v.Compartments[m.sel].Box
+		x = (math.Max(b.X0, 0) + math.Min(b.X1, L)) / 2
+	} else if m.cur != nil && m.cur.Position != nil && finite(m.cur.Position.DeckEdge.XM) {
+		x = m.cur.Position.DeckEdge.XM
+	}
+	return math.Min(math.Max(x, 0), L)
+}
+
+// sectionView draws the transverse section at sectionX, looking forward
+// (port on the left): the hull, the compartments there (the selected one
+// marked), the heeled waterline dashed, and the flooded spaces shaded below
+// it. Scales: height above the baseline and distance from the centreline,
+// in metres, equal on both axes.
+func (m model) sectionView(w, h int) []string {
+	st := m.st
+	x := m.sectionX()
+	title := "SECTION at " + num(x, 1) + " m from AP, looking forward"
+	if len(m.v.Compartments) > 0 {
+		title += " · " + m.v.Compartments[m.sel].Name
+	}
+	lines := []string{st.Heading.Render(title)}
+	cw, ch := w-axisW, h-2
+	if cw < 8 || ch < 3 {
+		return fit(lines, w, h)
+	}
+	hull := m.v.Hull
+	c := newCanvas(cw, ch)
+	half := hull.BreadthM / 2
+	zlo, zhi := 0.0, hull.DepthM
+	var p *engine.Plane
+	if m.cur != nil && m.cur.Position != nil {
+		pl := m.cur.Position.Plane
+		p = &pl
+		for _, y := range []float64{-half, half} {
+			z := pl.Z(x, y)
+			if finite(z) {
+				zlo, zhi = math.Min(zlo, z), math.Max(zhi, z)
+			}
+		}
+	}
+	zlo = math.Max(zlo, -hull.DepthM)
+	zhi = math.Min(zhi, 2*hull.DepthM)
+	pad := 0.08 * math.Max(hull.DepthM, half)
+	c.windowEqual(-half*1.08, half*1.08, zlo-pad, zhi+pad)
+
+	// Flooded spaces: cells whose centre is inside an open compartment's
+	// section and below the water.
+	for i, comp := range m.v.Compartments {
+		b := comp.Box
+		if x < b.X0 || x > b.X1 {
+			continue
+		}
+		ys, zs := splitPoints(comp.Solid().SectionAt(x))
+		if len(ys) < 3 {
+			continue
+		}
+		if p != nil && i < len(m.damage) && m.damage[i].Open {
+			for cy := 0; cy < c.h; cy++ {
+				wz := c.worldY(cy)
+				for cx := 0; cx < c.w; cx++ {
+					wy := c.worldX(cx)
+					if wz < p.Z(x, wy) && pointInPolygon(ys, zs, wy, wz) {
+						c.fillCell(cx, cy, floodShade, inkFlood)
+					}
+				}
+			}
+		}
+		k := inkBulkhead
+		if i == m.sel {
+			k = inkSpace
+		}
+		c.polygon(ys, zs, k)
+	}
+	ys, zs := splitPoints(hull.Solid().SectionAt(x))
+	c.polygon(ys, zs, inkHull)
+	if p != nil {
+		c.dashed(c.x0, p.Z(x, c.x0), c.x1, p.Z(x, c.x1), inkWater)
+	}
+	// Openings within a few metres of the section.
+	near := math.Max(2, 0.04*hull.LengthM)
+	if p != nil {
+		for _, oc := range m.cur.Position.Openings {
+			if math.Abs(oc.X-x) > near {
+				continue
+			}
+			m.markOpening(c, oc, oc.Y, oc.Z)
+		}
+	}
+	c.label(0, 0, "P", inkText)
+	c.label(c.w-1, 0, "S", inkText)
+
+	step := niceStep(c.y1-c.y0, max(2, ch/3))
+	ystep := niceStep(half*2, 4)
+	var marks []tick
+	for v := -math.Floor(half/ystep) * ystep; v <= half+1e-9; v += ystep {
+		marks = append(marks, tick{v, num(math.Abs(v), 0)})
+	}
+	lines = append(lines, m.framed(c, step, func(v float64) string { return num(v, 0) })...)
+	lines = append(lines, st.Axis.Render(scaleLine(c, marks, "m")))
+	return fit(lines, w, h)
+}
+
+// markOpening puts an opening's mark on a picture: ○ above the water,
+// ● under it.
+func (m model) markOpening(c *canvas, oc engine.OpeningClearance, wx, wy float64) {
+	cx, cy := c.cellX(wx), c.cellY(wy)
+	if oc.Weathertight {
+		c.label(cx, cy, "◇", inkOpening)
+		return
+	}
+	if oc.HeightM < 0 {
+		c.label(cx, cy, "●", inkOpeningWet)
+	} else {
+		c.label(cx, cy, "○", inkOpening)
+	}
+}
+
+// splitPoints returns a polygon's y and z coordinates.
+func splitPoints(pts []engine.Point) (ys, zs []float64) {
+	ys, zs = make([]float64, len(pts)), make([]float64, len(pts))
+	for i, q := range pts {
+		ys[i], zs[i] = q.Y, q.Z
+	}
+	return ys, zs
+}

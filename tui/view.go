@@ -1,0 +1,181 @@
+package tui
+
+import (
+	"fmt"
+	"strings"
+
+	"github.com/charmbracelet/lipgloss"
+)
+
+// safetyLine is on every screen: what heelwatch is, and what governs;
+// safetyShort is the same for a screen too narrow for it.
+const (
+	safetyLine  = "Decision support only: the approved stability information and the master's judgement govern."
+	safetyShort = "Decision support only: approved stability information and the master govern."
+)
+
+// View draws the dashboard. It only draws: every figure was computed
+// before, in a Cmd, and every size was decided in resize.
+func (m model) View() string {
+	if m.lay.small {
+		return m.tooSmallView()
+	}
+	l := m.lay
+	var lines []string
+	lines = append(lines, m.headerView(m.width))
+	if l.wide {
+		lines = append(lines, m.wideBody()...)
+	} else {
+		lines = append(lines, m.narrowBody()...)
+	}
+	lines = append(lines, m.logView(m.width, l.logLines)...)
+	safety := safetyLine
+	if len([]rune(safety)) > m.width {
+		safety = safetyShort
+	}
+	lines = append(lines, fitLine(m.st.Safety.Render(clip(safety, m.width)), m.width))
+	lines = append(lines, m.footView()...)
+	return strings.Join(fit(lines, m.width, m.height), "\n")
+}
+
+// tooSmallView says what size the dashboard needs.
+func (m model) tooSmallView() string {
+	w, h := m.width, m.height
+	if w <= 0 || h <= 0 {
+		return ""
+	}
+	msg := wrap(fmt.Sprintf("heelwatch needs a terminal of at least %d×%d; this one is %d×%d. Enlarge the window (q quits).", minWidth, minHeight, w, h), w)
+	return strings.Join(fit(msg, w, min(h, len(msg))), "\n")
+}
+
+// headerView is the top line: the program, the vessel, a summary of the
+// state, the computing mark and the palette.
+func (m model) headerView(w int) string {
+	st := m.st
+	left := st.App.Render("HEELWATCH") + " " + st.Header.Render(m.vesselName())
+	var sum []string
+	open := 0
+	for i := range m.v.Compartments {
+		if word, _ := spaceState(m.damage, i); word != "intact" {
+			open++
+		}
+	}
+	if open == 0 {
+		sum = append(sum, "intact")
+	} else {
+		sum = append(sum, fmt.Sprintf("%d flooded", open))
+	}
+	if m.cur != nil && m.cur.Position != nil {
+		p := m.cur.Position
+		sum = append(sum, "heel "+heelShort(p.HeelDeg), "GM "+num(p.GMM, 2)+" m")
+	} else if m.noPosition() {
+		sum = append(sum, "NO FLOATING POSITION")
+	}
+	right := st.Header.Render(strings.Join(sum, " · "))
+	if m.pending() {
+		right = st.Busy.Render(m.spin.View()+" computing") + "  " + right
+	}
+	right += st.Dim.Render("  " + m.st.Palette)
+	gap := w - lipgloss.Width(left) - lipgloss.Width(right)
+	if gap < 1 {
+		return fitLine(left+" "+right, w)
+	}
+	return left + strings.Repeat(" ", gap) + right
+}
+
+// narrowBody: the list on the left; on the right the figures, the flags
+// and one sheet (a picture, the criteria, or the hand working).
+func (m model) narrowBody() []string {
+	l := m.lay
+	sep := m.st.Dim.Render("│")
+	list := m.listView(l.listW, l.bodyH)
+	right := fit(m.figuresView(min(l.rightW, maxFigWidth)), l.rightW, figLines)
+	if m.noPosition() {
+		right = append(right, m.bannerView(l.rightW, l.flagH+l.sheetH)...)
+	} else {
+		right = append(right, m.flagsView(l.rightW, l.flagH)...)
+		if l.sheetH > 0 {
+			right = append(right, m.sheetView(l.rightW, l.sheetH)...)
+		}
+	}
+	return besides(sep, fit(list, l.listW, l.bodyH), fit(right, l.rightW, l.bodyH))
+}
+
+// sheetView is the narrow screen's lower right: the chosen picture or the
+// criteria (the picture key turns to the next), or the hand working while
+// it is shown.
+func (m model) sheetView(w, h int) []string {
+	if m.showHand {
+		return fit(m.handView(w, h), w, h)
+	}
+	return fit(m.pictureView(m.picture, w, h), w, h)
+}
+
+func (m model) pictureView(which, w, h int) []string {
+	switch which {
+	case picSection:
+		return m.sectionView(w, h)
+	case picProfile:
+		return m.profileView(w, h)
+	case picGZ:
+		return m.gzView(w, h)
+	}
+	return m.criteriaView(w, h)
+}
+
+// wideBody: list, figures and flags, criteria or the hand working on top;
+// the section, the profile and the GZ curve side by side below.
+func (m model) wideBody() []string {
+	l := m.lay
+	sep := m.st.Dim.Render("│")
+	list := m.listView(l.listW, l.topH)
+	mid := append(m.figuresView(l.posW), m.flagsView(l.posW, l.topH-figLines)...)
+	var third []string
+	if m.showHand {
+		third = m.handView(l.thirdW, l.topH)
+	} else {
+		third = m.criteriaView(l.thirdW, l.topH)
+	}
+	top := besides(sep, fit(list, l.listW, l.topH), fit(mid, l.posW, l.topH), fit(third, l.thirdW, l.topH))
+	rule := m.st.Dim.Render(strings.Repeat("─", m.width))
+	var pics []string
+	if m.noPosition() {
+		pics = m.bannerView(m.width, l.picH)
+	} else {
+		pics = besides(sep,
+			fit(m.sectionView(l.picW[0], l.picH), l.picW[0], l.picH),
+			fit(m.profileView(l.picW[1], l.picH), l.picW[1], l.picH),
+			fit(m.gzView(l.picW[2], l.picH), l.picW[2], l.picH))
+	}
+	out := append(top, rule)
+	return append(out, pics...)
+}
+
+// logView shows the newest lines of the event log.
+func (m model) logView(w, n int) []string {
+	st := m.st
+	var lines []string
+	start := max(0, len(m.log)-n)
+	for _, l := range m.log[start:] {
+		lines = append(lines, st.Log.Render(clip(l, w)))
+	}
+	return fit(lines, w, n)
+}
+
+// footView is the help bar, or the permeability prompt while one is typed.
+func (m model) footView() []string {
+	st := m.st
+	if m.editing {
+		name := ""
+		if len(m.v.Compartments) > 0 {
+			name = m.v.Compartments[m.sel].Name
+		}
+		p := st.Prompt.Render("permeability μ of "+name+": ") + m.input.View()
+		hint := st.Dim.Render("0 < μ ≤ 1, e.g. 0.85 or 85% · enter sets · esc cancels")
+		if m.inputErr != "" {
+			hint = st.Error.Render(m.inputErr)
+		}
+		return []string{fitLine(p, m.width), fitLine(hint, m.width)}
+	}
+	return strings.Split(m.help.View(m.keys), "\n")
+}
