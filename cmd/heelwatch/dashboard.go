@@ -3,17 +3,50 @@ package main
 import (
 	"fmt"
 	"io"
+	"os"
+
+	"github.com/charmbracelet/x/term"
 
 	"heelwatch/engine"
+	"heelwatch/tui"
 	"heelwatch/tui/report"
 )
 
-// runDashboard opens the dashboard on the vessel. Until the dashboard is
-// built, it prints the solved intact condition instead.
-func runDashboard(vessel string, stdout, stderr io.Writer) int {
+// dashboardOptions are the top-level flags that only the dashboard uses.
+type dashboardOptions struct {
+	logFile   string
+	palette   string
+	reportDir string
+}
+
+// interactive reports whether the dashboard can run: standard input and
+// output are both terminals. Tests and pipes get the printed condition.
+var interactive = func(stdout io.Writer) bool {
+	f, ok := stdout.(*os.File)
+	return ok && term.IsTerminal(f.Fd()) && term.IsTerminal(os.Stdin.Fd())
+}
+
+// runDashboard opens the dashboard on the vessel. Where there is no
+// terminal to draw on, it prints the solved intact condition instead.
+func runDashboard(vessel string, o dashboardOptions, stdout, stderr io.Writer) int {
+	switch o.palette {
+	case "", "day", "night", "mono":
+	default:
+		fmt.Fprintf(stderr, "heelwatch: --palette %q: use day, night or mono\n", o.palette)
+		return exitUsage
+	}
 	v, info, status := openVessel(vessel, stderr)
 	if status != exitOK {
 		return status
+	}
+	if interactive(stdout) {
+		err := tui.Run(v, info, tui.Options{LogFile: o.logFile, Palette: o.palette,
+			VesselFile: source(info), ReportDir: o.reportDir, Version: version})
+		if err != nil {
+			fmt.Fprintln(stderr, "heelwatch:", err)
+			return exitFailed
+		}
+		return exitOK
 	}
 	a := engine.Assess(v, v.Intact())
 	r := report.New(v, source(info), a, now(), version)
@@ -21,7 +54,7 @@ func runDashboard(vessel string, stdout, stderr io.Writer) int {
 	if err := report.Text(stdout, r); err != nil {
 		return exitFailed
 	}
-	fmt.Fprintln(stdout, "\nThe dashboard is coming; meanwhile 'heelwatch solve --open NAME' solves a damage case.")
+	fmt.Fprintln(stdout, "\nNot a terminal, so no dashboard: this is the intact condition. 'heelwatch solve --open NAME' solves a damage case.")
 	if a.Position == nil {
 		return exitNoEq
 	}

@@ -49,16 +49,22 @@ func main() {
 const mainHelp = `heelwatch: how the ship will lie when compartments flood.
 
 Usage:
-  heelwatch [--vessel FILE|NAME]         open the dashboard
-  heelwatch solve [flags]                the floating position with compartments open
-  heelwatch check [FILE|NAME ...]        validate vessel files and summarise them
-  heelwatch vessels [NAME]               list the bundled vessels, or print one's file
-  heelwatch flood [flags]                flooding through a hole over time
-  heelwatch help [COMMAND]               help on a command
+  heelwatch [flags]                  open the dashboard
+  heelwatch solve [flags]            the floating position with compartments open
+  heelwatch check [FILE|NAME ...]    validate vessel files and summarise them
+  heelwatch vessels [NAME]           list the bundled vessels, or print one's file
+  heelwatch flood [flags]            flooding through a hole over time
+  heelwatch help [COMMAND]           help on a command
 
 Flags:
   --vessel FILE|NAME   the vessel: a TOML vessel file, or a bundled vessel's
                        name (default %q; see 'heelwatch vessels')
+  --log FILE           dashboard: append every change (time, heel, drafts) to
+                       FILE as it happens, synced, so nothing is lost
+  --palette NAME       dashboard: day (default), night (dim red, keeps night
+                       vision) or mono; NO_COLOR in the environment means mono
+  --reports DIR        dashboard: where its report key writes Markdown reports
+                       (default: the working directory)
   --version            print heelwatch's version
   --help               this help
 
@@ -77,6 +83,10 @@ func run(args []string, stdout, stderr io.Writer) int {
 	fs.Usage = func() {}
 	vessel := fs.String("vessel", "", "")
 	showVersion := fs.Bool("version", false, "")
+	var dash dashboardOptions
+	fs.StringVar(&dash.logFile, "log", "", "")
+	fs.StringVar(&dash.palette, "palette", "day", "")
+	fs.StringVar(&dash.reportDir, "reports", "", "")
 	if err := fs.Parse(args); err != nil {
 		return usageError(err, stdout, stderr, "", func(w io.Writer) { fmt.Fprintf(w, mainHelp, vessels.Default) })
 	}
@@ -86,7 +96,7 @@ func run(args []string, stdout, stderr io.Writer) int {
 	}
 	rest := fs.Args()
 	if len(rest) == 0 {
-		return runDashboard(*vessel, stdout, stderr)
+		return runDashboard(*vessel, dash, stdout, stderr)
 	}
 	cmd, rest := rest[0], rest[1:]
 	withVessel := func(a []string) []string {
