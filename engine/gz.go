@@ -349,7 +349,8 @@ func hermitePlane(heels []float64, sol []solvedHeel, i int, deg float64) Plane {
 // leverLinearM bounds the last Newton step (in draft, and in trim × length)
 // after which leverAt stops: the lever is then taken at the Newton iterate
 // by its first-order change, an error of the order of the step squared
-// times the curvature of the moments: under 1e-9 m on the tests' hulls.
+// times the curvature of the moments: a few 1e-9 m at most on the tests'
+// hulls.
 const leverLinearM = 1e-4
 
 // leverAt solves draft and trim at heel deg towards sgn's side from guess
@@ -405,8 +406,11 @@ type immersionPoint struct {
 // of pts is below the water, and that point's name: 0 if one is below at the
 // first sample, 90 and "" if none goes under by the curve's end or pts is
 // empty. Between samples the plane's A and B are the cubic Hermite
-// interpolation of the samples' values and slopes in heel, C = tan(heel)
-// exact, and the heel is found by bisection to 1e-12°.
+// polynomial of the two samples before the crossing (values and slopes in
+// heel), C = tan(heel) exact, and the heel is found by bisection to 1e-12°:
+// exact while A and B are cubic in heel (a box heeling wall-sided keeps
+// them constant), otherwise an error of the order of the step to the
+// fourth power.
 func firstImmersion(sgn float64, heels []float64, sol []solvedHeel, pts []immersionPoint) (float64, string) {
 	if len(pts) == 0 {
 		return 90, ""
@@ -428,8 +432,12 @@ func firstImmersion(sgn float64, heels []float64, sol []solvedHeel, pts []immers
 		if k == 0 {
 			return heels[0], pts[i].name
 		}
+		// The plane from the samples before the crossing only: an
+		// immersion that changes the waterplane (the deck edge) is a kink
+		// in the planes' path exactly there, which the sample after it
+		// would carry back into the interval.
 		at := func(deg float64) Plane {
-			p := hermitePlane(heels, sol, k-1, deg)
+			p := hermitePlane(heels, sol[:k], max(0, k-2), deg)
 			p.C = math.Tan(sgn * deg * math.Pi / 180)
 			return p
 		}
