@@ -139,11 +139,11 @@ func Flags(v *Vessel, d Damage, pos *Position, noEq *NoEquilibrium, hand *HandWo
 	// Bottom out of the water.
 	if bilge, keel := flagBottomOut(h, p); bilge != nil || keel != nil {
 		if bilge != nil {
-			add(FlagBilgeEmerged, Caution, "The bilge is out of the water on the %s side %s (%.2f m clear): the waterplane narrows on the high side, so she has less stability than the hand method shows.",
+			add(FlagBilgeEmerged, Caution, "The bilge is out of the water on the %s side %s, %.2f m clear: the waterplane narrows on the high side, so she has less stability than the hand method shows.",
 				bilge.Side, flagWhere(bilge.XM, L), bilge.HeightM)
 		}
 		if keel != nil {
-			add(FlagKeelEmerged, Caution, "The keel is out of the water %s (%.2f m clear): that end of the hull no longer floats on a full section, and the hand method's picture of a level sinkage is gone.",
+			add(FlagKeelEmerged, Caution, "The keel is out of the water %s, %.2f m clear: that end of the hull no longer floats on a full section, and the hand method's picture of a level sinkage is gone.",
 				flagWhere(keel.XM, L), keel.HeightM)
 		}
 	}
@@ -370,9 +370,9 @@ func flagWallSided(h *Hull, p Plane) string {
 			if !math.IsInf(worst, 1) {
 				worst = math.Inf(1)
 				if hi > zd {
-					msg = fmt.Sprintf("Between the upright and the heeled waterline the hull is not wall-sided %s: the heeled waterline reaches above the deck edge (%.2f m against a deck at %.2f m). The hand method and the wall-sided formula do not describe her; trust the direct solution.", where, hi, zd)
+					msg = fmt.Sprintf("Between the upright and the heeled waterline the hull is not wall-sided %s: on the low side the heeled waterline rises to %.2f m, above the deck edge at %.2f m. The hand method and the wall-sided formula do not describe her; trust the direct solution.", where, hi, zd)
 				} else {
-					msg = fmt.Sprintf("Between the upright and the heeled waterline the hull is not wall-sided %s: the heeled waterline falls below the bottom at the bilge (%.2f m against a bottom at %.2f m). The hand method and the wall-sided formula do not describe her; trust the direct solution.", where, lo, zk)
+					msg = fmt.Sprintf("Between the upright and the heeled waterline the hull is not wall-sided %s: on the high side the heeled waterline falls to %.2f m, below the bottom at the bilge (%.2f m). The hand method and the wall-sided formula do not describe her; trust the direct solution.", where, lo, zk)
 				}
 			}
 			continue
