@@ -164,7 +164,8 @@ type FloodSample struct {
 	PumpedM3h float64 // taken out by the pumps
 	HeadM     float64 // head across the hole (see FloodRun), m
 	// SoundingM is the height of the water surface inside above the
-	// compartment's lowest point, at the compartment's middle, along z.
+	// compartment's lowest point, at the compartment's middle, along z
+	// (zero while the water there has not yet reached that height).
 	SoundingM float64
 	Event     string    // for a table row placed at an event: its kind and name
 	Position  *Position // nil when there is no floating position
@@ -550,7 +551,7 @@ func (r *FloodRun) eval(w float64) floodEval {
 	if w <= 0 {
 		e.dIn = math.Min(e.dIn, 0)
 	}
-	e.sounding = pin.Z(r.xc, r.yc) - r.zmin
+	e.sounding = math.Max(0, pin.Z(r.xc, r.yc)-r.zmin)
 	e.head = math.Max(e.dSea, 0) - math.Max(e.dIn, 0)
 	e.inflow = math.Copysign(r.cd*h.AreaM2*math.Sqrt(2*StandardGravity*math.Abs(e.head)), e.head)
 	if w <= 0 && e.inflow < 0 {
