@@ -130,7 +130,7 @@ func TestCriteriaEitherSideOfLimit(t *testing.T) {
 			return damaged(critCurve(70, critConst(0.5)), listed(30-s*eps, false))
 		}},
 		{"marpol-i-28", "heel", 25, true, func(s float64) engine.CriteriaCase { // to port
-			return damaged(critCurve(70, critConst(0.5)), listed(-(25 - s*eps), true))
+			return damaged(critCurve(70, critConst(0.5)), listed(-(25-s*eps), true))
 		}},
 		{"marpol-i-28", "range", 20, false, func(s float64) engine.CriteriaCase {
 			c := critCurve(70, critConst(0.5))
