@@ -398,3 +398,33 @@ func TestGolden(t *testing.T) {
 		})
 	}
 }
+
+// FuzzSolveFlags feeds arbitrary --open and --perm values to solve on the
+// bundled barge: never a panic, never NaN in the output, and only the exit
+// statuses the conventions allow.
+func FuzzSolveFlags(f *testing.F) {
+	f.Add("Hold aft", "Hold aft=0.85", "json")
+	f.Add("1 wing void S,2 wing void S", "", "text")
+	f.Add("Hold aft,Hold fwd,DB ballast aft", "Hold fwd=1", "markdown")
+	f.Add(",,", "=", "json")
+	f.Add("Hold aft", "Hold aft=1e-300", "text")
+	f.Fuzz(func(t *testing.T, open, perm, format string) {
+		var out, errOut bytes.Buffer
+		code := run([]string{"solve", "--vessel", "barge", "--open", open, "--perm", perm, "--format", format}, &out, &errOut)
+		switch code {
+		case 0, 3:
+			if format == "json" && !json.Valid(out.Bytes()) {
+				t.Fatalf("status %d with invalid JSON:\n%s", code, out.String())
+			}
+		case 2:
+			if errOut.Len() == 0 {
+				t.Fatal("status 2 with nothing on stderr")
+			}
+		default:
+			t.Fatalf("status %d; stderr:\n%s", code, errOut.String())
+		}
+		if strings.Contains(out.String(), "NaN") || strings.Contains(out.String(), "Inf") {
+			t.Fatalf("NaN or Inf in the output:\n%s", out.String())
+		}
+	})
+}

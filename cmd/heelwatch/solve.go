@@ -111,7 +111,11 @@ func damageOf(v *engine.Vessel, open, perm []string) (engine.Damage, string) {
 	for _, item := range perm {
 		eq := strings.LastIndexByte(item, '=')
 		if eq < 0 {
-			return nil, fmt.Sprintf("--perm %q: write NAME=μ, e.g. --perm %q", item, v.Compartments[0].Name+"=0.85")
+			example := "Hold 2"
+			if len(v.Compartments) > 0 {
+				example = v.Compartments[0].Name
+			}
+			return nil, fmt.Sprintf("--perm %q: write NAME=μ, e.g. --perm %q", item, example+"=0.85")
 		}
 		name, val := strings.TrimSpace(item[:eq]), strings.TrimSpace(item[eq+1:])
 		i, ok := index[name]
