@@ -14,7 +14,7 @@ type HandWorking struct {
 	BMM       float64 // I about the new centroidal axis ÷ V (intact volume)
 	KMM       float64
 	GMM       float64 // KM − KG − FSC
-	HeelDeg   float64 // list: atan(transverse shift of G or CF ÷ GM, see hand.go), positive starboard down
+	HeelDeg   float64 // list: atan((TCG − TCB of the remaining body) ÷ GM), see hand.go; positive starboard down
 	DraftAftM float64
 	DraftFwdM float64
 	TrimM     float64

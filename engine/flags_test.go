@@ -450,3 +450,22 @@ func TestFlagsClearThemselves(t *testing.T) {
 		t.Errorf("reopened: flags %s, first time %s", flagCodes(again), flagCodes(open))
 	}
 }
+
+// BenchmarkHandAndFlags: what the hand method and the flags add to a
+// keystroke, on a box heeled by a flooded wing (the upright GM for the loll
+// check is one extra solve at zero heel).
+func BenchmarkHandAndFlags(b *testing.B) {
+	bg := flagBarge{80, 16, 8, 4, 5.6}
+	v := bg.vessel(b, bg.L/2, 0, []engine.Opening{{Name: "vent", X: 40, Y: 8, Z: 6}},
+		handSpec{"wing", engine.Box{X0: 30, X1: 50, Y0: 5.6, Y1: 8, Z0: 0, Z1: 8}, 1, nil})
+	d := handOpen(v, 0)
+	pos, err := engine.Solve(v, d)
+	if err != nil {
+		b.Fatal(err)
+	}
+	b.ResetTimer()
+	for i := 0; i < b.N; i++ {
+		hw, _ := engine.HandMethod(v, d)
+		engine.Flags(v, d, &pos, nil, hw)
+	}
+}

@@ -626,3 +626,40 @@ func TestHandPropertyRandomBoxes(t *testing.T) {
 	}
 	t.Logf("%d random box cases checked", checked)
 }
+
+// TestHandLoll: with GM negative after flooding there is no small-angle
+// list; the working gives the angle of loll of the wall-sided relation,
+// tan θ = √(−2GM/BM) with G on the centreline (practice: it follows from the
+// wall-sided formula, Barrass & Derrett p.130, found, with GZ = 0), which the
+// direct solution also finds on a box. Hold across the breadth amidships,
+// keel to deck, μ = 0.5: T₁ = T + μ·l·B·T/(L·B − μ·l·B), KB = T₁/2 (the
+// remaining body is a prism), I = (L − μ·l)·B³/12.
+func TestHandLoll(t *testing.T) {
+	const L, B, D, T, l, mu = 60.0, 12.0, 8.0, 3.0, 10.0, 0.5
+	kg := T/2 + B*B/(12*T) + 0.1 // intact GM −0.1 (practice: box KM = T/2 + B²/12T)
+	v := handBox(t, L, B, D, handWeight(engine.SeaWaterDensity*L*B*T, L/2, 0, kg),
+		handSpec{"hold", engine.Box{X0: 25, X1: 35, Y0: -B / 2, Y1: B / 2, Z0: 0, Z1: D}, mu, nil})
+	d := handOpen(v, 0)
+	T1 := T + mu*l*B*T/(L*B-mu*l*B)
+	bm := (L - mu*l) * B * B * B / 12 / (L * B * T)
+	gm := T1/2 + bm - kg
+	want := math.Atan(math.Sqrt(-2*gm/bm)) * 180 / math.Pi
+	hw, err := engine.HandMethod(v, d)
+	if err != nil {
+		t.Fatal(err)
+	}
+	pos, err := engine.Solve(v, d)
+	if err != nil {
+		t.Fatal(err)
+	}
+	if math.Abs(hw.GMM-gm) > 1e-9 || math.Abs(hw.HeelDeg-want) > 1e-7 || math.Abs(math.Abs(pos.HeelDeg)-want) > 1e-7 {
+		t.Errorf("GM %.9f (want %.9f); loll hand %.9f°, direct %.9f°, closed form %.9f°", hw.GMM, gm, hw.HeelDeg, pos.HeelDeg, want)
+	}
+	found := false
+	for _, s := range hw.Steps {
+		found = found || s.Label == "tan θ (loll)"
+	}
+	if !found {
+		t.Error("the working does not say the heel is a loll")
+	}
+}
