@@ -395,40 +395,53 @@ func (pr *Problem) EquilibriumFrom(guess Plane, warm bool) (Position, error) {
 		}
 	}
 	s, it, ok := pr.newton(start, false)
+	var pos Position
 	if ok {
-		pos := pr.position(s, it)
-		if pos.GMM > 0 {
+		pos = pr.position(s, it)
+		if pos.GMM > 0 && math.Abs(pos.HeelDeg) <= 1 {
 			return pos, nil
 		}
 	}
-	// March in heel to each side.
+	// Which way does she go from upright? The lever at zero heel: positive
+	// (buoyancy to starboard of G) turns her to port.
+	st0, err := pr.atHeel(0, start)
+	if err != nil {
+		return Position{}, &NoEquilibrium{NotConverged, err.Error()}
+	}
+	side := 1.0
+	if pr.lever(st0) > 0 {
+		side = -1
+	}
+	if ok && pos.GMM > 0 && pos.HeelDeg*side > 0 {
+		return pos, nil
+	}
+	// March in heel from upright towards that side, 1° at a time, to the
+	// first heel where the lever turns her back: the position she comes to
+	// rest in (an angle of loll when GM is negative). With no lever at all
+	// upright (a symmetric condition with negative GM) she is taken to go to
+	// starboard; she could as well go to port.
 	type cand struct {
 		lo, hi   float64 // heels bracketing the crossing, lo nearer upright
 		plo, phi Plane
 		rlo, rhi float64
 	}
 	var best *cand
-	for _, side := range []float64{1, -1} {
-		prev := start
-		prevR := 0.0
-		for deg := 0; deg <= 89; deg++ {
-			h := side * float64(deg) * math.Pi / 180
-			st, err := pr.atHeel(h, prev)
-			if err != nil {
-				break
-			}
-			r := pr.lever(st)
-			if deg > 0 && (side > 0 && prevR < 0 && r >= 0 || side < 0 && prevR > 0 && r <= 0) {
-				if best == nil || math.Abs(h) < math.Abs(best.hi) {
-					best = &cand{h - side*math.Pi/180, h, prev, st.p, prevR, r}
-				}
-				break
-			}
-			prev, prevR = st.p, r
+	prev, prevR := st0.p, pr.lever(st0)
+	for deg := 1; deg <= 89; deg++ {
+		h := side * float64(deg) * math.Pi / 180
+		st, err := pr.atHeel(h, prev)
+		if err != nil {
+			break
 		}
+		r := pr.lever(st)
+		if side > 0 && prevR <= 0 && r > 0 || side < 0 && prevR >= 0 && r < 0 {
+			best = &cand{h - side*math.Pi/180, h, prev, st.p, prevR, r}
+			break
+		}
+		prev, prevR = st.p, r
 	}
 	if best == nil {
-		return Position{}, &NoEquilibrium{Capsizes, "no heel short of 90° on either side has a righting lever that brings her to rest"}
+		return Position{}, &NoEquilibrium{Capsizes, fmt.Sprintf("heeling to %s, no angle short of 90° has a righting lever that brings her to rest", Side(side).String())}
 	}
 	// Refine: secant guess, then full Newton; fall back to bisection in heel.
 	t := best.rlo / (best.rlo - best.rhi)
