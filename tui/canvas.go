@@ -82,6 +82,27 @@ func (c *canvas) windowEqual(x0, x1, y0, y1 float64) {
 	c.window(cx-s*dw/2, cx+s*dw/2, cy-s*dh/2, cy+s*dh/2)
 }
 
+// windowStretched is windowEqual, but lets the across scale grow up to
+// stretch times the up scale when the canvas is wide and low, so that a
+// small picture is not a sliver. The scales stay labelled.
+func (c *canvas) windowStretched(x0, x1, y0, y1, stretch float64) {
+	dw, dh := float64(2*c.w), float64(4*c.h)
+	sx := (x1 - x0) / dw
+	sy := (y1 - y0) / dh
+	if !(sx > 0 && sy > 0) || !finite(sx, sy) {
+		c.window(x0, x1, y0, y1)
+		return
+	}
+	if sy > sx {
+		// Room to spare across: use up to stretch of it.
+		s := math.Max(sx, sy/stretch)
+		cx := (x0 + x1) / 2
+		c.window(cx-s*dw/2, cx+s*dw/2, y0, y1)
+		return
+	}
+	c.windowEqual(x0, x1, y0, y1)
+}
+
 // dotX and dotY map world coordinates to dot coordinates.
 func (c *canvas) dotX(x float64) float64 { return (x - c.x0) / (c.x1 - c.x0) * float64(2*c.w) }
 func (c *canvas) dotY(y float64) float64 { return (c.y1 - y) / (c.y1 - c.y0) * float64(4*c.h) }

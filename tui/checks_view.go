@@ -65,15 +65,22 @@ func precFor(v float64) int {
 	return 3
 }
 
-// criteriaView shows every flag in full and each criterion with pass or
-// fail, the value found, the limit and the margin.
-func (m model) criteriaView(w, h int) []string {
+// criteriaView shows each criterion with pass or fail, the value found
+// and the margin, after every flag in full when withFlags is set.
+func (m model) criteriaView(w, h int, withFlags bool) []string {
 	st := m.st
-	lines := []string{st.Heading.Render("FLAGS AND CRITERIA")}
+	title := "CRITERIA"
+	if withFlags {
+		title = "FLAGS AND CRITERIA"
+	}
+	lines := []string{st.Heading.Render(title)}
 	if m.cur == nil {
 		return fit(append(lines, st.Dim.Render("computing…")), w, h)
 	}
 	for _, f := range m.derived.flags {
+		if !withFlags {
+			break
+		}
 		ws := wrap(f.Code+": "+f.Message, w-2)
 		for k, l := range ws {
 			if k == 0 {
@@ -83,7 +90,7 @@ func (m model) criteriaView(w, h int) []string {
 			}
 		}
 	}
-	if len(m.derived.flags) == 0 {
+	if withFlags && len(m.derived.flags) == 0 {
 		lines = append(lines, st.Dim.Render("no flags raised"))
 	}
 	cr := m.cur.Criteria

@@ -62,11 +62,8 @@ func (m model) figures() []figure {
 	de := p.DeckEdge
 	deck := figure{label: "Deck edge", value: metres(de.HeightM), delta: blank}
 	if finite(de.HeightM) {
-		deck.note = sideShort(de.Side) + ", x " + num(de.XM, 1) + " m"
-		if de.HeightM < 0 {
-			deck.note = "UNDER " + deck.note
-			deck.alarm = true
-		}
+		deck.note = sideShort(de.Side) + " at " + num(de.XM, 1) + " m"
+		deck.alarm = de.HeightM < 0
 		if b != nil && finite(b.DeckEdge.HeightM) {
 			deck.delta = signed(de.HeightM-b.DeckEdge.HeightM, 2)
 		}
@@ -135,11 +132,14 @@ func (m model) figuresView(w int) []string {
 	head := fitLine(st.Heading.Render("FLOATING POSITION"), w-len(since)-1) + " " + st.Dim.Render(since)
 	lines := []string{head}
 	for _, f := range m.figures() {
-		vs, ns := st.Value, st.Text
+		vs, ns, ls := st.Value, st.Text, st.Dim
+		label := f.label
 		if f.alarm {
-			vs, ns = st.Danger, st.Danger
+			// Marked by shape as well as colour: under water, or GM gone.
+			vs, ns, ls = st.Danger, st.Danger, st.Danger
+			label = "‼ " + label
 		}
-		lines = append(lines, st.Dim.Render(pad(f.label, labelW))+" "+vs.Render(padLeft(f.value, valueW))+" "+
+		lines = append(lines, ls.Render(pad(label, labelW))+" "+vs.Render(padLeft(f.value, valueW))+" "+
 			ns.Render(pad(f.note, noteW))+" "+st.Change.Render(padLeft(f.delta, deltaW)))
 	}
 	return fit(lines, w, figLines)

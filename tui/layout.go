@@ -100,6 +100,9 @@ func (m *model) resize() {
 		l.listH = l.bodyH
 		l.figH = figLines
 		l.flagH = 2
+		if l.bodyH < 22 {
+			l.flagH = 1
+		}
 		if l.bodyH >= 30 {
 			l.flagH = 4
 		}

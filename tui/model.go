@@ -119,7 +119,6 @@ const (
 	numPictures
 )
 
-
 // newModel builds the dashboard for v. info may be nil.
 func newModel(v *engine.Vessel, info *vessels.Info, opts Options) model {
 	m := model{
@@ -158,6 +157,12 @@ func newModel(v *engine.Vessel, info *vessels.Info, opts Options) model {
 		m.spaces[i] = s
 	}
 	m.rows = listRows(m.spaces)
+	for _, r := range m.rows {
+		if r.idx >= 0 {
+			m.sel = r.idx
+			break
+		}
+	}
 	m.input.Prompt = ""
 	m.input.CharLimit = 8
 	m.input.Placeholder = "0.85"
@@ -272,21 +277,13 @@ func (m model) key(msg tea.KeyMsg) (tea.Model, tea.Cmd) {
 		m.help.ShowAll = !m.help.ShowAll
 		m.resize()
 	case key.Matches(msg, k.Up):
-		if m.sel > 0 {
-			m.sel--
-		}
-		m.ensureVisible()
+		m.move(-1)
 	case key.Matches(msg, k.Down):
-		if m.sel < n-1 {
-			m.sel++
-		}
-		m.ensureVisible()
+		m.move(1)
 	case key.Matches(msg, k.Top):
-		m.sel = 0
-		m.ensureVisible()
+		m.move(-len(m.rows))
 	case key.Matches(msg, k.Bottom):
-		m.sel = max(n-1, 0)
-		m.ensureVisible()
+		m.move(len(m.rows))
 	case key.Matches(msg, k.Picture):
 		m.picture = (m.picture + 1) % numPictures
 	case key.Matches(msg, k.Hand):
@@ -347,6 +344,27 @@ func (m model) key(msg tea.KeyMsg) (tea.Model, tea.Cmd) {
 		return m.apply(m.v.Intact(), "all compartments intact (reset)")
 	}
 	return m, nil
+}
+
+// move selects the compartment steps rows down the list (up when
+// negative), in the order the list shows them, stopping at the ends.
+func (m *model) move(steps int) {
+	pos := -1
+	var order []int
+	for _, r := range m.rows {
+		if r.idx >= 0 {
+			if r.idx == m.sel {
+				pos = len(order)
+			}
+			order = append(order, r.idx)
+		}
+	}
+	if len(order) == 0 {
+		return
+	}
+	pos = min(max(pos+steps, 0), len(order)-1)
+	m.sel = order[pos]
+	m.ensureVisible()
 }
 
 // editKey handles keys while an exact permeability is being typed.

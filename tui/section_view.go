@@ -128,7 +128,7 @@ func (m model) sectionView(w, h int) []string {
 	zlo = math.Max(zlo, -hull.DepthM)
 	zhi = math.Min(zhi, 2*hull.DepthM)
 	pad := 0.08 * math.Max(hull.DepthM, half)
-	c.windowEqual(-half*1.08, half*1.08, zlo-pad, zhi+pad)
+	c.windowStretched(-half*1.08, half*1.08, zlo-pad, zhi+pad, 2)
 
 	// Flooded spaces: cells whose centre is inside an open compartment's
 	// section and below the water.

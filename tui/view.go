@@ -120,7 +120,7 @@ func (m model) pictureView(which, w, h int) []string {
 	case picGZ:
 		return m.gzView(w, h)
 	}
-	return m.criteriaView(w, h)
+	return m.criteriaView(w, h, true)
 }
 
 // wideBody: list, figures and flags, criteria or the hand working on top;
@@ -134,7 +134,7 @@ func (m model) wideBody() []string {
 	if m.showHand {
 		third = m.handView(l.thirdW, l.topH)
 	} else {
-		third = m.criteriaView(l.thirdW, l.topH)
+		third = m.criteriaView(l.thirdW, l.topH, len(m.derived.flags) > l.topH-figLines)
 	}
 	top := besides(sep, fit(list, l.listW, l.topH), fit(mid, l.posW, l.topH), fit(third, l.thirdW, l.topH))
 	rule := m.st.Dim.Render(strings.Repeat("─", m.width))
