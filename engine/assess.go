@@ -125,14 +125,18 @@ type Assessment struct {
 	GZ       *GZCurve       // nil when there is no equilibrium
 	Criteria []CriterionResult
 	Flags    []Flag
+	Notes    []string // what could not be computed, and why
 }
 
 // Assess computes everything shown for damage state d of v: the floating
-// position and, as they apply, the hand method, the GZ curve, the criteria
-// and the flags.
+// position, the hand method where it applies, the GZ curve, the criteria of
+// the vessel's sets (the intact ones for an intact condition, the damage
+// ones for a flooded one) and the flags. It never fails: what cannot be
+// computed is said in NoEq, HandWhy or Notes.
 func Assess(v *Vessel, d Damage) Assessment {
 	a := Assessment{Damage: append(Damage(nil), d...)}
-	pos, err := Solve(v, d)
+	pr := NewProblem(v, d)
+	pos, err := pr.Equilibrium()
 	if err != nil {
 		if ne, ok := err.(*NoEquilibrium); ok {
 			a.NoEq = ne
@@ -142,6 +146,28 @@ func Assess(v *Vessel, d Damage) Assessment {
 	} else {
 		a.Position = &pos
 	}
-	// The hand method, GZ curve, criteria and flags join here as they land.
+	if hw, err := HandMethod(v, d); err == nil {
+		a.Hand = hw
+	} else if na, ok := err.(*HandNotApplicable); ok {
+		a.HandWhy = na.Reason
+	} else {
+		a.HandWhy = err.Error()
+	}
+	if a.Position != nil {
+		gz, err := RightingLevers(pr, pos)
+		if err != nil {
+			a.Notes = append(a.Notes, "GZ curve not computed: "+err.Error())
+		} else {
+			a.GZ = gz
+			if len(v.CriteriaSets) > 0 {
+				res, err := EvaluateCriteria(v.CriteriaSets, CriteriaCase{Curve: gz, Eq: pos, Damaged: IsDamaged(d), ShipType: v.ShipType})
+				if err != nil {
+					a.Notes = append(a.Notes, "criteria not evaluated: "+err.Error())
+				}
+				a.Criteria = res
+			}
+		}
+	}
+	a.Flags = Flags(v, d, a.Position, a.NoEq, a.Hand)
 	return a
 }

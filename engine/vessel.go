@@ -48,6 +48,7 @@ type Vessel struct {
 	Openings     []Opening
 	MarginLineM  float64  // margin line's depth below the deck at side, m
 	CriteriaSets []string // the criteria sets she is held to (see criteria.go)
+	ShipType     string   // "cargo" or "passenger" (SOLAS s's heel limits); "" is cargo
 
 	tanks []tankLoad // contents of each compartment at its fill, upright
 }
