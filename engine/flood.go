@@ -259,10 +259,12 @@ type FloodReport struct {
 	Events []FloodEvent  // in time order; the last is RunEnds
 	Table  []FloodSample // rows at round times and at events
 	Trace  []FloodSample // every accepted step, for a plot
-	Stages []FloodStage  // 25, 50, 75 and 100 % of FinalStagesM3
+	Stages []FloodStage  // 25, 50, 75 and 100 % of StagesOfM3
 	// StagesOfM3 is the volume the stages are fractions of: the water at
-	// the end when the run settled (equalised, pumps hold, full), else the
-	// lost-buoyancy water, else the capacity.
+	// the end when the run settled (equalised, pumps hold, full) or when she
+	// sank or capsized (the last floating state: the stages lead up to the
+	// loss); at the time limit the lost-buoyancy water (what equalisation
+	// would let in), or the capacity when she does not float so.
 	StagesOfM3 float64
 
 	Steps, Rejected, Solves int
@@ -860,6 +862,8 @@ func (r *FloodRun) Report() FloodReport {
 	switch {
 	case r.end == FloodEqualised || r.end == FloodPumpsHold || r.end == FloodFull:
 		rep.StagesOfM3 = rep.FinalWaterM3
+	case r.endNoEq != nil || r.end == FloodFailed:
+		rep.StagesOfM3 = rep.FinalWaterM3
 	case r.lb != nil:
 		rep.StagesOfM3 = r.lbWater
 	}
@@ -964,7 +968,7 @@ func (r *FloodRun) evalAtTime(t float64) floodEval {
 func (r *FloodRun) stage(f, of float64) FloodStage {
 	st := FloodStage{Fraction: f, WaterM3: f * of}
 	var e floodEval
-	if f == 1 && (r.end == FloodEqualised || r.end == FloodPumpsHold || r.end == FloodFull) {
+	if f == 1 && of == r.evals[len(r.evals)-1].water {
 		e = r.evals[len(r.evals)-1]
 	} else {
 		e = r.eval(st.WaterM3)

@@ -397,7 +397,8 @@ func TestFloodFullCompartment(t *testing.T) {
 // ≤ Q_p, Torricelli, practice); a time limit stops the run there; a hold
 // too big for the reserve of buoyancy sinks her, at the volume where her
 // mass reaches ρ·L·B·D (the box's whole volume) and at the time the closed
-// form of TestFloodCentreBoxClosedForm gives for it.
+// form of TestFloodCentreBoxClosedForm gives for it; a tender barge
+// capsizes.
 func TestFloodEnds(t *testing.T) {
 	v := flWing().vessel(t)
 	q0 := 0.6 * 0.1 * math.Sqrt(2*StandardGravity*5) * 3600
@@ -405,6 +406,12 @@ func TestFloodEnds(t *testing.T) {
 	ae := 1 / (1/320.0 - 1/2000.0)
 	vSink := 2000 * (5.9 - 5.0)
 	tSink := flTorricelliTime(ae, 0.6, 0.3, 5, 5-vSink/ae)
+	// A tender barge whose wing void, open to the sea, capsizes her: the
+	// run must not equalise but capsize on the way (the final waterline
+	// is the lost-buoyancy one or none: memory), the stages leading up to
+	// it heeling ever further.
+	tender := flWing()
+	tender.KG = 8
 	cases := []struct {
 		name string
 		c    FloodCase
@@ -416,6 +423,7 @@ func TestFloodEnds(t *testing.T) {
 		{"pumps keep it dry", FloodCase{Vessel: v, Hole: Hole{AreaM2: 0.1, XM: 50, YM: 10, ZM: 0}, Pumps: []Pump{{"main", q0 * 1.001}}}, FloodKeptDry, 0, 0},
 		{"time limit", FloodCase{Vessel: v, Hole: Hole{AreaM2: 0.1, XM: 50, YM: 10, ZM: 0}, LimitS: 60}, FloodTimeLimit, 60, 0},
 		{"sinks", FloodCase{Vessel: sink.vessel(t), Hole: Hole{AreaM2: 0.3, XM: 50, ZM: 0}}, FloodSinks, tSink, 1.5},
+		{"capsizes", FloodCase{Vessel: tender.vessel(t), Hole: Hole{AreaM2: 0.2, XM: 50, YM: 10, ZM: 0}}, FloodCapsizes, -1, 0},
 	}
 	for _, c := range cases {
 		t.Run(c.name, func(t *testing.T) {
@@ -423,7 +431,7 @@ func TestFloodEnds(t *testing.T) {
 			if err != nil {
 				t.Fatal(err)
 			}
-			if rep.End != c.end || !flClose(rep.EndS, c.endS, c.tolS) {
+			if rep.End != c.end || (c.endS >= 0 && !flClose(rep.EndS, c.endS, c.tolS)) {
 				t.Errorf("end %v at %.2f s (%s); want %v at %.2f s", rep.End, rep.EndS, rep.EndReason, c.end, c.endS)
 			}
 			if n := len(rep.Events); n == 0 || rep.Events[n-1].Kind != RunEnds {
@@ -431,6 +439,21 @@ func TestFloodEnds(t *testing.T) {
 			}
 			if len(rep.Stages) != len(StageFractions) || len(rep.Table) == 0 {
 				t.Errorf("%d stages, %d rows", len(rep.Stages), len(rep.Table))
+			}
+			if c.end == FloodCapsizes {
+				if rep.LostBuoyancy != nil || rep.LostBuoyancyNoEq == nil || rep.LostBuoyancyNoEq.Outcome != Capsizes {
+					t.Errorf("lost buoyancy %+v / %v: want it to capsize too", rep.LostBuoyancy, rep.LostBuoyancyNoEq)
+				}
+				prev := 0.0
+				for _, s := range rep.Stages {
+					if s.Position == nil || !(s.Position.HeelDeg > prev) {
+						t.Fatalf("stage %.0f %%: %+v, not heeling further than %.2f°", 100*s.Fraction, s.Position, prev)
+					}
+					prev = s.Position.HeelDeg
+				}
+				if last := rep.Table[len(rep.Table)-1]; last.Position != nil || last.NoEq == nil || last.NoEq.Outcome != Capsizes {
+					t.Errorf("last row %+v: want the capsize", last)
+				}
 			}
 		})
 	}
