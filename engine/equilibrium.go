@@ -406,7 +406,7 @@ func (pr *Problem) EquilibriumFrom(guess Plane, warm bool) (Position, error) {
 	// (buoyancy to starboard of G) turns her to port.
 	st0, err := pr.atHeel(0, start)
 	if err != nil {
-		return Position{}, &NoEquilibrium{NotConverged, err.Error()}
+		return Position{}, err // already a *NoEquilibrium saying where
 	}
 	side := 1.0
 	if pr.lever(st0) > 0 {
@@ -457,7 +457,7 @@ func (pr *Problem) EquilibriumFrom(guess Plane, warm bool) (Position, error) {
 	p := best.plo
 	last, err := pr.atHeel(a, p)
 	if err != nil {
-		return Position{}, &NoEquilibrium{NotConverged, err.Error()}
+		return Position{}, err // already a *NoEquilibrium saying where
 	}
 	for i := 0; i < 60 && math.Abs(b-a) > 1e-12; i++ {
 		mid := (a + b) / 2
