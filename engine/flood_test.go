@@ -156,7 +156,8 @@ func TestFloodCentreBoxClosedForm(t *testing.T) {
 	}{
 		{"void amidships", flBox{L: 100, B: 20, D: 10, T: 5, KG: 4, comps: []flComp{{"centre void", Box{45, 55, -4, 4, 0, 10}, 1}}}, 0.05, 0.6, false, 0.5, 0.05},
 		{"stores μ 0.6", flBox{L: 100, B: 20, D: 10, T: 5, KG: 4, comps: []flComp{{"centre store", Box{45, 55, -4, 4, 0, 10}, 0.6}}}, 0.1, 0.65, false, 0.5, 0.05},
-		{"full-breadth hold, margin line", flBox{L: 100, B: 20, D: 6, T: 5, KG: 4, comps: []flComp{{"hold", Box{42, 58, -10, 10, 0, 6}, 1}}}, 0.3, 0.6, true, 0.5, 0.2},
+		{"full-breadth hold, margin line, door", flBox{L: 100, B: 20, D: 6, T: 5, KG: 4, comps: []flComp{{"hold", Box{42, 58, -10, 10, 0, 6}, 1}},
+			openings: []Opening{{Name: "side door", X: 70, Y: 10, Z: 5.5}, {Name: "closed port", X: 30, Y: -10, Z: 5.3, Weathertight: true}}}, 0.3, 0.6, true, 0.5, 0.2},
 	}
 	for _, c := range cases {
 		t.Run(c.name, func(t *testing.T) {
@@ -194,6 +195,27 @@ func TestFloodCentreBoxClosedForm(t *testing.T) {
 			// Final state against the lost-buoyancy solution (memory), 5 mm.
 			if rep.LostBuoyancy == nil || rep.FinalDiffM > 0.005 {
 				t.Errorf("final drafts differ from lost buoyancy by %.4f m (lost buoyancy %v)", rep.FinalDiffM, rep.LostBuoyancyNoEq)
+			}
+			// Each opening that is not weathertight goes under when the
+			// draft reaches its height: at V = A_wp·(z − T0).
+			for _, o := range c.b.openings {
+				var ev *FloodEvent
+				for i, e := range rep.Events {
+					if e.Kind == OpeningReached && e.Name == o.Name {
+						ev = &rep.Events[i]
+					}
+				}
+				if o.Weathertight {
+					if ev != nil {
+						t.Errorf("%s is weathertight but reported at %.1f s", o.Name, ev.TimeS)
+					}
+					continue
+				}
+				vo := awp * (o.Z - c.b.T)
+				to := flTorricelliTime(ae, c.cd, c.a, c.b.T, c.b.T-vo/ae) // Torricelli (practice)
+				if ev == nil || !flClose(ev.TimeS, to, c.tolS) || !flClose(ev.WaterM3, vo, c.tolM3) {
+					t.Errorf("%s: event %+v; closed form %.3f s with %.3f m³", o.Name, ev, to, vo)
+				}
 			}
 			var ml *FloodEvent
 			for i, e := range rep.Events {
