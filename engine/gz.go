@@ -100,11 +100,15 @@ func (c *GZCurve) reserve() float64 {
 }
 
 // solvedHeel is one solved sample: the plane and the rates of change of its
-// A and B with heel (per degree, towards the curve's side) from the exact
-// Jacobian, by the implicit-function theorem: ∂f/∂(A,B)·d(A,B)/dC = −∂f/∂C.
+// A and B, and of GZ, with heel (per degree, towards the curve's side) from
+// the exact Jacobian, by the implicit-function theorem:
+// ∂f/∂(A,B)·d(A,B)/dC = −∂f/∂C for the volume and trim residuals, and
+// df₂/dC = ∂f₂/∂C + ∂f₂/∂(A,B)·d(A,B)/dC for the heeling moment, V staying
+// constant along the curve.
 type solvedHeel struct {
 	p          Plane
 	dA, dB     float64
+	dGZ        float64 // dGZ/dθ per degree along the curve
 	haveSlopes bool
 }
 
@@ -146,7 +150,7 @@ func (pr *Problem) leverCurve(side Side, eq Position) (*GZCurve, []solvedHeel, e
 		if !found && n > 0 && c.GZM[n-1] > 0 && gz <= 0 && c.HeelDeg[n-1] >= c.EquilibriumDeg-1e-9 {
 			found = true
 			c.Vanishes = true
-			vd, vgz, vs := pr.vanishing(sgn, c.HeelDeg[n-1], deg, c.GZM[n-1], gz, sol[n-1].p, sh.p)
+			vd, vgz, vs := pr.vanishing(sgn, c.HeelDeg[n-1], deg, c.GZM[n-1], gz, sol[n-1], sh)
 			c.VanishingDeg = vd
 			if vd-c.HeelDeg[n-1] > 1e-3 && deg-vd > 1e-3 {
 				push(vd, vgz, vs)
@@ -258,40 +262,44 @@ func (pr *Problem) symmetric() bool {
 }
 
 // vanishing refines the heel in (aDeg, bDeg) where GZ falls through zero
-// (fa > 0 ≥ fb) by the Illinois variant of regula falsi on solved heels,
-// each started from the planes interpolated linearly. It returns the heel
-// (degrees), GZ there (≈ 0) and the solved sample. At most 40 solves; it
-// stops when GZ is within 1e-12 m of zero or the bracket is under 1e-10°.
-func (pr *Problem) vanishing(sgn, aDeg, bDeg, fa, fb float64, pa, pb Plane) (float64, float64, solvedHeel) {
-	bestDeg, bestGZ := bDeg, fb
-	best := solvedHeel{p: pb}
+// (fa > 0 ≥ fb; samples sa and sb) and returns it (degrees), GZ there (≈ 0)
+// and the solved sample. The first try is the root of the cubic Hermite
+// polynomial of GZ and its exact slopes at the two ends; then the Illinois
+// variant of regula falsi on solved heels (leverAt, each started from the
+// planes' Hermite interpolation). At most 20 solves; it stops when GZ is
+// within 1e-10 m of zero or the bracket is under 1e-9°.
+func (pr *Problem) vanishing(sgn, aDeg, bDeg, fa, fb float64, sa, sb solvedHeel) (float64, float64, solvedHeel) {
+	heels := []float64{aDeg, bDeg}
+	pair := []solvedHeel{sa, sb}
+	bestDeg, bestGZ, best := bDeg, fb, sb
 	if fa < -fb {
-		bestDeg, bestGZ, best = aDeg, fa, solvedHeel{p: pa}
+		bestDeg, bestGZ, best = aDeg, fa, sa
 	}
+	x := hermiteRoot(aDeg, bDeg, fa, fb, sa, sb)
 	retained := 0
-	for i := 0; i < 40 && bDeg-aDeg > 1e-10; i++ {
-		t := fa / (fa - fb)
-		x := aDeg + t*(bDeg-aDeg)
-		g := Plane{pa.A + t*(pb.A-pa.A), pa.B + t*(pb.B-pa.B), 0}
-		s, err := pr.atHeel(sgn*math.Min(x*math.Pi/180, maxHeel*(1-1e-13)), g)
+	for i := 0; i < 20 && bDeg-aDeg > 1e-9; i++ {
+		if i > 0 || !(x > aDeg && x < bDeg) {
+			x = aDeg + fa/(fa-fb)*(bDeg-aDeg)
+		}
+		sx, lever, err := pr.leverAt(sgn, x, hermitePlane(heels, pair, 0, x))
 		if err != nil {
 			break
 		}
-		fx := sgn * pr.lever(s)
+		fx := sgn * lever
 		if math.Abs(fx) < math.Abs(bestGZ) {
-			bestDeg, bestGZ, best = x, fx, slopes(s, sgn)
+			bestDeg, bestGZ, best = x, fx, sx
 		}
-		if math.Abs(fx) <= 1e-12 {
+		if math.Abs(fx) <= 1e-10 {
 			break
 		}
 		if fx > 0 {
-			aDeg, fa, pa = x, fx, s.p
+			aDeg, fa = x, fx
 			if retained == 1 {
 				fb /= 2
 			}
 			retained = 1
 		} else {
-			bDeg, fb, pb = x, fx, s.p
+			bDeg, fb = x, fx
 			if retained == -1 {
 				fa /= 2
 			}
@@ -301,16 +309,48 @@ func (pr *Problem) vanishing(sgn, aDeg, bDeg, fa, fb float64, pa, pb Plane) (flo
 	return bestDeg, bestGZ, best
 }
 
-// slopes returns the solved sample of state s with the rates of change of
-// A and B per degree of heel towards sgn's side.
-func slopes(s state, sgn float64) solvedHeel {
-	sh := solvedHeel{p: s.p}
+// hermiteRoot returns the root in (a, b) of the cubic Hermite polynomial
+// with values fa > 0 ≥ fb and the samples' GZ slopes (per degree), by
+// bisection; the chord's root where a slope is missing.
+func hermiteRoot(a, b, fa, fb float64, sa, sb solvedHeel) float64 {
+	if !sa.haveSlopes || !sb.haveSlopes {
+		return a + fa/(fa-fb)*(b-a)
+	}
+	h := b - a
+	f := func(u float64) float64 {
+		u2, u3 := u*u, u*u*u
+		return (2*u3-3*u2+1)*fa + (u3-2*u2+u)*h*sa.dGZ + (3*u2-2*u3)*fb + (u3-u2)*h*sb.dGZ
+	}
+	lo, hi := 0.0, 1.0
+	for i := 0; i < 60; i++ {
+		m := (lo + hi) / 2
+		if f(m) > 0 {
+			lo = m
+		} else {
+			hi = m
+		}
+	}
+	return a + (lo+hi)/2*h
+}
+
+// slopes returns the solved sample at plane p from the evaluation s (at p
+// or, one linear step from it, at the point whose Newton iterate p is),
+// with f₂ and V the heeling moment and volume at p: the rates of change of
+// A, B and GZ per degree of heel towards sgn's side.
+func slopes(s state, p Plane, f2, v, sgn float64) solvedHeel {
+	sh := solvedHeel{p: p}
 	j := s.j
 	d, ok := solve2([2][2]float64{{j[0][0], j[0][1]}, {j[1][0], j[1][1]}}, [2]float64{-j[0][2], -j[1][2]})
-	if ok {
-		k := (1 + s.p.C*s.p.C) * sgn * math.Pi / 180 // dC per degree
-		sh.dA, sh.dB, sh.haveSlopes = d[0]*k, d[1]*k, true
+	if !ok || !(v > 0) {
+		return sh
 	}
+	c2 := 1 + p.C*p.C
+	k := c2 * sgn * math.Pi / 180 // dC per degree
+	sh.dA, sh.dB, sh.haveSlopes = d[0]*k, d[1]*k, true
+	df2 := j[2][2] + j[2][0]*d[0] + j[2][1]*d[1]
+	// lever = f₂/(V√(1+C²)); GZ = sgn·lever.
+	dl := df2/(v*math.Sqrt(c2)) - f2*p.C/(v*c2*math.Sqrt(c2))
+	sh.dGZ = sgn * dl * k
 	return sh
 }
 
@@ -383,9 +423,8 @@ func (pr *Problem) leverAt(sgn, deg float64, guess Plane) (solvedHeel, float64, 
 			if !(v > 0) {
 				break
 			}
-			sh := slopes(s, sgn)
-			sh.p = Plane{g.A - d[0], g.B - d[1], g.C}
-			return sh, f2 / (v * math.Sqrt(1+g.C*g.C)), nil
+			p := Plane{g.A - d[0], g.B - d[1], g.C}
+			return slopes(s, p, f2, v, sgn), f2 / (v * math.Sqrt(1+g.C*g.C)), nil
 		}
 		g = Plane{g.A - d[0], g.B - d[1], g.C}
 	}
@@ -393,7 +432,7 @@ func (pr *Problem) leverAt(sgn, deg float64, guess Plane) (solvedHeel, float64, 
 	if err != nil {
 		return solvedHeel{p: s.p}, 0, err
 	}
-	return slopes(s, sgn), pr.lever(s), nil
+	return slopes(s, s.p, s.f[2], s.e.V, sgn), pr.lever(s), nil
 }
 
 // immersionPoint is a point that the curve watches go under water.
