@@ -119,9 +119,20 @@ func (m model) criteriaView(w, h int, withFlags bool) []string {
 		if !c.Pass {
 			verdict = st.Fail.Render("FAIL ")
 		}
-		figs := " " + num(c.Actual, 3) + " (" + signed(c.Margin, 3) + ")"
-		reqW := max(4, w-5-len([]rune(figs)))
-		lines = append(lines, verdict+st.Text.Render(pad(c.Requirement, reqW))+st.Value.Render(figs))
+		req := wrap(c.Requirement, w-5)
+		for k, l := range req {
+			if k == 0 {
+				lines = append(lines, verdict+st.Text.Render(l))
+			} else {
+				lines = append(lines, "     "+st.Text.Render(l))
+			}
+		}
+		unit := ""
+		if c.Unit != "" {
+			unit = " " + c.Unit
+		}
+		lines = append(lines, "     "+st.Dim.Render("found ")+st.Value.Render(num(c.Actual, 3)+unit)+
+			st.Dim.Render(" · limit "+num(c.Required, 3)+unit+" · margin "+signed(c.Margin, 3)))
 	}
 	return fit(lines, w, h)
 }

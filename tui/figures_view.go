@@ -145,40 +145,48 @@ func (m model) figuresView(w int) []string {
 	return fit(lines, w, figLines)
 }
 
-// flagsView lists the flags, most severe first, one line each, in w × h.
+// flagsView lists the flags, most severe first, one line each, in w × h:
+// the mark of its severity and its sentence (the codes are on the criteria
+// sheet). When they do not all fit, the last line says how many more.
 func (m model) flagsView(w, h int) []string {
 	st := m.st
 	if h <= 0 {
 		return nil
 	}
 	flags := m.derived.flags
-	var lines []string
 	if len(flags) == 0 {
 		if m.cur == nil {
 			return fit([]string{st.Dim.Render("computing the intact condition…")}, w, h)
 		}
 		return fit([]string{st.Dim.Render("no flags raised")}, w, h)
 	}
+	var lines []string
 	for i, f := range flags {
-		if i == h-1 && len(flags) > h {
-			lines = append(lines, st.Dim.Render(fmt.Sprintf("… %d more: see criteria (tab)", len(flags)-i)))
+		if len(flags) > h && i == h-1 {
+			more := len(flags) - i
+			if h == 1 {
+				// One line only: the worst flag, and the count of the rest.
+				lines = append(lines, flagLine(st, f, fmt.Sprintf("(+%d) ", more-1)))
+			} else {
+				lines = append(lines, st.Dim.Render(fmt.Sprintf("… %d more flags on the criteria sheet", more)))
+			}
 			break
 		}
-		lines = append(lines, flagLine(st, f))
+		lines = append(lines, flagLine(st, f, ""))
 	}
 	return fit(lines, w, h)
 }
 
-// flagLine is one flag: a mark by its severity, its code and its sentence.
-func flagLine(st Styles, f engine.Flag) string {
-	mark, s := "· ", st.Info
+// flagLine is one flag: a mark by its severity and its sentence.
+func flagLine(st Styles, f engine.Flag, prefix string) string {
+	s := st.Info
 	switch f.Severity {
 	case engine.Danger:
-		mark, s = "‼ ", st.Danger
+		s = st.Danger
 	case engine.Caution:
-		mark, s = "! ", st.Caution
+		s = st.Caution
 	}
-	return s.Render(mark+f.Code) + st.Text.Render(": "+f.Message)
+	return flagMark(st, f) + s.Render(prefix) + st.Text.Render(f.Message)
 }
 
 // bannerView says plainly that there is no floating position: she sinks,

@@ -8,6 +8,7 @@ import (
 	"sync/atomic"
 	"time"
 
+	"github.com/charmbracelet/bubbles/cursor"
 	"github.com/charmbracelet/bubbles/help"
 	"github.com/charmbracelet/bubbles/key"
 	"github.com/charmbracelet/bubbles/spinner"
@@ -57,11 +58,12 @@ type (
 // model is the dashboard. It holds its parts as concrete values; Update
 // never computes physics (that runs in recompute's Cmd) and View only draws.
 type model struct {
-	v      *engine.Vessel
-	spaces []space
-	into   []int // the compartment each opening leads into (leadsInto)
-	opts   Options
-	now    func() time.Time
+	v         *engine.Vessel
+	spaces    []space
+	into      []int // the compartment each opening leads into (leadsInto)
+	opts      Options
+	condition string // the loading condition's name from the file
+	now       func() time.Time
 
 	keys     keyMap
 	help     help.Model
@@ -138,6 +140,9 @@ func newModel(v *engine.Vessel, info *vessels.Info, opts Options) model {
 		logNext: 1,
 		width:   80,
 		height:  24,
+	}
+	if info != nil {
+		m.condition = info.Condition
 	}
 	m.into = leadsInto(v)
 	m.derived = derive(v, m.into, nil)
@@ -329,7 +334,13 @@ func (m model) key(msg tea.KeyMsg) (tea.Model, tea.Cmd) {
 		m.input.SetValue("")
 		m.input.Placeholder = muText(m.mu(m.damage, m.sel))
 		m.resize()
-		return m, m.input.Focus()
+		cmd := m.input.Focus()
+		if !m.animate {
+			// Tests: a still cursor, so that no blink timer runs.
+			m.input.Cursor.SetMode(cursor.CursorStatic)
+			cmd = nil
+		}
+		return m, cmd
 	case key.Matches(msg, k.Undo):
 		if len(m.undo) == 0 {
 			return m, nil

@@ -57,9 +57,9 @@ func (m model) profileView(w, h int) []string {
 			side = engine.Port
 		}
 	}
-	title := "PROFILE from " + side.String()
+	title := "PROFILE from " + sideShort(side)
 	if p != nil {
-		title += " · trim " + trimText(m.cur.Position.TrimM)
+		title += " · " + trimText(m.cur.Position.TrimM)
 	}
 	lines := []string{st.Heading.Render(title)}
 	cw, ch := w-axisW, h-2

@@ -4,7 +4,6 @@ import (
 	"fmt"
 	"os"
 	"path/filepath"
-	"time"
 
 	tea "github.com/charmbracelet/bubbletea"
 
@@ -68,6 +67,7 @@ func (m model) writeReport() tea.Cmd {
 	}
 	made := m.now()
 	r := report.New(m.v, m.opts.VesselFile, *m.cur, made, m.opts.Version)
+	r.Condition = m.condition
 	if m.opts.VesselName != "" {
 		r.VesselName = m.opts.VesselName
 	}
@@ -101,5 +101,3 @@ func (m model) writeReport() tea.Cmd {
 		return reportMsg{path, err}
 	}
 }
-
-var _ = time.Now

@@ -101,10 +101,11 @@ func (m model) sectionX() float64 {
 func (m model) sectionView(w, h int) []string {
 	st := m.st
 	x := m.sectionX()
-	title := "SECTION at " + num(x, 1) + " m from AP, looking forward"
+	title := "SECTION at " + num(x, 1) + " m"
 	if len(m.v.Compartments) > 0 {
 		title += " · " + m.v.Compartments[m.sel].Name
 	}
+	title += " · looking fwd"
 	lines := []string{st.Heading.Render(title)}
 	cw, ch := w-axisW, h-2
 	if cw < 8 || ch < 3 {

@@ -52,19 +52,21 @@ func dayPalette() palette {
 // at low level is the usual bridge practice). Meant for a dark terminal;
 // emphasis comes from weight and reverse video, not from brightness.
 func nightPalette() palette {
+	// Reds that a 256-colour terminal has exactly (xterm 52, 88, 124, 160),
+	// so that nothing drifts towards white when colours are degraded.
 	return palette{
 		name:    "night",
-		text:    lipgloss.Color("#a83232"),
-		dim:     lipgloss.Color("#6e1f1f"),
-		heading: lipgloss.Color("#c23b3b"),
-		accent:  lipgloss.Color("#3d0b0b"),
-		onBand:  lipgloss.Color("#d04545"),
-		water:   lipgloss.Color("#8a2727"),
-		flood:   lipgloss.Color("#5c1515"),
-		hull:    lipgloss.Color("#b33636"),
-		good:    lipgloss.Color("#8f2d2d"),
-		caution: lipgloss.Color("#c24040"),
-		danger:  lipgloss.Color("#e04848"),
+		text:    lipgloss.Color("#af0000"),
+		dim:     lipgloss.Color("#870000"),
+		heading: lipgloss.Color("#d70000"),
+		accent:  lipgloss.Color("#5f0000"),
+		onBand:  lipgloss.Color("#d70000"),
+		water:   lipgloss.Color("#af0000"),
+		flood:   lipgloss.Color("#5f0000"),
+		hull:    lipgloss.Color("#af0000"),
+		good:    lipgloss.Color("#870000"),
+		caution: lipgloss.Color("#d70000"),
+		danger:  lipgloss.Color("#d70000"),
 	}
 }
 

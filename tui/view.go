@@ -76,6 +76,9 @@ func (m model) headerView(w int) string {
 		right = st.Busy.Render(m.spin.View()+" computing") + "  " + right
 	}
 	right += st.Dim.Render("  " + m.st.Palette)
+	if m.condition != "" && lipgloss.Width(left)+lipgloss.Width(right)+len([]rune(m.condition))+4 <= w {
+		left += st.Dim.Render(" · " + m.condition)
+	}
 	gap := w - lipgloss.Width(left) - lipgloss.Width(right)
 	if gap < 1 {
 		return fitLine(left+" "+right, w)
