@@ -2,6 +2,7 @@ package vessels
 
 import (
 	"errors"
+	"math"
 	"os"
 	"path/filepath"
 	"testing"
@@ -51,7 +52,14 @@ func FuzzParse(f *testing.F) {
 		// Whatever loads must be solvable without a panic (sinking or
 		// capsizing is an answer). Keep it cheap: only small vessels.
 		if len(v.Compartments) <= 8 && len(v.Hull.Stations()) <= 8 {
-			_, _ = engine.Solve(v, v.Intact())
+			pos, err := engine.Solve(v, v.Intact())
+			if err == nil {
+				for _, f := range []float64{pos.DraftAftM, pos.DraftFwdM, pos.HeelDeg, pos.GMM, pos.DisplacementT} {
+					if math.IsNaN(f) || math.IsInf(f, 0) {
+						t.Fatalf("solved position holds %v: %+v", f, pos)
+					}
+				}
+			}
 		}
 	})
 }

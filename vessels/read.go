@@ -4,6 +4,7 @@ import (
 	"errors"
 	"fmt"
 	"math"
+	"strconv"
 	"strings"
 
 	"github.com/BurntSushi/toml"
@@ -86,7 +87,7 @@ func (r *reader) vessel(root *table) (*engine.Vessel, *Info) {
 	if f, ok := root.get("format"); !ok {
 		r.addf("format", "missing: the file must say format = %d", FormatVersion)
 	} else if n, ok := f.(int64); !ok || n != FormatVersion {
-		r.addf("format", "%v is not a format this heelwatch reads: write format = %d", f, FormatVersion)
+		r.addf("format", "%v is not a format this heelwatch reads: write format = %d (a whole number)", tomlText(f), FormatVersion)
 	}
 	name, ok := root.str("name", true, "the vessel's name in quotes")
 	if ok && strings.TrimSpace(name) == "" {
@@ -170,9 +171,9 @@ func (r *reader) hull(root *table, info *Info) *engine.Hull {
 	defer t.finish()
 	shape, shapeOK := t.choice("shape", true, []string{"box", "sections"})
 	info.Shape = shape
-	length, lOK := t.positive("length", "m, between perpendiculars", true)
-	breadth, bOK := t.positive("breadth", "m, moulded", shape == "box")
-	depth, dOK := t.positive("depth", "m, baseline to deck at side", shape == "box")
+	length, lOK := t.dimension("length", "m, between perpendiculars", true, 1000)
+	breadth, bOK := t.dimension("breadth", "m, moulded", shape == "box", 200)
+	depth, dOK := t.dimension("depth", "m, baseline to deck at side", shape == "box", 100)
 	sections := t.entries("section", "one station's offsets")
 	if !shapeOK {
 		for _, s := range sections {
@@ -280,8 +281,8 @@ func (r *reader) offsets(s *table) ([]engine.Point, bool) {
 			r.addf(ep, "must be two numbers [half_breadth, z] in metres")
 			ok = false
 			continue
-		case math.IsNaN(y) || math.IsInf(y, 0) || math.IsNaN(z) || math.IsInf(z, 0):
-			r.addf(ep, "[%v, %v] is not finite: give metres", y, z)
+		case math.IsNaN(y) || math.IsInf(y, 0) || math.IsNaN(z) || math.IsInf(z, 0) || math.Abs(y) > maxMagnitude || math.Abs(z) > maxMagnitude:
+			r.addf(ep, "[%v, %v] is not a pair of finite metres (at most %g in size)", y, z, maxMagnitude)
 			ok = false
 			continue
 		}
@@ -614,4 +615,15 @@ func (r *reader) openings(ts []*table) []engine.Opening {
 		out = append(out, o)
 	}
 	return out
+}
+
+// tomlText writes a TOML value roughly as it was written, for messages.
+func tomlText(v any) string {
+	switch x := v.(type) {
+	case string:
+		return fmt.Sprintf("%q", x)
+	case float64:
+		return strconv.FormatFloat(x, 'f', -1, 64)
+	}
+	return fmt.Sprint(v)
 }

@@ -140,14 +140,32 @@ func (t *table) num(key, unit string, required bool) (float64, bool) {
 		t.r.addf(t.keyPath(key), "%v is not allowed: give a finite number (%s)", f, unit)
 		return 0, false
 	}
+	if math.Abs(f) > maxMagnitude {
+		t.r.addf(t.keyPath(key), "%g is too large for any ship: numbers may be at most %g in size (%s)", f, maxMagnitude, unit)
+		return 0, false
+	}
 	return f, true
 }
+
+// maxMagnitude bounds every number in a vessel file, so that no sum or
+// product of them can overflow to infinity.
+const maxMagnitude = 1e7
 
 // positive reads a number that must be above zero.
 func (t *table) positive(key, unit string, required bool) (float64, bool) {
 	f, ok := t.num(key, unit, required)
 	if ok && !(f > 0) {
 		t.r.addf(t.keyPath(key), "%g must be above zero (%s)", f, unit)
+		return 0, false
+	}
+	return f, ok
+}
+
+// dimension reads a positive hull dimension no larger than limit metres.
+func (t *table) dimension(key, unit string, required bool, limit float64) (float64, bool) {
+	f, ok := t.positive(key, unit, required)
+	if ok && f > limit {
+		t.r.addf(t.keyPath(key), "%g m is more than any ship's (at most %g m)", f, limit)
 		return 0, false
 	}
 	return f, ok
@@ -221,8 +239,8 @@ func (t *table) bounds(key, what string) ([2]float64, bool) {
 			t.r.addf(p, "must be a pair [low, high] of numbers in metres (the %s); item %d is %s", what, i+1, typeName(e))
 			return out, false
 		}
-		if math.IsNaN(f) || math.IsInf(f, 0) {
-			t.r.addf(p, "item %d is %v: the %s must be finite numbers in metres", i+1, f, what)
+		if math.IsNaN(f) || math.IsInf(f, 0) || math.Abs(f) > maxMagnitude {
+			t.r.addf(p, "item %d is %v: the %s must be finite numbers in metres, at most %g in size", i+1, f, what, maxMagnitude)
 			return out, false
 		}
 		out[i] = f
