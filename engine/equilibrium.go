@@ -403,17 +403,22 @@ func (pr *Problem) EquilibriumFrom(guess Plane, warm bool) (Position, error) {
 		}
 	}
 	// Which way does she go from upright? The lever at zero heel: positive
-	// (buoyancy to starboard of G) turns her to port.
-	st0, err := pr.atHeel(0, start)
-	if err != nil {
-		return Position{}, err // already a *NoEquilibrium saying where
-	}
+	// (buoyancy to starboard of G) turns her to port. The level upright
+	// start tells the side well enough to accept a converged position.
 	side := 1.0
-	if pr.lever(st0) > 0 {
+	if pr.lever(pr.eval(start, false)) > 0 {
 		side = -1
 	}
 	if ok && pos.GMM > 0 && pos.HeelDeg*side > 0 {
 		return pos, nil
+	}
+	st0, err := pr.atHeel(0, start)
+	if err != nil {
+		return Position{}, err // already a *NoEquilibrium saying where
+	}
+	side = 1.0
+	if pr.lever(st0) > 0 {
+		side = -1
 	}
 	// March in heel from upright towards that side, 1° at a time, to the
 	// first heel where the lever turns her back: the position she comes to
