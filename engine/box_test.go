@@ -411,3 +411,76 @@ func TestBoxCompartmentVolume(t *testing.T) {
 		}
 	}
 }
+
+// refBoxTrimExact returns the plane (A, B) of a box barge floating level in
+// heel at constant displacement with G at (xg, zg), found in the (x, z)
+// plane where the problem is two-dimensional: the immersed part of the
+// profile rectangle is the clipped rectangle of refRectangleBelow (exact),
+// its waterline found by bisection on the area, and the trim by bisection
+// on the equilibrium condition (xB − xG) + B·(zB − zG) = 0 (B − G
+// perpendicular to the water) between the slopes lo and hi (derived).
+func refBoxTrimExact(L, D, area, xg, zg, lo, hi float64) engine.Plane {
+	at := func(s float64) (res, h float64) {
+		t := math.Abs(s)
+		a, b := -t*L/2, D+t*L/2
+		for i := 0; i < 200 && b-a > 1e-15*(1+math.Abs(b)); i++ {
+			m := (a + b) / 2
+			if ar, _, _ := refRectangleBelow(L/2, D, m, t); ar < area {
+				a = m
+			} else {
+				b = m
+			}
+		}
+		h = (a + b) / 2
+		_, xc, zc := refRectangleBelow(L/2, D, h, t)
+		if s < 0 {
+			xc = -xc // the mirror image of the profile cut at slope |s|
+		}
+		return (xc + L/2 - xg) + s*(zc-zg), h
+	}
+	rlo, _ := at(lo)
+	for i := 0; i < 200 && hi-lo > 1e-15; i++ {
+		m := (lo + hi) / 2
+		if r, _ := at(m); (r < 0) == (rlo < 0) {
+			lo, rlo = m, r
+		} else {
+			hi = m
+		}
+	}
+	s := (lo + hi) / 2
+	_, h := at(s)
+	return engine.Plane{A: h - s*L/2, B: s}
+}
+
+// TestBoxLargeTrim: a box barge with G far aft trims until the profile is
+// a wedge (forefoot out of the water) or the deck is under aft; the draft
+// and trim at zero heel (Problem.AtHeel) must match the exact profile cut.
+func TestBoxLargeTrim(t *testing.T) {
+	const L, B, D = 100.0, 16.0, 10.0
+	const tol = 1e-6 // m, on the water's height at the perpendiculars
+	cases := []struct {
+		fill, lcg float64 // displacement as a fraction of L·B·D; LCG as a fraction of L
+	}{
+		{0.5, 0.4}, {0.5, 0.3}, {0.05, 0.3}, {0.05, 0.1}, {0.2, 0.1}, {0.8, 0.4}, {0.05, 0.02}, {0.5, 0.2},
+	}
+	worst := 0.0
+	for _, c := range cases {
+		zg := 0.4 * D
+		v := refBoxVessel(t, L, B, D, engine.Weight{Name: "load", MassT: engine.SeaWaterDensity * c.fill * L * B * D, LCGM: c.lcg * L, VCGM: zg})
+		p, _, err := engine.NewProblem(v, nil).AtHeel(0, engine.Plane{A: c.fill * D})
+		if err != nil {
+			t.Errorf("fill %g LCG %gL: %v", c.fill, c.lcg, err)
+			continue
+		}
+		// Trim by the stern: bracket the slope between level and 85°.
+		want := refBoxTrimExact(L, D, c.fill*L*D, c.lcg*L, zg, -math.Tan(85*math.Pi/180), 0)
+		for _, x := range []float64{0, L} {
+			e := math.Abs(p.Z(x, 0) - want.Z(x, 0))
+			worst = math.Max(worst, e)
+			if !(e <= tol) {
+				t.Errorf("fill %g LCG %gL: water at x = %g: %.9f m, exact %.9f m (trim angle %.3f°, exact %.3f°)", c.fill, c.lcg, x, p.Z(x, 0), want.Z(x, 0), math.Atan(-p.B)*180/math.Pi, math.Atan(-want.B)*180/math.Pi)
+			}
+		}
+	}
+	t.Logf("large trim: worst error %.2e m", worst)
+}

@@ -8,6 +8,7 @@ import (
 	"encoding/binary"
 	"errors"
 	"math"
+	"math/rand"
 	"reflect"
 	"testing"
 
@@ -74,7 +75,13 @@ func FuzzSolve(f *testing.F) {
 	f.Add([]byte("barge with two wing tanks open"))
 	f.Add([]byte{0xff, 0xff, 0x00, 0x80, 0x40, 0x40, 0x10, 0x20, 0x90, 0xa0, 0x03, 0xff, 0xee, 0x01, 0x02, 0x03, 0x04, 0x05, 0x06, 0x07, 0x08, 0x09, 0x0a, 0x0b, 0x0c, 0x0d, 0x0e, 0x0f})
 	f.Add([]byte{0x00, 0x00, 0x00, 0x00, 0x00, 0x00, 0xff, 0xff, 0xff, 0xff, 0xff, 0xff, 0xff, 0xff, 0x05, 0x80, 0x80, 0x80, 0x80, 0x80, 0x80})
-	f.Fuzz(func(t *testing.T, data []byte) {
+	f.Fuzz(func(t *testing.T, data []byte) { refFuzzSolveOnce(t, data) })
+}
+
+// refFuzzSolveOnce runs one fuzzed case and says how it ended: "hull",
+// "vessel" (rejected as bad input), an Outcome's name, or "floats".
+func refFuzzSolveOnce(t *testing.T, data []byte) string {
+	{
 		r := &refFuzzReader{data}
 		L, B, D := r.in(1, 300), r.in(0.5, 60), r.in(0.3, 40)
 		h, err := engine.NewBoxHull(L, B, D)
@@ -84,13 +91,14 @@ func FuzzSolve(f *testing.F) {
 		full := engine.SeaWaterDensity * L * B * D
 		var ws []engine.Weight
 		for n := int(r.byte()%4) + 1; n > 0; n-- {
+			m := r.in(0, 0.6) * full / 2
 			ws = append(ws, engine.Weight{
 				Name:  "w",
-				MassT: r.in(0, 1.2) * full / 2,
-				LCGM:  r.in(-0.2, 1.2) * L,
-				TCGM:  r.in(-0.6, 0.6) * B,
-				VCGM:  r.in(-0.5, 3) * D,
-				FSMTm: r.in(0, 1) * full * B * B / 100,
+				MassT: m,
+				LCGM:  r.in(0, 1) * L,
+				TCGM:  r.in(-0.25, 0.25) * B,
+				VCGM:  r.in(-0.1, 1.3) * D,
+				FSMTm: r.in(0, 1) * m * B / 20,
 			})
 		}
 		var comps []*engine.Compartment
@@ -123,7 +131,7 @@ func FuzzSolve(f *testing.F) {
 		}
 		v, err := engine.NewVessel(engine.Vessel{Name: "fuzzed barge", Hull: h, Weights: ws, Compartments: comps})
 		if err != nil {
-			return // e.g. no mass at all: an error, as it should be
+			return "vessel" // e.g. no mass at all: an error, as it should be
 		}
 		pos, err := engine.Solve(v, dmg)
 		if err != nil {
@@ -134,7 +142,7 @@ func FuzzSolve(f *testing.F) {
 			if ne.Outcome < engine.Sinks || ne.Outcome > engine.NotConverged {
 				t.Fatalf("outcome %d unknown", ne.Outcome)
 			}
-			return
+			return ne.Outcome.String()
 		}
 		refCheckFinite(t, "solved", pos)
 		if pos.Iterations < 0 || pos.Iterations > maxSolveIterations {
@@ -143,5 +151,25 @@ func FuzzSolve(f *testing.F) {
 		if math.Abs(pos.HeelDeg) > 90 {
 			t.Fatalf("heel %g° beyond 90°", pos.HeelDeg)
 		}
-	})
+		return "floats"
+	}
+}
+
+// TestFuzzSolveMix runs the fuzz body on seeded random bytes and checks
+// that the cases reach every ending, so that the fuzzer's inputs do test
+// the solver and not only the input checks.
+func TestFuzzSolveMix(t *testing.T) {
+	rng := rand.New(rand.NewSource(29))
+	count := map[string]int{}
+	for i := 0; i < 200; i++ {
+		data := make([]byte, 16+rng.Intn(80))
+		rng.Read(data)
+		count[refFuzzSolveOnce(t, data)]++
+	}
+	t.Logf("200 random cases: %v", count)
+	for _, k := range []string{"floats", "sinks", "capsizes"} {
+		if count[k] == 0 {
+			t.Errorf("no case ended %q: %v", k, count)
+		}
+	}
 }
