@@ -173,7 +173,8 @@ func Markdown(w io.Writer, r Report) error {
 			if !c.Pass {
 				res = "**FAIL**"
 			}
-			e.line("| ", res, " | ", md(c.Set), " | ", md(c.Requirement), " | ", num(c.Required, 3, c.Unit), " | ", num(c.Actual, 3, c.Unit), " | ", signed(c.Margin, 3, c.Unit), " | ", md(c.Source), " |")
+			p := precision(c.Unit)
+			e.line("| ", res, " | ", md(c.Set), " | ", md(c.Requirement), " | ", num(c.Required, p, c.Unit), " | ", num(c.Actual, p, c.Unit), " | ", signed(c.Margin, p, c.Unit), " | ", md(c.Source), " |")
 		}
 	}
 	e.line()
@@ -192,7 +193,7 @@ func Markdown(w io.Writer, r Report) error {
 		e.line("| Step | Working | Result |")
 		e.line("|---|---|--:|")
 		for _, s := range h.Steps {
-			e.line("| ", md(s.Label), " | ", md(s.Formula), " | ", num(s.Value, 3, s.Unit), " |")
+			e.line("| ", md(s.Label), " | ", md(s.Formula), " | ", num(s.Value, precision(s.Unit), s.Unit), " |")
 		}
 		e.line()
 		e.line("| | Hand method | Direct solution |")

@@ -104,9 +104,11 @@ func Text(w io.Writer, r Report) error {
 	if len(a.Criteria) > 0 {
 		e.line()
 		e.line("Criteria")
-		t := table{right: []bool{false, false, true, true, true}}
+		t := table{right: []bool{false, true, true, false}}
+		t.add("", "actual", "margin", "requirement")
 		for _, c := range a.Criteria {
-			t.add(passWord(c.Pass), c.Requirement, "actual "+num(c.Actual, 3, c.Unit), "margin "+signed(c.Margin, 3, c.Unit), c.Set)
+			p := precision(c.Unit)
+			t.add(passWord(c.Pass), num(c.Actual, p, c.Unit), signed(c.Margin, p, c.Unit), c.Requirement+" ["+c.Set+"]")
 		}
 		writeLines(e, t.lines("  "))
 	}
@@ -114,9 +116,9 @@ func Text(w io.Writer, r Report) error {
 	e.line()
 	if h := a.Hand; h != nil {
 		e.line("Hand method (lost buoyancy, small angles)")
-		t := table{right: []bool{false, false, true}}
+		t := table{right: []bool{false, true, false}}
 		for _, s := range h.Steps {
-			t.add(s.Label, s.Formula, num(s.Value, 3, s.Unit))
+			t.add(s.Label, num(s.Value, precision(s.Unit), s.Unit), s.Formula)
 		}
 		writeLines(e, t.lines("  "))
 		c := table{right: []bool{false, true, true}}
@@ -195,4 +197,19 @@ func signed(x float64, prec int, unit string) string {
 		return "+" + s
 	}
 	return s
+}
+
+// precision is the number of decimals shown for a value in unit.
+func precision(unit string) int {
+	switch unit {
+	case "°", "deg":
+		return 1
+	case "m·rad":
+		return 4
+	case "m²", "m³", "t", "t·m":
+		return 1
+	case "m⁴":
+		return 0
+	}
+	return 3
 }
