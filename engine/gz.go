@@ -146,6 +146,13 @@ func (pr *Problem) leverCurve(side Side, eq Position) (*GZCurve, []solvedHeel, e
 			break
 		}
 		gz := sgn * lever
+		if math.IsNaN(gz) || math.IsInf(gz, 0) {
+			if len(c.HeelDeg) < 2 {
+				return nil, nil, &NoEquilibrium{NotConverged, fmt.Sprintf("no righting lever found at %.1f° of heel", deg)}
+			}
+			c.Note = fmt.Sprintf("no righting lever found at %.1f° of heel: the curve ends at %.1f°", deg, c.HeelDeg[len(c.HeelDeg)-1])
+			break
+		}
 		n := len(c.HeelDeg)
 		if !found && n > 0 && c.GZM[n-1] > 0 && gz <= 0 && c.HeelDeg[n-1] >= c.EquilibriumDeg-1e-9 {
 			found = true

@@ -485,6 +485,43 @@ func TestGZPortCurveOfAsymmetricFlood(t *testing.T) {
 	}
 }
 
+// TestGZAngleOfLoll: a box with negative upright GM lies at the angle of
+// loll, where the wall-sided formula gives GZ = 0: tan θ = √(−2 GM/BM)
+// (from Barrass & Derrett p.130 / Tupper: found, solved for GZ = 0). The
+// curve from upright is negative up to the loll, zero there, and the range
+// counts from the loll.
+func TestGZAngleOfLoll(t *testing.T) {
+	const L, B, D, T = 80.0, 16.0, 12.0, 4.0
+	bm := B * B / (12 * T)
+	for _, kg := range []float64{7.4, 7.5, 7.7} {
+		gm := T/2 + bm - kg
+		loll := math.Atan(math.Sqrt(-2*gm/bm)) * 180 / math.Pi
+		v := gzBox(t, L, B, D, T, 0, kg, nil, nil, nil)
+		eq, c := gzCurve(t, v, v.Intact())
+		if math.Abs(math.Abs(eq.HeelDeg)-loll) > 1e-6 || math.Abs(c.EquilibriumDeg-loll) > 1e-6 {
+			t.Fatalf("KG %v: position heel %v°, curve equilibrium %v°, loll %v°", kg, eq.HeelDeg, c.EquilibriumDeg, loll)
+		}
+		if c.Other != nil || c.Toward != engine.Side(math.Copysign(1, eq.HeelDeg)) {
+			t.Errorf("KG %v: she lies to one side; toward %v, other %v", kg, c.Toward, c.Other != nil)
+		}
+		for i, deg := range c.HeelDeg {
+			if deg > 26 { // wall-sided to the deck edge and bilge, tan θ < 0.5
+				break
+			}
+			want := gzWallSided(B, T, kg, deg*math.Pi/180)
+			if math.Abs(c.GZM[i]-want) > 1e-9 {
+				t.Errorf("KG %v at %v°: GZ %.12f, wall-sided %.12f", kg, deg, c.GZM[i], want)
+			}
+			if deg > 0 && deg < loll && !(c.GZM[i] < 0) {
+				t.Errorf("KG %v at %v°: GZ %v before the loll, want negative", kg, deg, c.GZM[i])
+			}
+		}
+		if math.Abs(c.RangeDeg-(c.VanishingDeg-loll)) > 1e-6 || !c.Vanishes {
+			t.Errorf("KG %v: range %v, vanishing %v, loll %v", kg, c.RangeDeg, c.VanishingDeg, loll)
+		}
+	}
+}
+
 // TestGZDownflooding: an opening at (x, y, z) on an upright box immerses,
 // while the sides are wall-sided and the waterline turns about the
 // centreline at the draft T, at tan θ = (z − T)/y (practice); a
@@ -682,4 +719,38 @@ func BenchmarkRightingLevers(b *testing.B) {
 			b.ReportMetric(float64(len(c.HeelDeg)), "samples")
 		})
 	}
+}
+
+// ExampleRightingLevers: the righting-lever curve of a box barge (an
+// invented example: 80 m × 16 m × 8 m, floating at 4 m with G 5.6 m above
+// the keel), read off at a few heels, with its derived angles and the IS
+// Code's first area. Up to the deck edge at 26.6° the levers are those of
+// the wall-sided formula, GZ = sin θ (GM + ½ BM tan² θ).
+func ExampleRightingLevers() {
+	h, _ := engine.NewBoxHull(80, 16, 8)
+	v, _ := engine.NewVessel(engine.Vessel{Name: "example barge", Hull: h,
+		Weights: []engine.Weight{{Name: "barge and cargo", MassT: 1.025 * 80 * 16 * 4, LCGM: 40, VCGM: 5.6}}})
+	pr := engine.NewProblem(v, v.Intact())
+	eq, err := pr.Equilibrium()
+	if err != nil {
+		fmt.Println(err)
+		return
+	}
+	c, err := engine.RightingLevers(pr, eq)
+	if err != nil {
+		fmt.Println(err)
+		return
+	}
+	for _, deg := range []float64{10, 20, 30, 40} {
+		fmt.Printf("GZ at %2.0f°: %.3f m\n", deg, c.At(deg))
+	}
+	fmt.Printf("GZmax %.3f m at %.1f°, deck edge in at %.1f°, vanishing at %.1f°\n", c.GZMaxM, c.GZMaxDeg, c.DeckEdgeDeg, c.VanishingDeg)
+	fmt.Printf("area 0–30°: %.4f m·rad\n", c.AreaMRad(0, 30))
+	// Output:
+	// GZ at 10°: 0.315 m
+	// GZ at 20°: 0.714 m
+	// GZ at 30°: 1.221 m
+	// GZ at 40°: 1.162 m
+	// GZmax 1.262 m at 33.5°, deck edge in at 26.6°, vanishing at 63.8°
+	// area 0–30°: 0.2856 m·rad
 }
