@@ -4,6 +4,7 @@ import (
 	"fmt"
 	"math"
 	"math/rand/v2"
+	"os"
 	"strings"
 	"testing"
 
@@ -423,4 +424,38 @@ permability = 0.9
 	// Output:
 	// scow.toml:7: hull.breadth: -8 must be above zero (m, moulded)
 	// scow.toml:15: weight[1].permability: unknown key; the keys allowed in weight[1] are fsm, lcg, mass, name, tcg, vcg
+}
+
+// TestFormatExample reads the example of FORMAT.md, so that the page and
+// the reader cannot drift apart.
+func TestFormatExample(t *testing.T) {
+	page, err := os.ReadFile("FORMAT.md")
+	if err != nil {
+		t.Fatal(err)
+	}
+	s := string(page)
+	start := strings.Index(s, "An invented 40 m box pontoon")
+	open := strings.Index(s[start:], "```toml\n")
+	if start < 0 || open < 0 {
+		t.Fatal("FORMAT.md has no pontoon example")
+	}
+	body := s[start+open+len("```toml\n"):]
+	body = body[:strings.Index(body, "```")]
+	v, info, err := Parse("FORMAT.md example", []byte(body))
+	if err != nil {
+		t.Fatal(err)
+	}
+	if v.Name != "Pontoon P-40" || len(v.Compartments) != 2 || len(v.Openings) != 2 || info.Compartments[1].Hole == nil {
+		t.Errorf("example read as %q with %d compartments, %d openings", v.Name, len(v.Compartments), len(v.Openings))
+	}
+	// Box pontoon: Δ = 320 t + 0.5 × 32 × 10 × 0.8 m³ of sea water, and the
+	// draft ρLBT closed form (practice).
+	pos, err := engine.Solve(v, v.Intact())
+	if err != nil {
+		t.Fatal(err)
+	}
+	mass := 320 + 0.5*32*10*0.8*1.025
+	if T := mass / (1.025 * 40 * 10); math.Abs(pos.DraftMidM-T) > 1e-9 {
+		t.Errorf("draft amidships %.12g, want %.12g", pos.DraftMidM, T)
+	}
 }
