@@ -214,3 +214,49 @@ func TestBargeClosedForm(t *testing.T) {
 		}
 	}
 }
+
+// TestFerryWideHold shows what the ferry is for. Her lower vehicle hold runs
+// the full breadth through the waterline: open to the sea it takes away the
+// whole breadth of waterplane over 30 m, and the range of positive
+// stability left falls below the 20° of MARPOL Annex I Reg. 28.3
+// (references.md, found). The freighter's Hold 2, as long but between wing
+// tanks, leaves her a range well beyond it.
+func TestFerryWideHold(t *testing.T) {
+	for _, c := range []struct {
+		vessel, open string
+		short        bool // range below 20°
+	}{
+		{"ferry", "Lower vehicle hold", true},
+		{"freighter", "Hold 2", false},
+	} {
+		v, _, err := Open(c.vessel)
+		if err != nil {
+			t.Fatal(err)
+		}
+		d := v.Intact()
+		for i, comp := range v.Compartments {
+			d[i].Open = comp.Name == c.open
+		}
+		intact, err := engine.Solve(v, v.Intact())
+		if err != nil {
+			t.Fatal(err)
+		}
+		pos, err := engine.Solve(v, d)
+		if err != nil {
+			t.Fatalf("%s with %s open: %v", c.vessel, c.open, err)
+		}
+		pr := engine.NewProblem(v, d)
+		rng, guess := 0.0, pos.Plane
+		for deg := 1.0; deg <= 60; deg++ {
+			p, gz, err := pr.AtHeel(deg*math.Pi/180, guess)
+			if err != nil || gz < 0 {
+				break
+			}
+			rng, guess = deg, p
+		}
+		t.Logf("%s, %s open: GM %.3f → %.3f m, waterplane %.0f → %.0f m², range %.0f°", c.vessel, c.open, intact.GMM, pos.GMM, intact.WaterplaneAreaM2, pos.WaterplaneAreaM2, rng)
+		if (rng < 20) != c.short {
+			t.Errorf("%s with %s open: range %.0f°, MARPOL 28.3 wants ≥ 20°; want short = %v", c.vessel, c.open, rng, c.short)
+		}
+	}
+}
