@@ -128,8 +128,12 @@ func (pr *Problem) leverCurve(side Side, eq Position) (*GZCurve, []solvedHeel, e
 		c.GZM = append(c.GZM, gz)
 		sol = append(sol, sh)
 	}
-	start := pr.upright()
-	start.B = eq.Plane.B
+	// Heel 0 starts from her own draft and trim: the draft on the
+	// centreline changes little as she comes upright.
+	start := eq.Plane
+	if math.IsNaN(start.A+start.B) || start.A == 0 && start.B == 0 {
+		start = pr.upright()
+	}
 	found := false
 	for k := 0; ; k++ {
 		deg := math.Min(float64(k)*gzStepDeg, gzEndDeg)
@@ -398,7 +402,7 @@ func hermitePlane(heels []float64, sol []solvedHeel, i int, deg float64) Plane {
 // by its first-order change, an error of the order of the step squared
 // times the curvature of the moments: a few 1e-9 m at most on the tests'
 // hulls.
-const leverLinearM = 1e-4
+const leverLinearM = 2e-4
 
 // leverAt solves draft and trim at heel deg towards sgn's side from guess
 // and returns the solved sample and the engine's lever there (positive when
