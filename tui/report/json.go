@@ -46,6 +46,7 @@ type Document struct {
 	Openings         []OpeningDoc   `json:"openings"`
 	HandNote         string         `json:"hand_note"` // why the hand method is not applied, "" when it is
 	Criteria         []CriterionDoc `json:"criteria"`
+	Notes            []string       `json:"notes"` // what could not be computed, and why
 	VesselFile       string         `json:"vessel_file"`
 	Condition        string         `json:"condition"` // the loading condition's name
 	Made             string         `json:"made"`      // RFC 3339, UTC
@@ -183,8 +184,11 @@ type CriterionDoc struct {
 	Actual      Num    `json:"actual"`
 	Unit        string `json:"unit"`
 	Pass        bool   `json:"pass"`
-	Margin      Num    `json:"margin"` // actual − required, signed so that positive passes
+	AtMost      bool   `json:"at_most"` // the actual must not exceed the limit
+	Margin      Num    `json:"margin"`  // signed so that zero or more passes
 	Source      string `json:"source"`
+	Indicator   bool   `json:"indicator"` // a figure to read, not a criterion the ship is held to
+	Note        string `json:"note"`      // how the actual was taken, "" if nothing to say
 }
 
 // Build returns the JSON document of r. Slices are never nil, so that
@@ -202,6 +206,7 @@ func Build(r Report) Document {
 		Openings:         []OpeningDoc{},
 		HandNote:         a.HandWhy,
 		Criteria:         []CriterionDoc{},
+		Notes:            append([]string{}, a.Notes...),
 		VesselFile:       r.VesselFile,
 		Condition:        r.Condition,
 		Version:          r.Version,
@@ -253,8 +258,9 @@ func Build(r Report) Document {
 		d.Flags = append(d.Flags, FlagDoc{f.Code, f.Severity.String(), f.Message})
 	}
 	for _, c := range a.Criteria {
-		d.Criteria = append(d.Criteria, CriterionDoc{c.Set, c.Code, c.Requirement, Num(c.Required),
-			Num(c.Actual), c.Unit, c.Pass, Num(c.Margin), c.Source})
+		d.Criteria = append(d.Criteria, CriterionDoc{Set: c.Set, Code: c.Code, Requirement: c.Requirement,
+			Required: Num(c.Required), Actual: Num(c.Actual), Unit: c.Unit, Pass: c.Pass, AtMost: c.AtMost,
+			Margin: Num(c.Margin), Source: c.Source, Indicator: c.Indicator, Note: c.Note})
 	}
 	return d
 }

@@ -3,6 +3,7 @@ package report
 import (
 	"io"
 	"strings"
+	"unicode"
 )
 
 // Markdown writes r as a Markdown report that an officer can print or
@@ -164,17 +165,28 @@ func Markdown(w io.Writer, r Report) error {
 	e.line("## Criteria")
 	e.line()
 	if len(a.Criteria) == 0 {
-		e.line("No criteria were evaluated for this state.")
+		sets := "none"
+		if r.Vessel != nil && len(r.Vessel.CriteriaSets) > 0 {
+			sets = strings.Join(r.Vessel.CriteriaSets, ", ")
+		}
+		e.line("No criterion applies to this state (the vessel's criteria sets: ", md(sets), ").")
 	} else {
+		for _, c := range a.Criteria {
+			if c.Indicator {
+				e.line("A result of \"read\" is an indicator: a figure to read, not a limit she is held to.")
+				e.line()
+				break
+			}
+		}
 		e.line("| Result | Set | Requirement | Required | Actual | Margin | Source |")
 		e.line("|---|---|---|--:|--:|--:|---|")
 		for _, c := range a.Criteria {
-			res := "pass"
-			if !c.Pass {
+			res := strings.ToLower(verdict(c))
+			if res == "fail" {
 				res = "**FAIL**"
 			}
 			p := precision(c.Unit)
-			e.line("| ", res, " | ", md(c.Set), " | ", md(c.Requirement), " | ", num(c.Required, p, c.Unit), " | ", num(c.Actual, p, c.Unit), " | ", signed(c.Margin, p, c.Unit), " | ", md(c.Source), " |")
+			e.line("| ", res, " | ", md(c.Set), " | ", md(requirementWords(c)), " | ", num(c.Required, p, c.Unit), " | ", num(c.Actual, p, c.Unit), " | ", signed(c.Margin, p, c.Unit), " | ", md(c.Source), " |")
 		}
 	}
 	e.line()
@@ -214,6 +226,15 @@ func Markdown(w io.Writer, r Report) error {
 	}
 	e.line()
 
+	if len(a.Notes) > 0 {
+		e.line("## Notes")
+		e.line()
+		for _, n := range a.Notes {
+			e.line("- ", md(n))
+		}
+		e.line()
+	}
+
 	e.line("## Cautions")
 	e.line()
 	for _, c := range Cautions {
@@ -224,8 +245,31 @@ func Markdown(w io.Writer, r Report) error {
 	return e.err
 }
 
-// md escapes text for a Markdown table cell or line.
+// md escapes text for a Markdown table cell or line. An underscore inside
+// a word (I_T, s_final) cannot start emphasis and is left as it is.
 func md(s string) string {
-	r := strings.NewReplacer("|", `\|`, "\n", " ", "*", `\*`, "_", `\_`, "`", "'")
-	return r.Replace(s)
+	var b strings.Builder
+	rs := []rune(s)
+	word := func(i int) bool {
+		return i >= 0 && i < len(rs) && (unicode.IsLetter(rs[i]) || unicode.IsDigit(rs[i]))
+	}
+	for i, r := range rs {
+		switch r {
+		case '|', '*', '\\':
+			b.WriteRune('\\')
+			b.WriteRune(r)
+		case '_':
+			if !word(i-1) || !word(i+1) {
+				b.WriteRune('\\')
+			}
+			b.WriteRune(r)
+		case '`':
+			b.WriteRune('\'')
+		case '\n', '\r':
+			b.WriteRune(' ')
+		default:
+			b.WriteRune(r)
+		}
+	}
+	return b.String()
 }

@@ -266,3 +266,23 @@ func sentence(s string) string {
 	}
 	return s
 }
+
+// verdict is a criterion's result in one word: PASS, FAIL, or READ for an
+// indicator, which is a figure to read rather than a limit she is held to.
+func verdict(c engine.CriterionResult) string {
+	switch {
+	case c.Indicator:
+		return "READ"
+	case c.Pass:
+		return "PASS"
+	}
+	return "FAIL"
+}
+
+// requirementWords is a criterion's requirement with its note, if any.
+func requirementWords(c engine.CriterionResult) string {
+	if c.Note == "" {
+		return c.Requirement
+	}
+	return c.Requirement + " (" + c.Note + ")"
+}

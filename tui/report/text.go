@@ -108,7 +108,7 @@ func Text(w io.Writer, r Report) error {
 		t.add("", "actual", "margin", "requirement")
 		for _, c := range a.Criteria {
 			p := precision(c.Unit)
-			t.add(passWord(c.Pass), num(c.Actual, p, c.Unit), signed(c.Margin, p, c.Unit), c.Requirement+" ["+c.Set+"]")
+			t.add(verdict(c), num(c.Actual, p, c.Unit), signed(c.Margin, p, c.Unit), requirementWords(c)+" ["+c.Set+"]")
 		}
 		writeLines(e, t.lines("  "))
 	}
@@ -156,6 +156,13 @@ func Text(w io.Writer, r Report) error {
 		}
 		writeLines(e, t.lines("  "))
 	}
+	if len(a.Notes) > 0 {
+		e.line()
+		e.line("Notes")
+		for _, n := range a.Notes {
+			e.line("  ", n)
+		}
+	}
 	e.line()
 	for _, c := range Cautions {
 		e.line(c)
@@ -183,13 +190,6 @@ func plural(n int, word string) string {
 	return num(float64(n), 0, "") + " " + word + "s"
 }
 
-func passWord(ok bool) string {
-	if ok {
-		return "PASS"
-	}
-	return "FAIL"
-}
-
 // signed formats x with an explicit sign.
 func signed(x float64, prec int, unit string) string {
 	s := num(x, prec, unit)
@@ -203,7 +203,7 @@ func signed(x float64, prec int, unit string) string {
 func precision(unit string) int {
 	switch unit {
 	case "°", "deg":
-		return 1
+		return 2
 	case "m·rad":
 		return 4
 	case "m²", "m³", "t", "t·m":
