@@ -116,3 +116,16 @@ func BenchmarkRecomputeComposed(b *testing.B) {
 		}
 	}
 }
+
+// BenchmarkHullBelow times one immersion of the bundled ship's hull at a
+// heeled and trimmed waterline: the unit of cost of every evaluation.
+func BenchmarkHullBelow(b *testing.B) {
+	v, _ := refBundledDamaged(b)
+	p := engine.Plane{A: v.Hull.DepthM / 2, B: -0.005, C: 0.2}
+	s := v.Hull.Solid()
+	b.ReportAllocs()
+	b.ResetTimer()
+	for i := 0; i < b.N; i++ {
+		s.Below(p)
+	}
+}
