@@ -7,36 +7,56 @@ import (
 	"heelwatch/engine"
 )
 
-// handView shows the lost-buoyancy hand method's working step by step and
-// its answers beside the direct ones, or why it does not apply.
-func (m model) handView(w, h int) []string {
+// handView shows the lost-buoyancy hand method: its answers beside the
+// direct ones when withAnswers is set, and its working step by step
+// (scrolled with the working keys), or why it does not apply.
+func (m model) handView(w, h int, withAnswers bool) []string {
 	st := m.st
 	lines := []string{st.Heading.Render("HAND METHOD · lost buoyancy, small angles")}
 	if m.cur == nil {
 		return fit(append(lines, st.Dim.Render("computing…")), w, h)
 	}
-	hw := m.cur.Hand
-	if hw == nil {
-		why := m.cur.HandWhy
-		if why == "" {
-			why = "hand method: not yet available"
-		}
-		for _, l := range wrap(why, w) {
+	if m.cur.Hand == nil {
+		for _, l := range wrap(m.handWhy(), w) {
 			lines = append(lines, st.Dim.Render(l))
 		}
 		return fit(lines, w, h)
 	}
-	// Answers first: they must fit even on a small screen.
-	const lw, vw = 12, 9
-	lines = append(lines, st.Dim.Render(pad("", lw)+padLeft("hand", vw)+padLeft("direct", vw)+padLeft("apart", vw)))
+	if withAnswers {
+		lines = append(lines, m.handAnswers(w)...)
+	}
+	return fit(append(lines, m.handWorking(w, h-len(lines))...), w, h)
+}
+
+// handWhy says why there is no hand working.
+func (m model) handWhy() string {
+	if m.cur != nil && m.cur.HandWhy != "" {
+		return m.cur.HandWhy
+	}
+	return "hand method: not yet available"
+}
+
+// handAnswers is the hand method's answers beside the direct solution's,
+// and how far they part.
+func (m model) handAnswers(w int) []string {
+	st := m.st
+	hw := m.cur.Hand
+	lw := 10
+	vw := max(6, min(9, (w-lw-2)/3))
+	lines := []string{st.Dim.Render(pad("", lw) + padLeft("hand", vw) + padLeft("direct", vw) + padLeft("apart", vw))}
 	p := m.cur.Position
 	row := func(label string, hv float64, dv func(*engine.Position) float64, prec int, unit string) {
+		show := func(v float64) string { return num(v, prec) }
+		if unit == "°" {
+			// Heel with its side, as everywhere else on the screen.
+			show, unit = heelShort, ""
+		}
 		d, apart := blank, blank
 		if p != nil {
-			d = num(dv(p), prec)
+			d = show(dv(p))
 			apart = num(math.Abs(hv-dv(p)), prec)
 		}
-		lines = append(lines, st.Dim.Render(pad(label, lw))+st.Value.Render(padLeft(num(hv, prec), vw))+
+		lines = append(lines, st.Dim.Render(pad(label, lw))+st.Value.Render(padLeft(show(hv), vw))+
 			st.Text.Render(padLeft(d, vw))+st.Change.Render(padLeft(apart, vw))+st.Dim.Render(" "+unit))
 	}
 	row("Draft aft", hw.DraftAftM, func(q *engine.Position) float64 { return q.DraftAftM }, 2, "m")
@@ -44,11 +64,38 @@ func (m model) handView(w, h int) []string {
 	row("Trim", hw.TrimM, func(q *engine.Position) float64 { return q.TrimM }, 2, "m")
 	row("Heel", hw.HeelDeg, func(q *engine.Position) float64 { return q.HeelDeg }, 1, "°")
 	row("GM", hw.GMM, func(q *engine.Position) float64 { return q.GMM }, 2, "m")
-	lines = append(lines, st.Dim.Render("working:"))
-	for _, s := range hw.Steps {
-		lines = append(lines, st.Dim.Render(pad(s.Label, min(18, w/3)))+" "+st.Text.Render(s.Formula)+" = "+st.Value.Render(num(s.Value, precFor(s.Value))+" "+s.Unit))
+	return lines
+}
+
+// handWorking is the hand method's steps from the scroll position, in
+// w × h: one line a step when there is room, else the label over the
+// formula.
+func (m model) handWorking(w, h int) []string {
+	st := m.st
+	steps := m.cur.Hand.Steps
+	if h <= 0 {
+		return nil
 	}
-	return fit(lines, w, h)
+	first := min(m.handScroll, max(0, len(steps)-1))
+	head := fmt.Sprintf("working, steps %d–%d of %d", first+1, len(steps), len(steps))
+	var body []string
+	twoLines := w < 70
+	for k := first; k < len(steps); k++ {
+		s := steps[k]
+		result := st.Text.Render(s.Formula+" = ") + st.Value.Render(withUnit(num(s.Value, precFor(s.Value)), s.Unit))
+		if twoLines {
+			body = append(body, st.Dim.Render(s.Label), "  "+result)
+		} else {
+			lw := min(34, w*2/5)
+			body = append(body, st.Dim.Render(pad(s.Label, lw))+" "+result)
+		}
+		if len(body) >= h-1 {
+			last := k + 1
+			head = fmt.Sprintf("working, steps %d–%d of %d · [ ] scroll", first+1, last, len(steps))
+			break
+		}
+	}
+	return fit(append([]string{st.Dim.Render(head)}, body...), w, h)
 }
 
 // precFor picks decimals for a figure of the hand working: three for small
@@ -127,14 +174,26 @@ func (m model) criteriaView(w, h int, withFlags bool) []string {
 				lines = append(lines, "     "+st.Text.Render(l))
 			}
 		}
-		unit := ""
-		if c.Unit != "" {
-			unit = " " + c.Unit
-		}
-		lines = append(lines, "     "+st.Dim.Render("found ")+st.Value.Render(num(c.Actual, 3)+unit)+
-			st.Dim.Render(" · limit "+num(c.Required, 3)+unit+" · margin "+signed(c.Margin, 3)))
+		prec, unit := criterionFormat(c.Unit)
+		lines = append(lines, "     "+st.Dim.Render("found ")+st.Value.Render(num(c.Actual, prec)+unit)+
+			st.Dim.Render(" · limit "+num(c.Required, prec)+unit+" · margin "+signed(c.Margin, prec)))
 	}
 	return fit(lines, w, h)
+}
+
+// criterionFormat gives the decimals and the unit text of a criterion's
+// figures: degrees to 0.1, metres to 0.01, areas (m·rad) and plain numbers
+// to 0.001.
+func criterionFormat(unit string) (int, string) {
+	switch unit {
+	case "°", "deg":
+		return 1, "°"
+	case "m":
+		return 2, " m"
+	case "":
+		return 3, ""
+	}
+	return 3, " " + unit
 }
 
 func flagMark(st Styles, f engine.Flag) string {

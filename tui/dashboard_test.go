@@ -2,6 +2,7 @@ package tui
 
 import (
 	"flag"
+	"fmt"
 	"math"
 	"os"
 	"path/filepath"
@@ -172,7 +173,21 @@ func checkGolden(t *testing.T, name, got string) {
 		t.Fatalf("%v (run go test ./tui -update to write it)", err)
 	}
 	if string(want) != got {
-		t.Errorf("View() differs from %s (go test ./tui -update rewrites it after a deliberate change)\n--- got ---\n%s\n--- want ---\n%s", path, got, want)
+		g, w := strings.Split(got, "\n"), strings.Split(string(want), "\n")
+		var diff []string
+		for i := 0; i < max(len(g), len(w)); i++ {
+			var gl, wl string
+			if i < len(g) {
+				gl = g[i]
+			}
+			if i < len(w) {
+				wl = w[i]
+			}
+			if gl != wl {
+				diff = append(diff, fmt.Sprintf("line %d\n  got:  %s\n  want: %s", i+1, gl, wl))
+			}
+		}
+		t.Errorf("View() differs from %s (go test ./tui -update rewrites it after a deliberate change):\n%s", path, strings.Join(diff, "\n"))
 	}
 }
 

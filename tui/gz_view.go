@@ -19,7 +19,7 @@ func (m model) gzView(w, h int) []string {
 	if g == nil || len(g.HeelDeg) < 2 || len(g.HeelDeg) != len(g.GZM) {
 		return fit([]string{st.Heading.Render("GZ CURVE"), st.Dim.Render("GZ curve: not yet available")}, w, h)
 	}
-	title := "GZ m, to " + sideShort(g.Toward) + ": max " + num(g.GZMaxM, 2) + " at " + num(g.GZMaxDeg, 0) + "°, range " + num(g.RangeDeg, 0) + "°"
+	title := titleFit(w, "GZ m, to "+sideShort(g.Toward), "max "+num(g.GZMaxM, 2)+" at "+num(g.GZMaxDeg, 0)+"°", "range "+num(g.RangeDeg, 0)+"°")
 	lines = append(lines, st.Heading.Render(title))
 	cw, ch := w-axisW, h-3
 	if cw < 8 || ch < 3 {

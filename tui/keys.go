@@ -12,6 +12,7 @@ type keyMap struct {
 	Undo, Reset           key.Binding
 	Picture               key.Binding // next picture (narrow screens)
 	Hand                  key.Binding
+	WorkUp, WorkDown      key.Binding // scroll the hand working
 	Report                key.Binding
 	Palette               key.Binding
 	Help                  key.Binding
@@ -32,6 +33,10 @@ func newKeyMap() keyMap {
 		Reset:   key.NewBinding(key.WithKeys("R"), key.WithHelp("R", "all intact")),
 		Picture: key.NewBinding(key.WithKeys("tab", "v"), key.WithHelp("tab", "next picture")),
 		Hand:    key.NewBinding(key.WithKeys("h"), key.WithHelp("h", "hand working")),
+		WorkUp: key.NewBinding(key.WithKeys("["), key.WithHelp("[", "working up"),
+			key.WithDisabled()),
+		WorkDown: key.NewBinding(key.WithKeys("]"), key.WithHelp("]", "working down"),
+			key.WithDisabled()),
 		Report:  key.NewBinding(key.WithKeys("w"), key.WithHelp("w", "write report")),
 		Palette: key.NewBinding(key.WithKeys("c"), key.WithHelp("c", "day/night/mono")),
 		Help:    key.NewBinding(key.WithKeys("?"), key.WithHelp("?", "all keys")),
@@ -50,6 +55,7 @@ func (k keyMap) FullHelp() [][]key.Binding {
 		{k.Up, k.Down, k.Top, k.Bottom},
 		{k.Flood, k.MuUp, k.MuSet},
 		{k.Undo, k.Reset, k.Report},
-		{k.Picture, k.Hand, k.Palette, k.Help, k.Quit},
+		{k.Picture, k.Hand, k.WorkUp, k.WorkDown},
+		{k.Palette, k.Help, k.Quit},
 	}
 }

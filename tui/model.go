@@ -97,14 +97,15 @@ type model struct {
 	file    *eventLog
 	wantRep bool
 
-	rows     []listRow
-	sel      int
-	offset   int
-	picture  int
-	showHand bool
-	width    int
-	height   int
-	lay      layout
+	rows       []listRow
+	sel        int
+	offset     int
+	picture    int
+	showHand   bool
+	handScroll int // the first step of the hand working shown
+	width      int
+	height     int
+	lay        layout
 }
 
 type undoEntry struct {
@@ -293,6 +294,14 @@ func (m model) key(msg tea.KeyMsg) (tea.Model, tea.Cmd) {
 		m.picture = (m.picture + 1) % numPictures
 	case key.Matches(msg, k.Hand):
 		m.showHand = !m.showHand
+		m.keys.WorkUp.SetEnabled(m.showHand)
+		m.keys.WorkDown.SetEnabled(m.showHand)
+	case key.Matches(msg, k.WorkUp):
+		m.handScroll = max(0, m.handScroll-3)
+	case key.Matches(msg, k.WorkDown):
+		if m.cur != nil && m.cur.Hand != nil {
+			m.handScroll = min(m.handScroll+3, max(0, len(m.cur.Hand.Steps)-1))
+		}
 	case key.Matches(msg, k.Palette):
 		m.palette = (m.palette + 1) % len(paletteNames)
 		m.setStyles()

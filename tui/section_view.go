@@ -101,12 +101,12 @@ func (m model) sectionX() float64 {
 func (m model) sectionView(w, h int) []string {
 	st := m.st
 	x := m.sectionX()
-	title := "SECTION at " + num(x, 1) + " m"
+	parts := []string{"SECTION at " + num(x, 1) + " m"}
 	if len(m.v.Compartments) > 0 {
-		title += " · " + m.v.Compartments[m.sel].Name
+		parts = append(parts, m.v.Compartments[m.sel].Name)
 	}
-	title += " · looking fwd"
-	lines := []string{st.Heading.Render(title)}
+	parts = append(parts, "looking fwd")
+	lines := []string{st.Heading.Render(titleFit(w, parts...))}
 	cw, ch := w-axisW, h-2
 	if cw < 8 || ch < 3 {
 		return fit(lines, w, h)
@@ -186,6 +186,19 @@ func (m model) sectionView(w, h int) []string {
 	lines = append(lines, m.framed(c, step, func(v float64) string { return num(v, 0) })...)
 	lines = append(lines, st.Axis.Render(scaleLine(c, marks, "m")))
 	return fit(lines, w, h)
+}
+
+// titleFit joins the parts of a title with " · " while they fit in w;
+// the first part always stands.
+func titleFit(w int, parts ...string) string {
+	t := parts[0]
+	for _, p := range parts[1:] {
+		if len([]rune(t))+3+len([]rune(p)) > w {
+			break
+		}
+		t += " · " + p
+	}
+	return t
 }
 
 // markOpening puts an opening's mark on a picture: ○ above the water,

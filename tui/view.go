@@ -109,7 +109,7 @@ func (m model) narrowBody() []string {
 // it is shown.
 func (m model) sheetView(w, h int) []string {
 	if m.showHand {
-		return fit(m.handView(w, h), w, h)
+		return fit(m.handView(w, h, true), w, h)
 	}
 	return fit(m.pictureView(m.picture, w, h), w, h)
 }
@@ -126,25 +126,39 @@ func (m model) pictureView(which, w, h int) []string {
 	return m.criteriaView(w, h, true)
 }
 
-// wideBody: list, figures and flags, criteria or the hand working on top;
-// the section, the profile and the GZ curve side by side below.
+// wideBody: on top the list, the figures with the flags (or the hand
+// method's answers) under them, and the flags in full with the criteria;
+// below, the section, the profile and the GZ curve side by side, or the
+// hand working while it is shown.
 func (m model) wideBody() []string {
 	l := m.lay
 	sep := m.st.Dim.Render("│")
 	list := m.listView(l.listW, l.topH)
-	mid := append(m.figuresView(l.posW), m.flagsView(l.posW, l.topH-figLines)...)
-	var third []string
-	if m.showHand {
-		third = m.handView(l.thirdW, l.topH)
+	mid := m.figuresView(l.posW)
+	if m.showHand && m.cur != nil {
+		// The hand method's answers right under the direct figures.
+		if m.cur.Hand != nil {
+			mid = append(mid, m.st.Heading.Render("HAND METHOD"))
+			mid = append(mid, m.handAnswers(l.posW)...)
+		} else {
+			mid = append(mid, m.st.Heading.Render("HAND METHOD"))
+			for _, s := range wrap(m.handWhy(), l.posW) {
+				mid = append(mid, m.st.Dim.Render(s))
+			}
+		}
 	} else {
-		third = m.criteriaView(l.thirdW, l.topH, len(m.derived.flags) > l.topH-figLines)
+		mid = append(mid, m.flagsView(l.posW, l.topH-figLines)...)
 	}
+	third := m.criteriaView(l.thirdW, l.topH, true)
 	top := besides(sep, fit(list, l.listW, l.topH), fit(mid, l.posW, l.topH), fit(third, l.thirdW, l.topH))
 	rule := m.st.Dim.Render(strings.Repeat("─", m.width))
 	var pics []string
-	if m.noPosition() {
+	switch {
+	case m.noPosition():
 		pics = m.bannerView(m.width, l.picH)
-	} else {
+	case m.showHand && m.cur != nil && m.cur.Hand != nil:
+		pics = m.handView(m.width, l.picH, false)
+	default:
 		pics = besides(sep,
 			fit(m.sectionView(l.picW[0], l.picH), l.picW[0], l.picH),
 			fit(m.profileView(l.picW[1], l.picH), l.picW[1], l.picH),
