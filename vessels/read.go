@@ -128,7 +128,7 @@ func (r *reader) vessel(root *table) (*engine.Vessel, *Info) {
 	}
 	v, err := engine.NewVessel(engine.Vessel{
 		Name: name, WaterDensity: rho, Hull: hull, Weights: weights,
-		Compartments: comps, Openings: openings, MarginLineM: margin, CriteriaSets: criteria,
+		Compartments: comps, Openings: openings, MarginLineM: margin, CriteriaSets: criteria, ShipType: info.ShipType,
 	})
 	if err != nil {
 		r.addf("weight", "%v", err)
