@@ -38,8 +38,11 @@ const (
 // Hermite extrapolation of the last two solved planes and their exact rates
 // of change with heel, so most heels cost one evaluation (see leverAt). The
 // curve runs to at least 60° and on to the angle of vanishing stability or
-// to 89.5° (the solver's limit), whichever is first. The angle of vanishing
-// stability is refined by the Illinois method on solved heels and added to
+// to 89.5° (the solver's limit), whichever is first. Each lever agrees with
+// a solve to the solver's own tolerance (pr.AtHeel) to a few 1e-9 m. The
+// angle of vanishing stability starts from the root of the cubic Hermite
+// polynomial of GZ and its exact slopes between the samples that bracket
+// it, is refined by the Illinois method on solved heels and is added to
 // the curve as a sample; GZmax is the maximum of the curve's spline (see
 // AreaMRad). The deck-edge and downflooding angles come from the solved
 // planes: the first heel at which a deck-edge point at a station (either
