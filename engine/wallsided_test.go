@@ -249,6 +249,16 @@ func TestWallSidedHeelFromOffCentreWeight(t *testing.T) {
 		if !(e <= tol) {
 			t.Errorf("tcg %g: heel %.10f°, reference %.10f°", c.tcg, pos.HeelDeg, want/refDeg)
 		}
+		if c.wallSided {
+			// GM at the heeled equilibrium is the slope of the righting
+			// lever there: d/dθ [sin θ (GM + ½BM tan²θ) − TCG cos θ]
+			// (derived from the wall-sided formula).
+			th, tn := math.Abs(want), math.Tan(math.Abs(want))
+			slope := math.Cos(th)*(b.gm()+b.bm()*tn*tn/2) + math.Sin(th)*b.bm()*tn/(math.Cos(th)*math.Cos(th)) + a*math.Sin(th)
+			if e := math.Abs(pos.GMM - slope); !(e <= 1e-6) {
+				t.Errorf("tcg %g: GM at %.3f° heel %.9f m, slope of the wall-sided lever %.9f m", c.tcg, pos.HeelDeg, pos.GMM, slope)
+			}
+		}
 		if c.wallSided && math.Abs(pos.DraftMidM-b.T) > 1e-9 {
 			t.Errorf("tcg %g: draft amidships %.12f, wall-sided pivot at %g", c.tcg, pos.DraftMidM, b.T)
 		}
