@@ -47,12 +47,14 @@ func solveJSON(t *testing.T, args ...string) (int, map[string]any) {
 // conventions require of `solve --format json`, on bundled vessels.
 func TestSolveJSONContract(t *testing.T) {
 	tests := []struct {
-		name string
-		args []string
+		name     string
+		args     []string
+		wantHand bool // the hand method applies: a box hull with a compartment open
 	}{
-		{"barge intact", []string{"--vessel", "barge"}},
-		{"barge two open", []string{"--vessel", "barge", "--open", "1 wing void S,Hold aft"}},
-		{"default ship intact", nil},
+		{"barge intact", []string{"--vessel", "barge"}, false},
+		{"barge two open", []string{"--vessel", "barge", "--open", "1 wing void S,Hold aft"}, true},
+		{"default ship intact", nil, false},
+		{"default ship two open", []string{"--open", "Wing tank 2 S,DB 2 S"}, false},
 	}
 	for _, tc := range tests {
 		t.Run(tc.name, func(t *testing.T) {
@@ -90,11 +92,27 @@ func TestSolveJSONContract(t *testing.T) {
 				_, a := heel[i].(float64)
 				_, b := lever[i].(float64)
 				if !a || !b {
-					t.Errorf("gz point %d: %#v, %#v: want numbers", i, heel[i], lever[i])
+					t.Fatalf("gz point %d: %#v, %#v: want numbers", i, heel[i], lever[i])
 				}
+			}
+			// The conventions' curve: from 0° in steps of at most 1° to at
+			// least 60° or the angle of vanishing stability.
+			if len(heel) < 2 || heel[0].(float64) != 0 {
+				t.Fatalf("gz heel_deg %v: want a curve from 0°", heel)
+			}
+			for i := 1; i < len(heel); i++ {
+				if step := heel[i].(float64) - heel[i-1].(float64); !(step > 0 && step <= 1+1e-9) {
+					t.Errorf("gz step %v° at %v°: want ascending steps of at most 1°", step, heel[i-1])
+				}
+			}
+			last := heel[len(heel)-1].(float64)
+			if van, _ := gz["vanishing_deg"].(float64); last < 60-1e-9 && last < van-1e-6 {
+				t.Errorf("gz ends at %v°, before 60° and before vanishing at %v°", last, van)
 			}
 			if h, present := m["hand"]; !present {
 				t.Error("hand missing: want an object or null")
+			} else if (h != nil) != tc.wantHand {
+				t.Errorf("hand = %v, want an object: %v (hand_note %q)", h, tc.wantHand, m["hand_note"])
 			} else if h != nil {
 				hm, ok := h.(map[string]any)
 				if !ok {
@@ -427,4 +445,47 @@ func FuzzSolveFlags(f *testing.F) {
 			t.Fatalf("NaN or Inf in the output:\n%s", out.String())
 		}
 	})
+}
+
+// TestHandJSONLostBuoyancy checks the hand object of the JSON against the
+// lost-buoyancy method worked out here for the test lighter (practice; the
+// method as in Barrass & Derrett's bilging chapter, memory). Wing void S is
+// x 30–50, y 3–6, full depth, μ 0.95; the lighter is 60 × 12 m of
+// 1500 t + 0.40 × 360 m³ × 1.000 t/m³ = 1644 t in water of 1.025 t/m³.
+func TestHandJSONLostBuoyancy(t *testing.T) {
+	code, m := solveJSON(t, "--vessel", reportCase, "--open", "Wing void S")
+	if code != 0 {
+		t.Fatalf("exit status %d", code)
+	}
+	h, ok := m["hand"].(map[string]any)
+	if !ok {
+		t.Fatalf("hand = %v (hand_note %q), want an object", m["hand"], m["hand_note"])
+	}
+	V := 1644 / 1.025
+	T0 := V / (60 * 12)  // intact draft
+	a := 0.95 * 20 * 3   // lost waterplane, m²
+	v := a * T0          // lost volume below T0, m³
+	A := 60*12 - a       // intact waterplane, m²
+	s := v / A           // sinkage
+	shift := a * 4.5 / A // CF moves away from the lost area's centre (y = 4.5 m)
+	tests := []struct {
+		key  string
+		want float64
+		tol  float64
+	}{
+		{"sinkage_m", s, 1e-9},
+		{"draft_m", T0 + s, 1e-9},
+		{"cf_shift_m", shift, 1e-9},
+	}
+	for _, tc := range tests {
+		if got, ok := h[tc.key].(float64); !ok || math.Abs(got-tc.want) > tc.tol {
+			t.Errorf("hand.%s = %v, want %.9f", tc.key, h[tc.key], tc.want)
+		}
+	}
+	// At this small heel (under 3°) the hand and direct drafts agree
+	// within 1 %, as heelwatch expects of the method at small angles.
+	eq := m["equilibrium"].(map[string]any)
+	if d, hd := eq["draft_mid_m"].(float64), h["draft_m"].(float64); math.Abs(d-hd) > 0.01*d {
+		t.Errorf("direct draft amidships %v m, hand mean draft %v m: more than 1 %% apart", d, hd)
+	}
 }
