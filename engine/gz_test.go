@@ -667,7 +667,10 @@ func fmtGZ(v []float64) string {
 
 // BenchmarkRightingLevers: one curve per call, as a keystroke computes it,
 // on a Wigley hull from 21 stations of 12 offsets (intact upright: both
-// sides, mirrored; a wing space open: one side) and on the bundled ship.
+// sides, mirrored; a wing space open: one side) and on the bundled ship
+// (intact; and as BenchmarkRecompute floods her). Run with
+//
+//	go test ./engine -run '^$' -bench 'RightingLevers|Equilibrium$' -cpu 1
 func BenchmarkRightingLevers(b *testing.B) {
 	const L, B, T, D = 120.0, 18.0, 7.0, 11.0
 	h := gzWigleyHull(b, L, B, T, D, 21, 10)
@@ -683,22 +686,24 @@ func BenchmarkRightingLevers(b *testing.B) {
 		d    engine.Damage
 	}{{"wigley-intact", wig, wig.Intact()}, {"wigley-wing-open", wig, engine.Damage{{Open: true}}}}
 	if ship, _, err := vessels.Open(vessels.Default); err == nil {
-		cases = append(cases, struct {
+		type bcase = struct {
 			name string
 			v    *engine.Vessel
 			d    engine.Damage
-		}{"bundled-intact", ship, ship.Intact()})
+		}
+		cases = append(cases, bcase{"bundled-intact", ship, ship.Intact()})
+		// The keystroke benchmark's damage (bench_test.go): a wing tank and
+		// the engine room open.
+		d := ship.Intact()
+		open := 0
 		for i, c := range ship.Compartments {
-			if c.Box.Y0 >= 0 { // the first space to starboard
-				d := ship.Intact()
+			if c.Name == "Wing tank 2 S" || c.Name == "Engine room" {
 				d[i].Open = true
-				cases = append(cases, struct {
-					name string
-					v    *engine.Vessel
-					d    engine.Damage
-				}{"bundled-" + c.Name + "-open", ship, d})
-				break
+				open++
 			}
+		}
+		if open == 2 {
+			cases = append(cases, bcase{"bundled-wing-and-engine-room-open", ship, d})
 		}
 	} else {
 		b.Logf("bundled ship not available: %v", err)
