@@ -6,6 +6,7 @@ import "github.com/charmbracelet/bubbles/key"
 // the screen is drawn from it (bubbles/help), so a key and its description
 // live in one place.
 type keyMap struct {
+	Move                  key.Binding // for the help bar only: up and down in one
 	Up, Down, Top, Bottom key.Binding
 	Flood                 key.Binding // open to the sea / close up (intact)
 	MuUp, MuDown, MuSet   key.Binding
@@ -21,41 +22,49 @@ type keyMap struct {
 
 func newKeyMap() keyMap {
 	return keyMap{
+		Move:    key.NewBinding(key.WithKeys("up", "down"), key.WithHelp("↑↓/jk", "move")),
 		Up:      key.NewBinding(key.WithKeys("up", "k"), key.WithHelp("↑/k", "up")),
 		Down:    key.NewBinding(key.WithKeys("down", "j"), key.WithHelp("↓/j", "down")),
 		Top:     key.NewBinding(key.WithKeys("home", "g", "pgup"), key.WithHelp("home/pgup", "first")),
 		Bottom:  key.NewBinding(key.WithKeys("end", "G", "pgdown"), key.WithHelp("end/pgdn", "last")),
 		Flood:   key.NewBinding(key.WithKeys(" ", "enter"), key.WithHelp("space", "open/close")),
-		MuUp:    key.NewBinding(key.WithKeys("+", "="), key.WithHelp("+/−", "μ ±0.05")),
+		MuUp:    key.NewBinding(key.WithKeys("+", "="), key.WithHelp("+/−", "μ")),
 		MuDown:  key.NewBinding(key.WithKeys("-", "_"), key.WithHelp("−", "μ −0.05")),
 		MuSet:   key.NewBinding(key.WithKeys("m"), key.WithHelp("m", "type μ")),
 		Undo:    key.NewBinding(key.WithKeys("u", "ctrl+z"), key.WithHelp("u", "undo")),
 		Reset:   key.NewBinding(key.WithKeys("R"), key.WithHelp("R", "all intact")),
-		Picture: key.NewBinding(key.WithKeys("tab", "v"), key.WithHelp("tab", "next picture")),
-		Hand:    key.NewBinding(key.WithKeys("h"), key.WithHelp("h", "hand working")),
+		Picture: key.NewBinding(key.WithKeys("tab", "v"), key.WithHelp("tab", "picture")),
+		Hand:    key.NewBinding(key.WithKeys("h"), key.WithHelp("h", "hand")),
 		WorkUp: key.NewBinding(key.WithKeys("["), key.WithHelp("[", "working up"),
 			key.WithDisabled()),
 		WorkDown: key.NewBinding(key.WithKeys("]"), key.WithHelp("]", "working down"),
 			key.WithDisabled()),
 		Report:  key.NewBinding(key.WithKeys("w"), key.WithHelp("w", "write report")),
 		Palette: key.NewBinding(key.WithKeys("c"), key.WithHelp("c", "day/night/mono")),
-		Help:    key.NewBinding(key.WithKeys("?"), key.WithHelp("?", "all keys")),
+		Help:    key.NewBinding(key.WithKeys("?"), key.WithHelp("?", "keys")),
 		Quit:    key.NewBinding(key.WithKeys("q", "ctrl+c"), key.WithHelp("q", "quit")),
 	}
 }
 
 // ShortHelp is the one-line help bar: the keys an officer needs first.
 func (k keyMap) ShortHelp() []key.Binding {
-	return []key.Binding{k.Up, k.Down, k.Flood, k.MuUp, k.MuSet, k.Undo, k.Picture, k.Hand, k.Help, k.Quit}
+	// ? and q before the rest, so that a narrow bar cuts the others first.
+	return []key.Binding{k.Move, k.Flood, k.MuUp, k.MuSet, k.Undo, k.Help, k.Quit, k.Picture, k.Hand}
 }
 
-// FullHelp is the help shown with `?`, in columns.
+// FullHelp is the help shown with `?`, in three columns that fit 80
+// columns, in fuller words than the one-line bar.
 func (k keyMap) FullHelp() [][]key.Binding {
+	say := func(b key.Binding, keys, desc string) key.Binding {
+		b.SetHelp(keys, desc)
+		return b
+	}
 	return [][]key.Binding{
-		{k.Up, k.Down, k.Top, k.Bottom},
-		{k.Flood, k.MuUp, k.MuSet},
-		{k.Undo, k.Reset, k.Report},
-		{k.Picture, k.Hand, k.WorkUp, k.WorkDown},
-		{k.Palette, k.Help, k.Quit},
+		{k.Up, k.Down, say(k.Top, "home", "first"), say(k.Bottom, "end", "last"), say(k.Picture, "tab", "next picture")},
+		{say(k.Flood, "space", "open to sea / intact"), say(k.MuUp, "+ −", "permeability ±0.05"),
+			say(k.MuSet, "m", "type a permeability"), k.Undo, k.Reset},
+		{say(k.Hand, "h", "hand working on/off"), say(k.WorkUp, "[ ]", "scroll the working"), k.Report,
+			say(k.Palette, "c", "day / night / mono"), say(k.Help, "?", "close this help"),
+			say(k.Quit, "q", "quit (also ctrl+c)")},
 	}
 }

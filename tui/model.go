@@ -91,7 +91,7 @@ type model struct {
 	failure string
 
 	changes map[int]change
-	results map[int]string
+	results map[int][2]string // for the screen, for the file
 	logNext int
 	log     []string // on screen, newest last
 	file    *eventLog
@@ -137,7 +137,7 @@ func newModel(v *engine.Vessel, info *vessels.Info, opts Options) model {
 		damage:  v.Intact(),
 		latest:  new(atomic.Int64),
 		changes: map[int]change{},
-		results: map[int]string{},
+		results: map[int][2]string{},
 		logNext: 1,
 		width:   80,
 		height:  24,
@@ -238,8 +238,16 @@ func (m model) Update(msg tea.Msg) (tea.Model, tea.Cmd) {
 			m.derived = derive(m.v, m.into, m.cur)
 			m.ensureVisible()
 		}
-		line := "start, all intact → " + m.outcome(&a) + " (drafts aft/mid/fwd)"
-		return m, m.addLog(m.now(), line)
+		what := "start, all intact"
+		file := "session start: " + m.vesselName()
+		if m.opts.VesselFile != "" {
+			file += " (" + m.opts.VesselFile + ")"
+		}
+		if m.condition != "" {
+			file += ", " + m.condition
+		}
+		file += ", all intact"
+		return m, m.addLogPair(m.now(), what+" → "+m.outcome(&a, false), file+" → "+m.outcome(&a, true))
 
 	case resultMsg:
 		return m.takeResult(msg)
@@ -524,11 +532,11 @@ func (m model) takeResult(r resultMsg) (tea.Model, tea.Cmd) {
 	if r.seq >= m.logNext {
 		switch {
 		case r.skipped:
-			m.results[r.seq] = "passed over for the next change"
+			m.results[r.seq] = [2]string{"passed over for the next change", "passed over for the next change"}
 		case r.failure != "":
-			m.results[r.seq] = "engine failure: " + r.failure
+			m.results[r.seq] = [2]string{"engine failure: " + r.failure, "engine failure: " + r.failure}
 		default:
-			m.results[r.seq] = m.outcome(&r.a)
+			m.results[r.seq] = [2]string{m.outcome(&r.a, false), m.outcome(&r.a, true)}
 		}
 	}
 	for {
@@ -540,14 +548,15 @@ func (m model) takeResult(r resultMsg) (tea.Model, tea.Cmd) {
 		delete(m.results, m.logNext)
 		delete(m.changes, m.logNext)
 		m.logNext++
-		cmds = append(cmds, m.addLog(ch.at, ch.what+" → "+res))
+		cmds = append(cmds, m.addLogPair(ch.at, ch.what+" → "+res[0], ch.what+" → "+res[1]))
 	}
 	return m, tea.Batch(cmds...)
 }
 
 // outcome is a result in one line for the log: heel and drafts, or why
-// there is no floating position.
-func (m model) outcome(a *engine.Assessment) string {
+// there is no floating position. The long form, for the file, names the
+// drafts.
+func (m model) outcome(a *engine.Assessment, long bool) string {
 	if a.Position == nil {
 		if a.NoEq != nil {
 			return "NO EQUILIBRIUM: she " + a.NoEq.Outcome.String() + " (" + a.NoEq.Reason + ")"
@@ -555,13 +564,20 @@ func (m model) outcome(a *engine.Assessment) string {
 		return "no floating position"
 	}
 	p := a.Position
-	return fmt.Sprintf("heel %s, drafts %s/%s/%s m", heelShort(p.HeelDeg),
+	drafts := "drafts"
+	if long {
+		drafts = "drafts aft/mid/fwd"
+	}
+	return fmt.Sprintf("heel %s, %s %s/%s/%s m", heelShort(p.HeelDeg), drafts,
 		num(p.DraftAftM, 2), num(p.DraftMidM, 2), num(p.DraftFwdM, 2))
 }
 
 // addLog puts a line in the event log on screen and, with a log file, in
 // the file's queue; the Cmd it returns writes and syncs the file.
-func (m *model) addLog(at time.Time, line string) tea.Cmd {
+func (m *model) addLog(at time.Time, line string) tea.Cmd { return m.addLogPair(at, line, line) }
+
+// addLogPair is addLog with a fuller line for the file than for the screen.
+func (m *model) addLogPair(at time.Time, line, fileLine string) tea.Cmd {
 	m.log = append(m.log, at.Format("15:04:05")+" "+line)
 	if len(m.log) > 200 {
 		m.log = m.log[len(m.log)-200:]
@@ -569,7 +585,7 @@ func (m *model) addLog(at time.Time, line string) tea.Cmd {
 	if m.file == nil {
 		return nil
 	}
-	m.file.add(at.Format(time.RFC3339) + "  " + line)
+	m.file.add(at.Format(time.RFC3339) + "  " + fileLine)
 	f := m.file
 	return func() tea.Msg {
 		if err := f.flush(); err != nil {

@@ -16,6 +16,7 @@ import (
 	"github.com/charmbracelet/x/exp/teatest"
 
 	"heelwatch/engine"
+	"heelwatch/vessels"
 )
 
 // TestNumberGuard: no NaN or Inf ever reaches the screen.
@@ -386,3 +387,54 @@ func fmtSscanf(hex string, r, g, b *int) (int, error) {
 }
 
 func fmtSize(s [2]int) string { return fmt.Sprintf("%dx%d", s[0], s[1]) }
+
+// TestHandWorkingShown: on the bundled box barge the hand method applies;
+// its answers on screen are the engine's hand answers, beside the direct
+// ones, and the working scrolls.
+func TestHandWorkingShown(t *testing.T) {
+	v, info, err := vessels.Open("barge")
+	if err != nil {
+		t.Fatal(err)
+	}
+	for _, size := range [][2]int{{100, 30}, {120, 40}} {
+		m := newModel(v, info, Options{})
+		m.now, m.animate = fixedClock(), false
+		m = drive(t, m, tea.WindowSizeMsg{Width: size[0], Height: size[1]}, m.Init())
+		m = press(t, m, "down", "down", "space", "h")
+		a := engine.Assess(v, m.damage)
+		if a.Hand == nil {
+			t.Fatalf("no hand working for the barge: %s", a.HandWhy)
+		}
+		view := m.View()
+		for _, f := range []struct {
+			label        string
+			hand, direct float64
+		}{
+			{"Draft aft", a.Hand.DraftAftM, a.Position.DraftAftM},
+			{"Draft fwd", a.Hand.DraftFwdM, a.Position.DraftFwdM},
+			{"GM", a.Hand.GMM, a.Position.GMM},
+		} {
+			// Only the hand table has three numbers in a row after the label.
+			re := regexp.MustCompile(f.label + `\s+(-?\d+\.\d+)\s+(-?\d+\.\d+)\s+(\d+\.\d+) m`)
+			sub := re.FindStringSubmatch(view)
+			if sub == nil {
+				t.Errorf("%v: no hand row for %s:\n%s", size, f.label, view)
+				continue
+			}
+			if sub[1] != num(f.hand, 2) || sub[2] != num(f.direct, 2) {
+				t.Errorf("%v: %s hand %s direct %s on screen; engine hand %v direct %v", size, f.label, sub[1], sub[2], f.hand, f.direct)
+			}
+		}
+		if !strings.Contains(view, a.Hand.Steps[0].Label) {
+			t.Errorf("%v: the first step of the working is not on screen", size)
+		}
+		m = press(t, m, "]")
+		if m.handScroll == 0 || strings.Contains(m.View(), "steps 1–") {
+			t.Errorf("%v: ] did not scroll the working", size)
+		}
+		m = press(t, m, "[")
+		if m.handScroll != 0 {
+			t.Errorf("%v: [ did not scroll back", size)
+		}
+	}
+}
