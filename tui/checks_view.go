@@ -120,10 +120,24 @@ func (m model) criteriaView(w, h int, withFlags bool) []string {
 	if withFlags {
 		title = "FLAGS AND CRITERIA"
 	}
-	lines := []string{st.Heading.Render(title)}
 	if m.cur == nil {
-		return fit(append(lines, st.Dim.Render("computing…")), w, h)
+		return fit([]string{st.Heading.Render(title), st.Dim.Render("computing…")}, w, h)
 	}
+	body := m.criteriaLines(w, withFlags)
+	if len(body) <= h-1 {
+		return fit(append([]string{st.Heading.Render(title)}, body...), w, h)
+	}
+	// Too long for the room: scrolled with [ and ].
+	first := min(m.textScroll, max(0, len(body)-(h-1)))
+	last := min(len(body), first+h-1)
+	head := st.Heading.Render(title) + st.Dim.Render(fmt.Sprintf(" %d–%d/%d [ ]", first+1, last, len(body)))
+	return fit(append([]string{head}, body[first:last]...), w, h)
+}
+
+// criteriaLines is the body of criteriaView, every line of it.
+func (m model) criteriaLines(w int, withFlags bool) []string {
+	st := m.st
+	var lines []string
 	for _, f := range m.derived.flags {
 		if !withFlags {
 			break
@@ -147,7 +161,7 @@ func (m model) criteriaView(w, h int, withFlags bool) []string {
 		} else {
 			lines = append(lines, st.Dim.Render("criteria: the vessel file names none"))
 		}
-		return fit(lines, w, h)
+		return lines
 	}
 	pass := 0
 	for _, c := range cr {
@@ -175,10 +189,11 @@ func (m model) criteriaView(w, h int, withFlags bool) []string {
 			}
 		}
 		prec, unit := criterionFormat(c.Unit)
+		// The limit is in the requirement's words; the figures follow.
 		lines = append(lines, "     "+st.Dim.Render("found ")+st.Value.Render(num(c.Actual, prec)+unit)+
-			st.Dim.Render(" · limit "+num(c.Required, prec)+unit+" · margin "+signed(c.Margin, prec)))
+			st.Dim.Render(", margin "+signed(c.Margin, prec)))
 	}
-	return fit(lines, w, h)
+	return lines
 }
 
 // criterionFormat gives the decimals and the unit text of a criterion's

@@ -13,7 +13,7 @@ type keyMap struct {
 	Undo, Reset           key.Binding
 	Picture               key.Binding // next picture (narrow screens)
 	Hand                  key.Binding
-	WorkUp, WorkDown      key.Binding // scroll the hand working
+	WorkUp, WorkDown      key.Binding // scroll the hand working, or the flags and criteria
 	Report                key.Binding
 	Palette               key.Binding
 	Help                  key.Binding
@@ -22,27 +22,25 @@ type keyMap struct {
 
 func newKeyMap() keyMap {
 	return keyMap{
-		Move:    key.NewBinding(key.WithKeys("up", "down"), key.WithHelp("↑↓/jk", "move")),
-		Up:      key.NewBinding(key.WithKeys("up", "k"), key.WithHelp("↑/k", "up")),
-		Down:    key.NewBinding(key.WithKeys("down", "j"), key.WithHelp("↓/j", "down")),
-		Top:     key.NewBinding(key.WithKeys("home", "g", "pgup"), key.WithHelp("home/pgup", "first")),
-		Bottom:  key.NewBinding(key.WithKeys("end", "G", "pgdown"), key.WithHelp("end/pgdn", "last")),
-		Flood:   key.NewBinding(key.WithKeys(" ", "enter"), key.WithHelp("space", "open/close")),
-		MuUp:    key.NewBinding(key.WithKeys("+", "="), key.WithHelp("+/−", "μ")),
-		MuDown:  key.NewBinding(key.WithKeys("-", "_"), key.WithHelp("−", "μ −0.05")),
-		MuSet:   key.NewBinding(key.WithKeys("m"), key.WithHelp("m", "type μ")),
-		Undo:    key.NewBinding(key.WithKeys("u", "ctrl+z"), key.WithHelp("u", "undo")),
-		Reset:   key.NewBinding(key.WithKeys("R"), key.WithHelp("R", "all intact")),
-		Picture: key.NewBinding(key.WithKeys("tab", "v"), key.WithHelp("tab", "picture")),
-		Hand:    key.NewBinding(key.WithKeys("h"), key.WithHelp("h", "hand")),
-		WorkUp: key.NewBinding(key.WithKeys("["), key.WithHelp("[", "working up"),
-			key.WithDisabled()),
-		WorkDown: key.NewBinding(key.WithKeys("]"), key.WithHelp("]", "working down"),
-			key.WithDisabled()),
-		Report:  key.NewBinding(key.WithKeys("w"), key.WithHelp("w", "write report")),
-		Palette: key.NewBinding(key.WithKeys("c"), key.WithHelp("c", "day/night/mono")),
-		Help:    key.NewBinding(key.WithKeys("?"), key.WithHelp("?", "keys")),
-		Quit:    key.NewBinding(key.WithKeys("q", "ctrl+c"), key.WithHelp("q", "quit")),
+		Move:     key.NewBinding(key.WithKeys("up", "down"), key.WithHelp("↑↓/jk", "move")),
+		Up:       key.NewBinding(key.WithKeys("up", "k"), key.WithHelp("↑/k", "up")),
+		Down:     key.NewBinding(key.WithKeys("down", "j"), key.WithHelp("↓/j", "down")),
+		Top:      key.NewBinding(key.WithKeys("home", "g", "pgup"), key.WithHelp("home/pgup", "first")),
+		Bottom:   key.NewBinding(key.WithKeys("end", "G", "pgdown"), key.WithHelp("end/pgdn", "last")),
+		Flood:    key.NewBinding(key.WithKeys(" ", "enter"), key.WithHelp("space", "open/close")),
+		MuUp:     key.NewBinding(key.WithKeys("+", "="), key.WithHelp("+/−", "μ")),
+		MuDown:   key.NewBinding(key.WithKeys("-", "_"), key.WithHelp("−", "μ −0.05")),
+		MuSet:    key.NewBinding(key.WithKeys("m"), key.WithHelp("m", "type μ")),
+		Undo:     key.NewBinding(key.WithKeys("u", "ctrl+z"), key.WithHelp("u", "undo")),
+		Reset:    key.NewBinding(key.WithKeys("R"), key.WithHelp("R", "all intact")),
+		Picture:  key.NewBinding(key.WithKeys("tab", "v"), key.WithHelp("tab", "picture")),
+		Hand:     key.NewBinding(key.WithKeys("h"), key.WithHelp("h", "hand")),
+		WorkUp:   key.NewBinding(key.WithKeys("["), key.WithHelp("[", "scroll back")),
+		WorkDown: key.NewBinding(key.WithKeys("]"), key.WithHelp("]", "scroll on")),
+		Report:   key.NewBinding(key.WithKeys("w"), key.WithHelp("w", "write report")),
+		Palette:  key.NewBinding(key.WithKeys("c"), key.WithHelp("c", "day/night/mono")),
+		Help:     key.NewBinding(key.WithKeys("?"), key.WithHelp("?", "keys")),
+		Quit:     key.NewBinding(key.WithKeys("q", "ctrl+c"), key.WithHelp("q", "quit")),
 	}
 }
 
@@ -63,7 +61,7 @@ func (k keyMap) FullHelp() [][]key.Binding {
 		{k.Up, k.Down, say(k.Top, "home", "first"), say(k.Bottom, "end", "last"), say(k.Picture, "tab", "next picture")},
 		{say(k.Flood, "space", "open to sea / intact"), say(k.MuUp, "+ −", "permeability ±0.05"),
 			say(k.MuSet, "m", "type a permeability"), k.Undo, k.Reset},
-		{say(k.Hand, "h", "hand working on/off"), say(k.WorkUp, "[ ]", "scroll the working"), k.Report,
+		{say(k.Hand, "h", "hand working on/off"), say(k.WorkUp, "[ ]", "scroll working/criteria"), k.Report,
 			say(k.Palette, "c", "day / night / mono"), say(k.Help, "?", "close this help"),
 			say(k.Quit, "q", "quit (also ctrl+c)")},
 	}

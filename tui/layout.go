@@ -17,8 +17,8 @@ const (
 // Widths of the fixed columns.
 const (
 	listWidthNarrow = 35
-	listWidthWide   = 38
-	posWidthWide    = 46
+	listWidthWide   = 37
+	posWidthWide    = 44
 )
 
 // layout is the division of the screen, worked out once per size change by

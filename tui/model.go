@@ -103,6 +103,7 @@ type model struct {
 	picture    int
 	showHand   bool
 	handScroll int // the first step of the hand working shown
+	textScroll int // the first line of the flags and criteria shown
 	width      int
 	height     int
 	lay        layout
@@ -302,13 +303,16 @@ func (m model) key(msg tea.KeyMsg) (tea.Model, tea.Cmd) {
 		m.picture = (m.picture + 1) % numPictures
 	case key.Matches(msg, k.Hand):
 		m.showHand = !m.showHand
-		m.keys.WorkUp.SetEnabled(m.showHand)
-		m.keys.WorkDown.SetEnabled(m.showHand)
-	case key.Matches(msg, k.WorkUp):
-		m.handScroll = max(0, m.handScroll-3)
-	case key.Matches(msg, k.WorkDown):
-		if m.cur != nil && m.cur.Hand != nil {
-			m.handScroll = min(m.handScroll+3, max(0, len(m.cur.Hand.Steps)-1))
+	case key.Matches(msg, k.WorkUp), key.Matches(msg, k.WorkDown):
+		step := 3
+		if key.Matches(msg, k.WorkUp) {
+			step = -3
+		}
+		// The hand working while it is shown, else the flags and criteria.
+		if m.showHand && m.cur != nil && m.cur.Hand != nil {
+			m.handScroll = min(max(0, m.handScroll+step), max(0, len(m.cur.Hand.Steps)-1))
+		} else {
+			m.textScroll = min(max(0, m.textScroll+step), 200)
 		}
 	case key.Matches(msg, k.Palette):
 		m.palette = (m.palette + 1) % len(paletteNames)
