@@ -155,6 +155,9 @@ func (m model) criteriaLines(w int, withFlags bool) []string {
 		lines = append(lines, st.Dim.Render("no flags raised"))
 	}
 	cr := m.cur.Criteria
+	if len(cr) == 0 && m.cur.Position == nil {
+		return append(lines, st.Dim.Render("criteria: none without a floating position"))
+	}
 	if len(cr) == 0 {
 		if len(m.v.CriteriaSets) > 0 {
 			lines = append(lines, st.Dim.Render("criteria: not yet available"))

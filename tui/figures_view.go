@@ -208,8 +208,14 @@ func (m model) bannerView(w, h int) []string {
 		what = "THE COMPUTATION FAILED"
 		reason = "engine failure: " + m.failure + " (the figures are blanked; undo the last change)"
 	}
-	bar := st.Banner.Width(w).Align(lipgloss.Center)
-	lines := []string{bar.Render(""), bar.Render(what + " — figures blanked"), bar.Render("")}
+	// Framed in block characters, so that it stands out in every palette
+	// and on a screen without colour.
+	mid := "█  " + what + " — figures blanked  █"
+	lines := []string{
+		st.Banner.Render(strings.Repeat("▄", w)),
+		st.Banner.Width(w).Align(lipgloss.Center).Render(mid),
+		st.Banner.Render(strings.Repeat("▀", w)),
+	}
 	for _, l := range wrap(reason, w) {
 		lines = append(lines, st.Danger.Render(l))
 	}

@@ -185,7 +185,11 @@ func (m model) detailView(w int) []string {
 	sp := m.spaces[i]
 	vol := c.Volume()
 	mu := m.mu(m.damage, i)
-	l1 := st.Value.Render(c.Name) + st.Dim.Render(" · "+sp.use+" · "+num(vol, 0)+" m³")
+	about := " · "
+	if sp.use != "" {
+		about += sp.use + " · "
+	}
+	l1 := st.Value.Render(c.Name) + st.Dim.Render(about+num(vol, 0)+" m³")
 	var l2 string
 	switch word, _ := spaceState(m.damage, i); word {
 	case "OPEN":

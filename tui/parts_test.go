@@ -87,9 +87,10 @@ func TestNumberGuard(t *testing.T) {
 // nonFinite matches what Go prints for NaN and infinities.
 var nonFinite = regexp.MustCompile(`(?i)\bnan\b|[+-]?\binf(inity)?\b`)
 
-// sinkingBarge is a box barge (an invented test case) with one compartment
-// that is the whole hull: opening it takes all her buoyancy.
-func sinkingBarge(t testing.TB) *engine.Vessel {
+// testBarge is a box barge (an invented test case) with one compartment
+// that is the whole hull, so that opening it takes all her buoyancy, and a
+// wing void; vcg sets her centre of gravity.
+func testBarge(t testing.TB, vcg float64) *engine.Vessel {
 	t.Helper()
 	h, err := engine.NewBoxHull(40, 10, 4)
 	if err != nil {
@@ -105,7 +106,7 @@ func sinkingBarge(t testing.TB) *engine.Vessel {
 	}
 	wing.Permeability = 0.95
 	v, err := engine.NewVessel(engine.Vessel{Name: "Test barge", Hull: h,
-		Weights:      []engine.Weight{{Name: "all", MassT: 800, LCGM: 20, VCGM: 2.5}},
+		Weights:      []engine.Weight{{Name: "all", MassT: 800, LCGM: 20, VCGM: vcg}},
 		Compartments: []*engine.Compartment{whole, wing},
 		Openings:     []engine.Opening{{Name: "vent S", X: 20, Y: 4, Z: 4.5}}})
 	if err != nil {
@@ -114,35 +115,56 @@ func sinkingBarge(t testing.TB) *engine.Vessel {
 	return v
 }
 
-// TestSinksShownPlainly: no floating position gives a plain banner, the
-// engine's reason and blanked figures.
-func TestSinksShownPlainly(t *testing.T) {
-	v := sinkingBarge(t)
-	m := newModel(v, nil, Options{})
-	m.now, m.animate = fixedClock(), false
-	m = drive(t, m, tea.WindowSizeMsg{Width: 80, Height: 24}, m.Init())
-	m = press(t, m, "space")
-	a := engine.Assess(v, m.damage)
-	if a.NoEq == nil || a.NoEq.Outcome != engine.Sinks {
-		t.Fatalf("the engine does not sink the test barge: %+v", a.NoEq)
-	}
-	for _, size := range [][2]int{{80, 24}, {120, 40}} {
-		mm, _ := m.Update(tea.WindowSizeMsg{Width: size[0], Height: size[1]})
-		view := mm.(model).View()
-		if !strings.Contains(view, "SHE SINKS") {
-			t.Errorf("%v: no sinking banner:\n%s", size, view)
-		}
-		if !strings.Contains(strings.Join(strings.Fields(view), " "), strings.Join(strings.Fields(a.NoEq.Reason), " ")[:30]) {
-			t.Errorf("%v: the engine's reason is not on screen", size)
-		}
-		if got, _ := regexpFind(view, `Draft aft\s+(\S+)`); got != blank {
-			t.Errorf("%v: draft aft shows %q, want %q", size, got, blank)
-		}
-	}
-	// Undo brings her back.
-	m = press(t, m, "u")
-	if m.cur.Position == nil || strings.Contains(m.View(), "SHE SINKS") {
-		t.Error("undo did not bring back a floating position")
+// TestNoFloatingPosition: she sinks or capsizes; the screen says so
+// plainly, with the engine's reason, and blanks the figures.
+func TestNoFloatingPosition(t *testing.T) {
+	for _, tc := range []struct {
+		name    string
+		vcg     float64
+		keys    []string
+		outcome engine.Outcome
+		banner  string
+	}{
+		// Opening the compartment that is the whole hull: no buoyancy left.
+		{"sinks", 2.5, []string{"space"}, engine.Sinks, "SHE SINKS"},
+		// G far above any metacentre the box can have: no righting lever
+		// at any heel (a closed-form box: KM at most B²/12T + T/2 ≈ 8 m).
+		{"capsizes", 30, nil, engine.Capsizes, "SHE CAPSIZES"},
+	} {
+		t.Run(tc.name, func(t *testing.T) {
+			v := testBarge(t, tc.vcg)
+			m := newModel(v, nil, Options{})
+			m.now, m.animate = fixedClock(), false
+			m = drive(t, m, tea.WindowSizeMsg{Width: 80, Height: 24}, m.Init())
+			m = press(t, m, tc.keys...)
+			a := engine.Assess(v, m.damage)
+			if a.NoEq == nil || a.NoEq.Outcome != tc.outcome {
+				t.Fatalf("the engine does not give %v for the test barge: %+v", tc.outcome, a.NoEq)
+			}
+			for _, size := range [][2]int{{80, 24}, {120, 40}} {
+				mm, _ := m.Update(tea.WindowSizeMsg{Width: size[0], Height: size[1]})
+				view := mm.(model).View()
+				if !strings.Contains(view, tc.banner) {
+					t.Errorf("%v: no %q banner:\n%s", size, tc.banner, view)
+				}
+				if !strings.Contains(strings.Join(strings.Fields(view), " "), strings.Join(strings.Fields(a.NoEq.Reason), " ")[:30]) {
+					t.Errorf("%v: the engine's reason is not on screen", size)
+				}
+				if got, _ := regexpFind(view, `Draft aft\s+(\S+)`); got != blank {
+					t.Errorf("%v: draft aft shows %q, want %q", size, got, blank)
+				}
+				if size[0] == 80 {
+					checkGolden(t, tc.name+"_80x24", view)
+				}
+			}
+			if len(tc.keys) > 0 {
+				// Undo brings her back.
+				m = press(t, m, "u")
+				if m.cur.Position == nil || strings.Contains(m.View(), tc.banner) {
+					t.Error("undo did not bring back a floating position")
+				}
+			}
+		})
 	}
 }
 

@@ -156,7 +156,7 @@ func newStyles(r *lipgloss.Renderer, p palette) Styles {
 	s.Danger = fg(p.danger).Bold(true)
 	s.Pass = fg(p.good)
 	s.Fail = fg(p.danger).Bold(true)
-	s.Banner = fg(p.danger).Bold(true).Reverse(true).Padding(0, 1)
+	s.Banner = fg(p.danger).Bold(true)
 	s.Safety = fg(p.dim).Italic(true)
 	s.Log = fg(p.dim)
 	s.Prompt = fg(p.heading).Bold(true)
