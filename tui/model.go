@@ -458,7 +458,7 @@ func (m model) setMu(mu float64) (tea.Model, tea.Cmd) {
 	old := m.mu(d, m.sel)
 	d[m.sel].Permeability = mu
 	c := m.v.Compartments[m.sel]
-	what := fmt.Sprintf("%s μ %s → %s", c.Name, muText(old), muText(mu))
+	what := fmt.Sprintf("%s μ set %s (was %s)", c.Name, muText(mu), muText(old))
 	if !d[m.sel].Open {
 		what += " (intact: counts when it is opened)"
 	}

@@ -356,7 +356,7 @@ func TestProgram(t *testing.T) {
 	}
 	tm.Send(tea.KeyMsg{Type: tea.KeySpace, Runes: []rune{' '}})
 	tm.Type("+")
-	waitFor("1.00 → heel")
+	waitFor("set 1.00")
 	tm.Type("q")
 	fm := tm.FinalModel(t, teatest.WithFinalTimeout(10*time.Second)).(model)
 	open := 0
