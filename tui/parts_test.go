@@ -460,3 +460,43 @@ func TestHandWorkingShown(t *testing.T) {
 		}
 	}
 }
+
+func TestStartPalette(t *testing.T) {
+	env := func(v string) func(string) string {
+		return func(k string) string {
+			if k == "NO_COLOR" {
+				return v
+			}
+			return ""
+		}
+	}
+	for _, tc := range []struct{ asked, noColor, want string }{
+		{"", "", "day"}, {"night", "", "night"}, {"mono", "", "mono"}, {"bogus", "", "day"},
+		{"night", "1", "mono"}, {"day", "yes", "mono"},
+	} {
+		if got := startPalette(tc.asked, env(tc.noColor)); got != tc.want {
+			t.Errorf("startPalette(%q) with NO_COLOR=%q = %q, want %q", tc.asked, tc.noColor, got, tc.want)
+		}
+	}
+}
+
+// TestNoCompartments: a vessel without compartments still draws and every
+// key is harmless.
+func TestNoCompartments(t *testing.T) {
+	h, err := engine.NewBoxHull(30, 8, 3)
+	if err != nil {
+		t.Fatal(err)
+	}
+	v, err := engine.NewVessel(engine.Vessel{Name: "Bare pontoon", Hull: h,
+		Weights: []engine.Weight{{Name: "all", MassT: 300, LCGM: 15, VCGM: 1.5}}})
+	if err != nil {
+		t.Fatal(err)
+	}
+	m := newModel(v, nil, Options{})
+	m.now, m.animate = fixedClock(), false
+	m = drive(t, m, tea.WindowSizeMsg{Width: 80, Height: 24}, m.Init())
+	m = press(t, m, "down", "up", "space", "+", "-", "m", "esc", "u", "R", "tab", "tab", "tab", "h", "]", "[")
+	if v := m.View(); !strings.Contains(v, "no compartments") || !strings.Contains(v, "FLOATING POSITION") {
+		t.Errorf("bare pontoon:\n%s", v)
+	}
+}

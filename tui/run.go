@@ -38,9 +38,7 @@ func Run(v *engine.Vessel, info *vessels.Info, opts Options) error {
 	if v == nil {
 		return fmt.Errorf("tui: no vessel to show")
 	}
-	if os.Getenv("NO_COLOR") != "" {
-		opts.Palette = "mono"
-	}
+	opts.Palette = startPalette(opts.Palette, os.Getenv)
 	m := newModel(v, info, opts)
 	if opts.LogFile != "" {
 		lg, err := openEventLog(opts.LogFile)
@@ -57,6 +55,20 @@ func Run(v *engine.Vessel, info *vessels.Info, opts Options) error {
 		}
 	}
 	return err
+}
+
+// startPalette is the palette the dashboard opens with: the one asked for,
+// but monochrome whenever NO_COLOR is set to anything (no-color.org).
+func startPalette(asked string, getenv func(string) string) string {
+	if getenv("NO_COLOR") != "" {
+		return "mono"
+	}
+	for _, n := range paletteNames {
+		if n == asked {
+			return n
+		}
+	}
+	return "day"
 }
 
 // writeReport returns the Cmd that writes the Markdown report of the
