@@ -221,7 +221,9 @@ func (m model) Init() tea.Cmd {
 
 // pending reports whether the figures shown are not yet those of the
 // newest change.
-func (m model) pending() bool { return m.base == nil || m.shown != m.seq }
+func (m model) pending() bool {
+	return m.shown != m.seq || (m.base == nil && m.failure == "")
+}
 
 // Update handles one message.
 func (m model) Update(msg tea.Msg) (tea.Model, tea.Cmd) {
@@ -321,6 +323,9 @@ func (m model) key(msg tea.KeyMsg) (tea.Model, tea.Cmd) {
 		if m.pending() {
 			m.wantRep = true
 			return m, nil
+		}
+		if m.cur == nil {
+			return m, m.addLog(m.now(), "report not written: there are no figures to report")
 		}
 		return m, m.writeReport()
 	case n == 0:
