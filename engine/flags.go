@@ -407,7 +407,8 @@ func flagUprightGM(v *Vessel, d Damage, pos *Position) (float64, bool) {
 	if !(pr.vmax > 0) || pr.massT/pr.rho >= pr.vmax {
 		return 0, false
 	}
-	pl, _, err := pr.AtHeel(0, pr.upright())
+	// Start from her own draft and trim, brought upright about the centreline.
+	pl, _, err := pr.AtHeel(0, Plane{A: pos.Plane.A, B: pos.Plane.B})
 	if err != nil {
 		return 0, false
 	}

@@ -28,7 +28,9 @@ func (p Plane) HeelRad() float64 { return math.Atan(p.C) }
 type slab struct {
 	x0, x1 float64
 	p0, dp []Point
-	full   Immersion // the whole slab, waterplane terms zero
+	p1     []Point    // the vertices at x1, p0 + (x1 − x0)·dp
+	full   Immersion  // the whole slab, waterplane terms zero
+	pre    []edgePoly // prefix sums of the edges' shoelace polynomials (waterline_cut.go)
 	zmin   float64
 	zmax   float64
 	ymax   float64 // largest |y| of any vertex
@@ -52,6 +54,8 @@ func newSlab(x0, x1 float64, a, b []Point) slab {
 		}
 	}
 	s.full = s.integrate(Plane{A: math.Inf(1)}, x0, x1)
+	s.pre = edgePrefix(s.p0, s.dp)
+	s.p1 = s.section(x1)
 	return s
 }
 
@@ -100,7 +104,21 @@ func (s *slab) integrate(p Plane, xa, xb float64) Immersion {
 // below returns the slab's immersion below p, split at every x where a
 // vertex crosses the plane so each piece is smooth.
 func (s *slab) below(p Plane) Immersion {
-	// Quick answers for a slab wholly above or below the plane.
+	var sc cutScratch
+	return s.belowWith(p, &sc)
+}
+
+func (s *slab) belowWith(p Plane, sc *cutScratch) Immersion {
+	var im Immersion
+	if s.belowChains(p, &im, sc) {
+		return im
+	}
+	return s.belowClip(p)
+}
+
+// belowClip is below with every piece clipped afresh (clipBelow): for
+// sections beyond the chain method's bounds.
+func (s *slab) belowClip(p Plane) Immersion {
 	n := len(s.p0)
 	dx := s.x1 - s.x0
 	allAbove, allBelow := true, true
@@ -202,6 +220,7 @@ func newSolid(slabs []slab) *Solid {
 // Below returns the integrals of the part of the solid below the plane p.
 func (s *Solid) Below(p Plane) Immersion {
 	var im Immersion
+	var sc cutScratch
 	if s == nil {
 		return im
 	}
@@ -217,7 +236,7 @@ func (s *Solid) Below(p Plane) Immersion {
 		case sl.zmax <= zlo:
 			im.add(sl.full, 1)
 		default:
-			im.add(sl.below(p), 1)
+			im.add(sl.belowWith(p, &sc), 1)
 		}
 	}
 	return im
