@@ -98,11 +98,15 @@ func Flags(v *Vessel, d Damage, pos *Position, noEq *NoEquilibrium, hand *HandWo
 		if noEq == nil {
 			noEq = &NoEquilibrium{NotConverged, "no floating position was computed"}
 		}
+		as := "as loaded"
+		if IsDamaged(d) {
+			as = "with the spaces flooded as set"
+		}
 		switch noEq.Outcome {
 		case Sinks:
-			add(FlagWillSink, Danger, "There is no floating position: with these spaces open she sinks (%s). Only stopping the inflow or shedding weight can keep her afloat.", noEq.Reason)
+			add(FlagWillSink, Danger, "There is no floating position: %s she sinks (%s). Only stopping the inflow or shedding weight can keep her afloat.", as, noEq.Reason)
 		case Capsizes:
-			add(FlagWillCapsize, Danger, "There is no position of rest: with these spaces open she capsizes (%s). Lowering G or stopping the flooding is the only remedy; do not move weight towards the high side.", noEq.Reason)
+			add(FlagWillCapsize, Danger, "There is no position of rest: %s she capsizes (%s). Stopping the flooding and lowering G are the remedies; shift weight across her only once GM is known to be positive.", as, noEq.Reason)
 		default:
 			add(FlagNotSolved, Danger, "heelwatch found no floating position (%s): no figure on screen describes where she floats. Check the damage entered and treat her as in danger.", noEq.Reason)
 		}
@@ -268,10 +272,21 @@ func flagSideOf(y float64) string {
 // the keel (the bottom on the centreline), at the stations. Between
 // stations every hull vertex moves linearly in x, and so does its height
 // above the plane, so the stations hold the extremes.
+//
+// Only stations on the flat of keel count: where the keel is cut up (the
+// forefoot, a transom stern) it lies above the water in any normal
+// condition, and that is no news.
 func flagBottomOut(h *Hull, p Plane) (bilge, keel *Clearance) {
+	low := math.Inf(1)
+	for _, st := range h.stations {
+		low = math.Min(low, st.Offsets[0].Z)
+	}
 	for _, st := range h.stations {
 		o := st.Offsets
 		k := o[0]
+		if k.Z > low+0.01*h.DepthM {
+			continue
+		}
 		if hk := p.Height(st.X, 0, k.Z); hk > 0 && (keel == nil || hk > keel.HeightM) {
 			keel = &Clearance{HeightM: hk, XM: st.X, Side: Starboard}
 		}
