@@ -96,7 +96,8 @@ func clipSection(p []Point, planes []halfPlane) ([]Point, uint64) {
 }
 
 // appendClipped appends the slabs of sl clipped by planes between xa and xb,
-// halving the piece while its two ends clip to different topologies.
+// splitting the piece where its clipped section changes topology (found by
+// bisection) until each piece keeps one.
 func appendClipped(out []slab, sl *slab, planes []halfPlane, xa, xb float64, depth int) []slab {
 	if !(xb-xa > 1e-9) {
 		return out
@@ -120,14 +121,26 @@ func appendClipped(out []slab, sl *slab, planes []halfPlane, xa, xb float64, dep
 		}
 		return out
 	}
-	if depth >= 10 {
+	if depth >= 24 {
 		pm, _ := clipSection(sl.section((xa+xb)/2), planes)
 		if len(pm) >= 3 {
 			out = append(out, newSlab(xa, xb, pm, pm))
 		}
 		return out
 	}
-	xm := (xa + xb) / 2
+	// Find where the topology changes by bisection and split there, so that
+	// each change costs two slabs.
+	lo, hi := xa+eps, xb-eps
+	for i := 0; i < 60 && hi-lo > 1e-9*(xb-xa); i++ {
+		mid := (lo + hi) / 2
+		pm, sm := clipSection(sl.section(mid), planes)
+		if sm == sa && len(pm) == len(pa) {
+			lo = mid
+		} else {
+			hi = mid
+		}
+	}
+	xm := (lo + hi) / 2
 	out = appendClipped(out, sl, planes, xa, xm, depth+1)
 	return appendClipped(out, sl, planes, xm, xb, depth+1)
 }

@@ -322,14 +322,15 @@ func solve2(a [2][2]float64, b [2]float64) ([2]float64, bool) {
 // upright returns the level, upright plane that displaces the weight.
 func (pr *Problem) upright() Plane {
 	target := pr.massT / pr.rho
-	// The effective body is not a Solid; Newton on A with the hull's level
-	// as a start.
-	p, _ := levelForVolume(pr.v.Hull.solid, target, 0, 0)
-	for it := 0; it < 100; it++ {
+	// Newton on A for the effective body, from the hull's own table (the
+	// lost volume moves it only a little). This is a start for the solver,
+	// so 1e-10 of the volume is enough; at most 30 steps.
+	p := Plane{A: pr.v.Hull.levelGuess(target + pr.v.Hull.solid.Volume() - pr.vmax)}
+	for it := 0; it < 30; it++ {
 		s := pr.eval(p, false)
 		e := s.e
 		f := e.V - target
-		if math.Abs(f) <= 1e-13*target || e.AW <= 0 {
+		if math.Abs(f) <= 1e-10*target || e.AW <= 0 {
 			break
 		}
 		p.A -= f / e.AW

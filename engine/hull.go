@@ -26,6 +26,32 @@ type Hull struct {
 
 	solid    *Solid
 	stations []Station // as given (after implying the centreline point)
+
+	// levelA and levelV tabulate the volume below level, upright planes:
+	// a start for the solver's draft, interpolated linearly.
+	levelA, levelV []float64
+}
+
+// levelGuess returns the height of the level, upright plane below which
+// the hull displaces vol, interpolated in the hull's table (exact at the
+// tabulated heights, within a few millimetres between them).
+func (h *Hull) levelGuess(vol float64) float64 {
+	a, v := h.levelA, h.levelV
+	if len(a) == 0 {
+		return 0
+	}
+	if vol <= v[0] {
+		return a[0]
+	}
+	for i := 1; i < len(a); i++ {
+		if vol <= v[i] {
+			if v[i] == v[i-1] {
+				return a[i]
+			}
+			return a[i-1] + (a[i]-a[i-1])*(vol-v[i-1])/(v[i]-v[i-1])
+		}
+	}
+	return a[len(a)-1]
 }
 
 // Solid returns the hull's body.
@@ -109,6 +135,13 @@ func NewSectionHull(length float64, stations []Station) (*Hull, error) {
 	h.solid = newSolid(slabs)
 	if !(h.solid.Volume() > 0) {
 		return nil, errors.New("the hull encloses no volume")
+	}
+	const levels = 48
+	_, _, zmin, zmax := h.solid.Extent()
+	for i := 0; i <= levels; i++ {
+		a := zmin + (zmax-zmin)*float64(i)/levels
+		h.levelA = append(h.levelA, a)
+		h.levelV = append(h.levelV, h.solid.Below(Plane{A: a}).V)
 	}
 	return h, nil
 }

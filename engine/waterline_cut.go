@@ -116,26 +116,6 @@ func (c *cutState) flip(k, n int) {
 	c.toggle(k)
 }
 
-// init sets the cut edges from the vertices' sides.
-func (c *cutState) init(n int) {
-	c.ncut = 0
-	c.ok = true
-	for k := 0; k < n; k++ {
-		j := k + 1
-		if j == n {
-			j = 0
-		}
-		if c.below[k] != c.below[j] {
-			if c.ncut == len(c.cut) {
-				c.ok = false
-				return
-			}
-			c.cut[c.ncut] = k
-			c.ncut++
-		}
-	}
-}
-
 // chains pairs each edge where the section enters the water with the next
 // edge where it leaves, in the polygon's order.
 func (c *cutState) chains(n int, out *[maxChains]chain) (int, bool) {
@@ -201,17 +181,39 @@ func (s *slab) belowChains(p Plane, im *Immersion, sc *cutScratch) bool {
 	roots := sc.roots[:0]
 	h0, h1 := p.A+p.B*s.x0, p.A+p.B*s.x1
 	p0, p1 := s.p0[:n], s.p1[:n]
+	below := st.below[:n]
+	st.ncut, st.ok = 0, true
+	prev := false
 	for k := 0; k < n; k++ {
 		d0 := p0[k].Z - p.C*p0[k].Y - h0
 		d1 := p1[k].Z - p.C*p1[k].Y - h1
 		// The side just forward of x0 (a vertex on the plane there takes
 		// the side it goes to).
-		st.below[k] = d0 < 0 || d0 == 0 && d1 < 0
-		if st.below[k] {
+		b := d0 < 0 || d0 == 0 && d1 < 0
+		below[k] = b
+		if b {
 			st.nin++
 		}
+		if k > 0 && b != prev {
+			// Edge k−1 is cut at x0.
+			if st.ncut == len(st.cut) {
+				st.ok = false
+			} else {
+				st.cut[st.ncut] = k - 1
+				st.ncut++
+			}
+		}
+		prev = b
 		if (d0 < 0 && d1 > 0) || (d0 > 0 && d1 < 0) {
 			roots = append(roots, cutRoot{s.x0 + dx*d0/(d0-d1), k})
+		}
+	}
+	if below[n-1] != below[0] {
+		if st.ncut == len(st.cut) {
+			st.ok = false
+		} else {
+			st.cut[st.ncut] = n - 1
+			st.ncut++
 		}
 	}
 	if len(roots) == 0 {
@@ -228,7 +230,6 @@ func (s *slab) belowChains(p Plane, im *Immersion, sc *cutScratch) bool {
 			roots[j], roots[j-1] = roots[j-1], roots[j]
 		}
 	}
-	st.init(n)
 	if !st.ok {
 		return false
 	}
