@@ -114,6 +114,7 @@ type state struct {
 	f      [3]float64 // residuals
 	j      [3][3]float64
 	heldIm []Immersion // held water at its own level, scaled by μ
+	heldPl []Plane     // the held water's surface in each compartment
 }
 
 // eval computes the residuals of equilibrium and their exact Jacobian with
@@ -140,17 +141,17 @@ func (pr *Problem) eval(p Plane, withJac bool) state {
 	mx, my, mz := l.MassT*l.LCGM, l.MassT*l.TCGM, l.MassT*l.VCGM
 	var dg [3][3]float64 // d(G·W)/d(A,B,C) from held water
 	for _, h := range pr.held {
-		_, im := levelForVolume(h.solid, h.vol/h.mu, p.B, p.C)
+		pin, im := levelForVolume(h.solid, h.vol/h.mu, p.B, p.C)
 		scaled := Immersion{}
 		scaled.add(im, h.mu)
 		s.heldIm = append(s.heldIm, scaled)
+		s.heldPl = append(s.heldPl, pin)
 		m := pr.rho * h.mu
 		mx += m * im.MX
 		my += m * im.MY
 		mz += m * im.MZ
 		if withJac && im.AW > 0 {
 			// The inner level moves to keep the volume: dA_in = −(SX dB + SY dC)/AW.
-			pin, _ := levelForVolume(h.solid, h.vol/h.mu, p.B, p.C)
 			dab, dac := -im.SX/im.AW, -im.SY/im.AW
 			dMX := [3]float64{im.SX, im.IXX, im.IXY}
 			dMY := [3]float64{im.SY, im.IXY, im.IYY}

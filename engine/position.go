@@ -67,8 +67,18 @@ type Position struct {
 	MarginLine Clearance
 	Freeboards []StationFreeboard
 	Openings   []OpeningClearance
+	Held       []HeldWater // floodwater held in compartments not open to the sea
 
 	Iterations int
+}
+
+// HeldWater is the floodwater in a compartment that is not open to the sea
+// (the added-weight method): its volume and its free surface, level with
+// the sea's attitude.
+type HeldWater struct {
+	Index    int     // into Vessel.Compartments
+	VolumeM3 float64 // sea water held, m³
+	Surface  Plane   // its free surface in the ship frame
 }
 
 // position works out everything reported at a solved state.
@@ -140,6 +150,9 @@ func (pr *Problem) position(s state, it int) Position {
 				pos.MarginLine = Clearance{c.ml, x, c.side}
 			}
 		}
+	}
+	for i, pl := range s.heldPl {
+		pos.Held = append(pos.Held, HeldWater{Index: pr.heldIx[i], VolumeM3: pr.held[i].vol, Surface: pl})
 	}
 	for _, o := range pr.v.Openings {
 		pos.Openings = append(pos.Openings, OpeningClearance{o, p.Height(o.X, o.Y, o.Z)})
