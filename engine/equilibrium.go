@@ -487,10 +487,23 @@ func (pr *Problem) atHeel(heelRad float64, guess Plane) (state, error) {
 	guess.C = math.Tan(heelRad)
 	s, _, ok := pr.newton(guess, true)
 	if !ok {
+		// Upright, a search that ran away to a steep trim means no trim
+		// brings her centre of buoyancy under G: she founders by that end.
+		if heelRad == 0 && math.Abs(s.p.B) > foundersSlope {
+			end := "head"
+			if s.p.B < 0 {
+				end = "stern"
+			}
+			return s, &NoEquilibrium{Sinks, fmt.Sprintf("she founders by the %s: no trim short of %.0f° brings her centre of buoyancy under her centre of gravity", end, math.Atan(math.Abs(s.p.B))*180/math.Pi)}
+		}
 		return s, &NoEquilibrium{NotConverged, fmt.Sprintf("no draft and trim found at %.1f° heel", heelRad*180/math.Pi)}
 	}
 	return s, nil
 }
+
+// foundersSlope is the trim slope (tan 20°) past which a failed upright trim
+// search is taken as foundering by the head or stern.
+const foundersSlope = 0.364
 
 // lever returns the horizontal transverse distance from G (with its
 // free-surface virtual rise) to the line of action of buoyancy, positive

@@ -397,21 +397,36 @@ func TestFlagHeavyTrim(t *testing.T) {
 }
 
 // TestFlagNoEquilibrium: she sinks once Δ exceeds ρ(L·B·D − μ·v) of the
-// hull left (practice: reserve buoyancy); capsizes with G three depths up
-// (as in the engine's own outcome test); a solver failure is said plainly.
+// hull left (practice: reserve buoyancy), or when the buoyancy left cannot
+// be brought under G at any trim (she founders by that end); capsizes with
+// G three depths up (as in the engine's own outcome test); a solver failure
+// is said plainly.
+//
+// Foundering, worked by hand: with the aft 25 m of the 60 × 12 × 6 m box
+// open full depth, the body left spans x = 25…60 m and must hold
+// V = 60·12·3 = 2160 m³ of its 2520 m³. Its centre of buoyancy is least
+// when the 360 m³ out of the water sit at the forward end, and even then it
+// lies forward of (2520·42.5 − 360·55)/2160 ≈ 40.4 m, so never under
+// G at 30 m: no trim brings her to rest. With only the aft 5 m open, the
+// upright LCB is 32.5 m and a modest trim by the stern brings it to 30 m.
 func TestFlagNoEquilibrium(t *testing.T) {
 	b := flagBarge{60, 12, 6, 3, 3}
 	for _, c := range []struct {
-		hold   float64
-		raised bool
-	}{{40, true}, {25, false}} {
+		hold     float64
+		raised   bool
+		founders bool
+	}{{40, true, false}, {25, true, true}, {5, false, false}} {
 		// reserve check: hull left 60·12·6 − hold·12·6 against V = 60·12·3
-		if sinks := (60-c.hold)*12*6 < 60*12*3; sinks != c.raised {
+		if sinks := (60-c.hold)*12*6 < 60*12*3; sinks != (c.raised && !c.founders) {
 			t.Fatalf("hold %.0f m: the case does not test what it says", c.hold)
 		}
 		v := b.vessel(t, b.L/2, 0, nil, handSpec{"hold", engine.Box{X0: 0, X1: c.hold, Y0: -6, Y1: 6, Z0: 0, Z1: 6}, 1, nil})
 		fl, pos, _ := flagRun(t, v, handOpen(v, 0))
-		flagExpect(t, "hold", fl, engine.FlagWillSink, c.raised, "she sinks")
+		words := []string{"she sinks"}
+		if c.founders {
+			words = append(words, "founders by the stern")
+		}
+		flagExpect(t, "hold", fl, engine.FlagWillSink, c.raised, words...)
 		if c.raised && (pos != nil || len(fl) != 1) {
 			t.Errorf("sinking: position %v and %d flags, want none and one", pos, len(fl))
 		}
