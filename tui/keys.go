@@ -15,6 +15,9 @@ type keyMap struct {
 	Hand                  key.Binding
 	WorkUp, WorkDown      key.Binding // scroll the hand working, or the flags and criteria
 	Report                key.Binding
+	HoleRun               key.Binding // the hole-and-pumps form, then a flooding run
+	RunPanel              key.Binding // the flooding-run panel shown or hidden
+	RunStage              key.Binding // the run's next stage onto the dashboard
 	Palette               key.Binding
 	Help                  key.Binding
 	Quit                  key.Binding
@@ -38,6 +41,9 @@ func newKeyMap() keyMap {
 		WorkUp:   key.NewBinding(key.WithKeys("["), key.WithHelp("[", "scroll back")),
 		WorkDown: key.NewBinding(key.WithKeys("]"), key.WithHelp("]", "scroll on")),
 		Report:   key.NewBinding(key.WithKeys("w"), key.WithHelp("w", "write report")),
+		HoleRun:  key.NewBinding(key.WithKeys("f"), key.WithHelp("f", "flooding run")),
+		RunPanel: key.NewBinding(key.WithKeys("t"), key.WithHelp("t", "run panel")),
+		RunStage: key.NewBinding(key.WithKeys("s"), key.WithHelp("s", "stage shown"), key.WithDisabled()),
 		Palette:  key.NewBinding(key.WithKeys("c"), key.WithHelp("c", "day/night/mono")),
 		Help:     key.NewBinding(key.WithKeys("?"), key.WithHelp("?", "keys")),
 		Quit:     key.NewBinding(key.WithKeys("q", "ctrl+c"), key.WithHelp("q", "quit")),
@@ -47,7 +53,7 @@ func newKeyMap() keyMap {
 // ShortHelp is the one-line help bar: the keys an officer needs first.
 func (k keyMap) ShortHelp() []key.Binding {
 	// ? and q before the rest, so that a narrow bar cuts the others first.
-	return []key.Binding{k.Move, k.Flood, k.MuUp, k.MuSet, k.Undo, k.Help, k.Quit, k.Picture, k.Hand}
+	return []key.Binding{k.Move, k.Flood, k.MuUp, k.MuSet, k.Undo, k.Help, k.Quit, k.Picture, k.Hand, k.HoleRun, k.RunPanel, k.RunStage}
 }
 
 // FullHelp is the help shown with `?`, in three columns that fit 80
@@ -57,10 +63,15 @@ func (k keyMap) FullHelp() [][]key.Binding {
 		b.SetHelp(keys, desc)
 		return b
 	}
+	// The stage key answers only once a run has stages; the full help
+	// lists it all the same.
+	stage := say(k.RunStage, "s", "a run's stage shown")
+	stage.SetEnabled(true)
 	return [][]key.Binding{
-		{k.Up, k.Down, say(k.Top, "home", "first"), say(k.Bottom, "end", "last"), say(k.Picture, "tab", "next picture")},
+		{k.Up, k.Down, say(k.Top, "home", "first"), say(k.Bottom, "end", "last"), say(k.Picture, "tab", "next picture"),
+			say(k.HoleRun, "f", "hole & pumps"), say(k.RunPanel, "t", "run panel")},
 		{say(k.Flood, "space", "open to sea / intact"), say(k.MuUp, "+ −", "permeability ±0.05"),
-			say(k.MuSet, "m", "type a permeability"), k.Undo, k.Reset},
+			say(k.MuSet, "m", "type a permeability"), k.Undo, k.Reset, stage},
 		{say(k.Hand, "h", "hand working on/off"), say(k.WorkUp, "[ ]", "scroll working/criteria"), k.Report,
 			say(k.Palette, "c", "day / night / mono"), say(k.Help, "?", "close this help"),
 			say(k.Quit, "q", "quit (also ctrl+c)")},

@@ -67,9 +67,12 @@ func (m *model) resize() {
 	default:
 		l.logLines = 2
 	}
-	if m.editing {
+	switch {
+	case m.form.on:
+		l.helpH = formLines
+	case m.editing:
 		l.helpH = 2
-	} else {
+	default:
 		l.helpH = lipgloss.Height(m.help.View(m.keys))
 	}
 	// header, log, safety line, help

@@ -11,6 +11,7 @@ import (
 	"github.com/charmbracelet/bubbles/cursor"
 	"github.com/charmbracelet/bubbles/help"
 	"github.com/charmbracelet/bubbles/key"
+	"github.com/charmbracelet/bubbles/progress"
 	"github.com/charmbracelet/bubbles/spinner"
 	"github.com/charmbracelet/bubbles/textinput"
 	tea "github.com/charmbracelet/bubbletea"
@@ -24,8 +25,12 @@ import (
 type space struct {
 	group string
 	use   string
-	pump  float64 // m³/h, 0 if none
-	hole  bool
+	pump  float64       // m³/h, 0 if none
+	hole  *vessels.Hole // the vessel file's hole into it, nil if none
+	// shellZ is the height of the compartment's lowest point in the shell
+	// at the middle of its length (engine.ShellHole): where a hole the
+	// vessel file does not give goes by default.
+	shellZ float64
 }
 
 // change is one edit of the damage state, waiting for its figures.
@@ -63,6 +68,7 @@ type model struct {
 	into      []int // the compartment each opening leads into (leadsInto)
 	opts      Options
 	condition string // the loading condition's name from the file
+	shipType  string // "cargo" or "passenger", for the criteria of a flooding run
 	now       func() time.Time
 
 	keys     keyMap
@@ -71,8 +77,12 @@ type model struct {
 	spinning bool
 	animate  bool // false in tests: no spinner ticks
 	input    textinput.Model
+	bar      progress.Model // a flooding run's progress, drawn with ViewAs
 	editing  bool
 	inputErr string
+
+	form  floodForm  // the hole-and-pumps form of a flooding run
+	flood floodState // the flooding run and its panel
 
 	rend    *lipgloss.Renderer
 	palette int
@@ -137,6 +147,7 @@ func newModel(v *engine.Vessel, info *vessels.Info, opts Options) model {
 		rend:    lipgloss.DefaultRenderer(),
 		damage:  v.Intact(),
 		latest:  new(atomic.Int64),
+		flood:   floodState{latest: new(atomic.Int64)},
 		changes: map[int]change{},
 		results: map[int][2]string{},
 		logNext: 1,
@@ -145,6 +156,7 @@ func newModel(v *engine.Vessel, info *vessels.Info, opts Options) model {
 	}
 	if info != nil {
 		m.condition = info.Condition
+		m.shipType = info.ShipType
 	}
 	m.into = leadsInto(v)
 	m.derived = derive(v, m.into, nil)
@@ -153,13 +165,17 @@ func newModel(v *engine.Vessel, info *vessels.Info, opts Options) model {
 		s := space{use: c.Use}
 		if info != nil && i < len(info.Compartments) {
 			ci := info.Compartments[i]
-			s.group, s.pump, s.hole = ci.Group, ci.PumpM3h, ci.Hole != nil
+			s.group, s.pump, s.hole = ci.Group, ci.PumpM3h, ci.Hole
 			if ci.Use != "" {
 				s.use = ci.Use
 			}
 		}
 		if s.group == "" {
 			s.group = zoneOf(v, c)
+		}
+		s.shellZ = c.Box.Z0
+		if h, err := engine.ShellHole(v, i, 1, math.NaN(), 0); err == nil {
+			s.shellZ = h.ZM
 		}
 		m.spaces[i] = s
 	}
@@ -204,6 +220,11 @@ func (m *model) setStyles() {
 	m.spin.Style = m.st.Busy
 	m.input.PromptStyle = m.st.Prompt
 	m.input.TextStyle = m.st.Value
+	m.bar = progress.New(progress.WithSolidFill(m.st.BarColor), progress.WithColorProfile(m.rend.ColorProfile()))
+	m.bar.EmptyColor = ""
+	for k := range m.form.fields {
+		m.form.fields[k].PromptStyle, m.form.fields[k].TextStyle = m.st.Prompt, m.st.Value
+	}
 }
 
 // Init computes the intact condition, the reference for every change.
@@ -275,8 +296,17 @@ func (m model) Update(msg tea.Msg) (tea.Model, tea.Cmd) {
 		m.spin, cmd = m.spin.Update(msg)
 		return m, cmd
 
+	case floodStepMsg:
+		return m.takeFloodStep(msg)
+
+	case floodDoneMsg:
+		return m.takeFloodReport(msg)
+
 	case tea.KeyMsg:
-		if m.editing {
+		switch {
+		case m.form.on:
+			return m.formKey(msg)
+		case m.editing:
 			return m.editKey(msg)
 		}
 		return m.key(msg)
@@ -328,8 +358,18 @@ func (m model) key(msg tea.KeyMsg) (tea.Model, tea.Cmd) {
 			return m, m.addLog(m.now(), "report not written: there are no figures to report")
 		}
 		return m, m.writeReport()
+	case key.Matches(msg, k.RunPanel):
+		if m.flood.show {
+			m.flood.show = false
+			return m, m.stopFlood()
+		}
+		m.flood.show = true
 	case n == 0:
 		return m, nil
+	case key.Matches(msg, k.HoleRun):
+		return m.openForm()
+	case key.Matches(msg, k.RunStage):
+		return m.applyStage()
 	case key.Matches(msg, k.Flood):
 		d := cloneDamage(m.damage)
 		c := m.v.Compartments[m.sel]

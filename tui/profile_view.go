@@ -92,10 +92,23 @@ func (m model) profileView(w, h int) []string {
 	c.window(-0.03*L, 1.03*L, zlo-dz, zhi+dz)
 
 	// Open compartments: shade the part of each box (cut at the deck) below
-	// the water at the middle of its breadth.
+	// the water at the middle of its breadth; partly flooded ones below the
+	// free surface of the water they hold.
 	for i, comp := range m.v.Compartments {
-		if p == nil || i >= len(m.damage) || !m.damage[i].Open {
-			continue
+		if p == nil {
+			break
+		}
+		surface := p
+		if i >= len(m.damage) || !m.damage[i].Open {
+			surface = nil
+			for k := range m.cur.Position.Held {
+				if hw := &m.cur.Position.Held[k]; hw.Index == i && hw.VolumeM3 > 0 {
+					surface = &hw.Surface
+				}
+			}
+			if surface == nil {
+				continue
+			}
 		}
 		b := comp.Box
 		yc := (math.Max(b.Y0, -hull.BreadthM/2) + math.Min(b.Y1, hull.BreadthM/2)) / 2
@@ -106,7 +119,7 @@ func (m model) profileView(w, h int) []string {
 			}
 			_, deck := deckAt(hull, x)
 			top := math.Min(b.Z1, deck)
-			wl := p.Z(x, yc)
+			wl := surface.Z(x, yc)
 			for cy := 0; cy < c.h; cy++ {
 				z := c.worldY(cy)
 				if z >= b.Z0 && z <= top && z < wl {

@@ -95,8 +95,9 @@ func (m model) sectionX() float64 {
 
 // sectionView draws the transverse section at sectionX, looking forward
 // (port on the left): the hull, the compartments there (the selected one
-// marked), the heeled waterline dashed, and the flooded spaces shaded below
-// it. Scales: height above the baseline and distance from the centreline,
+// marked), the heeled waterline dashed, the spaces open to the sea shaded
+// below it and a partly flooded space shaded below the free surface of its
+// water (engine.Position.Held). Scales: height above the baseline and distance from the centreline,
 // in metres, equal on both axes.
 func (m model) sectionView(w, h int) []string {
 	st := m.st
@@ -132,7 +133,8 @@ func (m model) sectionView(w, h int) []string {
 	c.windowStretched(-half*1.08, half*1.08, zlo-pad, zhi+pad, 2)
 
 	// Flooded spaces: cells whose centre is inside an open compartment's
-	// section and below the water.
+	// section and below the sea, or inside a partly flooded one's and below
+	// the free surface of the water it holds.
 	for i, comp := range m.v.Compartments {
 		b := comp.Box
 		if x < b.X0 || x > b.X1 {
@@ -142,13 +144,35 @@ func (m model) sectionView(w, h int) []string {
 		if len(ys) < 3 {
 			continue
 		}
-		if p != nil && i < len(m.damage) && m.damage[i].Open {
+		var surface *engine.Plane
+		switch {
+		case p != nil && i < len(m.damage) && m.damage[i].Open:
+			surface = p
+		case p != nil:
+			for k := range m.cur.Position.Held {
+				if hw := &m.cur.Position.Held[k]; hw.Index == i && hw.VolumeM3 > 0 {
+					surface = &hw.Surface
+				}
+			}
+		}
+		if surface != nil {
 			for cy := 0; cy < c.h; cy++ {
 				wz := c.worldY(cy)
 				for cx := 0; cx < c.w; cx++ {
 					wy := c.worldX(cx)
-					if wz < p.Z(x, wy) && pointInPolygon(ys, zs, wy, wz) {
+					if wz < surface.Z(x, wy) && pointInPolygon(ys, zs, wy, wz) {
 						c.fillCell(cx, cy, floodShade, inkFlood)
+					}
+				}
+			}
+			if surface != p {
+				// The free surface inside, in dots, so that a shallow layer
+				// shows even where no cell's centre is under it.
+				for px := 0; px < 2*c.w; px++ {
+					wy := c.x0 + (float64(px)+0.5)/float64(2*c.w)*(c.x1-c.x0)
+					wz := surface.Z(x, wy)
+					if pointInPolygon(ys, zs, wy, wz) {
+						c.dot(px, int(math.Floor(c.dotY(wz))), inkWater)
 					}
 				}
 			}

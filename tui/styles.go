@@ -113,6 +113,9 @@ type Styles struct {
 	Prompt   lipgloss.Style
 	Error    lipgloss.Style
 	Busy     lipgloss.Style // the computing mark
+	// BarColor is the fill of a flooding run's progress bar, a hex colour
+	// for bubbles/progress ("" in the monochrome palette: the terminal's own).
+	BarColor string
 
 	// Pictures.
 	Hull       lipgloss.Style
@@ -162,6 +165,7 @@ func newStyles(r *lipgloss.Renderer, p palette) Styles {
 	s.Prompt = fg(p.heading).Bold(true)
 	s.Error = fg(p.danger).Bold(true)
 	s.Busy = fg(p.caution).Bold(true)
+	s.BarColor = hexOf(r, p.water)
 
 	s.Hull = fg(p.hull)
 	s.Bulkhead = fg(p.dim)
@@ -193,4 +197,19 @@ func newStyles(r *lipgloss.Renderer, p palette) Styles {
 		FullSeparator:  fg(p.dim),
 	}
 	return s
+}
+
+// hexOf is the hex string of a palette colour as the renderer would show
+// it ("" for the terminal's own colour).
+func hexOf(r *lipgloss.Renderer, c lipgloss.TerminalColor) string {
+	switch c := c.(type) {
+	case lipgloss.Color:
+		return string(c)
+	case lipgloss.AdaptiveColor:
+		if r.HasDarkBackground() {
+			return c.Dark
+		}
+		return c.Light
+	}
+	return ""
 }

@@ -92,6 +92,9 @@ func (m model) narrowBody() []string {
 	l := m.lay
 	sep := m.st.Dim.Render("│")
 	list := m.listView(l.listW, l.bodyH)
+	if m.flood.show {
+		return besides(sep, fit(list, l.listW, l.bodyH), m.floodPanel(l.rightW, l.bodyH))
+	}
 	right := fit(m.figuresView(min(l.rightW, maxFigWidth)), l.rightW, figLines)
 	if m.noPosition() {
 		right = append(right, m.bannerView(l.rightW, l.flagH+l.sheetH)...)
@@ -154,6 +157,8 @@ func (m model) wideBody() []string {
 	rule := m.st.Dim.Render(strings.Repeat("─", m.width))
 	var pics []string
 	switch {
+	case m.flood.show:
+		pics = m.floodRow(m.width, l.picH)
 	case m.noPosition():
 		pics = m.bannerView(m.width, l.picH)
 	case m.showHand && m.cur != nil && m.cur.Hand != nil:
@@ -182,6 +187,9 @@ func (m model) logView(w, n int) []string {
 // footView is the help bar, or the permeability prompt while one is typed.
 func (m model) footView() []string {
 	st := m.st
+	if m.form.on {
+		return m.formView()
+	}
 	if m.editing {
 		name := ""
 		if len(m.v.Compartments) > 0 {

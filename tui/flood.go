@@ -1,0 +1,327 @@
+package tui
+
+import (
+	"fmt"
+	"math"
+	"sync/atomic"
+
+	tea "github.com/charmbracelet/bubbletea"
+
+	"heelwatch/engine"
+	"heelwatch/vessels"
+)
+
+// This file runs a flooding run (engine.FloodRun) for the dashboard: one
+// compartment filling through a hole against its pumps, step by step in
+// Cmds, with the rest of the dashboard's damage state as its base.
+//
+// The run is not safe for concurrent use, so it is only ever held by one
+// Cmd at a time: each Cmd takes one step and hands the run back in its
+// message, and Update (which never calls the run) issues the next Cmd with
+// it. Every request gets a sequence number; a message whose number is not
+// the newest is dropped and its run abandoned, so a newer request, or
+// hiding the panel, stops an older run at its next step.
+
+// floodRequest is what the form asked for: the compartment, its hole and
+// pumps, and the base damage state.
+type floodRequest struct {
+	ci      int
+	areaM2  float64
+	zM      float64
+	cd      float64
+	pumpM3h float64
+	// file is the vessel file's hole, used for its position when the
+	// height asked is the file's own; otherwise the hole goes in the shell
+	// (engine.ShellHole).
+	file *vessels.Hole
+	// base is the dashboard's damage state when the run was asked for,
+	// with the flooded compartment not open (its permeability and any water
+	// already held kept: that water is in at time zero).
+	base    engine.Damage
+	wasOpen bool // it was open to the sea on the dashboard (the run starts it dry)
+}
+
+// useFile reports whether the hole is the vessel file's, at its position.
+func (q floodRequest) useFile() bool {
+	return q.file != nil && math.Abs(q.zM-q.file.Z) < 0.005
+}
+
+// hole returns the engine's hole for the request.
+func (q floodRequest) hole(v *engine.Vessel) (engine.Hole, error) {
+	if q.useFile() {
+		return engine.Hole{AreaM2: q.areaM2, XM: q.file.X, YM: q.file.Y, ZM: q.file.Z, Cd: q.cd}, nil
+	}
+	return engine.ShellHole(v, q.ci, q.areaM2, q.zM, q.cd)
+}
+
+// floodCase is the engine's case for the request.
+func (m model) floodCase(q floodRequest) engine.FloodCase {
+	c := engine.FloodCase{Vessel: m.v, Base: cloneDamage(q.base), Compartment: q.ci,
+		Criteria: engine.FloodCriteria(m.shipType)}
+	if q.pumpM3h > 0 {
+		c.Pumps = []engine.Pump{{Name: "pumps", CapacityM3h: q.pumpM3h}}
+	}
+	return c
+}
+
+// floodPoint is one moment of a run in progress, for the plot.
+type floodPoint struct{ timeS, waterM3 float64 }
+
+// floodState is the flooding run and its panel.
+type floodState struct {
+	show      bool // the panel is on screen
+	seq       int  // the newest request's number
+	latest    *atomic.Int64
+	running   bool // steps are being taken
+	finishing bool // the steps are done; the report is being worked out
+	req       floodRequest
+	hole      engine.Hole // as used, once the run has started
+	prog      engine.FloodProgress
+	track     []floodPoint // the progress so far
+	rep       *engine.FloodReport
+	err       string
+	stage     int // the stage the stage key shows next
+}
+
+// Messages of a flooding run.
+type (
+	// floodStepMsg is a run after one more step (or after its start).
+	floodStepMsg struct {
+		seq     int
+		run     *engine.FloodRun // handed on to the next Cmd, never called in Update
+		prog    engine.FloodProgress
+		hole    engine.Hole
+		started bool // the run's first message
+		more    bool // the run has not ended
+		stale   bool // a newer request was made before this step: nothing done
+		err     string
+	}
+	// floodDoneMsg is a run's report.
+	floodDoneMsg struct {
+		seq   int
+		rep   engine.FloodReport
+		stale bool
+		err   string
+	}
+)
+
+// floodStartCmd places the hole and sets the run up (the start and the
+// lost-buoyancy solution are solved here).
+func floodStartCmd(v *engine.Vessel, c engine.FloodCase, q floodRequest, seq int, latest *atomic.Int64) tea.Cmd {
+	return func() (msg tea.Msg) {
+		if latest.Load() != int64(seq) {
+			return floodStepMsg{seq: seq, stale: true}
+		}
+		defer func() {
+			if r := recover(); r != nil {
+				msg = floodStepMsg{seq: seq, err: "engine failure: " + fmt.Sprint(r)}
+			}
+		}()
+		h, err := q.hole(v)
+		if err != nil {
+			return floodStepMsg{seq: seq, err: err.Error()}
+		}
+		c.Hole = h
+		r, err := engine.NewFloodRun(c)
+		if err != nil {
+			return floodStepMsg{seq: seq, err: err.Error()}
+		}
+		p := r.Progress()
+		return floodStepMsg{seq: seq, run: r, prog: p, hole: h, started: true, more: !p.Done}
+	}
+}
+
+// floodStepCmd takes one step of run r.
+func floodStepCmd(r *engine.FloodRun, seq int, latest *atomic.Int64) tea.Cmd {
+	return func() (msg tea.Msg) {
+		if latest.Load() != int64(seq) {
+			return floodStepMsg{seq: seq, stale: true}
+		}
+		defer func() {
+			if x := recover(); x != nil {
+				msg = floodStepMsg{seq: seq, err: "engine failure: " + fmt.Sprint(x)}
+			}
+		}()
+		more := r.Step()
+		return floodStepMsg{seq: seq, run: r, prog: r.Progress(), more: more}
+	}
+}
+
+// floodReportCmd works out the report of an ended run: its table and its
+// stages (some tens of solves, with their criteria).
+func floodReportCmd(r *engine.FloodRun, seq int, latest *atomic.Int64) tea.Cmd {
+	return func() (msg tea.Msg) {
+		if latest.Load() != int64(seq) {
+			return floodDoneMsg{seq: seq, stale: true}
+		}
+		defer func() {
+			if x := recover(); x != nil {
+				msg = floodDoneMsg{seq: seq, err: "engine failure: " + fmt.Sprint(x)}
+			}
+		}()
+		return floodDoneMsg{seq: seq, rep: r.Report()}
+	}
+}
+
+// startFlood starts a run for q, cancelling any older one.
+func (m model) startFlood(q floodRequest) (tea.Model, tea.Cmd) {
+	f := &m.flood
+	f.seq++
+	f.latest.Store(int64(f.seq))
+	f.show, f.running, f.finishing = true, true, false
+	f.req, f.hole, f.prog, f.track, f.rep, f.err, f.stage = q, engine.Hole{}, engine.FloodProgress{}, nil, nil, "", 0
+	m.keys.RunStage.SetEnabled(false)
+	name := m.v.Compartments[q.ci].Name
+	what := fmt.Sprintf("flooding run: %s through %s m² at z %s m, C_d %s, pumps %s m³/h",
+		name, num(q.areaM2, 3), num(q.zM, 2), num(q.cd, 2), num(q.pumpM3h, 0))
+	if q.wasOpen {
+		what += " (open on the dashboard: the run starts it dry)"
+	} else if w := q.base[q.ci].WaterM3; w > 0 {
+		what += fmt.Sprintf(" (%s m³ in at the start)", num(w, 1))
+	}
+	log := m.addLog(m.now(), what)
+	return m, tea.Batch(floodStartCmd(m.v, m.floodCase(q), q, f.seq, f.latest), log)
+}
+
+// stopFlood abandons a run in progress; a finished run's report stays.
+func (m *model) stopFlood() tea.Cmd {
+	f := &m.flood
+	if !f.running {
+		return nil
+	}
+	f.seq++
+	f.latest.Store(int64(f.seq))
+	f.running, f.finishing = false, false
+	return m.addLog(m.now(), "flooding run of "+m.v.Compartments[f.req.ci].Name+" stopped before its end")
+}
+
+// takeFloodStep handles a step's message: the newest run's progress is
+// kept and its next step issued; any other is dropped.
+func (m model) takeFloodStep(msg floodStepMsg) (tea.Model, tea.Cmd) {
+	f := &m.flood
+	if msg.stale || msg.seq != f.seq || !f.running {
+		return m, nil
+	}
+	if msg.err != "" {
+		f.running, f.finishing, f.err = false, false, msg.err
+		return m, m.addLog(m.now(), "flooding run of "+m.v.Compartments[f.req.ci].Name+" could not go on: "+msg.err)
+	}
+	if msg.started {
+		f.hole = msg.hole
+	}
+	f.prog = msg.prog
+	if n := len(f.track); n == 0 || f.track[n-1].timeS < msg.prog.TimeS || f.track[n-1].waterM3 != msg.prog.WaterM3 {
+		f.track = append(f.track, floodPoint{msg.prog.TimeS, msg.prog.WaterM3})
+	}
+	if msg.more {
+		return m, floodStepCmd(msg.run, f.seq, f.latest)
+	}
+	f.finishing = true
+	return m, floodReportCmd(msg.run, f.seq, f.latest)
+}
+
+// takeFloodReport handles a finished run's report.
+func (m model) takeFloodReport(msg floodDoneMsg) (tea.Model, tea.Cmd) {
+	f := &m.flood
+	if msg.stale || msg.seq != f.seq || !f.running {
+		return m, nil
+	}
+	f.running, f.finishing = false, false
+	name := m.v.Compartments[f.req.ci].Name
+	if msg.err != "" {
+		f.err = msg.err
+		return m, m.addLog(m.now(), "flooding run of "+name+" failed: "+msg.err)
+	}
+	rep := msg.rep
+	f.rep = &rep
+	f.hole = rep.Hole
+	m.keys.RunStage.SetEnabled(len(rep.Stages) > 0)
+	return m, m.addLog(m.now(), "flooding run of "+name+" → "+outcomeText(rep))
+}
+
+// applyStage puts the run's next stage on the dashboard: the flooded
+// compartment holding that stage's water (added weight), the rest as the
+// dashboard has it. It is an ordinary change, undone by undo.
+func (m model) applyStage() (tea.Model, tea.Cmd) {
+	f := &m.flood
+	if f.rep == nil || len(f.rep.Stages) == 0 {
+		return m, nil
+	}
+	n := len(f.rep.Stages)
+	var st engine.FloodStage
+	found := false
+	for k := 0; k < n; k++ {
+		st = f.rep.Stages[(f.stage+k)%n]
+		if st.WaterM3 > 0 {
+			f.stage = (f.stage + k + 1) % n
+			found = true
+			break
+		}
+	}
+	if !found {
+		return m, m.addLog(m.now(), "the run's stages hold no water: nothing to show")
+	}
+	ci := f.req.ci
+	d := cloneDamage(m.damage)
+	d[ci] = engine.SpaceState{Permeability: f.req.base[ci].Permeability, WaterM3: st.WaterM3}
+	what := fmt.Sprintf("%s partly flooded: %s stage of the flooding run, %s m³ held",
+		m.v.Compartments[ci].Name, stageName(st.Fraction), num(st.WaterM3, 1))
+	return m.apply(d, what)
+}
+
+// stageName names a stage: "25 %", …, "end" for the final one.
+func stageName(f float64) string {
+	if f >= 1 {
+		return "end"
+	}
+	return num(100*f, 0) + " %"
+}
+
+// baseChanged reports whether the dashboard's damage state d differs from
+// the run's base in any compartment but the flooded one (whose water a
+// stage may have set).
+func (f floodState) baseChanged(d engine.Damage) bool {
+	b := f.req.base
+	if len(b) != len(d) {
+		return true
+	}
+	for i := range d {
+		if i == f.req.ci {
+			if d[i].Permeability != b[i].Permeability {
+				return true
+			}
+			continue
+		}
+		if d[i] != b[i] {
+			return true
+		}
+	}
+	return false
+}
+
+// outcomeText is a run's end in a sentence, its first words in capitals,
+// for the panel and the log.
+func outcomeText(r engine.FloodReport) string {
+	at := engine.FormatDuration(r.EndS)
+	in := num(r.FinalWaterM3, 0) + " m³ in"
+	switch r.End {
+	case engine.FloodEqualised:
+		return fmt.Sprintf("LEVELS EQUAL after %s, %s", engine.FormatDuration(r.EqualiseS), in)
+	case engine.FloodPumpsHold:
+		return fmt.Sprintf("PUMPS HOLD the level %s m below the sea from %s: sounding %s m, %s",
+			num(r.SteadyHeadM, 3), at, num(r.Final.SoundingM, 2), in)
+	case engine.FloodKeptDry:
+		return "PUMPS KEEP IT DRY: they take all that the hole lets in"
+	case engine.FloodNoInflow:
+		return "NOTHING COMES IN: the hole is clear of the water"
+	case engine.FloodFull:
+		return fmt.Sprintf("COMPARTMENT FULL after %s, %s, its top below the sea", at, in)
+	case engine.FloodSinks:
+		return fmt.Sprintf("SHE SINKS after %s, with %s: %s", at, in, r.EndReason)
+	case engine.FloodCapsizes:
+		return fmt.Sprintf("SHE CAPSIZES after %s, with %s: %s", at, in, r.EndReason)
+	case engine.FloodTimeLimit:
+		return fmt.Sprintf("STILL FILLING at the time limit (%s), %s", at, in)
+	}
+	return "NO ANSWER: " + r.EndReason
+}

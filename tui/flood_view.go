@@ -1,0 +1,491 @@
+package tui
+
+import (
+	"fmt"
+	"math"
+	"strings"
+
+	"heelwatch/engine"
+)
+
+// floodPanel is the flooding run on a narrow screen, in w × h: the times
+// and the stages on top, the plot against time under them when it has
+// room.
+func (m model) floodPanel(w, h int) []string {
+	const minPlot = 7
+	text := m.floodText(w, h, h-minPlot)
+	if len(text)+minPlot > h {
+		return fit(m.floodText(w, h, h), w, h)
+	}
+	out := append(text, m.floodPlot(w, h-len(text))...)
+	return fit(out, w, h)
+}
+
+// floodText is the panel's text in width w: what is flooding and through
+// what, then the progress while the run computes, or its outcome, the
+// times to each event and the intermediate stages. It takes at most h
+// lines, and tries to keep within want by shortening the list of events.
+func (m model) floodText(w, h, want int) []string {
+	st := m.st
+	f := m.flood
+	head := []string{st.Heading.Render(clip("FLOODING RUN", w))}
+	if f.seq == 0 {
+		name := ""
+		if len(m.v.Compartments) > 0 {
+			name = " (" + m.v.Compartments[m.sel].Name + ")"
+		}
+		for _, l := range wrap("No run yet. f sets a hole and pumps for the selected compartment"+name+
+			" and starts one: how long until the levels meet, what goes under on the way, whether the pumps hold. t hides this panel.", w) {
+			head = append(head, st.Dim.Render(l))
+		}
+		return fit(head, w, min(h, len(head)))
+	}
+	name := m.v.Compartments[f.req.ci].Name
+	head[0] = st.Heading.Render(titleFit(w, "FLOODING RUN", name))
+	hole := f.hole
+	if hole.AreaM2 == 0 {
+		hole = engine.Hole{AreaM2: f.req.areaM2, ZM: f.req.zM, Cd: f.req.cd}
+	}
+	pumps := "no pumps"
+	if f.req.pumpM3h > 0 {
+		pumps = "pumps " + num(f.req.pumpM3h, 0) + " m³/h"
+	}
+	for _, l := range joinWrap(w, " · ", fmt.Sprintf("hole %s m² at z %s m, C_d %s", short(hole.AreaM2, 4), num(hole.ZM, 2), num(hole.Cd, 2)), pumps) {
+		head = append(head, st.Dim.Render(l))
+	}
+
+	switch {
+	case f.err != "":
+		lines := head
+		for _, l := range wrap("The run could not go on: "+f.err, w) {
+			lines = append(lines, st.Error.Render(l))
+		}
+		lines = append(lines, st.Dim.Render(clip("f sets the hole again", w)))
+		return fit(lines, w, min(h, len(lines)))
+	case f.running:
+		return fit(append(head, m.floodProgress(w)...), w, min(h, len(head)+4))
+	case f.rep == nil:
+		lines := append(head, st.Dim.Render(clip("stopped before its end · f runs it again", w)))
+		return fit(lines, w, min(h, len(lines)))
+	}
+	r := f.rep
+	verdict := st.Value
+	switch r.End {
+	case engine.FloodSinks, engine.FloodCapsizes, engine.FloodFailed:
+		verdict = st.Danger
+	case engine.FloodTimeLimit, engine.FloodFull:
+		verdict = st.Caution
+	}
+	out := wrap(outcomeText(*r), w)
+	if len(out) > 3 {
+		out = append(out[:2], clip(strings.Join(out[2:], " "), w))
+	}
+	for _, l := range out {
+		head = append(head, verdict.Render(l))
+	}
+	if f.baseChanged(m.damage) {
+		head = append(head, st.Caution.Render(clip("! the dashboard has changed since: f runs it again", w)))
+	}
+
+	events := m.floodEvents(w)
+	stages := m.floodStages(w)
+	var clear []string
+	if c := clearLine(r); c != "" {
+		clear = []string{st.Dim.Render(clip(c, w))}
+	}
+	fixed := len(head) + len(stages)
+	if fixed+len(events)+len(clear) > want {
+		clear = nil
+	}
+	if room := h - fixed; len(events) > room {
+		room = max(1, room)
+		more := len(events) - room + 1
+		events = append(events[:room-1:room-1], st.Dim.Render(clip(fmt.Sprintf("… %d more events to the end", more), w)))
+	}
+	lines := append(head, events...)
+	lines = append(lines, clear...)
+	lines = append(lines, stages...)
+	return fit(lines, w, min(h, len(lines)))
+}
+
+// floodProgress is the progress bar and the figures of a run in progress.
+func (m model) floodProgress(w int) []string {
+	st := m.st
+	p := m.flood.prog
+	bar := m.bar
+	bar.Width = max(10, w-10)
+	lines := []string{st.Busy.Render("computing ") + bar.ViewAs(p.Fraction())}
+	target := ""
+	if p.TargetM3 > 0 {
+		target = " of " + num(p.TargetM3, 0)
+	}
+	lines = append(lines,
+		st.Text.Render(clip("flooding time "+engine.FormatDuration(p.TimeS), w)),
+		st.Text.Render(clip(fmt.Sprintf("water %s%s m³ · head %s m · step %d", num(p.WaterM3, 1), target, num(p.HeadM, 2), p.Steps), w)))
+	if m.flood.finishing {
+		lines = append(lines, st.Dim.Render(clip("working out the table and the stages…", w)))
+	}
+	return lines
+}
+
+// joinWrap joins parts with sep while they fit in w, starting a new line
+// where the next part would not.
+func joinWrap(w int, sep string, parts ...string) []string {
+	var out []string
+	line := ""
+	for _, p := range parts {
+		switch {
+		case line == "":
+			line = p
+		case len([]rune(line+sep+p)) <= w:
+			line += sep + p
+		default:
+			out = append(out, clip(line, w))
+			line = p
+		}
+	}
+	return append(out, clip(line, w))
+}
+
+// eventMark is the letter an event has in the list and on the plot.
+func eventMark(k engine.FloodEventKind) string {
+	switch k {
+	case engine.DeckEdgeReached:
+		return "d"
+	case engine.MarginLineReached:
+		return "m"
+	case engine.OpeningReached:
+		return "o"
+	case engine.CriterionFails:
+		return "c"
+	}
+	return "»"
+}
+
+// eventWords says what happened at an event, briefly.
+func eventWords(e engine.FloodEvent, r *engine.FloodReport) string {
+	switch e.Kind {
+	case engine.DeckEdgeReached:
+		return "deck edge under water"
+	case engine.MarginLineReached:
+		return "margin line under water"
+	case engine.OpeningReached:
+		return e.Name + " under water"
+	case engine.CriterionFails:
+		return e.Name + " fails"
+	}
+	switch r.End {
+	case engine.FloodEqualised:
+		return "levels equal"
+	case engine.FloodPumpsHold:
+		return "pumps hold"
+	case engine.FloodKeptDry:
+		return "pumps keep it dry"
+	case engine.FloodNoInflow:
+		return "nothing comes in"
+	case engine.FloodFull:
+		return "compartment full"
+	case engine.FloodSinks:
+		return "SHE SINKS"
+	case engine.FloodCapsizes:
+		return "SHE CAPSIZES"
+	case engine.FloodTimeLimit:
+		return "time limit, still filling"
+	}
+	return "no answer"
+}
+
+// floodEvents lists the run's events in time order, the end last: mark,
+// time from the start, water in, what happened.
+func (m model) floodEvents(w int) []string {
+	st := m.st
+	r := m.flood.rep
+	var lines []string
+	for _, e := range r.Events {
+		t := e.TimeS
+		if e.Kind == engine.RunEnds && r.End == engine.FloodEqualised {
+			t = r.EqualiseS
+		}
+		s := st.Text
+		switch {
+		case e.Kind == engine.RunEnds && (r.End == engine.FloodSinks || r.End == engine.FloodCapsizes):
+			s = st.Danger
+		case e.Kind == engine.OpeningReached || e.Kind == engine.CriterionFails:
+			s = st.Caution
+		case e.Kind == engine.RunEnds:
+			s = st.Value
+		}
+		text := eventMark(e.Kind) + " " + padLeft(engine.FormatDuration(t), 11) + " " + padLeft(num(e.WaterM3, 0), 4) + " m³ " + eventWords(e, r)
+		lines = append(lines, s.Render(clip(text, w)))
+	}
+	return lines
+}
+
+// clearLine says which of the deck edge and the margin line stayed clear
+// of the water all through the run ("" if both went under).
+func clearLine(r *engine.FloodReport) string {
+	var deck, margin bool
+	for _, e := range r.Events {
+		deck = deck || e.Kind == engine.DeckEdgeReached
+		margin = margin || e.Kind == engine.MarginLineReached
+	}
+	switch {
+	case !deck && !margin:
+		return "  deck edge and margin line stay clear"
+	case !deck:
+		return "  deck edge stays clear"
+	case !margin:
+		return "  margin line stays clear"
+	}
+	return ""
+}
+
+// floodStages is the table of the intermediate stages: the fraction of the
+// final water, the water, when the run reached it, heel, GM, (on a wider
+// panel) the deck edge's freeboard, and the criteria.
+func (m model) floodStages(w int) []string {
+	st := m.st
+	r := m.flood.rep
+	if len(r.Stages) == 0 {
+		return nil
+	}
+	deck := w >= 52
+	head := "STAGE" + padLeft("m³", 4) + " " + padLeft("reached", 11) + " " + padLeft("heel", 7) + " " + padLeft("GM", 5)
+	if deck {
+		head += " " + padLeft("deck", 5)
+	}
+	head += " criteria"
+	lines := []string{st.Heading.Render(clip(head, w))}
+	for _, s := range r.Stages {
+		reached := "not reached"
+		if s.Reached {
+			reached = engine.FormatDuration(s.TimeS)
+		}
+		row := padLeft(stageName(s.Fraction), 4) + " " + padLeft(num(s.WaterM3, 0), 4) + " " + padLeft(reached, 11) + " "
+		crit, bad := criteriaWord(s.Criteria)
+		style := st.Text
+		if p := s.Position; p != nil {
+			row += padLeft(heelShort(p.HeelDeg), 7) + " " + padLeft(num(p.GMM, 2), 5)
+			if deck {
+				row += " " + padLeft(num(p.DeckEdge.HeightM, 2), 5)
+			}
+		} else {
+			why := "no position"
+			if s.NoEq != nil {
+				why = s.NoEq.Outcome.String()
+			}
+			row += padLeft(why, 13)
+			if deck {
+				row += "      "
+			}
+			style, crit = st.Danger, ""
+		}
+		if bad {
+			style = st.Caution
+		}
+		lines = append(lines, style.Render(clip(row+" "+crit, w)))
+	}
+	return lines
+}
+
+// criteriaWord sums up a stage's criteria: "pass", "FAIL code" with the
+// count of the others that fail, or "—" when none were judged.
+func criteriaWord(cs []engine.CriterionResult) (string, bool) {
+	var fails []string
+	judged := 0
+	for _, c := range cs {
+		if c.Indicator {
+			continue
+		}
+		judged++
+		if !c.Pass {
+			fails = append(fails, c.Code)
+		}
+	}
+	switch {
+	case judged == 0:
+		return blank, false
+	case len(fails) == 0:
+		return "pass", false
+	case len(fails) == 1:
+		return "FAIL " + fails[0], true
+	}
+	return fmt.Sprintf("FAIL %s +%d", fails[0], len(fails)-1), true
+}
+
+// timeUnit picks the unit of a time axis running to T seconds.
+func timeUnit(T float64) (scale float64, unit string) {
+	switch {
+	case T <= 300:
+		return 1, "s"
+	case T <= 5*3600:
+		return 60, "min"
+	}
+	return 3600, "h"
+}
+
+// floodPlot draws heel (solid, scale on the left) and water in the
+// compartment (dotted, scale on the right) against time since the hole
+// was made, with the events marked by their letters; while the run
+// computes, the water so far.
+func (m model) floodPlot(w, h int) []string {
+	st := m.st
+	f := m.flood
+	const rightW = 6
+	cw, ch := w-axisW-rightW, h-2
+	if cw < 10 || ch < 3 || f.seq == 0 || f.err != "" {
+		return fit(nil, w, h)
+	}
+	var ts, heel, water []float64
+	var marks []engine.FloodEvent
+	T, wmax := 0.0, 0.0
+	side := "S"
+	switch {
+	case f.rep != nil:
+		r := f.rep
+		for _, s := range r.Trace {
+			ts = append(ts, s.TimeS)
+			water = append(water, s.WaterM3)
+			hd := math.NaN()
+			if s.Position != nil {
+				hd = s.Position.HeelDeg
+			}
+			heel = append(heel, hd)
+		}
+		if len(ts) > 0 {
+			T = ts[len(ts)-1]
+		}
+		if r.End == engine.FloodEqualised {
+			T = math.Max(T, r.EqualiseS)
+		}
+		for _, e := range r.Events {
+			if e.Kind != engine.RunEnds {
+				marks = append(marks, e)
+			}
+		}
+		wmax = r.CapacityM3
+	case f.running:
+		for _, p := range f.track {
+			ts = append(ts, p.timeS)
+			water = append(water, p.waterM3)
+			heel = append(heel, math.NaN())
+		}
+		if len(ts) > 0 {
+			T = ts[len(ts)-1]
+		}
+		wmax = math.Max(f.prog.TargetM3, 0)
+	default:
+		return fit(nil, w, h)
+	}
+	for _, x := range water {
+		if finite(x) {
+			wmax = math.Max(wmax, x)
+		}
+	}
+	if !(wmax > 0) {
+		wmax = 1
+	}
+	T = math.Max(T, 1)
+	lo, hi := 0.0, 0.0
+	any := false
+	for _, x := range heel {
+		if finite(x) {
+			lo, hi, any = math.Min(lo, x), math.Max(hi, x), true
+		}
+	}
+	if any && hi <= 0 && lo < 0 {
+		// Heeling to port all the way: plot the heel to port upwards.
+		for i := range heel {
+			heel[i] = -heel[i]
+		}
+		lo, hi, side = 0, -lo, "P"
+	}
+	if !(hi-lo > 1) {
+		hi = lo + 1
+	}
+	parts := []string{"HEEL ° " + side + " ─ left", "WATER m³ ┄ right", "against time"}
+	if !any {
+		parts = []string{"WATER IN SO FAR, m³ ┄ right"}
+	}
+	lines := []string{st.Heading.Render(titleFit(w, parts...))}
+	c := newCanvas(cw, ch)
+	margin := 0.05 * (hi - lo)
+	c.window(0, T*1.02, lo-margin, hi+margin)
+	wy := func(x float64) float64 { return lo + x/wmax*(hi-lo) }
+	for _, e := range marks {
+		c.dashed(e.TimeS, c.y0, e.TimeS, c.y1, inkMark)
+		c.label(c.cellX(e.TimeS), 0, eventMark(e.Kind), inkMark)
+	}
+	for i := 1; i < len(ts); i++ {
+		if finite(heel[i-1], heel[i]) {
+			c.line(ts[i-1], heel[i-1], ts[i], heel[i], inkCurve)
+		}
+	}
+	// Water dotted: every other dot of its line.
+	for i := 1; i < len(ts); i++ {
+		dottedLine(c, ts[i-1], wy(water[i-1]), ts[i], wy(water[i]), inkWater)
+	}
+	body := m.framed(c, niceStep(hi-lo, max(2, ch/3)), func(v float64) string { return num(v, 0) })
+	if !any {
+		body = m.framed(c, 0, nil)
+	}
+	// The water's scale on the right.
+	right := make([]string, c.h)
+	step := niceStep(wmax, max(2, ch/3))
+	for v := 0.0; v <= wmax+1e-9; v += step {
+		cy := c.cellY(wy(v))
+		if cy >= 0 && cy < c.h && right[cy] == "" {
+			right[cy] = "├" + num(v, 0)
+		}
+	}
+	for i := range body {
+		r := right[i]
+		if r == "" {
+			r = "│"
+		}
+		body[i] += st.Axis.Render(pad(r, rightW))
+	}
+	lines = append(lines, body...)
+	scale, unit := timeUnit(T)
+	xstep := niceStep(T/scale, max(2, cw/8)) * scale
+	var ticks []tick
+	for v := 0.0; v <= T+1e-9; v += xstep {
+		ticks = append(ticks, tick{v, num(v/scale, 0)})
+	}
+	lines = append(lines, st.Axis.Render(scaleLine(c, ticks, unit)))
+	return fit(lines, w, h)
+}
+
+// dottedLine draws every other dot of a line, so that it reads apart from
+// a solid one without colour.
+func dottedLine(c *canvas, xa, ya, xb, yb float64, k ink) {
+	if !finite(xa, ya, xb, yb) {
+		return
+	}
+	pa, qa := c.dotX(xa), c.dotY(ya)
+	pb, qb := c.dotX(xb), c.dotY(yb)
+	if !clipSegment(&pa, &qa, &pb, &qb, -1, -1, float64(2*c.w)+1, float64(4*c.h)+1) {
+		return
+	}
+	n := int(math.Ceil(math.Max(math.Abs(pb-pa), math.Abs(qb-qa))))
+	for i := 0; i <= n; i += 2 {
+		t := float64(i) / float64(max(n, 1))
+		c.dot(int(math.Floor(pa+t*(pb-pa))), int(math.Floor(qa+t*(qb-qa))), k)
+	}
+}
+
+// floodRow is the wide screen's row of pictures while the run's panel is
+// shown: the section, the run's times and stages, and its plot.
+func (m model) floodRow(w, h int) []string {
+	if w < 3 {
+		return fit(nil, w, h)
+	}
+	sep := m.st.Dim.Render("│")
+	tw := max((w-2)/3, min(46, w-2))
+	sw := (w - 2 - tw) / 2
+	pw := w - 2 - tw - sw
+	return besides(sep,
+		fit(m.sectionView(sw, h), sw, h),
+		fit(m.floodText(tw, h, h), tw, h),
+		fit(m.floodPlot(pw, h), pw, h))
+}
