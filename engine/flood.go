@@ -238,6 +238,7 @@ type FloodReport struct {
 	PumpsHoldLevel bool
 	FinalWaterM3   float64 // water in at the end
 	CapacityM3     float64 // μ × the compartment's volume
+	ContentsM3     float64 // a tank's contents at the start, as sea water of the same mass; 0 for a dry space
 
 	Start FloodSample // at time zero
 	// Final is the last state solved: at EndS, or, when she sinks or
@@ -319,10 +320,11 @@ func (e *floodEval) ok() bool { return e.noEq == nil }
 //
 // At each evaluation the ship is solved with V as SpaceState.WaterM3 of the
 // compartment (added weight, free surface level with the sea's attitude),
-// warm-started from the last solved plane. A compartment that was a tank is
-// taken as having lost its contents from the start (as the lost-buoyancy
-// solution does): the water held is never below 1e-9 of the capacity, so
-// that the solver treats the space as flooded.
+// warm-started from the last solved plane. A tank holds its contents when
+// the hole is made: the run starts with them in, counted as sea water of the
+// same mass (ContentsM3 in the report), and the sea comes in on top; the
+// water held is never below 1e-9 of the capacity, so that the solver
+// treats the space as flooded.
 //
 // # Integration and stopping
 //
@@ -371,9 +373,10 @@ type FloodRun struct {
 	endNoEq *NoEquilibrium
 	eqS     float64
 
-	lb      *Position
-	lbNoEq  *NoEquilibrium
-	lbWater float64
+	lb         *Position
+	lbNoEq     *NoEquilibrium
+	lbWater    float64
+	contentsM3 float64 // a tank's contents at the start, as sea water of the same mass
 
 	report *FloodReport
 }
@@ -467,6 +470,15 @@ func NewFloodRun(c FloodCase) (*FloodRun, error) {
 	r.solves++
 
 	v0 := math.Min(s0.WaterM3, r.capacity)
+	if v0 == 0 {
+		// A holed tank starts with its contents in it, counted as sea water
+		// of the same mass: the sea mixes with ballast, and a lighter liquid
+		// is pressed up and out through the vent as the water comes in.
+		if m := v.tanks[r.ci].massT; m > 0 {
+			v0 = math.Min(m/v.WaterDensity, r.capacity)
+			r.contentsM3 = v0
+		}
+	}
 	e0 := r.eval(v0)
 	r.last = e0
 	r.evals = append(r.evals, e0)
@@ -836,7 +848,7 @@ func (r *FloodRun) Report() FloodReport {
 		Vessel: r.v.Name, Compartment: r.comp.Name, Hole: r.c.Hole, PumpM3h: r.pumpM3s * 3600, LimitS: r.limit,
 		End: r.end, EndS: r.endS, EndReason: r.endWhy, SteadyHeadM: r.hs,
 		PumpsHoldLevel: r.end == FloodPumpsHold || r.end == FloodKeptDry,
-		CapacityM3:     r.capacity, LostBuoyancy: r.lb, LostBuoyancyNoEq: r.lbNoEq, LostBuoyancyWaterM3: r.lbWater,
+		CapacityM3:     r.capacity, ContentsM3: r.contentsM3, LostBuoyancy: r.lb, LostBuoyancyNoEq: r.lbNoEq, LostBuoyancyWaterM3: r.lbWater,
 		Events: append([]FloodEvent(nil), r.events...),
 		Steps:  len(r.recs), Rejected: r.st.tries - len(r.recs),
 	}

@@ -648,3 +648,49 @@ func TestFloodCriterionEvent(t *testing.T) {
 		})
 	}
 }
+
+// TestFloodHoledTankKeepsContents: a ballast tank holed below the water
+// still holds its ballast at the moment of holing, so the run starts at the
+// intact displacement and position (conservation of mass; practice), with
+// the contents counted as sea water (here sea-water ballast, so its very
+// volume), and ends at the lost-buoyancy waterline (the tank open to the
+// sea, contents lost) within 5 mm.
+func TestFloodHoledTankKeepsContents(t *testing.T) {
+	h, err := NewBoxHull(60, 12, 6)
+	if err != nil {
+		t.Fatal(err)
+	}
+	c, err := NewCompartment(h, "DB ballast", Box{X0: 20, X1: 40, Y0: -6, Y1: 6, Z0: 0, Z1: 1})
+	if err != nil {
+		t.Fatal(err)
+	}
+	c.Permeability = 0.95
+	c.Liquid = &Liquid{Name: "sea water ballast", Density: SeaWaterDensity, Fill: 0.5}
+	v, err := NewVessel(Vessel{Name: "holed tank", Hull: h, Compartments: []*Compartment{c},
+		Weights: []Weight{{Name: "barge", MassT: 60 * 12 * 2.5 * SeaWaterDensity, LCGM: 30, VCGM: 3}}})
+	if err != nil {
+		t.Fatal(err)
+	}
+	intact, err := Solve(v, nil)
+	if err != nil {
+		t.Fatal(err)
+	}
+	rep, err := RunFlood(FloodCase{Vessel: v, Compartment: 0, Hole: Hole{AreaM2: 0.02, XM: 30, YM: 0, ZM: 0}}, nil)
+	if err != nil {
+		t.Fatal(err)
+	}
+	want := 0.5 * 20 * 12 * 1 // the ballast's volume, m³
+	if !flClose(rep.ContentsM3, want, 1e-9*want) {
+		t.Errorf("contents at the start %.6f m³, want %.6f", rep.ContentsM3, want)
+	}
+	p0 := rep.Start.Position
+	if p0 == nil {
+		t.Fatal("no position at the start")
+	}
+	if !flClose(p0.DisplacementT, intact.DisplacementT, 1e-9*intact.DisplacementT) || !flClose(p0.DraftMidM, intact.DraftMidM, 1e-9) {
+		t.Errorf("start: Δ %.4f t, draft %.6f m; intact Δ %.4f t, draft %.6f m", p0.DisplacementT, p0.DraftMidM, intact.DisplacementT, intact.DraftMidM)
+	}
+	if rep.FinalDiffM > 0.005 {
+		t.Errorf("final drafts differ from lost buoyancy by %.4f m", rep.FinalDiffM)
+	}
+}
