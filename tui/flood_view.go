@@ -283,9 +283,25 @@ func (m model) floodStages(w int) []string {
 		if bad {
 			style = st.Caution
 		}
-		lines = append(lines, style.Render(clip(row+" "+crit, w)))
+		text := clip(row+" "+crit, w)
+		if m.stageShown(s) {
+			// The stage the dashboard shows now (the stage key).
+			style, text = st.Selected, pad(text, w)
+		}
+		lines = append(lines, style.Render(text))
 	}
 	return lines
+}
+
+// stageShown reports whether the dashboard holds stage s now: the run's
+// compartment not open and holding that stage's water.
+func (m model) stageShown(s engine.FloodStage) bool {
+	ci := m.flood.req.ci
+	if ci >= len(m.damage) || s.WaterM3 <= 0 {
+		return false
+	}
+	d := m.damage[ci]
+	return !d.Open && d.WaterM3 == s.WaterM3
 }
 
 // criteriaWord sums up a stage's criteria: "pass", "FAIL code" with the

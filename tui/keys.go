@@ -52,8 +52,9 @@ func newKeyMap() keyMap {
 
 // ShortHelp is the one-line help bar: the keys an officer needs first.
 func (k keyMap) ShortHelp() []key.Binding {
-	// ? and q before the rest, so that a narrow bar cuts the others first.
-	return []key.Binding{k.Move, k.Flood, k.MuUp, k.MuSet, k.Undo, k.Help, k.Quit, k.Picture, k.Hand, k.HoleRun, k.RunPanel, k.RunStage}
+	// ? and q before the rest, so that a narrow bar cuts the others first;
+	// then the flooding run, then the pictures.
+	return []key.Binding{k.Move, k.Flood, k.MuUp, k.MuSet, k.Undo, k.Help, k.Quit, k.HoleRun, k.RunPanel, k.RunStage, k.Picture, k.Hand}
 }
 
 // FullHelp is the help shown with `?`, in three columns that fit 80
