@@ -35,8 +35,71 @@
 //   - The event log: every change with its time and the resulting heel and
 //     drafts; with Options.LogFile the same lines are appended to the file
 //     and synced as they happen.
+//   - The flooding run (f, then t to show or hide it): the selected
+//     compartment filling through a hole against its pumps, over time
+//     (engine.FloodRun), with the rest of the damage state as the dashboard
+//     has it. A small form at the foot of the screen takes the hole's area
+//     (m²), the height of its centre (z, m above the baseline), its
+//     discharge coefficient C_d and the pumps (m³/h), filled from the
+//     vessel file (its hole and pump_m3h for that compartment) or, where
+//     the file gives no hole, a shell hole of 0.05 m² at the compartment's
+//     lowest point (engine.ShellHole); the file's hole keeps its position
+//     while its height is left as it is, any other height puts the hole in
+//     the shell at mid-length, outboard. Tab moves between the fields,
+//     enter starts, esc cancels; a bad value is refused with a sentence and
+//     the cursor stays on it. While the run computes the panel shows a
+//     progress bar, the flooding time reached, the water in and the head,
+//     and the water plotted so far. When it is done: the end in a sentence
+//     (levels equal, pumps holding and at what level and sounding, full,
+//     she sinks or capsizes, time limit), every event with its time from
+//     the hole and the water in then (d deck edge, m margin line, o an
+//     opening, c a criterion failing, » the end), which of the deck edge
+//     and the margin line stayed clear, the stages at 25, 50 and 75 % of
+//     the final water and the end (when reached, heel, GM, the deck edge's
+//     freeboard where there is room, and the criteria), and a plot against
+//     time of the heel (solid, scale on the left) and the water in the
+//     compartment (dotted, scale on the right) with the events marked by
+//     their letters. On a narrow screen the panel takes the right-hand
+//     column (the plot where it has room); from 120×40 it takes the place
+//     of the profile and the GZ curve, beside the section. The stage key s
+//     puts the run's stages on the dashboard one after another (an ordinary
+//     change, undone with u): the compartment holds that stage's water as
+//     an added weight, the list says "part" and the section and the profile
+//     shade its water up to its free surface (engine.Position.Held), and
+//     the stage's row in the panel is highlighted. When the damage state
+//     changes otherwise after a run the panel says so.
 //
 // The smallest screen is 80×24; below it the screen says what it needs.
+//
+// # Keys
+//
+// Every key is in the keyMap (keys.go), and the help bar and the full help
+// (?) are drawn from it:
+//
+//	↑ k, ↓ j           move through the compartment list
+//	home g pgup        the first compartment
+//	end G pgdown       the last compartment
+//	space, enter       open the selected compartment to the sea, or close it
+//	                   up (intact; a partly flooded one is emptied)
+//	+ =, − _           its permeability μ up or down by 0.05 (0.05 … 1)
+//	m                  type an exact permeability (0.85, ,85 or 85%)
+//	u, ctrl+z          undo the last change
+//	R                  all compartments intact
+//	tab, v             the next picture: section, profile, GZ curve,
+//	                   criteria (narrow screens only)
+//	h                  the hand method's working shown or hidden
+//	[ ]                scroll the hand working, or the flags and criteria
+//	w                  write the Markdown report of the state shown
+//	f                  flooding run: the hole-and-pumps form for the
+//	                   selected compartment (in the form: tab, shift+tab,
+//	                   ↑ ↓ move between fields, enter starts, esc cancels)
+//	t                  the flooding-run panel shown or hidden; hiding it
+//	                   stops a run still computing
+//	s                  the run's next stage onto the dashboard as water held
+//	                   (once a run has finished)
+//	c                  palette: day, night, mono
+//	?                  all keys, or back to the short help bar
+//	q, ctrl+c          quit
 //
 // # "Next at risk"
 //
@@ -55,9 +118,16 @@
 // only the newest number's result is shown, so an older keystroke's result
 // never overwrites a newer one; a Cmd whose change was superseded before it
 // started does not compute at all. While a result is pending the header
-// shows a computing mark. View draws only: every size is decided in one
-// WindowSizeMsg handler (resize) and every figure went through num, which
-// prints "—" for a value that is not a finite number.
+// shows a computing mark. A flooding run works the same way with a sequence
+// number of its own: each Cmd takes one step of the run
+// (engine.FloodRun.Step) and hands the run back in its message, and Update,
+// which never calls the run, issues the next step; so the run, which is not
+// safe for concurrent use, is held by one Cmd at a time, the screen stays
+// live between steps, and a newer run or hiding the panel stops an older one
+// at its next step (its messages are dropped). The last Cmd works out the
+// report (engine.FloodRun.Report). View draws only: every size is decided in
+// one WindowSizeMsg handler (resize) and every figure went through num,
+// which prints "—" for a value that is not a finite number.
 //
 // Palettes are values built by newStyles: day, night (dim reds only, for a
 // dark bridge) and mono (NO_COLOR forces it). Every state has a mark or a
