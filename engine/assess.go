@@ -153,6 +153,13 @@ func Assess(v *Vessel, d Damage) Assessment {
 	} else {
 		a.HandWhy = err.Error()
 	}
+	up := uprightUnknown
+	var upPtr *float64
+	if a.Position != nil {
+		if gm, ok := UprightGM(v, d, a.Position); ok {
+			up, upPtr = gm, &gm
+		}
+	}
 	if a.Position != nil {
 		gz, err := RightingLevers(pr, pos)
 		if err != nil {
@@ -160,7 +167,7 @@ func Assess(v *Vessel, d Damage) Assessment {
 		} else {
 			a.GZ = gz
 			if len(v.CriteriaSets) > 0 {
-				res, err := EvaluateCriteria(v.CriteriaSets, CriteriaCase{Curve: gz, Eq: pos, Damaged: IsDamaged(d), ShipType: v.ShipType})
+				res, err := EvaluateCriteria(v.CriteriaSets, CriteriaCase{Curve: gz, Eq: pos, Damaged: IsDamaged(d), ShipType: v.ShipType, UprightGMM: upPtr})
 				if err != nil {
 					a.Notes = append(a.Notes, "criteria not evaluated: "+err.Error())
 				}
@@ -168,6 +175,6 @@ func Assess(v *Vessel, d Damage) Assessment {
 			}
 		}
 	}
-	a.Flags = Flags(v, d, a.Position, a.NoEq, a.Hand)
+	a.Flags = flags(v, d, a.Position, a.NoEq, a.Hand, up)
 	return a
 }

@@ -20,6 +20,9 @@ type CriteriaCase struct {
 	Eq       Position // where she floats
 	Damaged  bool     // a compartment is open to the sea or holds floodwater (see IsDamaged)
 	ShipType string   // "passenger" or "cargo" ("" is cargo): SOLAS s's heel thresholds
+	// UprightGMM is GM₀, the fluid GM upright at free trim (UprightGM); nil
+	// means unknown, and the GM where she floats is used instead.
+	UprightGMM *float64
 }
 
 // IsDamaged reports whether d floods any compartment (open to the sea or
@@ -121,7 +124,10 @@ var criteriaSets = []criteriaSet{
 			{code: "gm0", requirement: "initial metacentric height GM₀ ≥ 0.15 m", required: 0.15, unit: "m",
 				source: isCode + "2.2.4",
 				actual: func(k *CriteriaCase) (float64, string) {
-					return k.Eq.GMM, "fluid GM at the position she floats in (free-surface corrected)"
+					if k.UprightGMM != nil {
+						return *k.UprightGMM, "fluid GM upright at free trim (free-surface corrected)"
+					}
+					return k.Eq.GMM, "fluid GM at the position she floats in (free-surface corrected); upright GM not found"
 				}},
 		},
 	},

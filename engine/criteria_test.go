@@ -332,3 +332,36 @@ func TestCriteriaOnBoxCurve(t *testing.T) {
 		}
 	}
 }
+
+// TestGM0IsUpright: the IS Code's GM₀ (2.2.4) is the initial metacentric
+// height upright, not the GM at the angle she lists or lolls to. A box
+// 80 × 16 × 8 m at 4 m draft has KM = KB + BM = 2 + 16²/(12·4) = 7.333 m
+// (closed form, practice); with KG 7.2333 m, GM₀ = 0.100 m, below 0.15 m,
+// whatever the list an off-centre weight gives her.
+func TestGM0IsUpright(t *testing.T) {
+	h, err := engine.NewBoxHull(80, 16, 8)
+	if err != nil {
+		t.Fatal(err)
+	}
+	for _, tcg := range []float64{0, 0.1} {
+		v, err := engine.NewVessel(engine.Vessel{Name: "listed box", Hull: h, CriteriaSets: []string{"is-code-2008"},
+			Weights: []engine.Weight{{Name: "all", MassT: 80 * 16 * 4 * 1.025, LCGM: 40, TCGM: tcg, VCGM: 2 + 16.0*16/48 - 0.1}}})
+		if err != nil {
+			t.Fatal(err)
+		}
+		a := engine.Assess(v, v.Intact())
+		var found bool
+		for _, r := range a.Criteria {
+			if r.Code != "gm0" {
+				continue
+			}
+			found = true
+			if math.Abs(r.Actual-0.1) > 1e-9 || r.Pass {
+				t.Errorf("TCG %.1f m (heel %.2f°): GM₀ %.6f m, pass %v; want 0.100000 m, fail", tcg, a.Position.HeelDeg, r.Actual, r.Pass)
+			}
+		}
+		if !found {
+			t.Errorf("TCG %.1f m: no gm0 criterion", tcg)
+		}
+	}
+}

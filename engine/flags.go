@@ -90,6 +90,20 @@ const (
 // danger first, then caution, then info, each in the order of the table
 // above.
 func Flags(v *Vessel, d Damage, pos *Position, noEq *NoEquilibrium, hand *HandWorking) []Flag {
+	up := uprightUnknown
+	if pos != nil {
+		if gm, ok := UprightGM(v, d, pos); ok {
+			up = gm
+		}
+	}
+	return flags(v, d, pos, noEq, hand, up)
+}
+
+// uprightUnknown marks an upright GM that could not be found.
+var uprightUnknown = math.NaN()
+
+// flags is Flags with the upright GM already known (NaN: unknown).
+func flags(v *Vessel, d Damage, pos *Position, noEq *NoEquilibrium, hand *HandWorking, uprightGM float64) []Flag {
 	var out []Flag
 	add := func(code string, sev Severity, format string, args ...any) {
 		out = append(out, Flag{Code: code, Severity: sev, Message: fmt.Sprintf(format, args...)})
@@ -121,7 +135,16 @@ func Flags(v *Vessel, d Damage, pos *Position, noEq *NoEquilibrium, hand *HandWo
 		dh := math.Abs(hand.HeelDeg - pos.HeelDeg)
 		mean := math.Max(math.Abs(pos.DraftMidM), 1e-3)
 		dd := math.Max(math.Abs(hand.DraftAftM-pos.DraftAftM), math.Max(math.Abs(hand.DraftFwdM-pos.DraftFwdM), math.Abs(hand.DraftMidM-pos.DraftMidM))) / mean
-		if dh > FlagHeelPartDeg || dd > FlagDraftPart {
+		coupled := math.Abs(hand.CoupledHeelDeg-pos.HeelDeg) <= FlagHeelPartDeg &&
+			math.Abs(hand.CoupledTrimM-pos.TrimM) <= FlagDraftPart*mean
+		switch {
+		case !(dh > FlagHeelPartDeg || dd > FlagDraftPart):
+		case coupled:
+			// The angles are small; what parts them is the coupling of heel
+			// and trim through the waterplane's product of inertia.
+			add(FlagPastSmallAngles, Caution, "The hand method and the direct solution part: heel %s against %s (%.2f° apart), drafts up to %.1f %% apart. The damage is off the centreline and off midships together, so heel and trim work on each other, which the plain hand method leaves out; kept in, the hand working gives %s and %.2f m trim, as the direct solution does. Work from the direct solution.",
+				flagHeel(hand.HeelDeg), flagHeel(pos.HeelDeg), dh, 100*dd, flagHeel(hand.CoupledHeelDeg), hand.CoupledTrimM)
+		default:
 			add(FlagPastSmallAngles, Caution, "The hand method and the direct solution part: heel %s against %s (%.2f° apart), drafts up to %.1f %% apart. She is beyond the small angles the hand method assumes: work from the direct solution.",
 				flagHeel(hand.HeelDeg), flagHeel(pos.HeelDeg), dh, 100*dd)
 		}
@@ -200,7 +223,7 @@ func Flags(v *Vessel, d Damage, pos *Position, noEq *NoEquilibrium, hand *HandWo
 	}
 
 	// Negative GM upright: loll.
-	if gm, ok := flagUprightGM(v, d, pos); ok && gm < 0 {
+	if gm := uprightGM; gm < 0 {
 		add(FlagGMNegative, Danger, "Upright, in this state, her GM is %.2f m: she is unstable upright and lolls to whichever side she falls (now %s). Do not counter-ballast the high side: she would flop over to the other side, perhaps further. The remedy is to lower G: take off or lower weights high up; fill a low tank on the low side only with care, one at a time, as a slack tank adds free surface before it helps.",
 			gm, flagHeel(pos.HeelDeg))
 	}
@@ -411,10 +434,11 @@ func flagWallSided(h *Hull, p Plane) string {
 	return msg
 }
 
-// flagUprightGM returns the GM of damage state d with the ship held upright
-// at free trim: the GM that decides between a list and a loll. When she
-// floats upright already it is the solved position's.
-func flagUprightGM(v *Vessel, d Damage, pos *Position) (float64, bool) {
+// UprightGM returns the GM of damage state d with the ship held upright at
+// free trim (GM₀): the GM that decides between a list and a loll, and the
+// one the intact criteria ask for. When she floats upright already it is
+// the solved position's. ok is false when she cannot be solved upright.
+func UprightGM(v *Vessel, d Damage, pos *Position) (gm float64, ok bool) {
 	if math.Abs(pos.HeelDeg) < 1e-9 {
 		return pos.GMM, true
 	}

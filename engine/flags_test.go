@@ -484,3 +484,29 @@ func BenchmarkHandAndFlags(b *testing.B) {
 		engine.Flags(v, d, &pos, nil, hw)
 	}
 }
+
+// TestFlagCoupledHeelAndTrim: two wing voids open on opposite sides and at
+// opposite ends of a box barge heel her little, but the waterplane left has
+// a product of inertia I_xy, so heel and trim act on each other. The plain
+// hand method (heel and trim worked apart, as taught; practice) parts from
+// the direct solution by more than the flag's limit although the angles are
+// small; its coupled working (I_xy kept) meets the direct solution, and the
+// flag must say that it is the coupling, not large angles.
+func TestFlagCoupledHeelAndTrim(t *testing.T) {
+	b := flagBarge{80, 16, 8, 3.2, 4}
+	v := b.vessel(t, 40, 0, nil,
+		handSpec{"wing mid S", engine.Box{X0: 28, X1: 52, Y0: 4, Y1: 8, Z0: 1, Z1: 8}, 1, nil},
+		handSpec{"wing aft P", engine.Box{X0: 6, X1: 28, Y0: -8, Y1: -4, Z0: 1, Z1: 8}, 1, nil})
+	fl, pos, hand := flagRun(t, v, handOpen(v, 0, 1))
+	if hand == nil || pos == nil {
+		t.Fatal("no hand or direct answer")
+	}
+	if math.Abs(pos.HeelDeg) > 3 || math.Abs(hand.CoupledHeelDeg-pos.HeelDeg) > 0.05 {
+		t.Fatalf("direct heel %.3f°, coupled hand %.3f°: the case does not test what it says", pos.HeelDeg, hand.CoupledHeelDeg)
+	}
+	t.Logf("direct heel %.3f°, trim %.3f m; plain hand %.3f°, %.3f m; coupled %.3f°, %.3f m", pos.HeelDeg, pos.TrimM, hand.HeelDeg, hand.TrimM, hand.CoupledHeelDeg, hand.CoupledTrimM)
+	if math.Abs(hand.HeelDeg-pos.HeelDeg) <= engine.FlagHeelPartDeg {
+		t.Fatalf("plain hand %.3f° and direct %.3f° do not part", hand.HeelDeg, pos.HeelDeg)
+	}
+	flagExpect(t, "coupled", fl, engine.FlagPastSmallAngles, true, "work on each other")
+}

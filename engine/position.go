@@ -59,9 +59,9 @@ type Position struct {
 	WaterplaneAreaM2 float64 // intact waterplane (lost parts removed), projected
 	LCFM, TCFM       float64 // its centroid
 	BMTM, BMLM       float64 // its second moments about its own centroidal axes ÷ V
-	KMTM             float64 // VCB + BMT
+	KMTM             float64 // KG + FSC + GM: upright, VCB + BMT
 	GMM              float64 // metacentric height in this position, corrected for free surface
-	GMLM             float64 // longitudinal metacentric height
+	GMLM             float64 // longitudinal metacentric height, with the same free-surface correction
 
 	DeckEdge   Clearance
 	MarginLine Clearance
@@ -127,8 +127,10 @@ func (pr *Problem) position(s state, it int) Position {
 		pos.BMLM = il * n / (1 + c2) * math.Sqrt(n) / e.V
 		bg := ((pos.LCGM-pos.LCBM)*(-p.B) + (pos.TCGM-pos.TCBM)*(-p.C) + (pos.KGM - pos.VCBM)) / math.Sqrt(n)
 		pos.GMM = pos.BMTM - bg - pos.FSCM
-		pos.GMLM = pos.BMLM - bg
-		pos.KMTM = pos.VCBM + pos.BMTM
+		// The trim balance carries G's virtual rise too (see eval).
+		pos.GMLM = pos.BMLM - bg - pos.FSCM
+		// KM as GM implies it: KG + FSC + GM (upright, VCB + BMT).
+		pos.KMTM = pos.KGM + pos.FSCM + pos.GMM
 	}
 
 	pos.DeckEdge = Clearance{HeightM: math.Inf(1)}
