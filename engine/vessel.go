@@ -78,6 +78,16 @@ func NewVessel(v Vessel) (*Vessel, error) {
 	v.Compartments = append([]*Compartment(nil), v.Compartments...)
 	v.Openings = append([]Opening(nil), v.Openings...)
 	v.CriteriaSets = append([]string(nil), v.CriteriaSets...)
+	for i, w := range v.Weights {
+		for _, f := range []float64{w.MassT, w.LCGM, w.TCGM, w.VCGM, w.FSMTm} {
+			if math.IsNaN(f) || math.IsInf(f, 0) {
+				return nil, fmt.Errorf("weight %d (%q): mass, centre and free-surface moment must be finite numbers", i+1, w.Name)
+			}
+		}
+		if w.MassT < 0 || w.FSMTm < 0 {
+			return nil, fmt.Errorf("weight %d (%q): mass %v t and free-surface moment %v t·m must not be negative", i+1, w.Name, w.MassT, w.FSMTm)
+		}
+	}
 	v.tanks = make([]tankLoad, len(v.Compartments))
 	for i, c := range v.Compartments {
 		if c == nil || c.solid == nil {
