@@ -3,6 +3,7 @@ package tui
 import (
 	"fmt"
 	"math"
+	"strings"
 	"sync/atomic"
 
 	tea "github.com/charmbracelet/bubbletea"
@@ -317,9 +318,9 @@ func outcomeText(r engine.FloodReport) string {
 	case engine.FloodFull:
 		return fmt.Sprintf("COMPARTMENT FULL after %s, %s, its top below the sea", at, in)
 	case engine.FloodSinks:
-		return fmt.Sprintf("SHE SINKS after %s, with %s: %s", at, in, r.EndReason)
+		return fmt.Sprintf("SHE SINKS after %s, with %s: %s", at, in, strings.TrimPrefix(r.EndReason, r.End.String()+": "))
 	case engine.FloodCapsizes:
-		return fmt.Sprintf("SHE CAPSIZES after %s, with %s: %s", at, in, r.EndReason)
+		return fmt.Sprintf("SHE CAPSIZES after %s, with %s: %s", at, in, strings.TrimPrefix(r.EndReason, r.End.String()+": "))
 	case engine.FloodTimeLimit:
 		return fmt.Sprintf("STILL FILLING at the time limit (%s), %s", at, in)
 	}

@@ -462,6 +462,15 @@ func TestFloodSmallSizes(t *testing.T) {
 				t.Errorf("%s %dx%d: %q on screen", name, sz[0], sz[1], w)
 			}
 		}
+		// Every palette (the progress bar takes its colour from it).
+		if name != "form" {
+			for p := 0; p < len(paletteNames); p++ {
+				mm = press(t, mm, "c")
+				if v := mm.View(); strings.Contains(v, "%!") {
+					t.Errorf("%s, palette %s: a formatting error on screen", name, mm.st.Palette)
+				}
+			}
+		}
 		// Panel parts at widths and heights down to nothing.
 		for w := 0; w <= 50; w += 5 {
 			for h := 0; h <= 20; h += 4 {
@@ -475,4 +484,43 @@ func TestFloodSmallSizes(t *testing.T) {
 			}
 		}
 	}
+}
+
+// TestFloodCapsizes: the test barge (parts_test.go) flooding its whole
+// hull through a shell hole at the keel capsizes on the way; the panel says
+// so in capitals with the engine's time and reason, lists what went under
+// before, and golden-tests the screen.
+func TestFloodCapsizes(t *testing.T) {
+	v := testBarge(t, 2.5)
+	m := newModel(v, nil, Options{})
+	m.now, m.animate = fixedClock(), false
+	m = drive(t, m, tea.WindowSizeMsg{Width: 80, Height: 24}, m.Init())
+	m = selectSpace(t, m, "Whole hull")
+	m = press(t, m, "f", "enter")
+	got := m.flood.rep
+	if got == nil {
+		t.Fatalf("no report: %q", m.flood.err)
+	}
+	h, err := engine.ShellHole(v, m.sel, defaultHoleM2, m.spaces[m.sel].shellZ, engine.DefaultDischargeCoefficient)
+	if err != nil {
+		t.Fatal(err)
+	}
+	want, err := engine.RunFlood(engine.FloodCase{Vessel: v, Compartment: m.sel, Hole: h, Criteria: engine.FloodCriteria("")}, nil)
+	if err != nil {
+		t.Fatal(err)
+	}
+	if want.End != engine.FloodCapsizes || got.End != want.End || got.EndS != want.EndS {
+		t.Fatalf("end: panel %v at %v s, engine %v at %v s (want capsizes)", got.End, got.EndS, want.End, want.EndS)
+	}
+	view := m.View()
+	if !strings.Contains(view, "SHE CAPSIZES after "+engine.FormatDuration(want.EndS)) {
+		t.Errorf("no capsize verdict with the engine's time %s:\n%s", engine.FormatDuration(want.EndS), view)
+	}
+	for _, e := range want.Events {
+		at := eventMark(e.Kind) + " " + padLeft(engine.FormatDuration(e.TimeS), 11)
+		if line := lineWith(view, at); !strings.Contains(line, num(e.WaterM3, 0)+" m³") {
+			t.Errorf("event %v %q: no line %q with %s m³ on screen (%q)", e.Kind, e.Name, at, num(e.WaterM3, 0), line)
+		}
+	}
+	checkGolden(t, "flood_capsizes_80x24", view)
 }

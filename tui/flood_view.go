@@ -166,11 +166,11 @@ func eventMark(k engine.FloodEventKind) string {
 func eventWords(e engine.FloodEvent, r *engine.FloodReport) string {
 	switch e.Kind {
 	case engine.DeckEdgeReached:
-		return "deck edge under water"
+		return "deck edge immersed"
 	case engine.MarginLineReached:
-		return "margin line under water"
+		return "margin line immersed"
 	case engine.OpeningReached:
-		return e.Name + " under water"
+		return e.Name + " immersed"
 	case engine.CriterionFails:
 		return e.Name + " fails"
 	}
