@@ -28,7 +28,8 @@ func (p Plane) HeelRad() float64 { return math.Atan(p.C) }
 type slab struct {
 	x0, x1 float64
 	p0, dp []Point
-	p1     []Point    // the vertices at x1, p0 + (x1 − x0)·dp
+	p1     []Point // the vertices at x1, p0 + (x1 − x0)·dp
+	blocks []vertexBlock
 	full   Immersion  // the whole slab, waterplane terms zero
 	pre    []edgePoly // prefix sums of the edges' shoelace polynomials (waterline_cut.go)
 	zmin   float64
@@ -56,6 +57,7 @@ func newSlab(x0, x1 float64, a, b []Point) slab {
 	s.full = s.integrate(Plane{A: math.Inf(1)}, x0, x1)
 	s.pre = edgePrefix(s.p0, s.dp)
 	s.p1 = s.section(x1)
+	s.blocks = vertexBlocks(s.p0, s.p1)
 	return s
 }
 

@@ -153,6 +153,31 @@ func (c *cutState) chains(n int, out *[maxChains]chain) (int, bool) {
 	return ni, true
 }
 
+// blockSize is the number of consecutive section vertices bounded
+// together, so that a run of vertices far from the waterline is passed over
+// at once.
+const blockSize = 8
+
+// vertexBlock bounds vertices k … k+blockSize−1 of a slab at both its ends
+// (and so, the vertices moving linearly, all along it).
+type vertexBlock struct{ ymin, ymax, zmin, zmax float64 }
+
+// vertexBlocks returns the bounds of each block of the polygons a and b.
+func vertexBlocks(a, b []Point) []vertexBlock {
+	var out []vertexBlock
+	for k0 := 0; k0 < len(a); k0 += blockSize {
+		bb := vertexBlock{math.Inf(1), math.Inf(-1), math.Inf(1), math.Inf(-1)}
+		for k := k0; k < min(k0+blockSize, len(a)); k++ {
+			for _, q := range [2]Point{a[k], b[k]} {
+				bb.ymin, bb.ymax = math.Min(bb.ymin, q.Y), math.Max(bb.ymax, q.Y)
+				bb.zmin, bb.zmax = math.Min(bb.zmin, q.Z), math.Max(bb.zmax, q.Z)
+			}
+		}
+		out = append(out, bb)
+	}
+	return out
+}
+
 // cutRoot is an x where vertex k crosses the plane.
 type cutRoot struct {
 	x float64
@@ -184,28 +209,58 @@ func (s *slab) belowChains(p Plane, im *Immersion, sc *cutScratch) bool {
 	below := st.below[:n]
 	st.ncut, st.ok = 0, true
 	prev := false
-	for k := 0; k < n; k++ {
-		d0 := p0[k].Z - p.C*p0[k].Y - h0
-		d1 := p1[k].Z - p.C*p1[k].Y - h1
-		// The side just forward of x0 (a vertex on the plane there takes
-		// the side it goes to).
-		b := d0 < 0 || d0 == 0 && d1 < 0
-		below[k] = b
-		if b {
-			st.nin++
-		}
-		if k > 0 && b != prev {
-			// Edge k−1 is cut at x0.
-			if st.ncut == len(st.cut) {
-				st.ok = false
-			} else {
-				st.cut[st.ncut] = k - 1
-				st.ncut++
+	hlo, hhi := math.Min(h0, h1), math.Max(h0, h1)
+	for bi, bb := range s.blocks {
+		k0, k1 := bi*blockSize, min(bi*blockSize+blockSize, n)
+		// The plane's height above every vertex of the block, over the
+		// whole slab, lies within [dmin, dmax].
+		cy0, cy1 := p.C*bb.ymin, p.C*bb.ymax
+		dmax := bb.zmax - math.Min(cy0, cy1) - hlo
+		dmin := bb.zmin - math.Max(cy0, cy1) - hhi
+		if dmax < 0 || dmin > 0 {
+			// The whole block is on one side all along the slab: no roots
+			// and no cut edges inside it.
+			b := dmax < 0
+			for k := k0; k < k1; k++ {
+				below[k] = b
 			}
+			if b {
+				st.nin += k1 - k0
+			}
+			if k0 > 0 && b != prev {
+				if st.ncut == len(st.cut) {
+					st.ok = false
+				} else {
+					st.cut[st.ncut] = k0 - 1
+					st.ncut++
+				}
+			}
+			prev = b
+			continue
 		}
-		prev = b
-		if (d0 < 0 && d1 > 0) || (d0 > 0 && d1 < 0) {
-			roots = append(roots, cutRoot{s.x0 + dx*d0/(d0-d1), k})
+		for k := k0; k < k1; k++ {
+			d0 := p0[k].Z - p.C*p0[k].Y - h0
+			d1 := p1[k].Z - p.C*p1[k].Y - h1
+			// The side just forward of x0 (a vertex on the plane there takes
+			// the side it goes to).
+			b := d0 < 0 || d0 == 0 && d1 < 0
+			below[k] = b
+			if b {
+				st.nin++
+			}
+			if k > 0 && b != prev {
+				// Edge k−1 is cut at x0.
+				if st.ncut == len(st.cut) {
+					st.ok = false
+				} else {
+					st.cut[st.ncut] = k - 1
+					st.ncut++
+				}
+			}
+			prev = b
+			if (d0 < 0 && d1 > 0) || (d0 > 0 && d1 < 0) {
+				roots = append(roots, cutRoot{s.x0 + dx*d0/(d0-d1), k})
+			}
 		}
 	}
 	if below[n-1] != below[0] {
