@@ -230,8 +230,8 @@ func (s *Solid) Below(p Plane) Immersion {
 		sl := &s.slabs[i]
 		// Whole-slab bounds test: the plane's lowest and highest z over the
 		// slab's box.
-		zlo := p.A + math.Min(p.B*sl.x0, p.B*sl.x1) - math.Abs(p.C)*sl.ymax
-		zhi := p.A + math.Max(p.B*sl.x0, p.B*sl.x1) + math.Abs(p.C)*sl.ymax
+		zlo := p.A + min(p.B*sl.x0, p.B*sl.x1) - math.Abs(p.C)*sl.ymax
+		zhi := p.A + max(p.B*sl.x0, p.B*sl.x1) + math.Abs(p.C)*sl.ymax
 		switch {
 		case sl.zmin >= zhi:
 			continue

@@ -209,14 +209,14 @@ func (s *slab) belowChains(p Plane, im *Immersion, sc *cutScratch) bool {
 	below := st.below[:n]
 	st.ncut, st.ok = 0, true
 	prev := false
-	hlo, hhi := math.Min(h0, h1), math.Max(h0, h1)
+	hlo, hhi := min(h0, h1), max(h0, h1)
 	for bi, bb := range s.blocks {
 		k0, k1 := bi*blockSize, min(bi*blockSize+blockSize, n)
 		// The plane's height above every vertex of the block, over the
 		// whole slab, lies within [dmin, dmax].
 		cy0, cy1 := p.C*bb.ymin, p.C*bb.ymax
-		dmax := bb.zmax - math.Min(cy0, cy1) - hlo
-		dmin := bb.zmin - math.Max(cy0, cy1) - hhi
+		dmax := bb.zmax - min(cy0, cy1) - hlo
+		dmin := bb.zmin - max(cy0, cy1) - hhi
 		if dmax < 0 || dmin > 0 {
 			// The whole block is on one side all along the slab: no roots
 			// and no cut edges inside it.
