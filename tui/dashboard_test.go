@@ -400,3 +400,19 @@ func TestTinySizes(t *testing.T) {
 	m = press(t, m, "down", "space", "+", "-", "m", "esc", "u", "R", "tab", "h", "c", "?")
 	_ = m.View()
 }
+
+// TestRunesArrivingTogether: keys typed faster than the terminal is read
+// come as one message ("jj"); each must count, as if typed one by one.
+func TestRunesArrivingTogether(t *testing.T) {
+	one := testModel(t, 100, 30)
+	for range 2 {
+		next, _ := one.Update(tea.KeyMsg{Type: tea.KeyRunes, Runes: []rune{'j'}})
+		one = next.(model)
+	}
+	both := testModel(t, 100, 30)
+	next, _ := both.Update(tea.KeyMsg{Type: tea.KeyRunes, Runes: []rune{'j', 'j'}})
+	both = next.(model)
+	if both.sel != one.sel || one.sel == testModel(t, 100, 30).sel {
+		t.Errorf("\"jj\" left the selection at %d; j then j at %d", both.sel, one.sel)
+	}
+}

@@ -303,6 +303,19 @@ func (m model) Update(msg tea.Msg) (tea.Model, tea.Cmd) {
 		return m.takeFloodReport(msg)
 
 	case tea.KeyMsg:
+		if msg.Type == tea.KeyRunes && len(msg.Runes) > 1 && !msg.Paste {
+			// Keys pressed faster than the terminal is read arrive as one
+			// message ("jj"): take them one at a time, each in the mode the
+			// one before left (a form or a typed permeability included).
+			var cmds []tea.Cmd
+			var cur tea.Model = m
+			for _, r := range msg.Runes {
+				var cmd tea.Cmd
+				cur, cmd = cur.Update(tea.KeyMsg{Type: tea.KeyRunes, Runes: []rune{r}, Alt: msg.Alt})
+				cmds = append(cmds, cmd)
+			}
+			return cur, tea.Batch(cmds...)
+		}
 		switch {
 		case m.form.on:
 			return m.formKey(msg)
