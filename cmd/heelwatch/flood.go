@@ -224,6 +224,9 @@ func runFlood(args []string, stdout, stderr io.Writer) int {
 	}
 	if !math.IsNaN(cd) {
 		hole.Cd = cd
+	} else if fh != nil && hole.Cd == 0 {
+		// A hole placed anew keeps the file's discharge coefficient.
+		hole.Cd = fh.Cd
 	}
 
 	var enginePumps []engine.Pump
