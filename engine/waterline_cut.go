@@ -80,6 +80,11 @@ type cutState struct {
 	cut   [2 * maxChains]int // edges k (v_k → v_k+1) with one end below and one above
 	ncut  int
 	ok    bool // false once the cut edges outgrow cut
+
+	// Working space of chains and pieceChains, kept here so that it is not
+	// cleared for every piece.
+	ins, outs [maxChains]int
+	chainBuf  [maxChains]chain
 }
 
 // maxVertices bounds the section vertices handled by the chain method.
@@ -119,7 +124,7 @@ func (c *cutState) flip(k, n int) {
 // chains pairs each edge where the section enters the water with the next
 // edge where it leaves, in the polygon's order.
 func (c *cutState) chains(n int, out *[maxChains]chain) (int, bool) {
-	var ins, outs [maxChains]int
+	ins, outs := &c.ins, &c.outs
 	ni, no := 0, 0
 	for _, k := range c.cut[:c.ncut] {
 		j := k + 1
@@ -331,8 +336,8 @@ func (s *slab) pieceChains(p Plane, xa, xb float64, st *cutState, im *Immersion)
 		}
 		return true
 	}
-	var chains [maxChains]chain
-	nc, ok := st.chains(n, &chains)
+	chains := &st.chainBuf
+	nc, ok := st.chains(n, chains)
 	if !ok {
 		return false
 	}
