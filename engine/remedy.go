@@ -181,6 +181,7 @@ func FindRemedies(v *Vessel, d Damage) RemedySet {
 	high := -low
 	switch {
 	case math.IsNaN(rs.UprightGMM):
+		rs.Needed = math.Abs(pos.HeelDeg) >= RemedyUprightDeg
 		rs.Summary = "Her GM upright could not be worked out, so heelwatch cannot tell a list from a loll and offers no righting option. Treat the heel as a loll until it is known: do not counter-ballast the high side."
 		return rs
 	case rs.UprightGMM < 0:
@@ -211,7 +212,11 @@ func FindRemedies(v *Vessel, d Damage) RemedySet {
 			// The free surface while it fills: the state at half the mass.
 			half := remedySolve(v, d, c, c.mass/2, true, &rs.Solves)
 			if !math.IsNaN(half.UprightGMM) {
-				rs.Options[len(rs.Options)-1].Note = fmt.Sprintf("Half full on the way (%.0f t in), slack, her upright GM is %.2f m.", half.MassT, half.UprightGMM)
+				note := fmt.Sprintf("Halfway (%.0f t of %.0f t in), with the tank slack, her upright GM is %.2f m", half.MassT, c.mass, half.UprightGMM)
+				if half.UprightGMM < rs.UprightGMM {
+					note += ": worse than now before it helps"
+				}
+				rs.Options[len(rs.Options)-1].Note = note + "."
 			}
 		case !rs.Loll && r.Position != nil && r.Position.HeelDeg*pos.HeelDeg < 0 && math.Abs(r.Position.HeelDeg) > RemedyUprightDeg:
 			if u, ok := remedyToUpright(v, d, c, pos.HeelDeg, r, &rs.Solves); ok {
@@ -233,7 +238,7 @@ func FindRemedies(v *Vessel, d Damage) RemedySet {
 	if skipped > 0 {
 		rs.Summary += fmt.Sprintf(" %d more candidate(s) were left unsolved to keep within %d solves.", skipped, RemedyMaxSolves)
 	}
-	rs.Summary += " These are options computed from the hull geometry, one at a time, to weigh against the ship's approved stability information and the damage found; they are not orders."
+	rs.Summary += " They are options to weigh against the ship's approved stability information and the damage found, not orders."
 	return rs
 }
 

@@ -17,8 +17,8 @@ import (
 )
 
 // remedyBarge is a box barge 80 × 16 × 8 m with tanks whose boxes lie
-// inside the shell, so that each is an exact box: wing tanks 20 × 2 × 8 m
-// each side and double-bottom tanks 40 × 8 × 1 m each side, all sea-water
+// inside the shell, so that each is an exact box: wing tanks 20 × 2 × 7 m
+// each side on double-bottom tanks 40 × 8 × 1 m each side, all sea-water
 // ballast at the fills given (P, S wing; P, S double bottom), and one
 // weight of 4592 t at (40, tcg, kg).
 type remedyBarge struct {
@@ -37,8 +37,8 @@ var rbTanks = []struct {
 	name string
 	box  engine.Box
 }{
-	{"Wing P", engine.Box{X0: 30, X1: 50, Y0: -8, Y1: -6, Z0: 0, Z1: 8}},
-	{"Wing S", engine.Box{X0: 30, X1: 50, Y0: 6, Y1: 8, Z0: 0, Z1: 8}},
+	{"Wing P", engine.Box{X0: 30, X1: 50, Y0: -8, Y1: -6, Z0: 1, Z1: 8}},
+	{"Wing S", engine.Box{X0: 30, X1: 50, Y0: 6, Y1: 8, Z0: 1, Z1: 8}},
 	{"DB P", engine.Box{X0: 20, X1: 60, Y0: -8, Y1: 0, Z0: 0, Z1: 1}},
 	{"DB S", engine.Box{X0: 20, X1: 60, Y0: 0, Y1: 8, Z0: 0, Z1: 1}},
 }
@@ -246,8 +246,8 @@ func TestRemedyToUpright(t *testing.T) {
 	if full == nil || part == nil {
 		t.Fatalf("want Wing P filled full and until upright; options: %d", len(rs.Options))
 	}
-	// 0.98·320 m³ of sea water at 7 m to port against 367 t·m to starboard:
-	// by hand she comes to TCG = (4592·0.08 − 321.4·7)/4913.4 = −0.38 m, to
+	// 0.98·280 m³ of sea water at 7 m to port against 367 t·m to starboard:
+	// by hand she comes to TCG = (4592·0.08 − 281.3·7)/4873.3 = −0.33 m, to
 	// port (moment balance, practice).
 	if full.Position.HeelDeg > -1 {
 		t.Fatalf("Wing P full: heel %.3f°, want an overshoot to port", full.Position.HeelDeg)
@@ -313,7 +313,7 @@ func TestRemedyLoll(t *testing.T) {
 	if math.Abs(db.Position.HeelDeg-heel) > 1e-6 {
 		t.Errorf("DB S ballasted: heel %.9f°, wall-sided formula %.9f°", db.Position.HeelDeg, heel)
 	}
-	if !db.Advisable || !strings.Contains(db.Note, "Half full on the way") {
+	if !db.Advisable || !strings.Contains(db.Note, "Halfway") {
 		t.Errorf("DB S: advisable %v, note %q: want advisable with the slack state worked", db.Advisable, db.Note)
 	}
 
@@ -413,10 +413,10 @@ func TestRemedyHoledTankNotUsed(t *testing.T) {
 	}{
 		{"wing S open", func(d engine.Damage) { d[rbIndex("Wing S")].Open = true }, []int{rbIndex("Wing S")}},
 		{"DB S holds water", func(d engine.Damage) { d[rbIndex("DB S")].WaterM3 = 150 }, []int{rbIndex("DB S")}},
-		{"wing S open, DB P holds water", func(d engine.Damage) {
+		{"wing S open, DB S holds water", func(d engine.Damage) {
 			d[rbIndex("Wing S")].Open = true
-			d[rbIndex("DB P")].WaterM3 = 40
-		}, []int{rbIndex("Wing S"), rbIndex("DB P")}},
+			d[rbIndex("DB S")].WaterM3 = 40
+		}, []int{rbIndex("Wing S"), rbIndex("DB S")}},
 	}
 	for _, tc := range tests {
 		t.Run(tc.name, func(t *testing.T) {

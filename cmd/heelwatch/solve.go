@@ -16,7 +16,7 @@ import (
 const solveHelp = `heelwatch solve: where the ship floats with compartments open to the sea.
 
 Usage:
-  heelwatch solve [--vessel FILE|NAME] [--open A,B] [--perm NAME=μ,...] [--format F]
+  heelwatch solve [--vessel FILE|NAME] [--open A,B] [--perm NAME=μ,...] [--remedies] [--format F]
 
 Flags:
   --vessel FILE|NAME  the vessel file, or a bundled vessel's name (default %q)
@@ -24,6 +24,11 @@ Flags:
                       in the vessel file; repeat the flag or separate with commas
   --perm NAME=μ,...   permeability of an open compartment for this solve,
                       0 < μ ≤ 1, in place of the file's (e.g. --perm "Hold 2=0.85")
+  --remedies          also work out the righting options: ballast into an intact
+                      tank on the high side, a low-side tank pumped out, liquid
+                      moved to the mirror tank; with negative upright GM (a loll)
+                      only options that lower G. Each is solved from the hull
+                      geometry; they are options to weigh, not orders.
   --format F          text (default), json or markdown
 
 The answer is the direct solution from the hull geometry at the actual heel
@@ -43,6 +48,7 @@ func runSolve(args []string, stdout, stderr io.Writer) int {
 	fs.Var(&open, "open", "")
 	fs.Var(&perm, "perm", "")
 	format := fs.String("format", "text", "")
+	remedies := fs.Bool("remedies", false, "")
 	help := func(w io.Writer) { fmt.Fprintf(w, solveHelp, vessels.Default) }
 	pos, err := parseInterleaved(fs, args)
 	if err != nil {
@@ -71,6 +77,10 @@ func runSolve(args []string, stdout, stderr io.Writer) int {
 	r := report.New(v, source(info), a, now(), version)
 	r.Condition = info.Condition
 	r.Open = inOrderGiven(open)
+	if *remedies {
+		rs := engine.FindRemedies(v, d)
+		r.Remedies = &rs
+	}
 	if err := write(stdout, r); err != nil {
 		fmt.Fprintln(stderr, "heelwatch solve: writing the report:", err)
 		return exitFailed

@@ -51,6 +51,12 @@ type Document struct {
 	Condition        string         `json:"condition"` // the loading condition's name
 	Made             string         `json:"made"`      // RFC 3339, UTC
 	Version          string         `json:"heelwatch_version"`
+
+	// Present only when the righting options were asked for (Report.Remedies).
+	Remedies        *[]RemedyDoc `json:"remedies,omitempty"`         // ranked, best first
+	RemediesSummary string       `json:"remedies_summary,omitempty"` // what kind of heel it is and the rule that follows
+	RemediesLoll    *bool        `json:"remedies_loll,omitempty"`    // upright GM negative: only options that lower G
+	RemediesCaution string       `json:"remedies_caution,omitempty"` // options to weigh, not orders
 }
 
 // Equilibrium is the free-floating position found from the hull geometry.
@@ -256,6 +262,11 @@ func Build(r Report) Document {
 	}
 	for _, f := range r.Flags() {
 		d.Flags = append(d.Flags, FlagDoc{f.Code, f.Severity.String(), f.Message})
+	}
+	if rs := r.Remedies; rs != nil {
+		list := buildRemedies(rs)
+		loll := rs.Loll
+		d.Remedies, d.RemediesSummary, d.RemediesLoll, d.RemediesCaution = &list, rs.Summary, &loll, RemediesCaution
 	}
 	for _, c := range a.Criteria {
 		d.Criteria = append(d.Criteria, CriterionDoc{Set: c.Set, Code: c.Code, Requirement: c.Requirement,

@@ -141,6 +141,10 @@ func Markdown(w io.Writer, r Report) error {
 	}
 	e.line()
 
+	if r.Remedies != nil {
+		markdownRemedies(e, r.Remedies)
+	}
+
 	if g := a.GZ; g != nil && len(g.HeelDeg) > 0 {
 		e.line("## Righting levers")
 		e.line()

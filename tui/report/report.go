@@ -39,8 +39,12 @@ type Report struct {
 	Permeabilities map[string]float64 // μ in force for each open compartment
 
 	Assessment engine.Assessment
-	Made       time.Time // when the assessment was made (shown in UTC)
-	Version    string    // heelwatch's version
+	// Remedies, when set, are the righting options worked out for the
+	// state (engine.FindRemedies), shown after the flags; nil leaves them
+	// out of every format.
+	Remedies *engine.RemedySet
+	Made     time.Time // when the assessment was made (shown in UTC)
+	Version  string    // heelwatch's version
 }
 
 // New returns the Report of assessment a of vessel v: the open

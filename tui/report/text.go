@@ -156,6 +156,10 @@ func Text(w io.Writer, r Report) error {
 		}
 		writeLines(e, t.lines("  "))
 	}
+	if r.Remedies != nil {
+		e.line()
+		textRemedies(e, r.Remedies)
+	}
 	if len(a.Notes) > 0 {
 		e.line()
 		e.line("Notes")
