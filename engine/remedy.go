@@ -118,8 +118,9 @@ type RemedySet struct {
 // FindRemedies lists and solves the righting options for damage state d of
 // v. It is on demand, not per keystroke: it spends at most RemedyMaxSolves
 // solves (each a full free-floating equilibrium or an upright-GM solve);
-// on the bundled ship holed in a wing tank it takes 16, about 2 ms. It does not change v, so it may run in a
-// goroutine while v is not being edited. It never fails: a state with no
+// on the bundled ship holed in a wing tank it takes 16, about 2 ms. It
+// does not change v, so it may run in a goroutine (a tea.Cmd) while v is
+// not being edited; d is copied first. It never fails: a state with no
 // floating position gives no options and says why.
 //
 // Candidates are intact tanks only: a compartment open to the sea or
@@ -160,7 +161,8 @@ func FindRemedies(v *Vessel, d Damage) RemedySet {
 	if v == nil || v.Hull == nil || len(v.tanks) != len(v.Compartments) {
 		panic("engine: FindRemedies needs a vessel made by NewVessel")
 	}
-	rs := RemedySet{Damage: append(Damage(nil), d...), UprightGMM: math.NaN()}
+	d = append(Damage(nil), d...)
+	rs := RemedySet{Damage: d, UprightGMM: math.NaN()}
 	pos, err := Solve(v, d)
 	rs.Solves++
 	if err != nil {
