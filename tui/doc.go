@@ -68,6 +68,26 @@
 //     shade its water up to its free surface (engine.Position.Held), and
 //     the stage's row in the panel is highlighted. When the damage state
 //     changes otherwise after a run the panel says so.
+//   - The righting options (o): what engine.FindRemedies works out for the
+//     damage state shown, on request, in a panel that takes the body of
+//     the screen under the header. First, plainly, whether the heel is a
+//     list or a loll, with the upright GM; in a loll, in the danger style,
+//     not to counter-ballast the high side. Then the options ranked best
+//     first, one row each: the action, the mass, the heel she comes to with
+//     its side, GM where she lies, the least freeboard to the deck edge
+//     (from 110 columns also the upright GM and the lowest unprotected
+//     opening's height) and whether it is advisable; their notes under the
+//     table, and the engine's summary in full (above the table on a wide
+//     screen, after the notes on a narrow one). What does not fit scrolls
+//     with [ ]; the foot of the panel, always in view, says they are
+//     options to weigh, not orders. A change of the damage state does not
+//     work them out again (the engine's search is on demand, up to 48
+//     solves): the panel shows no option, says they are out of date, and o
+//     works them out for the state now; undone back to the state they were
+//     worked out for, they are current again. The report key includes them
+//     when they are current, and each result goes into the event log. The
+//     flooding-run panel and the righting options take turns: t brings the
+//     run's panel back, and starting a run puts it in place of the options.
 //
 // The smallest screen is 80×24; below it the screen says what it needs.
 //
@@ -88,7 +108,8 @@
 //	tab, v             the next picture: section, profile, GZ curve,
 //	                   criteria (narrow screens only)
 //	h                  the hand method's working shown or hidden
-//	[ ]                scroll the hand working, or the flags and criteria
+//	[ ]                scroll the righting options, the hand working, or
+//	                   the flags and criteria
 //	w                  write the Markdown report of the state shown
 //	f                  flooding run: the hole-and-pumps form for the
 //	                   selected compartment (in the form: tab, shift+tab,
@@ -97,6 +118,9 @@
 //	                   stops a run still computing
 //	s                  the run's next stage onto the dashboard as water held
 //	                   (once a run has finished)
+//	o                  the righting options worked out for the state shown
+//	                   and their panel shown; again on current options, the
+//	                   panel hidden
 //	c                  palette: day, night, mono
 //	?                  all keys, or back to the short help bar
 //	q, ctrl+c          quit
@@ -125,7 +149,11 @@
 // safe for concurrent use, is held by one Cmd at a time, the screen stays
 // live between steps, and a newer run or hiding the panel stops an older one
 // at its next step (its messages are dropped). The last Cmd works out the
-// report (engine.FloodRun.Report). View draws only: every size is decided in
+// report (engine.FloodRun.Report). The righting options have a sequence
+// number of their own too: each request's Cmd calls engine.FindRemedies on
+// a copy of the damage state and only the newest request's options are
+// kept; while it computes, the panel's title carries the computing mark,
+// and a report asked for meanwhile waits for them. View draws only: every size is decided in
 // one WindowSizeMsg handler (resize) and every figure went through num,
 // which prints "—" for a value that is not a finite number.
 //

@@ -170,6 +170,7 @@ func (m model) startFlood(q floodRequest) (tea.Model, tea.Cmd) {
 	f.seq++
 	f.latest.Store(int64(f.seq))
 	f.show, f.running, f.finishing = true, true, false
+	m.rem.show = false // the run's panel in its place
 	f.req, f.hole, f.prog, f.track, f.rep, f.err, f.stage = q, engine.Hole{}, engine.FloodProgress{}, nil, nil, "", 0
 	m.keys.RunStage.SetEnabled(false)
 	name := m.v.Compartments[q.ci].Name

@@ -18,6 +18,7 @@ type keyMap struct {
 	HoleRun               key.Binding // the hole-and-pumps form, then a flooding run
 	RunPanel              key.Binding // the flooding-run panel shown or hidden
 	RunStage              key.Binding // the run's next stage onto the dashboard
+	Remedies              key.Binding // the righting options worked out and shown, or hidden
 	Palette               key.Binding
 	Help                  key.Binding
 	Quit                  key.Binding
@@ -44,6 +45,7 @@ func newKeyMap() keyMap {
 		HoleRun:  key.NewBinding(key.WithKeys("f"), key.WithHelp("f", "flooding run")),
 		RunPanel: key.NewBinding(key.WithKeys("t"), key.WithHelp("t", "run panel")),
 		RunStage: key.NewBinding(key.WithKeys("s"), key.WithHelp("s", "stage shown"), key.WithDisabled()),
+		Remedies: key.NewBinding(key.WithKeys("o"), key.WithHelp("o", "righting options")),
 		Palette:  key.NewBinding(key.WithKeys("c"), key.WithHelp("c", "day/night/mono")),
 		Help:     key.NewBinding(key.WithKeys("?"), key.WithHelp("?", "keys")),
 		Quit:     key.NewBinding(key.WithKeys("q", "ctrl+c"), key.WithHelp("q", "quit")),
@@ -53,8 +55,8 @@ func newKeyMap() keyMap {
 // ShortHelp is the one-line help bar: the keys an officer needs first.
 func (k keyMap) ShortHelp() []key.Binding {
 	// ? and q before the rest, so that a narrow bar cuts the others first;
-	// then the flooding run, then the pictures.
-	return []key.Binding{k.Move, k.Flood, k.MuUp, k.MuSet, k.Undo, k.Help, k.Quit, k.HoleRun, k.RunPanel, k.RunStage, k.Picture, k.Hand}
+	// then the righting options, the flooding run, then the pictures.
+	return []key.Binding{k.Move, k.Flood, k.MuUp, k.MuSet, k.Undo, k.Help, k.Quit, k.Remedies, k.HoleRun, k.RunPanel, k.RunStage, k.Picture, k.Hand}
 }
 
 // FullHelp is the help shown with `?`, in three columns that fit 80
@@ -72,7 +74,8 @@ func (k keyMap) FullHelp() [][]key.Binding {
 		{k.Up, k.Down, say(k.Top, "home", "first"), say(k.Bottom, "end", "last"), say(k.Picture, "tab", "next picture"),
 			say(k.HoleRun, "f", "hole & pumps"), say(k.RunPanel, "t", "run panel")},
 		{say(k.Flood, "space", "open to sea / intact"), say(k.MuUp, "+ −", "permeability ±0.05"),
-			say(k.MuSet, "m", "type a permeability"), k.Undo, k.Reset, stage},
+			say(k.MuSet, "m", "type a permeability"), k.Undo, k.Reset, stage,
+			say(k.Remedies, "o", "righting options")},
 		{say(k.Hand, "h", "hand working on/off"), say(k.WorkUp, "[ ]", "scroll working/criteria"), k.Report,
 			say(k.Palette, "c", "day / night / mono"), say(k.Help, "?", "close this help"),
 			say(k.Quit, "q", "quit (also ctrl+c)")},

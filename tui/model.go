@@ -81,8 +81,9 @@ type model struct {
 	editing  bool
 	inputErr string
 
-	form  floodForm  // the hole-and-pumps form of a flooding run
-	flood floodState // the flooding run and its panel
+	form  floodForm   // the hole-and-pumps form of a flooding run
+	flood floodState  // the flooding run and its panel
+	rem   remedyState // the righting options and their panel
 
 	rend    *lipgloss.Renderer
 	palette int
@@ -148,6 +149,7 @@ func newModel(v *engine.Vessel, info *vessels.Info, opts Options) model {
 		damage:  v.Intact(),
 		latest:  new(atomic.Int64),
 		flood:   floodState{latest: new(atomic.Int64)},
+		rem:     remedyState{latest: new(atomic.Int64)},
 		changes: map[int]change{},
 		results: map[int][2]string{},
 		logNext: 1,
@@ -288,7 +290,7 @@ func (m model) Update(msg tea.Msg) (tea.Model, tea.Cmd) {
 		return m, m.addLog(m.now(), line)
 
 	case spinner.TickMsg:
-		if !m.pending() {
+		if !m.pending() && !m.rem.running {
 			m.spinning = false
 			return m, nil
 		}
@@ -301,6 +303,9 @@ func (m model) Update(msg tea.Msg) (tea.Model, tea.Cmd) {
 
 	case floodDoneMsg:
 		return m.takeFloodReport(msg)
+
+	case remedyMsg:
+		return m.takeRemedies(msg)
 
 	case tea.KeyMsg:
 		if msg.Type == tea.KeyRunes && len(msg.Runes) > 1 && !msg.Paste {
@@ -353,8 +358,11 @@ func (m model) key(msg tea.KeyMsg) (tea.Model, tea.Cmd) {
 		if key.Matches(msg, k.WorkUp) {
 			step = -3
 		}
-		// The hand working while it is shown, else the flags and criteria.
-		if m.showHand && m.cur != nil && m.cur.Hand != nil {
+		// The righting options while their panel is shown, else the hand
+		// working while it is shown, else the flags and criteria.
+		if m.rem.show {
+			m.rem.scroll = min(max(0, m.rem.scroll+step), m.remedyScrollMax())
+		} else if m.showHand && m.cur != nil && m.cur.Hand != nil {
 			m.handScroll = min(max(0, m.handScroll+step), max(0, len(m.cur.Hand.Steps)-1))
 		} else {
 			m.textScroll = min(max(0, m.textScroll+step), 200)
@@ -363,7 +371,7 @@ func (m model) key(msg tea.KeyMsg) (tea.Model, tea.Cmd) {
 		m.palette = (m.palette + 1) % len(paletteNames)
 		m.setStyles()
 	case key.Matches(msg, k.Report):
-		if m.pending() {
+		if !m.reportReady() {
 			m.wantRep = true
 			return m, nil
 		}
@@ -371,7 +379,15 @@ func (m model) key(msg tea.KeyMsg) (tea.Model, tea.Cmd) {
 			return m, m.addLog(m.now(), "report not written: there are no figures to report")
 		}
 		return m, m.writeReport()
+	case key.Matches(msg, k.Remedies):
+		return m.remedyKey()
 	case key.Matches(msg, k.RunPanel):
+		if m.rem.show {
+			// The righting options give way to the run's panel.
+			m.rem.show = false
+			m.flood.show = true
+			return m, nil
+		}
 		if m.flood.show {
 			m.flood.show = false
 			return m, m.stopFlood()
@@ -586,7 +602,7 @@ func (m model) takeResult(r resultMsg) (tea.Model, tea.Cmd) {
 		m.shown = r.seq
 		m.derived = derive(m.v, m.into, m.cur)
 		m.ensureVisible()
-		if m.wantRep {
+		if m.wantRep && m.reportReady() {
 			m.wantRep = false
 			cmds = append(cmds, m.writeReport())
 		}

@@ -23,7 +23,9 @@ func (m model) View() string {
 	l := m.lay
 	var lines []string
 	lines = append(lines, m.headerView(m.width))
-	if l.wide {
+	if m.rem.show {
+		lines = append(lines, m.remedyPanel(m.width, l.bodyH)...)
+	} else if l.wide {
 		lines = append(lines, m.wideBody()...)
 	} else {
 		lines = append(lines, m.narrowBody()...)
