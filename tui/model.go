@@ -566,7 +566,8 @@ func (m model) commit(d engine.Damage, what string) (tea.Model, tea.Cmd) {
 	m.seq++
 	m.latest.Store(int64(m.seq))
 	m.changes[m.seq] = change{at: m.now(), what: what}
-	return m, tea.Batch(recompute(m.v, cloneDamage(d), m.seq, m.latest), m.startSpinner())
+	spin := m.startSpinner() // before m is copied out: the order is not Go's to promise
+	return m, tea.Batch(recompute(m.v, cloneDamage(d), m.seq, m.latest), spin)
 }
 
 // recompute returns the Cmd that assesses damage state d, change number seq.

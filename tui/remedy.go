@@ -100,7 +100,8 @@ func (m model) remedyKey() (tea.Model, tea.Cmd) {
 	r.latest.Store(int64(r.seq))
 	r.running, r.err = true, ""
 	r.asked = cloneDamage(m.damage)
-	return m, tea.Batch(remediesCmd(m.v, cloneDamage(m.damage), r.seq, r.latest), m.startSpinner())
+	spin := m.startSpinner() // before m is copied out
+	return m, tea.Batch(remediesCmd(m.v, cloneDamage(m.damage), r.seq, r.latest), spin)
 }
 
 // takeRemedies keeps the newest request's options and logs them; any
