@@ -486,6 +486,16 @@ func (pr *Problem) EquilibriumFrom(guess Plane, warm bool) (Position, error) {
 func (pr *Problem) atHeel(heelRad float64, guess Plane) (state, error) {
 	guess.C = math.Tan(heelRad)
 	s, _, ok := pr.newton(guess, true)
+	if !ok && heelRad == 0 {
+		// Upright, Newton can stall where the moment of trim has a minimum
+		// that is not zero (the deck going under at one end): scan the trim
+		// for a change of sign instead.
+		if ts, found, end := pr.trimScan(guess); found {
+			return ts, nil
+		} else if end != "" {
+			return ts, &NoEquilibrium{Sinks, fmt.Sprintf("she founders by the %s: no trim up to %.0f° either way brings her centre of buoyancy under her centre of gravity", end, trimScanMaxDeg)}
+		}
+	}
 	if !ok {
 		// Upright, a search that ran away to a steep trim means no trim
 		// brings her centre of buoyancy under G: she founders by that end.
@@ -499,6 +509,101 @@ func (pr *Problem) atHeel(heelRad float64, guess Plane) (state, error) {
 		return s, &NoEquilibrium{NotConverged, fmt.Sprintf("no draft and trim found at %.1f° heel", heelRad*180/math.Pi)}
 	}
 	return s, nil
+}
+
+// trimScanMaxDeg bounds the trim angles trimScan looks at.
+const trimScanMaxDeg = 60.0
+
+// trimScan looks for the upright trim at which buoyancy and weight line up
+// (f1 = 0) by stepping the trim angle 1° at a time out to ±trimScanMaxDeg
+// from level, the draft solved for the displacement at each, and bisecting
+// the first change of sign. found is false when there is none; then end
+// names the end she goes down by ("head" or "stern", from the sign of the
+// moment), or is "" when the scan itself failed. Bounded: at most about
+// 120 draft solves and 60 bisection steps.
+func (pr *Problem) trimScan(guess Plane) (state, bool, string) {
+	f1 := func(deg float64, a float64) (state, bool) {
+		return pr.draftAt(Plane{A: a, B: -math.Tan(deg * math.Pi / 180)})
+	}
+	s0, ok := f1(0, guess.A)
+	if !ok {
+		return s0, false, ""
+	}
+	r0 := s0.f[1]
+	for _, dir := range []float64{1, -1} {
+		prev, prevA := 0.0, s0.p.A
+		prevR := r0
+		for deg := 1.0; deg <= trimScanMaxDeg; deg++ {
+			st, ok := f1(dir*deg, prevA)
+			if !ok {
+				break
+			}
+			if r := st.f[1]; (r < 0) != (prevR < 0) {
+				lo, hi, rlo := prev, dir*deg, prevR
+				a := prevA
+				best := st
+				for i := 0; i < 60 && math.Abs(hi-lo) > 1e-10; i++ {
+					mid := (lo + hi) / 2
+					sm, ok := f1(mid, a)
+					if !ok {
+						break
+					}
+					best = sm
+					if (sm.f[1] < 0) == (rlo < 0) {
+						lo, rlo, a = mid, sm.f[1], sm.p.A
+					} else {
+						hi = mid
+					}
+				}
+				// Polish draft and trim together from the bracket.
+				if ns, _, ok := pr.newton(best.p, true); ok {
+					return ns, true, ""
+				}
+				return pr.eval(best.p, true), true, ""
+			}
+			prev, prevA, prevR = dir*deg, st.p.A, st.f[1]
+		}
+	}
+	// f1 = (MX − xG·V) + B(…): negative means buoyancy acts aft of G, so she
+	// goes down by the head.
+	if r0 < 0 {
+		return s0, false, "head"
+	}
+	return s0, false, "stern"
+}
+
+// draftAt solves the draft for the displacement at the slopes of p (trim
+// and heel fixed), from p.A: Newton safeguarded by a bracket, at most 80
+// steps.
+func (pr *Problem) draftAt(p Plane) (state, bool) {
+	target := pr.massT / pr.rho
+	_, _, zmin, zmax := pr.v.Hull.solid.Extent()
+	span := math.Abs(p.B)*pr.v.Hull.LengthM*2 + math.Abs(p.C)*pr.v.Hull.BreadthM + 1
+	lo, hi := zmin-span-math.Abs(p.B)*math.Abs(pr.v.Hull.solid.xmin), zmax+span+math.Abs(p.B)*math.Abs(pr.v.Hull.solid.xmax)
+	if !(p.A > lo && p.A < hi) {
+		p.A = (lo + hi) / 2
+	}
+	for it := 0; it < 80; it++ {
+		s := pr.eval(p, true)
+		f := s.f[0]
+		if math.Abs(f) <= 1e-11*target {
+			return s, true
+		}
+		if f > 0 {
+			hi = p.A
+		} else {
+			lo = p.A
+		}
+		next := p.A - f/s.e.AW
+		if !(s.e.AW > 0) || !(next > lo && next < hi) {
+			next = (lo + hi) / 2
+		}
+		if hi-lo < 1e-12 {
+			return s, true
+		}
+		p.A = next
+	}
+	return pr.eval(p, true), false
 }
 
 // foundersSlope is the trim slope (tan 20°) past which a failed upright trim
