@@ -30,6 +30,18 @@ func (o Outcome) String() string {
 	return "unknown"
 }
 
+// Plain says the outcome as a sentence's subject and verb: "she sinks",
+// "she capsizes", or that no position was found.
+func (o Outcome) Plain() string {
+	switch o {
+	case Sinks:
+		return "she sinks"
+	case Capsizes:
+		return "she capsizes"
+	}
+	return "heelwatch could not find where she floats"
+}
+
 // NoEquilibrium is the error returned when the vessel does not float.
 type NoEquilibrium struct {
 	Outcome Outcome

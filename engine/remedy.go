@@ -167,7 +167,7 @@ func FindRemedies(v *Vessel, d Damage) RemedySet {
 	rs.Solves++
 	if err != nil {
 		rs.NoEq = asNoEquilibrium(err)
-		rs.Summary = fmt.Sprintf("There is no floating position as set (she %s: %s), so no righting option is worked out. Stopping the inflow and shedding weight come first.", rs.NoEq.Outcome, rs.NoEq.Reason)
+		rs.Summary = fmt.Sprintf("There is no floating position as set (%s: %s), so no righting option is worked out. Stopping the inflow and shedding weight come first.", rs.NoEq.Outcome.Plain(), rs.NoEq.Reason)
 		return rs
 	}
 	rs.Position = &pos

@@ -638,7 +638,7 @@ func (m model) takeResult(r resultMsg) (tea.Model, tea.Cmd) {
 func (m model) outcome(a *engine.Assessment, long bool) string {
 	if a.Position == nil {
 		if a.NoEq != nil {
-			return "NO EQUILIBRIUM: she " + a.NoEq.Outcome.String() + " (" + a.NoEq.Reason + ")"
+			return "NO EQUILIBRIUM: " + a.NoEq.Outcome.Plain() + " (" + a.NoEq.Reason + ")"
 		}
 		return "no floating position"
 	}

@@ -169,7 +169,7 @@ func (m model) remedyLead(rs *engine.RemedySet, w int) []string {
 	case rs.Position == nil:
 		why := "no floating position"
 		if rs.NoEq != nil {
-			why = "she " + rs.NoEq.Outcome.String()
+			why = rs.NoEq.Outcome.Plain()
 		}
 		add(st.Danger.Render, "‼ NO FLOATING POSITION ("+why+"): no righting option is worked out.")
 	case rs.Loll:

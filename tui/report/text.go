@@ -36,9 +36,11 @@ func Text(w io.Writer, r Report) error {
 
 	p := a.Position
 	if p == nil {
-		e.line("Floating position: NONE — she ", r.Outcome())
 		if a.NoEq != nil {
+			e.line("Floating position: NONE — ", a.NoEq.Outcome.Plain())
 			e.line("  ", sentence(a.NoEq.Reason), ".")
+		} else {
+			e.line("Floating position: NONE")
 		}
 	} else {
 		e.line("Floating position (direct, from the hull geometry)")
