@@ -1,5 +1,7 @@
 package engine
 
+import "sort"
+
 // This file holds the result types that the screen and the command line
 // show, and Assess, which computes all of them for one keystroke.
 
@@ -176,5 +178,9 @@ func Assess(v *Vessel, d Damage) Assessment {
 		}
 	}
 	a.Flags = flags(v, d, a.Position, a.NoEq, a.Hand, up)
+	if more := StabilityFlags(v, a.Position, a.GZ, a.Criteria); len(more) > 0 {
+		a.Flags = append(a.Flags, more...)
+		sort.SliceStable(a.Flags, func(i, j int) bool { return a.Flags[i].Severity > a.Flags[j].Severity })
+	}
 	return a
 }

@@ -43,6 +43,13 @@ import (
 //	will-capsize          danger           no equilibrium: no heel short of 90° brings    there is no position of rest: she capsizes
 //	                                       her to rest
 //	not-solved            danger           the solver stopped without an answer           the figures on screen are not a floating position
+//	criteria-failed       danger           a criterion of the sets she is held to fails   by her own rules she no longer has the
+//	                                       (indicators such as SOLAS s excepted)          stability required: which ones, by how much
+//	little-stability      danger/caution   beyond where she lies, the range of positive   a gust, a wave or more water can capsize her:
+//	                                       GZ is under 10° or its largest GZ under        range, GZ max and where it vanishes
+//	                                       0.05 m (danger); under 20° or 0.10 m (caution)
+//	deck-edge-near        caution          the deck edge is clear but within 0.30 m of    a little more heel or water puts water on deck
+//	                                       the water, or within 5° of further heel        there: how far, and at what heel
 //
 // A flag is a pure function of the state: it clears as soon as its cause is
 // gone.
@@ -62,6 +69,9 @@ const (
 	FlagWillSink        = "will-sink"
 	FlagWillCapsize     = "will-capsize"
 	FlagNotSolved       = "not-solved"
+	FlagCriteriaFailed  = "criteria-failed"
+	FlagLittleStability = "little-stability"
+	FlagDeckEdgeNear    = "deck-edge-near"
 )
 
 // Thresholds of the flags.
@@ -82,7 +92,83 @@ const (
 	FlagWallSidedPart = 0.03
 	// FlagTrimPart is the trim, as a fraction of the length, taken as large.
 	FlagTrimPart = 0.01
+	// The residual stability that raises little-stability: range beyond the
+	// equilibrium and the largest GZ in it. The caution figures are MARPOL
+	// I/28.3's residual range and GZ, used here as a yardstick for any ship;
+	// the danger figures, half of them, are heelwatch's own.
+	FlagRangeDangerDeg  = 10.0
+	FlagGZDangerM       = 0.05
+	FlagRangeCautionDeg = 20.0
+	FlagGZCautionM      = 0.10
+	// FlagDeckNearM and FlagDeckNearDeg: a deck edge closer to the water
+	// than this, or that immerses within this much more heel, is near
+	// (heelwatch's own figures).
+	FlagDeckNearM   = 0.30
+	FlagDeckNearDeg = 5.0
 )
+
+// StabilityFlags returns the flags that the righting-lever curve and the
+// criteria raise for a floating position: criteria that fail, little
+// residual stability, a deck edge near the water. They join the flags of
+// Flags in Assess.
+func StabilityFlags(v *Vessel, pos *Position, c *GZCurve, crit []CriterionResult) []Flag {
+	var out []Flag
+	add := func(code string, sev Severity, format string, args ...any) {
+		out = append(out, Flag{Code: code, Severity: sev, Message: fmt.Sprintf(format, args...)})
+	}
+	if pos == nil {
+		return nil
+	}
+	var failed []string
+	total := 0
+	for _, r := range crit {
+		if r.Indicator {
+			continue
+		}
+		total++
+		if !r.Pass {
+			failed = append(failed, fmt.Sprintf("%s (%s)", r.Requirement, r.Code))
+		}
+	}
+	if len(failed) > 0 {
+		list := failed[0]
+		for _, f := range failed[1:] {
+			list += "; " + f
+		}
+		add(FlagCriteriaFailed, Danger, "%d of the %d criteria she is held to fail: %s. By her own rules she no longer has the stability required; see the criteria for the figures.", len(failed), total, list)
+	}
+	if c != nil {
+		rng := c.RangeDeg
+		from := c.EquilibriumDeg
+		to := math.Min(c.VanishingDeg, from+math.Max(rng, 0))
+		gzMax, at := c.MaxBetween(from, math.Max(to, from))
+		sev := Info
+		switch {
+		case rng < FlagRangeDangerDeg || gzMax < FlagGZDangerM:
+			sev = Danger
+		case rng < FlagRangeCautionDeg || gzMax < FlagGZCautionM:
+			sev = Caution
+		}
+		if sev > Info {
+			add(FlagLittleStability, sev, "Little stability is left: beyond the %.1f° she lies at, the righting lever stays positive for only %.1f° more (it vanishes at %.1f°) and is at most %.3f m (at %.1f°). A gust, a wave or more water could capsize her: keep weight low, stop the flooding, and avoid turns and seas that heel her further.",
+				from, math.Max(rng, 0), c.VanishingDeg, gzMax, at)
+		}
+	}
+	if de := pos.DeckEdge; de.HeightM >= 0 {
+		more := math.Inf(1)
+		if c != nil && c.DeckEdgeDeg < 90 {
+			more = c.DeckEdgeDeg - c.EquilibriumDeg
+		}
+		if de.HeightM < FlagDeckNearM || more < FlagDeckNearDeg {
+			msg := fmt.Sprintf("The deck edge is near the water: %.2f m clear on %s %s", de.HeightM, de.Side.On(), flagWhere(de.XM, v.Hull.LengthM))
+			if !math.IsInf(more, 1) {
+				msg += fmt.Sprintf(", and it goes under with %.1f° more heel (at %.1f°)", math.Max(more, 0), c.DeckEdgeDeg)
+			}
+			add(FlagDeckEdgeNear, Caution, "%s. A little more heel or water puts water on deck, and the righting lever falls off from there.", msg)
+		}
+	}
+	return out
+}
 
 // Flags returns the flags raised by damage state d of v: pos is the direct
 // solution (nil when there is none, then noEq says why) and hand the hand
@@ -155,12 +241,12 @@ func flags(v *Vessel, d Damage, pos *Position, noEq *NoEquilibrium, hand *HandWo
 
 	// Deck edge and margin line.
 	if de := pos.DeckEdge; de.HeightM < 0 {
-		add(FlagDeckEdge, Danger, "The deck edge is under water on the %s side %s, %.2f m deep: water lies on deck there and the righting lever falls off from this heel on.",
-			de.Side, flagWhere(de.XM, L), -de.HeightM)
+		add(FlagDeckEdge, Danger, "The deck edge is under water on %s %s, %.2f m deep: water lies on deck there and the righting lever falls off from here.",
+			de.Side.On(), flagWhere(de.XM, L), -de.HeightM)
 	}
 	if ml := pos.MarginLine; ml.HeightM < 0 {
-		add(FlagMarginLine, Danger, "The margin line is under water on the %s side %s, by %.2f m: she is past the limit her subdivision was laid out for and water can spread along the bulkhead deck.",
-			ml.Side, flagWhere(ml.XM, L), -ml.HeightM)
+		add(FlagMarginLine, Danger, "The margin line is under water on %s %s, by %.2f m: she is past the limit her subdivision was laid out for and water can spread along the bulkhead deck.",
+			ml.Side.On(), flagWhere(ml.XM, L), -ml.HeightM)
 	}
 
 	// Bottom out of the water.

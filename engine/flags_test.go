@@ -510,3 +510,64 @@ func TestFlagCoupledHeelAndTrim(t *testing.T) {
 	}
 	flagExpect(t, "coupled", fl, engine.FlagPastSmallAngles, true, "work on each other")
 }
+
+// TestStabilityFlags: the flags from the righting-lever curve and the
+// criteria, each raised on a case built to raise it and not on a near one.
+// The curves are GZ = a·sin(180°·θ/θv), which vanishes at θv with its
+// largest value a at θv/2 (built for the test, not a hull's).
+func TestStabilityFlags(t *testing.T) {
+	v := flagBarge{80, 16, 8, 4, 5}.vessel(t, 40, 0, nil)
+	pos := &engine.Position{DeckEdge: engine.Clearance{HeightM: 1, XM: 40, Side: engine.Both}}
+	curve := func(a, vanish float64) *engine.GZCurve {
+		c := &engine.GZCurve{Toward: engine.Starboard, VanishingDeg: vanish, RangeDeg: vanish, DeckEdgeDeg: 90, DownfloodingDeg: 90, Vanishes: true}
+		for deg := 0.0; deg <= vanish; deg++ {
+			c.HeelDeg = append(c.HeelDeg, deg)
+			c.GZM = append(c.GZM, a*math.Sin(math.Pi*deg/vanish))
+		}
+		if c.HeelDeg[len(c.HeelDeg)-1] < vanish {
+			c.HeelDeg, c.GZM = append(c.HeelDeg, vanish), append(c.GZM, 0)
+		}
+		return c
+	}
+	for _, c := range []struct {
+		name   string
+		a, v   float64
+		sev    engine.Severity
+		raised bool
+	}{
+		{"range 8°", 0.3, 8, engine.Danger, true},
+		{"range 15°", 0.3, 15, engine.Caution, true},
+		{"GZ max 0.04 m", 0.04, 40, engine.Danger, true},
+		{"GZ max 0.08 m", 0.08, 40, engine.Caution, true},
+		{"range 25°, GZ max 0.2 m", 0.2, 25, engine.Info, false},
+	} {
+		fl := engine.StabilityFlags(v, pos, curve(c.a, c.v), nil)
+		f := flagOne(fl, engine.FlagLittleStability)
+		if (f != nil) != c.raised || f != nil && f.Severity != c.sev {
+			t.Errorf("%s: flag %+v, want raised %v at %v", c.name, f, c.raised, c.sev)
+		}
+	}
+	fail := []engine.CriterionResult{{Code: "range", Requirement: "range ≥ 20°", Pass: false}, {Code: "s-final", Indicator: true, Pass: false}}
+	if f := flagOne(engine.StabilityFlags(v, pos, nil, fail), engine.FlagCriteriaFailed); f == nil || f.Severity != engine.Danger || !strings.Contains(f.Message, "1 of the 1") {
+		t.Errorf("a failing criterion: flag %+v", f)
+	}
+	if f := flagOne(engine.StabilityFlags(v, pos, nil, fail[1:]), engine.FlagCriteriaFailed); f != nil {
+		t.Errorf("only an indicator fails: flag %+v raised", f)
+	}
+	near := *pos
+	near.DeckEdge.HeightM = 0.25
+	if f := flagOne(engine.StabilityFlags(v, &near, nil, nil), engine.FlagDeckEdgeNear); f == nil || !strings.Contains(f.Message, "both sides") {
+		t.Errorf("deck edge 0.25 m clear: flag %+v", f)
+	}
+	if f := flagOne(engine.StabilityFlags(v, pos, curve(0.3, 40), nil), engine.FlagDeckEdgeNear); f != nil {
+		t.Errorf("deck edge 1 m clear, immersing at 90°: flag %+v raised", f)
+	}
+}
+
+// flagOne returns the first flag of the code, nil if none.
+func flagOne(fl []engine.Flag, code string) *engine.Flag {
+	if f := flagFind(fl, code); len(f) > 0 {
+		return &f[0]
+	}
+	return nil
+}

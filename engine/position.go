@@ -8,13 +8,26 @@ type Side int
 const (
 	Port      Side = -1
 	Starboard Side = 1
+	// Both: the two sides alike, as when she floats upright.
+	Both Side = 0
 )
 
 func (s Side) String() string {
-	if s == Port {
+	switch s {
+	case Port:
 		return "port"
+	case Both:
+		return "both"
 	}
 	return "starboard"
+}
+
+// On names the side for a sentence: "the port side", "both sides".
+func (s Side) On() string {
+	if s == Both {
+		return "both sides"
+	}
+	return "the " + s.String() + " side"
 }
 
 // Clearance is the least height of a line along the ship (the deck edge or
@@ -150,6 +163,15 @@ func (pr *Problem) position(s state, it int) Position {
 			}
 			if c.ml < pos.MarginLine.HeightM {
 				pos.MarginLine = Clearance{c.ml, x, c.side}
+			}
+		}
+	}
+	// Upright (the two sides within a millimetre at the least place), the
+	// least clearance is on both sides alike.
+	for _, c := range []*Clearance{&pos.DeckEdge, &pos.MarginLine} {
+		for _, sf := range pos.Freeboards {
+			if sf.XM == c.XM && math.Abs(sf.PortM-sf.StarboardM) < 1e-3 {
+				c.Side = Both
 			}
 		}
 	}

@@ -117,8 +117,11 @@ func trimSense(m float64) string {
 }
 
 func sideShort(s engine.Side) string {
-	if s == engine.Port {
+	switch s {
+	case engine.Port:
 		return "port"
+	case engine.Both:
+		return "P+S"
 	}
 	return "stbd"
 }
