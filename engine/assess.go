@@ -128,6 +128,10 @@ type Assessment struct {
 	Criteria []CriterionResult
 	Flags    []Flag
 	Notes    []string // what could not be computed, and why
+	// UprightGMM is GM₀, the GM with her held upright at free trim (nil when
+	// unknown): beside Position.GMM, the GM where she lies, it tells a list
+	// from a loll.
+	UprightGMM *float64
 }
 
 // Assess computes everything shown for damage state d of v: the floating
@@ -160,6 +164,7 @@ func Assess(v *Vessel, d Damage) Assessment {
 	if a.Position != nil {
 		if gm, ok := UprightGM(v, d, a.Position); ok {
 			up, upPtr = gm, &gm
+			a.UprightGMM = upPtr
 		}
 	}
 	if a.Position != nil {

@@ -53,7 +53,13 @@ func (m model) figures() []figure {
 	}
 	trim := figure{label: "Trim", value: metres(math.Abs(p.TrimM)), note: trimSense(p.TrimM),
 		delta: dif(func(q *engine.Position) float64 { return q.TrimM }, 2)}
-	gm := figure{label: "GM", value: metres(p.GMM), note: "KM " + num(p.KMTM, 2) + " m",
+	gmNote := "KM " + num(p.KMTM, 2) + " m"
+	if up := m.cur.UprightGMM; up != nil && math.Abs(p.HeelDeg) >= 0.05 {
+		// Heeled, GM is that of the heeled waterline; upright tells a list
+		// from a loll.
+		gmNote = "upright " + num(*up, 2) + " m"
+	}
+	gm := figure{label: "GM", value: metres(p.GMM), note: gmNote,
 		delta: dif(func(q *engine.Position) float64 { return q.GMM }, 2), alarm: !(p.GMM > 0)}
 	disp := figure{label: "Displacement", value: withUnit(num(p.DisplacementT, 0), "t"),
 		delta: dif(func(q *engine.Position) float64 { return q.DisplacementT }, 0)}

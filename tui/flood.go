@@ -243,7 +243,8 @@ func (m model) takeFloodReport(msg floodDoneMsg) (tea.Model, tea.Cmd) {
 
 // applyStage puts the run's next stage on the dashboard: the flooded
 // compartment holding that stage's water (added weight), the rest as the
-// dashboard has it. It is an ordinary change, undone by undo.
+// dashboard has it; the end of a run whose levels met puts the space open
+// to the sea. It is an ordinary change, undone by undo.
 func (m model) applyStage() (tea.Model, tea.Cmd) {
 	f := &m.flood
 	if f.rep == nil || len(f.rep.Stages) == 0 {
@@ -268,6 +269,13 @@ func (m model) applyStage() (tea.Model, tea.Cmd) {
 	d[ci] = engine.SpaceState{Permeability: f.req.base[ci].Permeability, WaterM3: st.WaterM3}
 	what := fmt.Sprintf("%s partly flooded: %s stage of the flooding run, %s m³ held",
 		m.v.Compartments[ci].Name, stageName(st.Fraction), num(st.WaterM3, 1))
+	if st.Fraction >= 1 && f.rep.End == engine.FloodEqualised {
+		// Once the levels have met, the space is open to the sea: the water
+		// in it rises and falls with her as she heels (lost buoyancy), not a
+		// weight of fixed volume.
+		d[ci] = engine.SpaceState{Open: true, Permeability: f.req.base[ci].Permeability}
+		what = fmt.Sprintf("%s open to the sea: the levels have met at the end of the flooding run", m.v.Compartments[ci].Name)
+	}
 	return m.apply(d, what)
 }
 

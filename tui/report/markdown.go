@@ -73,7 +73,7 @@ func Markdown(w io.Writer, r Report) error {
 			{"Draft forward (FP)", num(p.DraftFwdM, 3, "m")},
 			{"Trim", trimWords(p.TrimM)},
 			{"Heel", heelWords(p.HeelDeg)},
-			{"GM (free-surface corrected)", num(p.GMM, 3, "m")},
+			{"GM (free-surface corrected)", gmWords(p, a.UprightGMM)},
 			{"KM", num(p.KMTM, 3, "m")},
 			{"KG", num(p.KGM, 3, "m")},
 			{"Free-surface correction", num(p.FSCM, 3, "m")},

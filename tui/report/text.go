@@ -50,7 +50,7 @@ func Text(w io.Writer, r Report) error {
 		t.add("draft forward", num(p.DraftFwdM, 3, "m"))
 		t.add("trim", trimWords(p.TrimM))
 		t.add("heel", heelWords(p.HeelDeg))
-		t.add("GM", num(p.GMM, 3, "m"))
+		t.add("GM", gmWords(p, a.UprightGMM))
 		t.add("KM", num(p.KMTM, 3, "m"))
 		t.add("KG", num(p.KGM, 3, "m"))
 		t.add("free-surface corr.", num(p.FSCM, 3, "m"))
