@@ -42,6 +42,7 @@ type Document struct {
 	Reason           string         `json:"reason"`            // why there is no equilibrium, "" when she floats
 	Severity         string         `json:"severity"`          // highest flag severity: none | info | caution | danger
 	OpenCompartments []OpenDoc      `json:"open_compartments"` // each open compartment with its permeability
+	HeldWater        []HeldDoc      `json:"partly_flooded"`    // compartments holding floodwater, not open to the sea
 	Freeboards       []Freeboard    `json:"freeboards"`
 	Openings         []OpeningDoc   `json:"openings"`
 	HandNote         string         `json:"hand_note"` // why the hand method is not applied, "" when it is
@@ -118,6 +119,13 @@ type OpeningDoc struct {
 }
 
 // OpenDoc is a compartment open to the sea.
+// HeldDoc is a compartment partly flooded: not open to the sea, holding
+// water_m3 of sea water as an added weight.
+type HeldDoc struct {
+	Name    string `json:"name"`
+	WaterM3 Num    `json:"water_m3"`
+}
+
 type OpenDoc struct {
 	Name         string `json:"name"`
 	Use          string `json:"use"`
@@ -208,6 +216,7 @@ func Build(r Report) Document {
 		Outcome:          r.Outcome(),
 		Severity:         r.Severity(),
 		OpenCompartments: []OpenDoc{},
+		HeldWater:        append([]HeldDoc{}, r.heldWater()...),
 		Freeboards:       []Freeboard{},
 		Openings:         []OpeningDoc{},
 		HandNote:         a.HandWhy,

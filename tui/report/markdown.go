@@ -39,8 +39,11 @@ func Markdown(w io.Writer, r Report) error {
 		e.line("Loading condition: ", md(r.Condition), ".")
 		e.line()
 	}
-	if len(r.Open) == 0 {
+	held := r.heldWater()
+	if len(r.Open) == 0 && len(held) == 0 {
 		e.line("No compartment is open to the sea: this is the intact loading condition.")
+	} else if len(r.Open) == 0 {
+		e.line("No compartment is open to the sea.")
 	} else {
 		e.line("Compartments open to the sea (lost buoyancy, each with its permeability μ):")
 		e.line()
@@ -48,6 +51,16 @@ func Markdown(w io.Writer, r Report) error {
 		e.line("|---|---|--:|--:|")
 		for _, o := range doc.OpenCompartments {
 			e.line("| ", md(o.Name), " | ", md(orDash(o.Use)), " | ", num(float64(o.Permeability), 2, ""), " | ", num(float64(o.VolumeM3), 1, "m³"), " |")
+		}
+	}
+	if len(held) > 0 {
+		e.line()
+		e.line("Compartments partly flooded (water held, the added-weight method):")
+		e.line()
+		e.line("| Compartment | Water held |")
+		e.line("|---|--:|")
+		for _, h := range held {
+			e.line("| ", md(h.Name), " | ", num(float64(h.WaterM3), 1, "m³"), " |")
 		}
 	}
 	e.line()

@@ -132,6 +132,23 @@ func (r Report) Severity() string {
 }
 
 // compartment returns the named compartment of r.Vessel, or nil.
+// heldWater lists the compartments holding floodwater that are not open to
+// the sea (partly flooded, the added-weight method), with the water in each.
+func (r Report) heldWater() []HeldDoc {
+	var out []HeldDoc
+	for i, s := range r.Assessment.Damage {
+		if s.Open || !(s.WaterM3 > 0) {
+			continue
+		}
+		name := fmt.Sprintf("compartment %d", i+1)
+		if r.Vessel != nil && i < len(r.Vessel.Compartments) {
+			name = r.Vessel.Compartments[i].Name
+		}
+		out = append(out, HeldDoc{Name: name, WaterM3: Num(s.WaterM3)})
+	}
+	return out
+}
+
 func (r Report) compartment(name string) *engine.Compartment {
 	if r.Vessel == nil {
 		return nil

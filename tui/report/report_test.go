@@ -204,3 +204,40 @@ func TestWords(t *testing.T) {
 		}
 	}
 }
+
+// TestPartlyFloodedListed: a compartment holding floodwater (not open to
+// the sea) is listed with its water in every format, and the report does
+// not call the condition intact.
+func TestPartlyFloodedListed(t *testing.T) {
+	v := barge(t)
+	d := v.Intact()
+	d[0].WaterM3 = 84.9
+	r := New(v, "test", engine.Assess(v, d), made, "dev")
+	var md, txt, js bytes.Buffer
+	if err := Markdown(&md, r); err != nil {
+		t.Fatal(err)
+	}
+	if err := Text(&txt, r); err != nil {
+		t.Fatal(err)
+	}
+	if err := JSON(&js, r); err != nil {
+		t.Fatal(err)
+	}
+	for name, out := range map[string]string{"markdown": md.String(), "text": txt.String()} {
+		if !strings.Contains(out, "3 wing void S") || !strings.Contains(out, "84.9 m³") || strings.Contains(out, "intact loading condition") {
+			t.Errorf("%s does not list the water held:\n%s", name, out)
+		}
+	}
+	var doc struct {
+		Held []struct {
+			Name    string  `json:"name"`
+			WaterM3 float64 `json:"water_m3"`
+		} `json:"partly_flooded"`
+	}
+	if err := json.Unmarshal(js.Bytes(), &doc); err != nil {
+		t.Fatal(err)
+	}
+	if len(doc.Held) != 1 || doc.Held[0].Name != "3 wing void S" || doc.Held[0].WaterM3 != 84.9 {
+		t.Errorf("JSON partly_flooded = %+v", doc.Held)
+	}
+}

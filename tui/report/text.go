@@ -32,6 +32,14 @@ func Text(w io.Writer, r Report) error {
 		}
 		writeLines(e, t.lines("  "))
 	}
+	if held := r.heldWater(); len(held) > 0 {
+		e.line("Partly flooded (water held): ", plural(len(held), "compartment"))
+		t := table{right: []bool{false, true}}
+		for _, h := range held {
+			t.add(h.Name, num(float64(h.WaterM3), 1, "m³"))
+		}
+		writeLines(e, t.lines("  "))
+	}
 	e.line()
 
 	p := a.Position
