@@ -571,3 +571,18 @@ func flagOne(fl []engine.Flag, code string) *engine.Flag {
 	}
 	return nil
 }
+
+// TestAssessHidesHandWhenNoPosition: with G three depths up a box barge has
+// no position of rest (as in TestFlagNoEquilibrium); the small-angle hand
+// working, which would still print a heel, is held back and said why.
+func TestAssessHidesHandWhenNoPosition(t *testing.T) {
+	b := flagBarge{80, 16, 8, 4, 24}
+	v := b.vessel(t, 40, 0, nil, handSpec{"wing", engine.Box{X0: 30, X1: 50, Y0: 4, Y1: 8, Z0: 0, Z1: 8}, 1, nil})
+	a := engine.Assess(v, handOpen(v, 0))
+	if a.Position != nil || a.NoEq == nil {
+		t.Fatalf("the case floats (%+v): it does not test what it says", a.Position)
+	}
+	if a.Hand != nil || !strings.Contains(a.HandWhy, "not shown") {
+		t.Errorf("hand %+v, why %q: want no hand working and the reason", a.Hand, a.HandWhy)
+	}
+}
