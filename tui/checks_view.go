@@ -166,13 +166,17 @@ func (m model) criteriaLines(w int, withFlags bool) []string {
 		}
 		return lines
 	}
-	pass := 0
+	pass, counted := 0, 0
 	for _, c := range cr {
+		if c.Indicator {
+			continue // read, not judged (SOLAS s)
+		}
+		counted++
 		if c.Pass {
 			pass++
 		}
 	}
-	lines = append(lines, st.Dim.Render(fmt.Sprintf("criteria: %d of %d pass", pass, len(cr))))
+	lines = append(lines, st.Dim.Render(fmt.Sprintf("criteria: %d of %d pass", pass, counted)))
 	set := ""
 	for _, c := range cr {
 		if c.Set != set {
@@ -180,7 +184,10 @@ func (m model) criteriaLines(w int, withFlags bool) []string {
 			lines = append(lines, st.Group.Render(clip(set, w)))
 		}
 		verdict := st.Pass.Render("pass ")
-		if !c.Pass {
+		switch {
+		case c.Indicator:
+			verdict = st.Dim.Render("read ") // an indicator: shown, not judged
+		case !c.Pass:
 			verdict = st.Fail.Render("FAIL ")
 		}
 		req := wrap(c.Requirement, w-5)
