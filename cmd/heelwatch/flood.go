@@ -432,7 +432,8 @@ func writeFloodText(w io.Writer, fr floodRun) error {
 		if p := s.Position; p != nil {
 			row = append(row, fnum(p.HeelDeg, 2), fnum(p.DraftAftM, 3), fnum(p.DraftMidM, 3), fnum(p.DraftFwdM, 3), fnum(p.DeckEdge.HeightM, 3), fnum(p.GMM, 3))
 		} else {
-			row = append(row, "—", "—", "—", "—", "—", "—")
+			// No floating position: the flows and levels are not known either.
+			row = append(row[:2], "—", "—", "—", "—", "—", "—", "—", "—", "—", "—")
 		}
 		fmt.Fprintf(tw, "  %s\t%s\n", strings.Join(row, "\t"), tableEvent(s))
 	}
@@ -447,6 +448,8 @@ func writeFloodText(w io.Writer, fr floodRun) error {
 		b.WriteString(", the water the pumps hold")
 	case engine.FloodFull:
 		b.WriteString(", the compartment full")
+	case engine.FloodSinks, engine.FloodCapsizes, engine.FloodFailed:
+		b.WriteString(", the water in her last floating state")
 	default:
 		if r.LostBuoyancy != nil {
 			b.WriteString(", the water at equalisation by lost buoyancy")
