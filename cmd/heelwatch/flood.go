@@ -735,6 +735,11 @@ func rowDoc(s engine.FloodSample) floodRowDoc {
 	if s.NoEq != nil {
 		d.NoEq = s.NoEq.Error()
 	}
+	if s.Position == nil {
+		// No floating position: the flows and levels are not known (null).
+		nan := report.Num(math.NaN())
+		d.InflowM3h, d.PumpedM3h, d.HeadM, d.SoundingM = nan, nan, nan, nan
+	}
 	if len(s.Criteria) > 0 {
 		d.Criteria = critDocs(s.Criteria)
 	}
