@@ -1099,6 +1099,9 @@ func ShellHole(v *Vessel, ci int, areaM2, zM, cd float64) (Hole, error) {
 	if math.IsInf(zM, 0) {
 		return Hole{}, fmt.Errorf("flooding %q: hole height %v is not finite", c.Name, zM)
 	}
+	if zM < lo-1e-6 || zM > hi+1e-6 {
+		return Hole{}, fmt.Errorf("flooding %q: a hole at height %.2f m is outside the compartment, which runs from z %.2f to %.2f m at mid-length", c.Name, zM, lo, hi)
+	}
 	zM = math.Max(lo, math.Min(hi, zM))
 	// The outboard-most point of the section at that height: crossings of
 	// the horizontal line with the edges, and vertices lying on it.
