@@ -206,7 +206,11 @@ func flags(v *Vessel, d Damage, pos *Position, noEq *NoEquilibrium, hand *HandWo
 		case Sinks:
 			add(FlagWillSink, Danger, "There is no floating position: %s she sinks (%s). Only stopping the inflow or shedding weight can keep her afloat.", as, noEq.Reason)
 		case Capsizes:
-			add(FlagWillCapsize, Danger, "There is no position of rest: %s she capsizes (%s). Stopping the flooding and lowering G are the remedies; shift weight across her only once GM is known to be positive.", as, noEq.Reason)
+			remedy := "Lowering G is the remedy"
+			if IsDamaged(d) {
+				remedy = "Stopping the flooding and lowering G are the remedies"
+			}
+			add(FlagWillCapsize, Danger, "There is no position of rest: %s she capsizes (%s). %s; shift weight across her only once GM is known to be positive.", as, noEq.Reason, remedy)
 		default:
 			add(FlagNotSolved, Danger, "heelwatch found no floating position (%s): no figure on screen describes where she floats. Check the damage entered and treat her as in danger.", noEq.Reason)
 		}

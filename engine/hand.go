@@ -383,7 +383,7 @@ func HandMethod(v *Vessel, d Damage) (*HandWorking, error) {
 		step("tan θ (loll)", formula, tanT, "")
 	}
 	w.HeelDeg = math.Atan(tanT) * 180 / math.Pi
-	step("heel θ", fmt.Sprintf("atan(%s), %s", n(tanT), handHeelWord(tanT)), w.HeelDeg, "°")
+	step("heel θ", fmt.Sprintf("atan(%s), %s", strings.TrimSuffix(strings.TrimPrefix(n(tanT), "("), ")"), handHeelWord(tanT)), w.HeelDeg, "°")
 
 	// Trim.
 	step("LCB of the remaining buoyant body", fmt.Sprintf("(L·B·T₁·L/2 − Σ μ·l·b·d·xc)/V = %s/%s", n(mx), n(V)), w.LCBM, "m")

@@ -442,7 +442,7 @@ func (m model) key(msg tea.KeyMsg) (tea.Model, tea.Cmd) {
 		}
 		u := m.undo[len(m.undo)-1]
 		m.undo = m.undo[:len(m.undo)-1]
-		return m.commit(u.damage, "undo: "+u.what)
+		return m.commit(u.damage, "undone: "+u.what)
 	case key.Matches(msg, k.Reset):
 		if len(m.damage) == 0 || allZero(m.damage) {
 			return m, nil
@@ -611,7 +611,7 @@ func (m model) takeResult(r resultMsg) (tea.Model, tea.Cmd) {
 	if r.seq >= m.logNext {
 		switch {
 		case r.skipped:
-			m.results[r.seq] = [2]string{"passed over for the next change", "passed over for the next change"}
+			m.results[r.seq] = [2]string{"not worked out: a newer change came first", "not worked out: a newer change came first"}
 		case r.failure != "":
 			m.results[r.seq] = [2]string{"engine failure: " + r.failure, "engine failure: " + r.failure}
 		default:

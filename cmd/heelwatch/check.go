@@ -87,7 +87,11 @@ func summarise(w io.Writer, v *engine.Vessel, info *vessels.Info) int {
 	pos, err := engine.Solve(v, v.Intact())
 	status := exitOK
 	if err != nil {
-		fmt.Fprintf(tw, "  intact\tNO EQUILIBRIUM: %v\n", err)
+		if ne, ok := err.(*engine.NoEquilibrium); ok {
+			fmt.Fprintf(tw, "  intact\tNO FLOATING POSITION: %s (%s)\n", ne.Outcome.Plain(), ne.Reason)
+		} else {
+			fmt.Fprintf(tw, "  intact\tNO FLOATING POSITION: %v\n", err)
+		}
 		status = exitNoEq
 	} else {
 		fmt.Fprintf(tw, "  intact\tdisplacement %.1f t; drafts aft %.3f m, amidships %.3f m, forward %.3f m\n", pos.DisplacementT, pos.DraftAftM, pos.DraftMidM, pos.DraftFwdM)
