@@ -3,7 +3,6 @@ package tui
 import (
 	"strings"
 
-	"github.com/charmbracelet/lipgloss"
 	"github.com/charmbracelet/x/ansi"
 )
 
@@ -73,7 +72,7 @@ func (m *model) resize() {
 	case m.editing:
 		l.helpH = 2
 	default:
-		l.helpH = lipgloss.Height(m.help.View(m.keys))
+		l.helpH = len(m.helpLines())
 	}
 	// header, log, safety line, help
 	l.bodyH = h - 1 - l.logLines - 1 - l.helpH
