@@ -97,6 +97,18 @@ func summarise(w io.Writer, v *engine.Vessel, info *vessels.Info) int {
 		fmt.Fprintf(tw, "  intact\tdisplacement %.1f t; drafts aft %.3f m, amidships %.3f m, forward %.3f m\n", pos.DisplacementT, pos.DraftAftM, pos.DraftMidM, pos.DraftFwdM)
 		fmt.Fprintf(tw, "  \ttrim %s; heel %s; GM %.3f m (KM %.3f m, KG %.3f m, FSC %.3f m)\n", trimText(pos.TrimM), heelText(pos.HeelDeg), pos.GMM, pos.KMTM, pos.KGM, pos.FSCM)
 		fmt.Fprintf(tw, "  freeboard\tleast to deck edge %.3f m at x %.1f m, %s\n", pos.DeckEdge.HeightM, pos.DeckEdge.XM, pos.DeckEdge.Side)
+		// Not a fault of the file's form, but worth a second look: an
+		// opening under water with the ship intact is most often a typing
+		// slip in its position.
+		for _, o := range pos.Openings {
+			if o.Immersed() {
+				what := "not weathertight"
+				if o.Weathertight {
+					what = "closed weathertight"
+				}
+				fmt.Fprintf(tw, "  WARNING\topening %q (%s) is %.2f m under water intact: check its position (x %.2f, y %.2f, z %.2f m)\n", o.Name, what, -o.HeightM, o.X, o.Y, o.Z)
+			}
+		}
 	}
 	wt := 0
 	for _, o := range v.Openings {

@@ -489,3 +489,31 @@ func TestHandJSONLostBuoyancy(t *testing.T) {
 		t.Errorf("direct draft amidships %v m, hand mean draft %v m: more than 1 %% apart", d, hd)
 	}
 }
+
+// TestCheckWarnsOfOpeningUnderWater: an opening under water with the ship
+// intact is most often a slip in its position; check says so, and that the
+// file is otherwise sound. The test file's vent is moved to z = 1.0 m, below
+// the intact draft of 1644 t / (1.025 × 60 × 12) ≈ 2.23 m (box closed form,
+// practice).
+func TestCheckWarnsOfOpeningUnderWater(t *testing.T) {
+	data, err := os.ReadFile(reportCase)
+	if err != nil {
+		t.Fatal(err)
+	}
+	moved := strings.Replace(string(data), "z = 6.8", "z = 1.0", 1)
+	if moved == string(data) {
+		t.Fatal("the test file's vent is not where this test expects it")
+	}
+	path := filepath.Join(t.TempDir(), "low-vent.toml")
+	if err := os.WriteFile(path, []byte(moved), 0o644); err != nil {
+		t.Fatal(err)
+	}
+	_, out, _ := heelwatch(t, "check", path)
+	if !strings.Contains(out, "no problems found") || !strings.Contains(out, `WARNING`) || !strings.Contains(out, `"Wing void S vent"`) {
+		t.Errorf("check does not warn of the vent under water:\n%s", out)
+	}
+	_, out, _ = heelwatch(t, "check", reportCase)
+	if strings.Contains(out, "WARNING") {
+		t.Errorf("check warns of the test file as it is:\n%s", out)
+	}
+}
