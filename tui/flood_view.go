@@ -174,25 +174,7 @@ func eventWords(e engine.FloodEvent, r *engine.FloodReport) string {
 	case engine.CriterionFails:
 		return e.Name + " fails"
 	}
-	switch r.End {
-	case engine.FloodEqualised:
-		return "levels equal"
-	case engine.FloodPumpsHold:
-		return "pumps hold"
-	case engine.FloodKeptDry:
-		return "pumps keep it dry"
-	case engine.FloodNoInflow:
-		return "nothing comes in"
-	case engine.FloodFull:
-		return "compartment full"
-	case engine.FloodSinks:
-		return "SHE SINKS"
-	case engine.FloodCapsizes:
-		return "SHE CAPSIZES"
-	case engine.FloodTimeLimit:
-		return "time limit, still filling"
-	}
-	return "no answer"
+	return r.End.Headline()
 }
 
 // floodEvents lists the run's events in time order, the end last: mark,

@@ -339,28 +339,6 @@ func lowestOpening(p *engine.Position) (engine.OpeningClearance, bool) {
 	return best, found
 }
 
-func endWords(e engine.FloodEnd) string {
-	switch e {
-	case engine.FloodEqualised:
-		return "levels equal"
-	case engine.FloodPumpsHold:
-		return "pumps hold the level"
-	case engine.FloodKeptDry:
-		return "pumps keep it dry"
-	case engine.FloodNoInflow:
-		return "nothing comes in"
-	case engine.FloodFull:
-		return "compartment full"
-	case engine.FloodSinks:
-		return "SHE SINKS"
-	case engine.FloodCapsizes:
-		return "SHE CAPSIZES"
-	case engine.FloodTimeLimit:
-		return "time limit reached"
-	}
-	return "no answer"
-}
-
 func eventWords(e engine.FloodEvent) string {
 	if e.Kind == engine.RunEnds {
 		return "end: " + e.Message
@@ -398,7 +376,7 @@ func writeFloodText(w io.Writer, fr floodRun) error {
 	if r.End == engine.FloodEqualised {
 		endS = r.EqualiseS
 	}
-	fmt.Fprintf(&b, "\nOutcome: %s after %s.\n  %s\n", endWords(r.End), engine.FormatDuration(endS), sentenceCase(r.EndReason))
+	fmt.Fprintf(&b, "\nOutcome: %s after %s.\n  %s\n", r.End.Headline(), engine.FormatDuration(endS), sentenceCase(r.EndReason))
 	if r.End == engine.FloodEqualised {
 		fmt.Fprintf(&b, "  Time to equalise: %s (%s s), %s m³ in. The run stops at 1 mm of head (%s);\n  the last millimetre follows the √h law.\n",
 			engine.FormatDuration(r.EqualiseS), fnum(r.EqualiseS, 0), fnum(r.FinalWaterM3, 1), engine.FormatDuration(r.EndS))
