@@ -66,32 +66,7 @@ func TestChainsMatchClip(t *testing.T) {
 func slowBelow(s *Solid, p Plane) Immersion {
 	var im Immersion
 	for i := range s.slabs {
-		sl := &s.slabs[i]
-		n := len(sl.p0)
-		dx := sl.x1 - sl.x0
-		var roots []float64
-		for k := 0; k < n; k++ {
-			d0 := sl.p0[k].Z - p.C*sl.p0[k].Y - p.A - p.B*sl.x0
-			d1 := sl.p0[k].Z + dx*sl.dp[k].Z - p.C*(sl.p0[k].Y+dx*sl.dp[k].Y) - p.A - p.B*sl.x1
-			if (d0 < 0 && d1 > 0) || (d0 > 0 && d1 < 0) {
-				roots = append(roots, sl.x0+dx*d0/(d0-d1))
-			}
-		}
-		for a := 0; a < len(roots); a++ {
-			for b := a + 1; b < len(roots); b++ {
-				if roots[b] < roots[a] {
-					roots[a], roots[b] = roots[b], roots[a]
-				}
-			}
-		}
-		xa := sl.x0
-		for _, r := range roots {
-			if r-xa > 1e-12*(1+math.Abs(r)) {
-				im.add(sl.integrate(p, xa, r), 1)
-				xa = r
-			}
-		}
-		im.add(sl.integrate(p, xa, sl.x1), 1)
+		im.add(s.slabs[i].belowClip(p), 1)
 	}
 	return im
 }
