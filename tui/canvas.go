@@ -159,7 +159,15 @@ func (c *canvas) line(xa, ya, xb, yb float64, k ink) {
 
 // dashed draws a dashed line between two world points: four dots drawn,
 // two left out, so that it reads apart from a solid outline without colour.
-func (c *canvas) dashed(xa, ya, xb, yb float64, k ink) {
+func (c *canvas) dashed(xa, ya, xb, yb float64, k ink) { c.patterned(xa, ya, xb, yb, k, 4, 6) }
+
+// dotted draws every other dot of a line, so that it reads apart from a
+// solid one without colour.
+func (c *canvas) dotted(xa, ya, xb, yb float64, k ink) { c.patterned(xa, ya, xb, yb, k, 1, 2) }
+
+// patterned draws a line between two world points, the first on of every
+// period dots drawn and the rest left out.
+func (c *canvas) patterned(xa, ya, xb, yb float64, k ink, on, period int) {
 	if !finite(xa, ya, xb, yb) {
 		return
 	}
@@ -170,7 +178,7 @@ func (c *canvas) dashed(xa, ya, xb, yb float64, k ink) {
 	}
 	n := int(math.Ceil(math.Max(math.Abs(pb-pa), math.Abs(qb-qa))))
 	for i := 0; i <= n; i++ {
-		if i%6 >= 4 {
+		if i%period >= on {
 			continue
 		}
 		t := float64(i) / float64(max(n, 1))

@@ -421,7 +421,7 @@ func (m model) floodPlot(w, h int) []string {
 	}
 	// Water dotted: every other dot of its line.
 	for i := 1; i < len(ts); i++ {
-		dottedLine(c, ts[i-1], wy(water[i-1]), ts[i], wy(water[i]), inkWater)
+		c.dotted(ts[i-1], wy(water[i-1]), ts[i], wy(water[i]), inkWater)
 	}
 	body := m.framed(c, niceStep(hi-lo, max(2, ch/3)), func(v float64) string { return num(v, 0) })
 	if !any {
@@ -452,24 +452,6 @@ func (m model) floodPlot(w, h int) []string {
 	}
 	lines = append(lines, st.Axis.Render(scaleLine(c, ticks, unit)))
 	return fit(lines, w, h)
-}
-
-// dottedLine draws every other dot of a line, so that it reads apart from
-// a solid one without colour.
-func dottedLine(c *canvas, xa, ya, xb, yb float64, k ink) {
-	if !finite(xa, ya, xb, yb) {
-		return
-	}
-	pa, qa := c.dotX(xa), c.dotY(ya)
-	pb, qb := c.dotX(xb), c.dotY(yb)
-	if !clipSegment(&pa, &qa, &pb, &qb, -1, -1, float64(2*c.w)+1, float64(4*c.h)+1) {
-		return
-	}
-	n := int(math.Ceil(math.Max(math.Abs(pb-pa), math.Abs(qb-qa))))
-	for i := 0; i <= n; i += 2 {
-		t := float64(i) / float64(max(n, 1))
-		c.dot(int(math.Floor(pa+t*(pb-pa))), int(math.Floor(qa+t*(qb-qa))), k)
-	}
 }
 
 // floodRow is the wide screen's row of pictures while the run's panel is
