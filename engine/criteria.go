@@ -115,7 +115,17 @@ var criteriaSets = []criteriaSet{
 			{code: "gz-30", requirement: "GZ ≥ 0.20 m at a heel of 30° or more", required: 0.20, unit: "m",
 				source: isCode + "2.2.2",
 				actual: func(k *CriteriaCase) (float64, string) {
-					gz, at := k.Curve.MaxBetween(30, curveEnd(k.Curve))
+					// The curve is credited only up to the downflooding
+					// angle: past it water pours in and the curve no longer
+					// describes her (practice).
+					end := math.Min(curveEnd(k.Curve), k.Curve.DownfloodingDeg)
+					if end < 30 {
+						return 0, fmt.Sprintf("downflooding at %.1f° comes before 30°: no GZ at 30° or more is credited", k.Curve.DownfloodingDeg)
+					}
+					gz, at := k.Curve.MaxBetween(30, end)
+					if end < curveEnd(k.Curve) {
+						return gz, fmt.Sprintf("largest GZ from 30° to downflooding at %.1f°, at %.1f°", end, at)
+					}
 					return gz, fmt.Sprintf("largest GZ from 30° on, at %.1f°", at)
 				}},
 			{code: "gzmax-angle", requirement: "maximum GZ at a heel of 25° or more", required: 25, unit: "°",

@@ -365,3 +365,32 @@ func TestGM0IsUpright(t *testing.T) {
 		}
 	}
 }
+
+// TestGZ30StopsAtDownflooding: IS Code 2.2.2's GZ at 30° or more is read
+// only up to the downflooding angle (the curve is not credited past it;
+// practice). The curve GZ = 0.3·sin(180°·θ/90°) rises to 0.3 m at 45°; with
+// downflooding at 35° the most that counts is its value there,
+// 0.3·sin 70° = 0.2819 m; with downflooding at 25°, none counts.
+func TestGZ30StopsAtDownflooding(t *testing.T) {
+	mk := func(df float64) *engine.GZCurve {
+		c := &engine.GZCurve{Toward: engine.Starboard, VanishingDeg: 90, RangeDeg: 90, DeckEdgeDeg: 90, DownfloodingDeg: df}
+		for deg := 0.0; deg <= 89; deg++ {
+			c.HeelDeg = append(c.HeelDeg, deg)
+			c.GZM = append(c.GZM, 0.3*math.Sin(math.Pi*deg/90))
+		}
+		return c
+	}
+	for _, c := range []struct {
+		df, want float64
+	}{{90, 0.3}, {35, 0.3 * math.Sin(70*math.Pi/180)}, {25, 0}} {
+		rs, err := engine.EvaluateCriteria([]string{"is-code-2008"}, engine.CriteriaCase{Curve: mk(c.df)})
+		if err != nil {
+			t.Fatal(err)
+		}
+		for _, r := range rs {
+			if r.Code == "gz-30" && math.Abs(r.Actual-c.want) > 2e-4 {
+				t.Errorf("downflooding %v°: GZ counted %.4f m, want %.4f (%s)", c.df, r.Actual, c.want, r.Note)
+			}
+		}
+	}
+}
