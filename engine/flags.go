@@ -294,16 +294,16 @@ func flags(v *Vessel, d Damage, pos *Position, noEq *NoEquilibrium, hand *HandWo
 			add(FlagSpaceTopUnder, Info, "Open space \"%s\" is wholly under water (its top, %.2f m above the base, is %.2f m below the waterline at least): it takes buoyancy but nothing from the waterplane.",
 				c.Name, c.solid.zmax, -top.hi)
 		case top.lo < 0:
-			add(FlagSpaceTopUnder, Caution, "The top of open space \"%s\" is under water on the %s side, by up to %.2f m: its lost waterplane changes as she moves, so the hand method's fixed picture of it no longer holds.",
-				c.Name, flagSideOf(top.loY), -top.lo)
+			add(FlagSpaceTopUnder, Caution, "The top of open space \"%s\" is under water %s, by up to %.2f m: its lost waterplane changes as she moves, so the hand method's fixed picture of it no longer holds.",
+				c.Name, flagWhereOnFace(top.loY, p, true), -top.lo)
 		}
 		switch {
 		case bottom.lo > 0:
 			add(FlagSpaceBottomOut, Info, "Open space \"%s\" lies wholly above the water (its bottom, %.2f m above the base, is %.2f m clear at least): it takes no buoyancy now, but will flood if she settles or heels further.",
 				c.Name, c.solid.zmin, bottom.lo)
 		case bottom.hi > 0:
-			add(FlagSpaceBottomOut, Caution, "The bottom of open space \"%s\" is out of the water on the %s side, by up to %.2f m: water runs out of it as she heels that way, so the hand method's picture of a space open through the waterline no longer holds.",
-				c.Name, flagSideOf(bottom.hiY), bottom.hi)
+			add(FlagSpaceBottomOut, Caution, "The bottom of open space \"%s\" is out of the water %s, by up to %.2f m: water runs out of it as she moves, so the hand method's picture of a space open through the waterline no longer holds.",
+				c.Name, flagWhereOnFace(bottom.hiY, p, false), bottom.hi)
 		}
 	}
 
@@ -368,6 +368,21 @@ func flagPoint(x, y, z, L float64) string {
 		side = fmt.Sprintf("%.1f m to port", -y)
 	}
 	return fmt.Sprintf("(x = %.1f m, %s, %.1f m above the base)", x, side, z)
+}
+
+// flagWhereOnFace says where on a compartment's face a point lies, for a
+// sentence: on a side when she is heeled, at one end when she floats
+// upright (trim alone brings the face to the water): the end that is down
+// when low, the end that is up otherwise.
+func flagWhereOnFace(y float64, p Plane, low bool) string {
+	if math.Abs(p.C) < 1e-9 {
+		// B < 0: the water stands higher aft, so she is down by the stern.
+		if (p.B < 0) == low {
+			return "at its after end"
+		}
+		return "at its forward end"
+	}
+	return "on the " + flagSideOf(y) + " side"
 }
 
 func flagSideOf(y float64) string {
