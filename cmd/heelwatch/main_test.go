@@ -285,7 +285,7 @@ func TestUnknownOpenRefusedByName(t *testing.T) {
 }
 
 func TestPermeabilityOverride(t *testing.T) {
-	code, m := solveJSON(t, "--vessel", "barge", "--open", "Hold aft", "--open", "1 wing void S", "--perm", "Hold aft=0.85")
+	code, m := solveJSON(t, "--vessel", "barge", "--open", "Hold aft", "--open", "1 wing void S", "--perm", "Hold aft=85%")
 	if code != 0 {
 		t.Fatalf("exit status %d", code)
 	}

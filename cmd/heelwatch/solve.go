@@ -132,9 +132,16 @@ func damageOf(v *engine.Vessel, open, perm []string) (engine.Damage, string) {
 		if !ok {
 			return nil, unknownName("--perm", name, v)
 		}
-		mu, err := strconv.ParseFloat(val, 64)
+		// A percentage is taken too ("85%"), as the dashboard takes it; the
+		// comma separates items here, so it cannot be a decimal mark.
+		num, scale := val, 1.0
+		if strings.HasSuffix(num, "%") {
+			num, scale = strings.TrimSpace(strings.TrimSuffix(num, "%")), 100
+		}
+		mu, err := strconv.ParseFloat(num, 64)
+		mu /= scale
 		if err != nil || math.IsNaN(mu) || !(mu > 0 && mu <= 1) {
-			return nil, fmt.Sprintf("--perm %q: permeability %q must be a number with 0 < μ ≤ 1", name, val)
+			return nil, fmt.Sprintf("--perm %q: permeability %q must be a number with 0 < μ ≤ 1, or a percentage such as 85%%", name, val)
 		}
 		if !d[i].Open {
 			return nil, fmt.Sprintf("--perm %q: that compartment is not open to the sea; add it to --open", name)
