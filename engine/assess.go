@@ -152,11 +152,15 @@ func Assess(v *Vessel, d Damage) Assessment {
 	} else {
 		a.Position = &pos
 	}
-	if hw, err := HandMethod(v, d); err == nil && a.NoEq != nil {
+	if a.NoEq != nil {
 		// A small-angle answer beside a ship that sinks or capsizes would
 		// be a false comfort.
-		a.HandWhy = "not shown: there is no floating position (" + a.NoEq.Outcome.Plain() + "), and the small-angle working would give a false picture of her"
-	} else if err == nil {
+		if _, err := HandMethod(v, d); err == nil {
+			a.HandWhy = "not shown: there is no floating position (" + a.NoEq.Outcome.Plain() + "), and the small-angle working would give a false picture of her"
+		} else if na, ok := err.(*HandNotApplicable); ok {
+			a.HandWhy = na.Reason
+		}
+	} else if hw, err := HandMethod(v, d); err == nil {
 		a.Hand = hw
 	} else if na, ok := err.(*HandNotApplicable); ok {
 		a.HandWhy = na.Reason

@@ -1,6 +1,7 @@
 package vessels
 
 import (
+	"heelwatch/engine"
 	"sort"
 	"strings"
 )
@@ -31,8 +32,8 @@ var uses = map[string]useSpec{
 // openingKinds are the accepted values of an opening's kind key.
 var openingKinds = []string{"air pipe", "vent", "door", "hatch", "manhole", "scuttle", "window", "pipe", "other"}
 
-// criteriaSets are the accepted names in the criteria key.
-var criteriaSets = []string{"is-code-2008", "marpol-i-28", "solas-s-factor"}
+// criteriaSets are the accepted names in the criteria key: the engine's.
+var criteriaSets = engine.CriteriaSetIDs()
 
 // shipTypes are the accepted values of ship_type.
 var shipTypes = []string{"cargo", "passenger"}
@@ -42,8 +43,8 @@ var shipTypes = []string{"cargo", "passenger"}
 var DefaultCriteria = []string{"is-code-2008"}
 
 // DefaultCd is the discharge coefficient of a hole when the file gives none
-// (sharp-edged orifice, practice).
-const DefaultCd = 0.6
+// (sharp-edged orifice, practice): the engine's.
+const DefaultCd = engine.DefaultDischargeCoefficient
 
 // UsePermeability returns the default permeability of a compartment use and
 // whether the use is known.
