@@ -249,6 +249,9 @@ type FloodReport struct {
 	End       FloodEnd
 	EndS      float64 // when the run stopped
 	EndReason string  // a plain sentence
+	// EndNoEq is why there was no floating position when the run ended on
+	// one (sinks, capsizes, or a solve that failed); nil otherwise.
+	EndNoEq *NoEquilibrium
 
 	// EqualiseS is the time to equalise when End is FloodEqualised: the run's
 	// last step carried on to zero head by the √h law (exact for a
@@ -870,7 +873,7 @@ func (r *FloodRun) Report() FloodReport {
 	}
 	rep := FloodReport{
 		Vessel: r.v.Name, Compartment: r.comp.Name, Hole: r.c.Hole, PumpM3h: r.pumpM3s * 3600, LimitS: r.limit,
-		End: r.end, EndS: r.endS, EndReason: r.endWhy, SteadyHeadM: r.hs,
+		End: r.end, EndS: r.endS, EndReason: r.endWhy, EndNoEq: r.endNoEq, SteadyHeadM: r.hs,
 		PumpsHoldLevel: r.end == FloodPumpsHold || r.end == FloodKeptDry,
 		CapacityM3:     r.capacity, ContentsM3: r.contentsM3, LostBuoyancy: r.lb, LostBuoyancyNoEq: r.lbNoEq, LostBuoyancyWaterM3: r.lbWater,
 		Events: append([]FloodEvent(nil), r.events...),

@@ -278,7 +278,7 @@ func runFlood(args []string, stdout, stderr io.Writer) int {
 		return exitNoEq
 	case engine.FloodFailed:
 		fmt.Fprintf(stderr, "heelwatch flood: %s\n", rep.EndReason)
-		if rep.Final.NoEq != nil || strings.Contains(rep.EndReason, "not converged") {
+		if rep.Final.NoEq != nil || rep.EndNoEq != nil {
 			return exitNoEq
 		}
 		return exitFailed
