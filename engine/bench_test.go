@@ -83,40 +83,6 @@ func BenchmarkRecomputeIntact(b *testing.B) {
 	}
 }
 
-// BenchmarkRecomputeComposed times, until Assess calls them all, the parts
-// a keystroke will recompute once wired in: the equilibrium, the GZ curve,
-// the criteria of the vessel's sets, the hand method and the flags.
-func BenchmarkRecomputeComposed(b *testing.B) {
-	v, d := refBundledDamaged(b, refBenchSpaces...)
-	run := func() error {
-		pr := engine.NewProblem(v, d)
-		pos, err := pr.Equilibrium()
-		if err != nil {
-			return err
-		}
-		curve, err := engine.RightingLevers(pr, pos)
-		if err != nil {
-			return err
-		}
-		if _, err := engine.EvaluateCriteria(v.CriteriaSets, engine.CriteriaCase{Curve: curve, Eq: pos, Damaged: engine.IsDamaged(d)}); err != nil {
-			return err
-		}
-		hand, _ := engine.HandMethod(v, d) // not a box: not applicable, as on the bundled ship
-		engine.Flags(v, d, &pos, nil, hand)
-		return nil
-	}
-	if err := run(); err != nil {
-		b.Fatal(err)
-	}
-	b.ReportAllocs()
-	b.ResetTimer()
-	for i := 0; i < b.N; i++ {
-		if err := run(); err != nil {
-			b.Fatal(err)
-		}
-	}
-}
-
 // BenchmarkHullBelow times one immersion of the bundled ship's hull at a
 // heeled and trimmed waterline: the unit of cost of every evaluation.
 func BenchmarkHullBelow(b *testing.B) {

@@ -1206,11 +1206,11 @@ type stepper struct {
 	maxTries   int
 }
 
-var errStepBound = errors.New("flooding: the integrator's step bound was reached before the run ended")
+var errStepBound = errors.New("the flooding calculation needed more steps than it is allowed; the figures end where it stopped")
 
-// Dormand–Prince 5(4) tableau (Dormand & Prince 1980).
+// Dormand–Prince 5(4) tableau (Dormand & Prince 1980). The nodes c are not
+// needed: the rate of flooding depends on the water in, not on time.
 var (
-	dpC = [7]float64{0, 1.0 / 5, 3.0 / 10, 4.0 / 5, 8.0 / 9, 1, 1}
 	dpA = [7][6]float64{
 		{},
 		{1.0 / 5},

@@ -4,8 +4,6 @@ import (
 	"math"
 	"strconv"
 	"strings"
-
-	"heelwatch/engine"
 )
 
 // blank is what the screen prints in place of a figure that does not exist
@@ -107,7 +105,6 @@ func trimText(m float64) string {
 }
 
 // sideWord names a side in lower case.
-func sideWord(s engine.Side) string { return s.String() }
 
 // muText prints a permeability as a fraction with two decimals.
 func muText(mu float64) string { return num(mu, 2) }

@@ -702,13 +702,3 @@ func allZero(d engine.Damage) bool {
 	}
 	return true
 }
-
-// allIntact reports whether no compartment is open or holds water.
-func allIntact(d engine.Damage) bool {
-	for _, s := range d {
-		if s.Open || s.WaterM3 > 0 {
-			return false
-		}
-	}
-	return true
-}
