@@ -93,7 +93,8 @@ func (c handSpace) pierces(t float64) bool { return t >= c.z0 && t < c.z1 }
 // neglected): tan θ = (TCG − TCB')/GM, trim = (LCB' − LCG)·L/GML. The lever
 // is the transverse distance from the centre of buoyancy of the remaining
 // body to G. For a space open from the keel through the waterline TCB'
-// equals the shift yF of the centre of flotation (the textbook "tan θ =
+// equals the shift yF of the centre of flotation (the usual statement,
+// Barrass & Derrett, bilging chapter, memory: "tan θ =
 // shift/GM"); for a space with its bottom above the keel, or wholly under
 // water, the two differ and TCB' is the one that agrees with the direct
 // solution. With I_xy kept, the pair solved together is the first-order limit

@@ -111,7 +111,7 @@ type handWant struct {
 
 // TestHandWorkedCases checks the hand method against worked cases of our
 // own (invented numbers), each worked out by hand in its comment with the
-// textbook lost-buoyancy steps (practice: sinkage = lost volume ÷ intact
+// lost-buoyancy steps as Barrass & Derrett set them out (memory) (practice: sinkage = lost volume ÷ intact
 // waterplane; parallel-axis theorem I = I₀ + A·d²; BM = I/V; GM = KB + BM −
 // KG; tan θ = lever/GM; trim = Δ·lever/MCTC = lever·L/GML). Sea water
 // 1.025 t/m³ (Barrass & Derrett p.130, found).
@@ -480,7 +480,7 @@ func TestHandPartsAsWallSided(t *testing.T) {
 // the second moments about the centreline and the aft perpendicular shifted
 // back to the centroid (the parallel-axis theorem used the other way round),
 // and KB, LCB, TCB as moments of the remaining prisms (practice: the
-// textbook lost-buoyancy steps).
+// lost-buoyancy steps as Barrass & Derrett set them out, memory).
 type handExpect struct {
 	sinkage, draft, cfShift, kb, bm, km, gm, heelDeg, aft, fwd, trim float64
 }

@@ -43,7 +43,7 @@ var fieldSpec = [numFields]struct {
 }{
 	{"hole", "m²"},
 	{"at z", "m"},
-	{"C_d", ""},
+	{"Cd", ""},
 	{"pumps", "m³/h"},
 }
 
@@ -150,7 +150,7 @@ func (m model) readForm() (floodRequest, int, error) {
 	case v[fieldZ] < b.Z0-0.005 || v[fieldZ] > b.Z1+0.005:
 		return floodRequest{}, fieldZ, fmt.Errorf("height %s m is outside %s, which runs from z %s to %s m", short(v[fieldZ], 2), c.Name, num(b.Z0, 2), num(b.Z1, 2))
 	case !(v[fieldCd] > 0 && v[fieldCd] <= 1):
-		return floodRequest{}, fieldCd, fmt.Errorf("C_d %s: a discharge coefficient is more than 0 and at most 1 (0.6 sharp-edged, about 0.7 ragged)", short(v[fieldCd], 2))
+		return floodRequest{}, fieldCd, fmt.Errorf("Cd %s: a discharge coefficient is more than 0 and at most 1 (0.6 sharp-edged, about 0.7 ragged)", short(v[fieldCd], 2))
 	case !(v[fieldPump] >= 0 && v[fieldPump] <= 1e5):
 		return floodRequest{}, fieldPump, fmt.Errorf("pumps %s m³/h: give the capacity on this space, 0 for none", short(v[fieldPump], 0))
 	}

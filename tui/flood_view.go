@@ -50,7 +50,7 @@ func (m model) floodText(w, h, want int) []string {
 	if f.req.pumpM3h > 0 {
 		pumps = "pumps " + num(f.req.pumpM3h, 0) + " m³/h"
 	}
-	for _, l := range joinWrap(w, " · ", fmt.Sprintf("hole %s m² at z %s m, C_d %s", short(hole.AreaM2, 4), num(hole.ZM, 2), num(hole.Cd, 2)), pumps) {
+	for _, l := range joinWrap(w, " · ", fmt.Sprintf("hole %s m² at z %s m, Cd %s", short(hole.AreaM2, 4), num(hole.ZM, 2), num(hole.Cd, 2)), pumps) {
 		head = append(head, st.Dim.Render(l))
 	}
 

@@ -355,7 +355,7 @@ func writeFloodText(w io.Writer, fr floodRun) error {
 	fmt.Fprintf(&b, "Flooding through a hole — %s (%s)\n\n", r.Vessel, fr.source)
 	tw := tabwriter.NewWriter(&b, 0, 0, 2, ' ', 0)
 	fmt.Fprintf(tw, "  compartment\t%s: μ %s, capacity %s m³\n", r.Compartment, fnum(fr.mu, 2), fnum(r.CapacityM3, 1))
-	fmt.Fprintf(tw, "  hole\t%s m² at x %s, y %s, z %s m, C_d %s (%s)\n", fnum(r.Hole.AreaM2, 3), fnum(r.Hole.XM, 2), fnum(r.Hole.YM, 2), fnum(r.Hole.ZM, 2), fnum(r.Hole.Cd, 2), fr.holeFrom)
+	fmt.Fprintf(tw, "  hole\t%s m² at x %s, y %s, z %s m, Cd %s (%s)\n", fnum(r.Hole.AreaM2, 3), fnum(r.Hole.XM, 2), fnum(r.Hole.YM, 2), fnum(r.Hole.ZM, 2), fnum(r.Hole.Cd, 2), fr.holeFrom)
 	pumps := "none"
 	if r.PumpM3h > 0 {
 		pumps = fnum(r.PumpM3h, 0) + " m³/h (" + fr.pumpFrom + ")"
