@@ -201,7 +201,7 @@ type FloodSample struct {
 // flooded volume held as an added weight, its free surface level with the
 // sea's attitude.
 type FloodStage struct {
-	Fraction float64 // of FloodReport.FinalWaterM3
+	Fraction float64 // of FloodReport.StagesOfM3
 	WaterM3  float64
 	Reached  bool    // the run came to this volume
 	TimeS    float64 // when (if Reached)
