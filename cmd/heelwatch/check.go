@@ -3,8 +3,8 @@ package main
 import (
 	"flag"
 	"fmt"
+	"heelwatch/tui/report"
 	"io"
-	"math"
 	"strings"
 	"text/tabwriter"
 
@@ -95,7 +95,7 @@ func summarise(w io.Writer, v *engine.Vessel, info *vessels.Info) int {
 		status = exitNoEq
 	} else {
 		fmt.Fprintf(tw, "  intact\tdisplacement %.1f t; drafts aft %.3f m, amidships %.3f m, forward %.3f m\n", pos.DisplacementT, pos.DraftAftM, pos.DraftMidM, pos.DraftFwdM)
-		fmt.Fprintf(tw, "  \ttrim %s; heel %s; GM %.3f m (KM %.3f m, KG %.3f m, FSC %.3f m)\n", trimText(pos.TrimM), heelText(pos.HeelDeg), pos.GMM, pos.KMTM, pos.KGM, pos.FSCM)
+		fmt.Fprintf(tw, "  \ttrim %s; heel %s; GM %.3f m (KM %.3f m, KG %.3f m, FSC %.3f m)\n", report.TrimWords(pos.TrimM), report.HeelWords(pos.HeelDeg), pos.GMM, pos.KMTM, pos.KGM, pos.FSCM)
 		fmt.Fprintf(tw, "  freeboard\tleast to deck edge %.3f m at x %.1f m, %s\n", pos.DeckEdge.HeightM, pos.DeckEdge.XM, pos.DeckEdge.Side)
 		// Not a fault of the file's form, but worth a second look: an
 		// opening under water with the ship intact is most often a typing
@@ -170,24 +170,4 @@ func firstLine(s string) string {
 		s = s[:i]
 	}
 	return s
-}
-
-func heelText(deg float64) string {
-	switch {
-	case math.Abs(deg) < 0.005:
-		return "0.00° upright"
-	case deg > 0:
-		return fmt.Sprintf("%.2f° to starboard", deg)
-	}
-	return fmt.Sprintf("%.2f° to port", -deg)
-}
-
-func trimText(m float64) string {
-	switch {
-	case math.Abs(m) < 0.0005:
-		return "0.000 m even keel"
-	case m > 0:
-		return fmt.Sprintf("%.3f m by the stern", m)
-	}
-	return fmt.Sprintf("%.3f m by the head", -m)
 }

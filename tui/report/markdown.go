@@ -84,8 +84,8 @@ func Markdown(w io.Writer, r Report) error {
 			{"Draft aft (AP)", num(p.DraftAftM, 3, "m")},
 			{"Draft amidships", num(p.DraftMidM, 3, "m")},
 			{"Draft forward (FP)", num(p.DraftFwdM, 3, "m")},
-			{"Trim", trimWords(p.TrimM)},
-			{"Heel", heelWords(p.HeelDeg)},
+			{"Trim", TrimWords(p.TrimM)},
+			{"Heel", HeelWords(p.HeelDeg)},
 			{"GM (free-surface corrected)", gmWords(p, a.UprightGMM)},
 			{"KM", num(p.KMTM, 3, "m")},
 			{"KG", num(p.KGM, 3, "m")},
@@ -237,8 +237,8 @@ func Markdown(w io.Writer, r Report) error {
 		e.line("| Draft aft | ", num(h.DraftAftM, 3, "m"), " | ", dash(func() string { return num(p.DraftAftM, 3, "m") }), " |")
 		e.line("| Draft amidships | ", num(h.DraftMidM, 3, "m"), " | ", dash(func() string { return num(p.DraftMidM, 3, "m") }), " |")
 		e.line("| Draft forward | ", num(h.DraftFwdM, 3, "m"), " | ", dash(func() string { return num(p.DraftFwdM, 3, "m") }), " |")
-		e.line("| Trim | ", trimWords(h.TrimM), " | ", dash(func() string { return trimWords(p.TrimM) }), " |")
-		e.line("| Heel | ", heelWords(h.HeelDeg), " | ", dash(func() string { return heelWords(p.HeelDeg) }), " |")
+		e.line("| Trim | ", TrimWords(h.TrimM), " | ", dash(func() string { return TrimWords(p.TrimM) }), " |")
+		e.line("| Heel | ", HeelWords(h.HeelDeg), " | ", dash(func() string { return HeelWords(p.HeelDeg) }), " |")
 		e.line("| GM | ", num(h.GMM, 3, "m"), " | ", dash(func() string { return num(p.GMM, 3, "m") }), " |")
 	}
 	e.line()

@@ -110,7 +110,7 @@ func remedyCells(o engine.Remedy) []string {
 		}
 		return []string{num(o.MassT, 1, "t"), why, "—", "—", "—", "—", "—"}
 	}
-	return []string{num(o.MassT, 1, "t"), heelWords(p.HeelDeg), trimWords(p.TrimM), num(p.GMM, 2, "m"),
+	return []string{num(o.MassT, 1, "t"), HeelWords(p.HeelDeg), TrimWords(p.TrimM), num(p.GMM, 2, "m"),
 		num(o.UprightGMM, 2, "m"), clearWords(p.DeckEdge.HeightM), clearWords(o.LowestOpeningM)}
 }
 

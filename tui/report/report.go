@@ -183,7 +183,8 @@ func num(x float64, prec int, unit string) string {
 }
 
 // heelWords says a heel in degrees with its side.
-func heelWords(deg float64) string {
+// HeelWords says a heel with its side: "3.20° to starboard", "0.00° upright".
+func HeelWords(deg float64) string {
 	switch {
 	case !finite(deg):
 		return "—"
@@ -195,8 +196,8 @@ func heelWords(deg float64) string {
 	return num(-deg, 2, "°") + " to port"
 }
 
-// trimWords says a trim in metres with its sense.
-func trimWords(m float64) string {
+// TrimWords says a trim in metres with its sense: "0.410 m by the stern".
+func TrimWords(m float64) string {
 	switch {
 	case !finite(m):
 		return "—"

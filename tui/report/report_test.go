@@ -187,12 +187,12 @@ func TestFilledPartsAppear(t *testing.T) {
 
 func TestWords(t *testing.T) {
 	tests := []struct{ got, want string }{
-		{heelWords(2.345), "2.35° to starboard"},
-		{heelWords(-1), "1.00° to port"},
-		{heelWords(0.001), "0.00° upright"},
-		{trimWords(0.5), "0.500 m by the stern"},
-		{trimWords(-0.25), "0.250 m by the head"},
-		{trimWords(1e-5), "0.000 m even keel"},
+		{HeelWords(2.345), "2.35° to starboard"},
+		{HeelWords(-1), "1.00° to port"},
+		{HeelWords(0.001), "0.00° upright"},
+		{TrimWords(0.5), "0.500 m by the stern"},
+		{TrimWords(-0.25), "0.250 m by the head"},
+		{TrimWords(1e-5), "0.000 m even keel"},
 		{num(-0.0001, 3, "m"), "0.000 m"},
 		{signed(0.15, 3, "m"), "+0.150 m"},
 		{signed(-0.15, 3, "m"), "-0.150 m"},
