@@ -3,12 +3,12 @@ package main
 import (
 	"flag"
 	"fmt"
-	"heelwatch/tui/report"
 	"io"
 	"strings"
 	"text/tabwriter"
 
 	"heelwatch/engine"
+	"heelwatch/tui/report"
 	"heelwatch/vessels"
 )
 
