@@ -144,11 +144,7 @@ func Assess(v *Vessel, d Damage) Assessment {
 	pr := NewProblem(v, d)
 	pos, err := pr.Equilibrium()
 	if err != nil {
-		if ne, ok := err.(*NoEquilibrium); ok {
-			a.NoEq = ne
-		} else {
-			a.NoEq = &NoEquilibrium{NotConverged, err.Error()}
-		}
+		a.NoEq = asNoEquilibrium(err)
 	} else {
 		a.Position = &pos
 	}

@@ -1,6 +1,7 @@
 package engine
 
 import (
+	"errors"
 	"fmt"
 	"math"
 )
@@ -40,6 +41,16 @@ func (o Outcome) Plain() string {
 		return "she capsizes"
 	}
 	return "heelwatch could not find where she floats"
+}
+
+// asNoEquilibrium returns err as a *NoEquilibrium: itself when it is one
+// (wrapped or not), else a not-converged one carrying its message.
+func asNoEquilibrium(err error) *NoEquilibrium {
+	var ne *NoEquilibrium
+	if errors.As(err, &ne) {
+		return ne
+	}
+	return &NoEquilibrium{NotConverged, err.Error()}
 }
 
 // NoEquilibrium is the error returned when the vessel does not float.

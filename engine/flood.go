@@ -492,7 +492,7 @@ func NewFloodRun(c FloodCase) (*FloodRun, error) {
 		r.lb = &pos
 		r.lbWater = r.mu * comp.solid.Below(pos.Plane).V
 	} else {
-		r.lbNoEq = asNoEq(err)
+		r.lbNoEq = asNoEquilibrium(err)
 	}
 	r.solves++
 
@@ -537,14 +537,6 @@ func NewFloodRun(c FloodCase) (*FloodRun, error) {
 	return r, nil
 }
 
-func asNoEq(err error) *NoEquilibrium {
-	var ne *NoEquilibrium
-	if errors.As(err, &ne) {
-		return ne
-	}
-	return &NoEquilibrium{NotConverged, err.Error()}
-}
-
 func outcomeEnd(o Outcome) FloodEnd {
 	switch o {
 	case Sinks:
@@ -574,7 +566,7 @@ func (r *FloodRun) eval(w float64) floodEval {
 	pos, err := pr.EquilibriumFrom(r.guess, r.haveG)
 	r.solves++
 	if err != nil {
-		e.noEq = asNoEq(err)
+		e.noEq = asNoEquilibrium(err)
 		return e
 	}
 	r.guess, r.haveG = pos.Plane, true

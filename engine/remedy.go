@@ -252,13 +252,6 @@ func remedyHeel(deg float64) string {
 	return flagHeel(deg)
 }
 
-func asNoEquilibrium(err error) *NoEquilibrium {
-	if ne, ok := err.(*NoEquilibrium); ok {
-		return ne
-	}
-	return &NoEquilibrium{NotConverged, err.Error()}
-}
-
 func anyAdvisable(rs []Remedy) bool {
 	for _, r := range rs {
 		if r.Advisable {
