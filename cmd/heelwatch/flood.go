@@ -643,37 +643,27 @@ type floodPosDoc struct {
 	} `json:"lowest_opening"`
 }
 
-type floodCritDoc struct {
-	Set       string     `json:"set"`
-	Code      string     `json:"code"`
-	Actual    report.Num `json:"actual"`
-	Required  report.Num `json:"required"`
-	Unit      string     `json:"unit"`
-	Pass      bool       `json:"pass"`
-	Indicator bool       `json:"indicator"`
-}
-
 type floodRowDoc struct {
-	TimeS     report.Num     `json:"time_s"`
-	WaterM3   report.Num     `json:"water_m3"`
-	InflowM3h report.Num     `json:"inflow_m3h"`
-	PumpedM3h report.Num     `json:"pumped_m3h"`
-	HeadM     report.Num     `json:"head_m"`
-	SoundingM report.Num     `json:"sounding_m"`
-	Event     string         `json:"event"`
-	Position  *floodPosDoc   `json:"position"`
-	NoEq      string         `json:"no_equilibrium"`
-	Criteria  []floodCritDoc `json:"criteria,omitempty"`
+	TimeS     report.Num            `json:"time_s"`
+	WaterM3   report.Num            `json:"water_m3"`
+	InflowM3h report.Num            `json:"inflow_m3h"`
+	PumpedM3h report.Num            `json:"pumped_m3h"`
+	HeadM     report.Num            `json:"head_m"`
+	SoundingM report.Num            `json:"sounding_m"`
+	Event     string                `json:"event"`
+	Position  *floodPosDoc          `json:"position"`
+	NoEq      string                `json:"no_equilibrium"`
+	Criteria  []report.CriterionDoc `json:"criteria,omitempty"`
 }
 
 type floodStDoc struct {
-	Fraction report.Num     `json:"fraction"`
-	WaterM3  report.Num     `json:"water_m3"`
-	Reached  bool           `json:"reached"`
-	TimeS    *report.Num    `json:"time_s"`
-	Position *floodPosDoc   `json:"position"`
-	NoEq     string         `json:"no_equilibrium"`
-	Criteria []floodCritDoc `json:"criteria"`
+	Fraction report.Num            `json:"fraction"`
+	WaterM3  report.Num            `json:"water_m3"`
+	Reached  bool                  `json:"reached"`
+	TimeS    *report.Num           `json:"time_s"`
+	Position *floodPosDoc          `json:"position"`
+	NoEq     string                `json:"no_equilibrium"`
+	Criteria []report.CriterionDoc `json:"criteria"`
 }
 
 type floodSolver struct {
@@ -698,14 +688,6 @@ func posDoc(p *engine.Position) *floodPosDoc {
 	return d
 }
 
-func critDocs(cs []engine.CriterionResult) []floodCritDoc {
-	out := []floodCritDoc{}
-	for _, c := range cs {
-		out = append(out, floodCritDoc{Set: c.Set, Code: c.Code, Actual: report.Num(c.Actual), Required: report.Num(c.Required), Unit: c.Unit, Pass: c.Pass, Indicator: c.Indicator})
-	}
-	return out
-}
-
 func rowDoc(s engine.FloodSample) floodRowDoc {
 	d := floodRowDoc{TimeS: report.Num(s.TimeS), WaterM3: report.Num(s.WaterM3), InflowM3h: report.Num(s.InflowM3h),
 		PumpedM3h: report.Num(s.PumpedM3h), HeadM: report.Num(s.HeadM), SoundingM: report.Num(s.SoundingM),
@@ -719,7 +701,7 @@ func rowDoc(s engine.FloodSample) floodRowDoc {
 		d.InflowM3h, d.PumpedM3h, d.HeadM, d.SoundingM = nan, nan, nan, nan
 	}
 	if len(s.Criteria) > 0 {
-		d.Criteria = critDocs(s.Criteria)
+		d.Criteria = report.CriterionDocs(s.Criteria)
 	}
 	return d
 }
@@ -764,7 +746,7 @@ func writeFloodJSON(w io.Writer, fr floodRun) error {
 	}
 	for _, s := range r.Stages {
 		st := floodStDoc{Fraction: report.Num(s.Fraction), WaterM3: report.Num(s.WaterM3), Reached: s.Reached,
-			Position: posDoc(s.Position), Criteria: critDocs(s.Criteria)}
+			Position: posDoc(s.Position), Criteria: report.CriterionDocs(s.Criteria)}
 		if s.Reached {
 			st.TimeS = numPtr(s.TimeS)
 		}

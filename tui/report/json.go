@@ -277,12 +277,19 @@ func Build(r Report) Document {
 		loll := rs.Loll
 		d.Remedies, d.RemediesSummary, d.RemediesLoll, d.RemediesCaution = &list, rs.Summary, &loll, RemediesCaution
 	}
-	for _, c := range a.Criteria {
-		d.Criteria = append(d.Criteria, CriterionDoc{Set: c.Set, Code: c.Code, Requirement: c.Requirement,
+	d.Criteria = append(d.Criteria, CriterionDocs(a.Criteria)...)
+	return d
+}
+
+// CriterionDocs returns the JSON form of criteria results; never nil.
+func CriterionDocs(cs []engine.CriterionResult) []CriterionDoc {
+	out := []CriterionDoc{}
+	for _, c := range cs {
+		out = append(out, CriterionDoc{Set: c.Set, Code: c.Code, Requirement: c.Requirement,
 			Required: Num(c.Required), Actual: Num(c.Actual), Unit: c.Unit, Pass: c.Pass, AtMost: c.AtMost,
 			Margin: Num(c.Margin), Source: c.Source, Indicator: c.Indicator, Note: c.Note})
 	}
-	return d
+	return out
 }
 
 func buildEquilibrium(p *engine.Position) *Equilibrium {
