@@ -12,7 +12,6 @@ import (
 	"testing"
 	"time"
 
-	"github.com/charmbracelet/bubbles/spinner"
 	tea "github.com/charmbracelet/bubbletea"
 	"github.com/charmbracelet/lipgloss"
 	"github.com/muesli/termenv"
@@ -77,22 +76,7 @@ func drive(t testing.TB, m model, msg tea.Msg, cmds ...tea.Cmd) model {
 		m = mm.(model)
 		cmds = append(cmds, cmd)
 	}
-	for len(cmds) > 0 {
-		c := cmds[0]
-		cmds = cmds[1:]
-		if c == nil {
-			continue
-		}
-		switch msg := c().(type) {
-		case nil, spinner.TickMsg, tea.QuitMsg:
-		case tea.BatchMsg:
-			cmds = append(cmds, msg...)
-		default:
-			mm, cmd := m.Update(msg)
-			m = mm.(model)
-			cmds = append(cmds, cmd)
-		}
-	}
+	m, _ = driveUntil(t, m, cmds, func(tea.Msg) bool { return false })
 	return m
 }
 
@@ -415,4 +399,25 @@ func TestRunesArrivingTogether(t *testing.T) {
 	if both.sel != one.sel || one.sel == testModel(t, 100, 30).sel {
 		t.Errorf("\"jj\" left the selection at %d; j then j at %d", both.sel, one.sel)
 	}
+}
+
+// checkFits resizes m to w×h, checks that its view fits the screen and
+// shows no non-finite number, and returns the view.
+func checkFits(t *testing.T, name string, m model, w, h int) string {
+	t.Helper()
+	m2, _ := m.Update(tea.WindowSizeMsg{Width: w, Height: h})
+	v := m2.(model).View()
+	lines := strings.Split(v, "\n")
+	if h > 0 && len(lines) > h {
+		t.Errorf("%s %dx%d: %d lines", name, w, h, len(lines))
+	}
+	for i, l := range lines {
+		if lw := lipgloss.Width(l); lw > w {
+			t.Errorf("%s %dx%d: line %d is %d wide", name, w, h, i+1, lw)
+		}
+	}
+	if bad := nonFinite.FindString(v); bad != "" {
+		t.Errorf("%s %dx%d: %q on screen", name, w, h, bad)
+	}
+	return v
 }

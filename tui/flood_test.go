@@ -447,20 +447,7 @@ func TestFloodSmallSizes(t *testing.T) {
 	empty := press(t, m, "t")
 	for name, mm := range map[string]model{"done": done, "running": running, "form": form, "no run": empty} {
 		for _, sz := range [][2]int{{20, 5}, {0, 0}, {1, 1}, {79, 24}, {80, 24}, {81, 25}, {100, 30}, {120, 40}, {119, 45}, {200, 60}} {
-			m2, _ := mm.Update(tea.WindowSizeMsg{Width: sz[0], Height: sz[1]})
-			v := m2.(model).View()
-			lines := strings.Split(v, "\n")
-			if sz[1] > 0 && len(lines) > sz[1] {
-				t.Errorf("%s %dx%d: %d lines", name, sz[0], sz[1], len(lines))
-			}
-			for i, l := range lines {
-				if w := lipgloss.Width(l); w > sz[0] {
-					t.Errorf("%s %dx%d: line %d is %d wide", name, sz[0], sz[1], i+1, w)
-				}
-			}
-			if w := nonFinite.FindString(v); w != "" {
-				t.Errorf("%s %dx%d: %q on screen", name, sz[0], sz[1], w)
-			}
+			checkFits(t, name, mm, sz[0], sz[1])
 		}
 		// Every palette (the progress bar takes its colour from it).
 		if name != "form" {

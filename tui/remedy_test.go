@@ -336,20 +336,7 @@ func TestRemedySmallSizes(t *testing.T) {
 	helpOpen := press(t, list, "?")
 	for name, m := range map[string]model{"list": list, "loll": loll, "running": running, "out of date": stale, "full help": helpOpen} {
 		for _, sz := range [][2]int{{20, 5}, {0, 0}, {1, 1}, {79, 24}, {80, 24}, {81, 25}, {100, 30}, {109, 40}, {120, 40}, {200, 60}} {
-			m2, _ := m.Update(tea.WindowSizeMsg{Width: sz[0], Height: sz[1]})
-			v := m2.(model).View()
-			lines := strings.Split(v, "\n")
-			if sz[1] > 0 && len(lines) > sz[1] {
-				t.Errorf("%s %dx%d: %d lines", name, sz[0], sz[1], len(lines))
-			}
-			for i, l := range lines {
-				if w := lipgloss.Width(l); w > sz[0] {
-					t.Errorf("%s %dx%d: line %d is %d wide", name, sz[0], sz[1], i+1, w)
-				}
-			}
-			if w := nonFinite.FindString(v); w != "" {
-				t.Errorf("%s %dx%d: %q on screen", name, sz[0], sz[1], w)
-			}
+			v := checkFits(t, name, m, sz[0], sz[1])
 			if sz[0] >= minWidth && sz[1] >= minHeight && !strings.Contains(v, "RIGHTING OPTIONS") {
 				t.Errorf("%s %dx%d: the panel is not on screen", name, sz[0], sz[1])
 			}
