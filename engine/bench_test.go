@@ -19,7 +19,7 @@ var refBenchSpaces = []string{"Wing tank 2 S", "Engine room"}
 
 // refBundledDamaged opens the bundled ship and returns her with the
 // compartments named open to the sea.
-func refBundledDamaged(b *testing.B, names ...string) (*engine.Vessel, engine.Damage) {
+func refBundledDamaged(b testing.TB, names ...string) (*engine.Vessel, engine.Damage) {
 	b.Helper()
 	v, _, err := vessels.Open(vessels.Default)
 	if err != nil {

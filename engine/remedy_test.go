@@ -13,7 +13,6 @@ import (
 	"testing"
 
 	"heelwatch/engine"
-	"heelwatch/vessels"
 )
 
 // remedyBarge is a box barge 80 × 16 × 8 m with tanks whose boxes lie
@@ -445,7 +444,7 @@ func TestRemedyHoledTankNotUsed(t *testing.T) {
 func TestRemedyBundled(t *testing.T) {
 	for _, open := range [][]string{{"Wing tank 2 S"}, {"Wing tank 2 S", "DB 2 S"}, {"Wing tank 1 P"}} {
 		t.Run(strings.Join(open, "+"), func(t *testing.T) {
-			v, d := remedyBundled(t, open...)
+			v, d := refBundledDamaged(t, open...)
 			rs := engine.FindRemedies(v, d)
 			if !rs.Needed || rs.Loll || len(rs.Options) == 0 {
 				t.Fatalf("needed %v, loll %v, %d options: %s", rs.Needed, rs.Loll, len(rs.Options), rs.Summary)
@@ -479,33 +478,12 @@ func TestRemedyBundled(t *testing.T) {
 	}
 }
 
-func remedyBundled(tb testing.TB, names ...string) (*engine.Vessel, engine.Damage) {
-	tb.Helper()
-	v, _, err := vessels.Open(vessels.Default)
-	if err != nil {
-		tb.Fatal(err)
-	}
-	d := v.Intact()
-	for _, n := range names {
-		found := false
-		for i, c := range v.Compartments {
-			if c.Name == n {
-				d[i].Open, found = true, true
-			}
-		}
-		if !found {
-			tb.Fatalf("no compartment %q", n)
-		}
-	}
-	return v, d
-}
-
 // BenchmarkRemedies times one call of FindRemedies on the bundled ship
 // holed in Wing tank 2 S. Run with
 //
 //	go test ./engine -run '^$' -bench Remedies -cpu 1 -count 3
 func BenchmarkRemedies(b *testing.B) {
-	v, d := remedyBundled(b, "Wing tank 2 S")
+	v, d := refBundledDamaged(b, "Wing tank 2 S")
 	rs := engine.FindRemedies(v, d)
 	if len(rs.Options) == 0 {
 		b.Fatal(rs.Summary)
