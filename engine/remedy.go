@@ -191,7 +191,11 @@ func FindRemedies(v *Vessel, d Damage) RemedySet {
 		rs.Summary = fmt.Sprintf("Upright her GM is %.2f m: she lolls, now %s. Do not counter-ballast the high (%s) side: she would flop over to %s, perhaps further. Lower G first: ballast a low empty tank on the %s side or across the centreline, one tank at a time, minding its free surface while it is slack; or pump out tanks high in the ship. Only such options are worked out below.",
 			rs.UprightGMM, remedyHeel(pos.HeelDeg), high, high, low)
 	case math.Abs(pos.HeelDeg) < RemedyUprightDeg:
-		rs.Summary = fmt.Sprintf("She floats within %.1f° of upright (%s) with positive GM upright (%.2f m): no righting action is needed.", RemedyUprightDeg, remedyHeel(pos.HeelDeg), rs.UprightGMM)
+		where := fmt.Sprintf("within %.1f° of upright (%s)", RemedyUprightDeg, remedyHeel(pos.HeelDeg))
+		if math.Abs(pos.HeelDeg) < 0.005 {
+			where = "upright"
+		}
+		rs.Summary = fmt.Sprintf("She floats %s with positive GM (%.2f m): no righting action is needed.", where, rs.UprightGMM)
 		return rs
 	default:
 		rs.Needed = true

@@ -182,8 +182,11 @@ func (m model) remedyLead(rs *engine.RemedySet, w int) []string {
 		add(st.Value.Render, "LIST, not a loll: upright GM "+num(rs.UprightGMM, 2)+" m, heel "+heelText(rs.HeelDeg)+
 			". Weight to the "+high+" side brings her back.")
 	default:
-		add(st.Value.Render, fmt.Sprintf("NO RIGHTING ACTION NEEDED: within %s° of upright (%s), upright GM %s m.",
-			num(engine.RemedyUprightDeg, 1), heelText(rs.HeelDeg), num(rs.UprightGMM, 2)))
+		where := fmt.Sprintf("within %s° of upright (%s)", num(engine.RemedyUprightDeg, 1), heelText(rs.HeelDeg))
+		if math.Abs(rs.HeelDeg) < 0.005 {
+			where = "upright"
+		}
+		add(st.Value.Render, fmt.Sprintf("NO RIGHTING ACTION NEEDED: %s, upright GM %s m.", where, num(rs.UprightGMM, 2)))
 	}
 	return out
 }
