@@ -32,21 +32,7 @@ func handBox(t testing.TB, L, B, D float64, ws []engine.Weight, specs ...handSpe
 
 func handVessel(t testing.TB, h *engine.Hull, ws []engine.Weight, specs ...handSpec) *engine.Vessel {
 	t.Helper()
-	var cs []*engine.Compartment
-	for _, s := range specs {
-		c, err := engine.NewCompartment(h, s.name, s.box)
-		if err != nil {
-			t.Fatal(err)
-		}
-		c.Permeability = s.mu
-		c.Liquid = s.liq
-		cs = append(cs, c)
-	}
-	v, err := engine.NewVessel(engine.Vessel{Name: "test box", Hull: h, Weights: ws, Compartments: cs})
-	if err != nil {
-		t.Fatal(err)
-	}
-	return v
+	return flagShip(t, h, ws, nil, specs...)
 }
 
 // handOpen returns a damage state with compartments idx open.
