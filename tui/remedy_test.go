@@ -14,7 +14,7 @@ import (
 	"github.com/muesli/termenv"
 
 	"heelwatch/engine"
-	"heelwatch/tui/report"
+	"heelwatch/report"
 	"heelwatch/vessels"
 )
 
@@ -276,7 +276,7 @@ func TestRemedyStale(t *testing.T) {
 }
 
 // TestRemedyInReport: the report key's Markdown carries the righting
-// options as tui/report renders them when they are current, waits for them
+// options as report renders them when they are current, waits for them
 // while they are being worked out for the state shown, and leaves them out
 // once the state has changed.
 func TestRemedyInReport(t *testing.T) {

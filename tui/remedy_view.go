@@ -7,7 +7,7 @@ import (
 	"strings"
 
 	"heelwatch/engine"
-	"heelwatch/tui/report"
+	"heelwatch/report"
 )
 
 // The righting-options panel takes the whole body of the screen, under the

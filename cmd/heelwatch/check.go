@@ -8,7 +8,7 @@ import (
 	"text/tabwriter"
 
 	"heelwatch/engine"
-	"heelwatch/tui/report"
+	"heelwatch/report"
 	"heelwatch/vessels"
 )
 

@@ -8,8 +8,8 @@ import (
 	"github.com/charmbracelet/x/term"
 
 	"heelwatch/engine"
+	"heelwatch/report"
 	"heelwatch/tui"
-	"heelwatch/tui/report"
 )
 
 // dashboardOptions are the top-level flags that only the dashboard uses.

@@ -12,7 +12,7 @@ import (
 	"time"
 
 	"heelwatch/engine"
-	"heelwatch/tui/report"
+	"heelwatch/report"
 	"heelwatch/vessels"
 )
 

@@ -9,7 +9,7 @@ import (
 	"strings"
 
 	"heelwatch/engine"
-	"heelwatch/tui/report"
+	"heelwatch/report"
 	"heelwatch/vessels"
 )
 
