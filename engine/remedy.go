@@ -489,45 +489,26 @@ func remedyUpright(r *Remedy, d Damage, solves *int) {
 
 // remedyToUpright finds the smaller amount of candidate c that brings her
 // nearest upright, when the whole amount (full) overshoots to the other
-// side: regula falsi (Illinois) on the heel between no action (heel0) and
+// side: regula falsi (illinois) on the heel between no action (heel0) and
 // the whole, at most remedyUprightTries equilibrium solves and one upright
 // solve for the amount kept.
 func remedyToUpright(v *Vessel, d Damage, c remedyCandidate, heel0 float64, full Remedy, solves *int) (Remedy, bool) {
-	ma, ha := 0.0, heel0
-	mb, hb := full.MassT, full.Position.HeelDeg
 	var best Remedy
 	found := false
-	side := 0
-	for it := 0; it < remedyUprightTries && *solves+2 <= RemedyMaxSolves; it++ {
-		m := ma - ha*(mb-ma)/(hb-ha)
-		if !(m > 0 && m < full.MassT) {
-			break
+	illinois(0, full.MassT, heel0, full.Position.HeelDeg, math.NaN(), remedyUprightTries, 0, remedyUprightTolDeg, false, func(m float64) (float64, bool) {
+		if *solves+2 > RemedyMaxSolves {
+			return 0, false
 		}
 		r := remedySolve(v, d, c, m, false, solves)
 		if r.Position == nil {
-			break
+			return 0, false
 		}
 		h := r.Position.HeelDeg
 		if !found || math.Abs(h) < math.Abs(best.Position.HeelDeg) {
 			best, found = r, true
 		}
-		if math.Abs(h) <= remedyUprightTolDeg {
-			break
-		}
-		if h*ha > 0 {
-			ma, ha = m, h
-			if side == -1 {
-				hb /= 2
-			}
-			side = -1
-		} else {
-			mb, hb = m, h
-			if side == 1 {
-				ha /= 2
-			}
-			side = 1
-		}
-	}
+		return h, true
+	})
 	if !found {
 		return Remedy{}, false
 	}
