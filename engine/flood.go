@@ -193,12 +193,15 @@ func NewFloodRun(c FloodCase) (*FloodRun, error) {
 	if !(s0.WaterM3 >= 0) || math.IsInf(s0.WaterM3, 0) {
 		return nil, fmt.Errorf("flooding %q: water already in %v m³: must be a finite number, zero or more", comp.Name, s0.WaterM3)
 	}
+	if err := CheckDamage(v, base); err != nil {
+		return nil, fmt.Errorf("flooding: base damage state: %w", err)
+	}
 	c.Base = base
 	c.Hole = h
 	c.LimitS = limit
 
 	r := &FloodRun{c: c, v: v, ci: c.Compartment, comp: comp, cd: h.Cd, limit: limit, zmin: zmin}
-	r.mu = v.permeability(base, r.ci)
+	r.mu = v.Permeability(base, r.ci)
 	r.capacity = r.mu * comp.solid.Volume()
 	r.floor = floodFloorFrac * r.capacity
 	r.pumpM3s = pump / 3600

@@ -94,6 +94,7 @@ type FloodReport struct {
 	// the sea's level (End is FloodPumpsHold or FloodKeptDry).
 	PumpsHoldLevel bool
 	FinalWaterM3   float64 // water in at the end
+	Permeability   float64 // μ of the flooded compartment, as used (Vessel.Permeability of the base state)
 	CapacityM3     float64 // μ × the compartment's volume
 	ContentsM3     float64 // a tank's contents at the start, as sea water of the same mass; 0 for a dry space
 
@@ -156,7 +157,7 @@ func (r *FloodRun) Report() FloodReport {
 		Vessel: r.v.Name, Compartment: r.comp.Name, Hole: r.c.Hole, PumpM3h: r.pumpM3s * 3600, LimitS: r.limit,
 		End: r.end, EndS: r.endS, EndReason: r.endWhy, EndNoEq: r.endNoEq, SteadyHeadM: r.hs,
 		PumpsHoldLevel: r.end == FloodPumpsHold || r.end == FloodKeptDry,
-		CapacityM3:     r.capacity, ContentsM3: r.contentsM3, LostBuoyancy: r.lb, LostBuoyancyNoEq: r.lbNoEq, LostBuoyancyWaterM3: r.lbWater,
+		Permeability:   r.mu, CapacityM3: r.capacity, ContentsM3: r.contentsM3, LostBuoyancy: r.lb, LostBuoyancyNoEq: r.lbNoEq, LostBuoyancyWaterM3: r.lbWater,
 		Events: append([]FloodEvent(nil), r.events...),
 		Steps:  len(r.recs), Rejected: r.st.tries - len(r.recs),
 	}

@@ -313,7 +313,7 @@ func handSpaces(v *Vessel, d Damage) (spaces []handSpace, spilt []string, spiltT
 		switch {
 		case s.Open:
 			b := c.Box
-			hs := handSpace{name: c.Name, mu: v.permeability(d, i),
+			hs := handSpace{name: c.Name, mu: v.Permeability(d, i),
 				x0: math.Max(b.X0, 0), x1: math.Min(b.X1, L),
 				y0: math.Max(b.Y0, -B/2), y1: math.Min(b.Y1, B/2),
 				z0: math.Max(b.Z0, 0), z1: math.Min(b.Z1, D)}
