@@ -117,6 +117,7 @@ func (r *reader) vessel(root *table) (*engine.Vessel, *Info) {
 	weights := r.weights(root.entries("weight", "one item of the loading condition"))
 	comps, cinfo := r.compartments(root.entries("compartment", "one space of the ship"), hull)
 	openings := r.openings(root.entries("opening", "a point where water would spread"))
+	marks := r.draftMarks(root.entries("draft_mark", "a draft mark on the shell"), hull)
 	root.finish()
 
 	if len(r.probs) > 0 || hull == nil {
@@ -125,6 +126,7 @@ func (r *reader) vessel(root *table) (*engine.Vessel, *Info) {
 	v, err := engine.NewVessel(engine.Vessel{
 		Name: name, WaterDensity: rho, Hull: hull, Weights: weights,
 		Compartments: comps, Openings: openings, MarginLineM: margin, CriteriaSets: criteria, ShipType: info.ShipType,
+		DraftMarks: marks,
 	})
 	if err != nil {
 		r.addf("weight", "%v", err)
