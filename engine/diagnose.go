@@ -354,7 +354,7 @@ func (f *diagFitter) planeResiduals(set []int, vol []float64) []float64 {
 	for _, ci := range set {
 		c := v.Compartments[ci]
 		w := d[ci].WaterM3
-		mu := v.permeability(d, ci)
+		mu := v.Permeability(d, ci)
 		pl, im := levelForVolume(c.solid, math.Min(w/mu, c.solid.Volume()*(1-1e-9)), p.B, p.C)
 		x, y, z := im.Centroid()
 		mw := v.WaterDensity * w
@@ -523,7 +523,7 @@ func (f *diagFitter) explain(c *diagCand) Explanation {
 	sea := p.Plane
 	for i, ci := range c.set {
 		comp := f.v.Compartments[ci]
-		fs := FloodedSpace{Compartment: ci, WaterM3: c.vol[i], Permeability: f.v.permeability(d0, ci)}
+		fs := FloodedSpace{Compartment: ci, WaterM3: c.vol[i], Permeability: f.v.Permeability(d0, ci)}
 		V := comp.solid.Volume()
 		in, _ := levelForVolume(comp.solid, math.Min(c.vol[i]/fs.Permeability, V*(1-1e-9)), sea.B, sea.C)
 		fs.LevelM = sounding(comp, in)
