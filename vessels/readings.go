@@ -190,3 +190,21 @@ func (r *reader) levelReadings(t *table, v *engine.Vessel) []engine.LevelReading
 	}
 	return out
 }
+
+// TrendOptions returns what the file says of holes and pumps, for the
+// trend of a diagnosis (engine.EstimateTrend).
+func (info *Info) TrendOptions() engine.TrendOptions {
+	o := engine.TrendOptions{Holes: map[int]engine.Hole{}, PumpsM3h: map[int]float64{}}
+	if info == nil {
+		return o
+	}
+	for i, c := range info.Compartments {
+		if c.Hole != nil {
+			o.Holes[i] = *c.Hole
+		}
+		if c.PumpM3h > 0 {
+			o.PumpsM3h[i] = c.PumpM3h
+		}
+	}
+	return o
+}
