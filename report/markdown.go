@@ -254,7 +254,7 @@ func Markdown(w io.Writer, r Report) error {
 
 	e.line("## Cautions")
 	e.line()
-	for _, c := range Cautions {
+	for _, c := range Cautions() {
 		e.line("- ", c)
 	}
 	e.line()

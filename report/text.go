@@ -178,7 +178,7 @@ func Text(w io.Writer, r Report) error {
 		}
 	}
 	e.line()
-	for _, c := range Cautions {
+	for _, c := range Cautions() {
 		e.line(c)
 	}
 	return e.err
@@ -202,15 +202,6 @@ func plural(n int, word string) string {
 		return "1 " + word
 	}
 	return num(float64(n), 0, "") + " " + word + "s"
-}
-
-// signed formats x with an explicit sign.
-func signed(x float64, prec int, unit string) string {
-	s := num(x, prec, unit)
-	if finite(x) && !strings.HasPrefix(s, "-") && s != num(0, prec, unit) {
-		return "+" + s
-	}
-	return s
 }
 
 // precision is the number of decimals shown for a value in unit.

@@ -9,6 +9,7 @@ import (
 	tea "github.com/charmbracelet/bubbletea"
 
 	"heelwatch/engine"
+	"heelwatch/report"
 )
 
 // This file runs a flooding run (engine.FloodRun) for the dashboard: one
@@ -313,11 +314,11 @@ func (f floodState) baseChanged(d engine.Damage) bool {
 // outcomeText is a run's end in a sentence, its first words in capitals,
 // for the panel and the log.
 func outcomeText(r engine.FloodReport) string {
-	at := engine.FormatDuration(r.EndS)
+	at := report.Duration(r.EndS)
 	in := num(r.FinalWaterM3, 0) + " m³ in"
 	switch r.End {
 	case engine.FloodEqualised:
-		return fmt.Sprintf("LEVELS EQUAL after %s, %s", engine.FormatDuration(r.EqualiseS), in)
+		return fmt.Sprintf("LEVELS EQUAL after %s, %s", report.Duration(r.EqualiseS), in)
 	case engine.FloodPumpsHold:
 		return fmt.Sprintf("PUMPS HOLD the level %s m below the sea from %s: sounding %s m, %s",
 			num(r.SteadyHeadM, 3), at, num(r.Final.SoundingM, 2), in)
