@@ -46,9 +46,10 @@ type Vessel struct {
 	Weights      []Weight
 	Compartments []*Compartment
 	Openings     []Opening
-	MarginLineM  float64  // margin line's depth below the deck at side, m
-	CriteriaSets []string // the criteria sets she is held to (see criteria.go)
-	ShipType     string   // "cargo" or "passenger" (SOLAS s's heel limits); "" is cargo
+	MarginLineM  float64     // margin line's depth below the deck at side, m
+	CriteriaSets []string    // the criteria sets she is held to (see criteria.go)
+	ShipType     string      // "cargo" or "passenger" (SOLAS s's heel limits); "" is cargo
+	DraftMarks   []DraftMark // the marks the crew reads (draftmark.go)
 
 	tanks []tankLoad // contents of each compartment at its fill, upright
 }
@@ -78,6 +79,10 @@ func NewVessel(v Vessel) (*Vessel, error) {
 	v.Compartments = append([]*Compartment(nil), v.Compartments...)
 	v.Openings = append([]Opening(nil), v.Openings...)
 	v.CriteriaSets = append([]string(nil), v.CriteriaSets...)
+	if err := checkMarks(v.Hull, v.DraftMarks); err != nil {
+		return nil, err
+	}
+	v.DraftMarks = append([]DraftMark(nil), v.DraftMarks...)
 	for i, w := range v.Weights {
 		for _, f := range []float64{w.MassT, w.LCGM, w.TCGM, w.VCGM, w.FSMTm} {
 			if math.IsNaN(f) || math.IsInf(f, 0) {

@@ -112,6 +112,7 @@ func Markdown(w io.Writer, r Report) error {
 			}
 		}
 		e.line()
+		markdownMarks(e, r)
 
 		e.line("## Openings")
 		e.line()

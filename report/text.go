@@ -66,6 +66,10 @@ func Text(w io.Writer, r Report) error {
 		t.add("deck edge", clearanceWords(p.DeckEdge))
 		t.add("margin line", clearanceWords(p.MarginLine))
 		writeLines(e, t.lines("  "))
+		if ml := markLines(r); len(ml) > 0 {
+			e.line()
+			writeLines(e, ml)
+		}
 		if len(p.Openings) > 0 {
 			e.line()
 			e.line("Openings, nearest the water first (height above water)")

@@ -84,6 +84,8 @@ func (r *reader) vessel(root *table) (*engine.Vessel, *Info) {
 	name, ok := root.str("name", true, "the vessel's name in quotes")
 	if ok && strings.TrimSpace(name) == "" {
 		r.addf("name", "is empty: give the vessel's name")
+	} else if ok {
+		r.checkName("name", name, "vessel's name")
 	}
 	rho := engine.SeaWaterDensity
 	if d, ok := root.num("water_density", "t/m³", false); ok {
@@ -94,7 +96,9 @@ func (r *reader) vessel(root *table) (*engine.Vessel, *Info) {
 		}
 	}
 	info.Description, _ = root.str("about", false, "a description of the vessel")
+	r.checkText("about", info.Description, "the description")
 	info.Condition, _ = root.str("condition", false, "the loading condition's name")
+	r.checkName("condition", info.Condition, "condition's name")
 	info.ShipType = "cargo"
 	if s, ok := root.choice("ship_type", false, shipTypes); ok {
 		info.ShipType = s
@@ -113,6 +117,7 @@ func (r *reader) vessel(root *table) (*engine.Vessel, *Info) {
 	weights := r.weights(root.entries("weight", "one item of the loading condition"))
 	comps, cinfo := r.compartments(root.entries("compartment", "one space of the ship"), hull)
 	openings := r.openings(root.entries("opening", "a point where water would spread"))
+	marks := r.draftMarks(root.entries("draft_mark", "a draft mark on the shell"), hull)
 	root.finish()
 
 	if len(r.probs) > 0 || hull == nil {
@@ -121,6 +126,7 @@ func (r *reader) vessel(root *table) (*engine.Vessel, *Info) {
 	v, err := engine.NewVessel(engine.Vessel{
 		Name: name, WaterDensity: rho, Hull: hull, Weights: weights,
 		Compartments: comps, Openings: openings, MarginLineM: margin, CriteriaSets: criteria, ShipType: info.ShipType,
+		DraftMarks: marks,
 	})
 	if err != nil {
 		r.addf("weight", "%v", err)
@@ -337,6 +343,9 @@ func (r *reader) name(t *table, seen map[string]string, what string) (string, bo
 		r.addf(p, "is empty: every %s needs a name", what)
 		return n, false
 	}
+	if !r.checkName(p, n, what+"'s name") {
+		return n, false
+	}
 	if what != "weight" && strings.Contains(n, ",") {
 		r.addf(p, "%q holds a comma: %s names may not (the command line separates names with commas)", n, what)
 	}
@@ -382,7 +391,7 @@ func (r *reader) compartments(ts []*table, hull *engine.Hull) ([]*engine.Compart
 		if g, ok := t.str("group", false, "the compartment's group, e.g. \"double bottom\""); ok {
 			if strings.TrimSpace(g) == "" {
 				r.addf(t.keyPath("group"), "is empty: give a group name or leave the key out")
-			} else {
+			} else if r.checkName(t.keyPath("group"), g, "group's name") {
 				ci.Group = g
 			}
 		}
@@ -483,6 +492,7 @@ type tankLiquid struct {
 // liquid reads a tank's liquid, liquid_density and fill or fill_m3.
 func (r *reader) liquid(t *table, use string, useOK bool) *tankLiquid {
 	name, nameOK := t.str("liquid", false, "what the tank holds, e.g. \"fuel oil\"")
+	nameOK = nameOK && r.checkName(t.keyPath("liquid"), name, "liquid's name")
 	dens, densOK := t.positive("liquid_density", "t/m³", false)
 	fill, fillOK := t.num("fill", "fraction of the tank, 0 to 1", false)
 	vol, volOK := t.num("fill_m3", "m³", false)

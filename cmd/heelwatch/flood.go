@@ -129,7 +129,7 @@ func runFlood(args []string, stdout, stderr io.Writer) int {
 	for _, p := range pumps {
 		name, nums := splitNumbers(p, 1)
 		if len(nums) != 1 {
-			return fail("--pump %q: write NAME:M3H, the capacity in m³/h, e.g. --pump %q", p, v.Compartments[0].Name+":120")
+			return fail("--pump %q: write NAME:M3H, the capacity in m³/h, e.g. --pump %q", p, exampleName(v)+":120")
 		}
 		if _, ok := index[name]; !ok {
 			return fail("%s", unknownName("--pump", name, v))
@@ -145,6 +145,9 @@ func runFlood(args []string, stdout, stderr io.Writer) int {
 	var area, z float64 = math.NaN(), math.NaN()
 	if len(holes) == 1 {
 		name, nums := splitNumbers(holes[0], 2)
+		if msg := finiteNumbers("--hole", holes[0], nums); msg != "" {
+			return fail("%s", msg)
+		}
 		i, ok := index[name]
 		if !ok {
 			msg := unknownName("--hole", name, v)

@@ -167,6 +167,10 @@ func unknownName(flagName, name string, v *engine.Vessel) string {
 			break
 		}
 	}
+	if len(v.Compartments) == 0 {
+		b.WriteString(" It has no compartments.")
+		return b.String()
+	}
 	b.WriteString(" The compartments are:")
 	for _, c := range v.Compartments {
 		fmt.Fprintf(&b, "\n  %s", c.Name)
