@@ -72,11 +72,14 @@ func FloodText(w io.Writer, f Flood) error {
 	fmt.Fprintf(tw, "  time limit\t%s\n", Duration(r.LimitS))
 	tw.Flush()
 
-	endS := r.EndS
-	if r.End == engine.FloodEqualised {
-		endS = r.EqualiseS
+	head, rest := FloodOutcome(r)
+	fmt.Fprintf(&b, "\nOutcome: %s%s.\n", head, rest)
+	switch r.End {
+	case engine.FloodSinks, engine.FloodCapsizes, engine.FloodFailed:
+		// The outcome has said why already.
+	default:
+		fmt.Fprintf(&b, "  %s\n", sentenceCase(r.EndReason))
 	}
-	fmt.Fprintf(&b, "\nOutcome: %s after %s.\n  %s\n", r.End.Headline(), Duration(endS), sentenceCase(r.EndReason))
 	if r.End == engine.FloodEqualised {
 		fmt.Fprintf(&b, "  Time to equalise: %s (%s s), %s m³ in. The run stops at 1 mm of head (%s);\n  the last millimetre follows the √h law.\n",
 			Duration(r.EqualiseS), num(r.EqualiseS, 0, ""), num(r.FinalWaterM3, 1, ""), Duration(r.EndS))

@@ -175,7 +175,7 @@ func eventWords(e engine.FloodEvent, r *engine.FloodReport) string {
 	case engine.CriterionFails:
 		return e.Name + " fails"
 	}
-	return r.End.Headline()
+	return report.FloodHeadline(r.End)
 }
 
 // floodEvents lists the run's events in time order, the end last: mark,

@@ -65,8 +65,8 @@ type model struct {
 	spaces    []space
 	into      []int // the compartment each opening leads into (leadsInto)
 	opts      Options
-	condition string // the loading condition's name from the file
-	shipType  string // "cargo" or "passenger", for the criteria of a flooding run
+	condition string        // the loading condition's name from the file
+	info      *vessels.Info // the vessel file's holes, pumps and ship type for a flooding run; may be nil
 	now       func() time.Time
 
 	keys     keyMap
@@ -154,9 +154,9 @@ func newModel(v *engine.Vessel, info *vessels.Info, opts Options) model {
 		width:   80,
 		height:  24,
 	}
+	m.info = info
 	if info != nil {
 		m.condition = info.Condition
-		m.shipType = info.ShipType
 	}
 	m.into = leadsInto(v)
 	m.derived = derive(v, m.into, nil)

@@ -27,8 +27,9 @@ Flags:
                        height of its centre above the baseline in m. The hole is in
                        the shell at the middle of the compartment's length. Without
                        Z: the vessel file's hole position for that compartment if it
-                       has one, else the compartment's lowest point. NAME alone: the
-                       vessel file's hole. Without --hole: the one compartment named
+                       has one, else the compartment's lowest point; a Z equal to the
+                       file hole's height is the file's hole. NAME alone: the vessel
+                       file's hole. AREA is at most 100 m². Without --hole: the one compartment named
                        by --pump, or the only one with a hole in the vessel file.
   --pump NAME:M3H      pumping capacity on the flooded compartment, m³/h; repeat to
                        add pumps; "NAME:0" for none. Default: the vessel file's
@@ -99,7 +100,7 @@ func runFlood(args []string, stdout, stderr io.Writer) int {
 	cd := math.NaN()
 	if *cdText != "" {
 		c, err := strconv.ParseFloat(*cdText, 64)
-		if err != nil || !(c > 0 && c <= 1) {
+		if err != nil {
 			return fail("--cd %q: a discharge coefficient is a number with 0 < C ≤ 1 (about 0.6 for a sharp-edged hole, 0.7 for a ragged one)", *cdText)
 		}
 		cd = c
@@ -113,36 +114,20 @@ func runFlood(args []string, stdout, stderr io.Writer) int {
 	for i, c := range v.Compartments {
 		index[c.Name] = i
 	}
-	fileHole := func(i int) *engine.Hole {
-		if i < len(info.Compartments) {
-			return info.Compartments[i].Hole
-		}
-		return nil
-	}
-
-	// The pumps, by compartment.
-	type pumpSpec struct {
-		name string
-		m3h  float64
-	}
-	var pumpList []pumpSpec
+	ask := vessels.FloodAsk{Compartment: -1, AreaM2: math.NaN(), ZM: math.NaN(), Cd: cd,
+		LimitS: limit.Seconds(), Criteria: *criteria, By: "command line"}
 	for _, p := range pumps {
 		name, nums := splitNumbers(p, 1)
 		if len(nums) != 1 {
 			return fail("--pump %q: write NAME:M3H, the capacity in m³/h, e.g. --pump %q", p, exampleName(v)+":120")
 		}
-		if _, ok := index[name]; !ok {
+		i, ok := index[name]
+		if !ok {
 			return fail("%s", unknownName("--pump", name, v))
 		}
-		if !(nums[0] >= 0) || math.IsInf(nums[0], 0) {
-			return fail("--pump %q: capacity %v m³/h must be zero or more", p, nums[0])
-		}
-		pumpList = append(pumpList, pumpSpec{name, nums[0]})
+		ask.Pumps = append(ask.Pumps, vessels.FloodPump{Compartment: i, M3h: nums[0]})
 	}
-
-	// Which compartment floods, and its hole.
-	ci := -1
-	var area, z float64 = math.NaN(), math.NaN()
+	holeName := ""
 	if len(holes) == 1 {
 		name, nums := splitNumbers(holes[0], 2)
 		if msg := finiteNumbers("--hole", holes[0], nums); msg != "" {
@@ -156,113 +141,43 @@ func runFlood(args []string, stdout, stderr io.Writer) int {
 			}
 			return fail("%s", msg)
 		}
-		ci = i
+		ask.Compartment, holeName = i, name
 		if len(nums) > 0 {
-			area = nums[0]
+			ask.AreaM2 = nums[0]
 		}
 		if len(nums) > 1 {
-			z = nums[1]
-		}
-	} else {
-		named := map[int]bool{}
-		for _, p := range pumpList {
-			named[index[p.name]] = true
-		}
-		var withHole []int
-		for i := range v.Compartments {
-			if fileHole(i) != nil {
-				withHole = append(withHole, i)
-			}
-		}
-		switch {
-		case len(named) == 1:
-			for i := range named {
-				ci = i
-			}
-		case len(withHole) == 1:
-			ci = withHole[0]
-		default:
-			var b strings.Builder
-			b.WriteString("name the compartment that floods with --hole NAME[:AREA[:Z]].")
-			if len(withHole) > 0 {
-				b.WriteString(" These have a hole in the vessel file:")
-				for _, i := range withHole {
-					fmt.Fprintf(&b, "\n  %s", v.Compartments[i].Name)
-				}
-			}
-			return fail("%s", b.String())
+			ask.ZM = nums[1]
 		}
 	}
-	comp := v.Compartments[ci]
-	var hole engine.Hole
-	from := "command line"
-	fh := fileHole(ci)
-	switch {
-	case !math.IsNaN(area) && !(area > 0 && !math.IsInf(area, 0)):
-		return fail("--hole %q: area %v m² must be a positive number", comp.Name, area)
-	case !math.IsNaN(z):
-		h, err := engine.ShellHole(v, ci, area, z, 0)
-		if err != nil {
-			return fail("--hole: %v", err)
-		}
-		hole = h
-	case fh != nil:
-		hole = *fh
-		from = "vessel file"
-		if !math.IsNaN(area) {
-			hole.AreaM2 = area
-			from = "vessel file's position, area from the command line"
-		}
-	case !math.IsNaN(area):
-		h, err := engine.ShellHole(v, ci, area, math.NaN(), 0)
-		if err != nil {
-			return fail("--hole: %v", err)
-		}
-		hole = h
-		from = "command line, at the compartment's lowest point"
-	default:
-		return fail("%q has no hole in the vessel file: give its area, e.g. --hole %q", comp.Name, comp.Name+":0.05")
-	}
-	if !math.IsNaN(cd) {
-		hole.Cd = cd
-	} else if fh != nil && hole.Cd == 0 {
-		// A hole placed anew keeps the file's discharge coefficient.
-		hole.Cd = fh.Cd
-	}
-
-	var enginePumps []engine.Pump
-	pumpFrom := "command line"
-	if len(pumpList) == 0 {
-		if ci < len(info.Compartments) && info.Compartments[ci].PumpM3h > 0 {
-			enginePumps = []engine.Pump{{Name: "vessel file", CapacityM3h: info.Compartments[ci].PumpM3h}}
-			pumpFrom = "vessel file"
-		} else {
-			pumpFrom = "none"
-		}
-	}
-	for _, p := range pumpList {
-		if index[p.name] != ci {
-			return fail("--pump %q: pumps work on the flooded compartment, %q", p.name, comp.Name)
-		}
-		enginePumps = append(enginePumps, engine.Pump{Name: fmt.Sprintf("pump %d", len(enginePumps)+1), CapacityM3h: p.m3h})
-	}
-
 	base, msg := damageOf(v, open, nil)
 	if msg != "" {
 		return fail("%s", msg)
 	}
-	if base[ci].Open {
-		return fail("--open %q: that is the compartment flooding through the hole; leave it out of --open", comp.Name)
+	ask.Base = base
+	fc, err := vessels.ResolveFlood(v, info, ask)
+	if err != nil {
+		switch e := vessels.AsFloodAskError(err); {
+		case e == nil:
+			return fail("%v", err)
+		case e.Field == vessels.FieldArea && holeName != "" && !math.IsNaN(ask.AreaM2):
+			return fail("--hole %q: %s", holeName, e.Msg)
+		case e.Field == vessels.FieldZ:
+			return fail("--hole: %s", e.Msg)
+		case e.Field == vessels.FieldCd:
+			return fail("--cd %q: %s", *cdText, e.Msg)
+		case e.Field == vessels.FieldPumps:
+			return fail("--pump: %s", e.Msg)
+		case e.Field == vessels.FieldBase:
+			return fail("--open: %s; leave it out of --open", e.Msg)
+		}
+		return fail("%s", err)
 	}
-	c := engine.FloodCase{Vessel: v, Base: base, Compartment: ci, Hole: hole, Pumps: enginePumps, LimitS: limit.Seconds()}
-	if *criteria {
-		c.Criteria = engine.FloodCriteria(info.ShipType)
-	}
+	c := fc.Case
 	rep, err := engine.RunFlood(c, nil)
 	if err != nil {
 		return fail("%v", err)
 	}
-	fr := report.Flood{Run: rep, VesselFile: source(info), Open: inOrderGiven(open), HoleFrom: from, PumpsFrom: pumpFrom, Version: version}
+	fr := report.Flood{Run: rep, VesselFile: source(info), Open: inOrderGiven(open), HoleFrom: fc.HoleFrom, PumpsFrom: fc.PumpsFrom, Version: version}
 	if *format == "json" {
 		err = report.FloodJSON(stdout, fr)
 	} else {
