@@ -85,54 +85,41 @@ type (
 // floodStartCmd places the hole and sets the run up (the start and the
 // lost-buoyancy solution are solved here).
 func floodStartCmd(c engine.FloodCase, seq int, latest *atomic.Int64) tea.Cmd {
-	return func() (msg tea.Msg) {
-		if latest.Load() != int64(seq) {
-			return floodStepMsg{seq: seq, stale: true}
-		}
-		defer func() {
-			if r := recover(); r != nil {
-				msg = floodStepMsg{seq: seq, err: "engine failure: " + fmt.Sprint(r)}
-			}
-		}()
+	return newest(seq, latest, floodStale(seq), floodFailed(seq), func() tea.Msg {
 		r, err := engine.NewFloodRun(c)
 		if err != nil {
 			return floodStepMsg{seq: seq, err: err.Error()}
 		}
 		p := r.Progress()
 		return floodStepMsg{seq: seq, run: r, prog: p, hole: c.Hole, started: true, more: !p.Done}
-	}
+	})
 }
 
 // floodStepCmd takes one step of run r.
 func floodStepCmd(r *engine.FloodRun, seq int, latest *atomic.Int64) tea.Cmd {
-	return func() (msg tea.Msg) {
-		if latest.Load() != int64(seq) {
-			return floodStepMsg{seq: seq, stale: true}
-		}
-		defer func() {
-			if x := recover(); x != nil {
-				msg = floodStepMsg{seq: seq, err: "engine failure: " + fmt.Sprint(x)}
-			}
-		}()
+	return newest(seq, latest, floodStale(seq), floodFailed(seq), func() tea.Msg {
 		more := r.Step()
 		return floodStepMsg{seq: seq, run: r, prog: r.Progress(), more: more}
-	}
+	})
 }
 
 // floodReportCmd works out the report of an ended run: its table and its
 // stages (some tens of solves, with their criteria).
 func floodReportCmd(r *engine.FloodRun, seq int, latest *atomic.Int64) tea.Cmd {
-	return func() (msg tea.Msg) {
-		if latest.Load() != int64(seq) {
-			return floodDoneMsg{seq: seq, stale: true}
-		}
-		defer func() {
-			if x := recover(); x != nil {
-				msg = floodDoneMsg{seq: seq, err: "engine failure: " + fmt.Sprint(x)}
-			}
-		}()
-		return floodDoneMsg{seq: seq, rep: r.Report()}
-	}
+	return newest(seq, latest,
+		func() tea.Msg { return floodDoneMsg{seq: seq, stale: true} },
+		func(why string) tea.Msg { return floodDoneMsg{seq: seq, err: "engine failure: " + why} },
+		func() tea.Msg { return floodDoneMsg{seq: seq, rep: r.Report()} })
+}
+
+// floodStale and floodFailed are a step's messages when a newer request
+// came first and when the engine failed.
+func floodStale(seq int) func() tea.Msg {
+	return func() tea.Msg { return floodStepMsg{seq: seq, stale: true} }
+}
+
+func floodFailed(seq int) func(string) tea.Msg {
+	return func(why string) tea.Msg { return floodStepMsg{seq: seq, err: "engine failure: " + why} }
 }
 
 // startFlood starts a run for q, cancelling any older one.

@@ -75,7 +75,6 @@ func (m model) openForm() (tea.Model, tea.Cmd) {
 		f.fields[k] = in
 	}
 	m.form = f
-	m.resize()
 	return m, m.focusField(0)
 }
 
@@ -102,7 +101,6 @@ func (m model) formKey(msg tea.KeyMsg) (tea.Model, tea.Cmd) {
 	switch msg.Type {
 	case tea.KeyEsc:
 		m.form.on = false
-		m.resize()
 		return m, nil
 	case tea.KeyCtrlC:
 		return m, tea.Quit
@@ -119,7 +117,6 @@ func (m model) formKey(msg tea.KeyMsg) (tea.Model, tea.Cmd) {
 		m.form.on = false
 		mm, cmd := m.startFlood(q)
 		m = mm.(model)
-		m.resize()
 		return m, cmd
 	}
 	var cmd tea.Cmd

@@ -230,14 +230,9 @@ func (m *model) setStyles() {
 // Init computes the intact condition, the reference for every change.
 func (m model) Init() tea.Cmd {
 	v := m.v
-	return func() (msg tea.Msg) {
-		defer func() {
-			if r := recover(); r != nil {
-				msg = resultMsg{seq: 0, failure: fmt.Sprint(r)}
-			}
-		}()
-		return baselineMsg{engine.Assess(v, v.Intact())}
-	}
+	return newest(0, nil, nil,
+		func(why string) tea.Msg { return resultMsg{seq: 0, failure: why} },
+		func() tea.Msg { return baselineMsg{engine.Assess(v, v.Intact())} })
 }
 
 // pending reports whether the figures shown are not yet those of the
@@ -246,12 +241,20 @@ func (m model) pending() bool {
 	return m.shown != m.seq || (m.base == nil && m.failure == "")
 }
 
-// Update handles one message.
+// Update handles one message, then divides the screen for what it left:
+// the one place sizes are decided (resize), once per message.
 func (m model) Update(msg tea.Msg) (tea.Model, tea.Cmd) {
+	next, cmd := m.update(msg)
+	mm := next.(model)
+	mm.resize()
+	return mm, cmd
+}
+
+// update handles one message.
+func (m model) update(msg tea.Msg) (tea.Model, tea.Cmd) {
 	switch msg := msg.(type) {
 	case tea.WindowSizeMsg:
 		m.width, m.height = msg.Width, msg.Height
-		m.resize()
 		return m, nil
 
 	case baselineMsg:
@@ -338,7 +341,6 @@ func (m model) key(msg tea.KeyMsg) (tea.Model, tea.Cmd) {
 		return m, tea.Quit
 	case key.Matches(msg, k.Help):
 		m.help.ShowAll = !m.help.ShowAll
-		m.resize()
 	case key.Matches(msg, k.Up):
 		m.move(-1)
 	case key.Matches(msg, k.Down):
@@ -426,7 +428,6 @@ func (m model) key(msg tea.KeyMsg) (tea.Model, tea.Cmd) {
 		m.inputErr = ""
 		m.input.SetValue("")
 		m.input.Placeholder = muText(m.mu(m.damage, m.sel))
-		m.resize()
 		cmd := m.input.Focus()
 		if !m.animate {
 			// Tests: a still cursor, so that no blink timer runs.
@@ -477,7 +478,6 @@ func (m model) editKey(msg tea.KeyMsg) (tea.Model, tea.Cmd) {
 	case tea.KeyEsc:
 		m.editing = false
 		m.input.Blur()
-		m.resize()
 		return m, nil
 	case tea.KeyCtrlC:
 		return m, tea.Quit
@@ -489,7 +489,6 @@ func (m model) editKey(msg tea.KeyMsg) (tea.Model, tea.Cmd) {
 		}
 		m.editing = false
 		m.input.Blur()
-		m.resize()
 		if mu == m.mu(m.damage, m.sel) {
 			return m, nil
 		}
@@ -547,17 +546,10 @@ func (m model) commit(d engine.Damage, what string) (tea.Model, tea.Cmd) {
 // result could never be shown), and it turns an engine failure into a
 // message instead of taking the screen down.
 func recompute(v *engine.Vessel, d engine.Damage, seq int, latest *atomic.Int64) tea.Cmd {
-	return func() (msg tea.Msg) {
-		if latest != nil && latest.Load() != int64(seq) {
-			return resultMsg{seq: seq, skipped: true}
-		}
-		defer func() {
-			if r := recover(); r != nil {
-				msg = resultMsg{seq: seq, failure: fmt.Sprint(r)}
-			}
-		}()
-		return resultMsg{seq: seq, a: engine.Assess(v, d)}
-	}
+	return newest(seq, latest,
+		func() tea.Msg { return resultMsg{seq: seq, skipped: true} },
+		func(why string) tea.Msg { return resultMsg{seq: seq, failure: why} },
+		func() tea.Msg { return resultMsg{seq: seq, a: engine.Assess(v, d)} })
 }
 
 // takeResult shows a result if it is the newest and logs every change in
