@@ -31,22 +31,14 @@ type Info struct {
 
 // CompartmentInfo is the file's extra data on one compartment.
 type CompartmentInfo struct {
-	Use   string // as in the file; also set on engine.Compartment.Use
-	Group string // the group key, or the use's default group (see FORMAT.md)
-	Hole  *Hole  // a hole in the shell into this compartment, nil if none
+	Use   string       // as in the file; also set on engine.Compartment.Use
+	Group string       // the group key, or the use's default group (see FORMAT.md)
+	Hole  *engine.Hole // a hole in the shell into this compartment (C_d filled in), nil if none
 	// PumpM3h is the pumping capacity that can be put on the compartment, m³/h.
 	PumpM3h float64
 	// DefaultPermeabilityFromUse is true when the file gave no permeability
 	// and the compartment's μ is the default of its use.
 	DefaultPermeabilityFromUse bool
-}
-
-// Hole is an opening in the shell through which the sea enters a
-// compartment: flow Q = Cd·A·√(2 g h), h the head across it (Torricelli).
-type Hole struct {
-	AreaM2  float64 // m²
-	X, Y, Z float64 // m, ship frame: its centre
-	Cd      float64 // discharge coefficient, 0 < Cd ≤ 1 (default 0.6)
 }
 
 // Parse reads a vessel file. file is the name used in messages. Any problem
@@ -120,7 +112,7 @@ func (r *reader) vessel(root *table) (*engine.Vessel, *Info) {
 	if s, ok := root.choice("ship_type", false, shipTypes); ok {
 		info.ShipType = s
 	}
-	criteria := append([]string(nil), DefaultCriteria...)
+	criteria := DefaultCriteria()
 	if v, ok := root.get("criteria"); ok {
 		criteria = r.criteria(v)
 	}
@@ -140,6 +132,7 @@ func (r *reader) vessel(root *table) (*engine.Vessel, *Info) {
 	if hull != nil {
 		r.openingsNearHull(hull, openings)
 	}
+	marks := r.draftMarks(root.entries("draft_mark", "a draft mark on the shell"), hull)
 	root.finish()
 
 	if len(r.probs) > 0 || hull == nil {
@@ -148,6 +141,7 @@ func (r *reader) vessel(root *table) (*engine.Vessel, *Info) {
 	v, err := engine.NewVessel(engine.Vessel{
 		Name: name, WaterDensity: rho, Hull: hull, Weights: weights,
 		Compartments: comps, Openings: openings, MarginLineM: margin, CriteriaSets: criteria, ShipType: info.ShipType,
+		DraftMarks: marks,
 	})
 	if err != nil {
 		r.addf("weight", "%v", err)
@@ -569,7 +563,7 @@ func (r *reader) liquid(t *table, use string, useOK bool) *tankLiquid {
 }
 
 // hole reads a compartment's hole table.
-func (r *reader) hole(t *table, b engine.Box, boxOK bool) *Hole {
+func (r *reader) hole(t *table, b engine.Box, boxOK bool) *engine.Hole {
 	h, ok := t.sub("hole", false, "area, z and optionally x, y, cd")
 	if !ok {
 		return nil
@@ -615,7 +609,7 @@ func (r *reader) hole(t *table, b engine.Box, boxOK bool) *Hole {
 			return nil
 		}
 	}
-	return &Hole{AreaM2: area, X: x, Y: y, Z: z, Cd: cd}
+	return &engine.Hole{AreaM2: area, XM: x, YM: y, ZM: z, Cd: cd}
 }
 
 // openings reads the [[opening]] tables.
