@@ -543,7 +543,7 @@ func (m model) commit(d engine.Damage, what string) (tea.Model, tea.Cmd) {
 	m.latest.Store(int64(m.seq))
 	m.changes[m.seq] = change{at: m.now(), what: what}
 	logged := m.logChange(m.seq, m.changes[m.seq]) // in the file before it is computed or shown
-	spin := m.startSpinner()                        // before m is copied out: the order is not Go's to promise
+	spin := m.startSpinner()                       // before m is copied out: the order is not Go's to promise
 	return m, tea.Batch(logged, recompute(m.v, cloneDamage(d), m.seq, m.latest), spin)
 }
 
