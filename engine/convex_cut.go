@@ -187,7 +187,7 @@ func findArc(sd *side, n int, g arc) arc {
 	// The end, from the guess's end.
 	hi := lo
 	if g.cnt > 0 {
-		hi = (((g.lo+g.cnt-1)%n)+n)%n
+		hi = (((g.lo + g.cnt - 1) % n) + n) % n
 	}
 	if sd.below(hi) {
 		for steps := 0; sd.below(next(hi)) && steps < n; steps++ {
