@@ -200,34 +200,53 @@ type solidLoad struct {
 	factor float64
 }
 
-func (l solidLoad) at(x float64) float64 {
-	var a float64
-	for i := range l.s.slabs {
-		sl := &l.s.slabs[i]
-		if x > sl.x0 && x < sl.x1 {
-			a += clipBelow(sl.p0, sl.dp, x-sl.x0, l.p.C, l.p.A+l.p.B*x).A
-		}
-	}
-	return l.factor * a
-}
-
-// breaks appends the x where the integrand changes form: the slab ends and
-// every x where a vertex of a slab's section crosses the plane.
-func (l solidLoad) breaks(out []float64) []float64 {
+// slabBreaks appends the x inside slab b where a vertex of its section
+// crosses the load's plane: the integrand changes form there.
+func (l solidLoad) slabBreaks(b *slab, out []float64) []float64 {
 	p := l.p
-	for i := range l.s.slabs {
-		sl := &l.s.slabs[i]
-		out = append(out, sl.x0, sl.x1)
-		dx := sl.x1 - sl.x0
-		for k := range sl.p0 {
-			d0 := sl.p0[k].Z - p.C*sl.p0[k].Y - p.A - p.B*sl.x0
-			d1 := sl.p1[k].Z - p.C*sl.p1[k].Y - p.A - p.B*sl.x1
-			if (d0 < 0 && d1 > 0) || (d0 > 0 && d1 < 0) {
-				out = append(out, sl.x0+dx*d0/(d0-d1))
-			}
+	dx := b.x1 - b.x0
+	for k := range b.p0 {
+		d0 := b.p0[k].Z - p.C*b.p0[k].Y - p.A - p.B*b.x0
+		d1 := b.p1[k].Z - p.C*b.p1[k].Y - p.A - p.B*b.x1
+		if (d0 < 0 && d1 > 0) || (d0 > 0 && d1 < 0) {
+			out = append(out, b.x0+dx*d0/(d0-d1))
 		}
 	}
 	return out
+}
+
+// integrateLoad integrates q over [xa, xb], split at brk (which it sorts
+// and returns for reuse) and at the curve's points outs, with two-point
+// Gauss–Legendre on each piece, and adds each piece's ∫q and
+// ∫(outs[k] − x) q dx into Q[k] and M[k], k the bin (outs[k−1], outs[k])
+// that holds it.
+func integrateLoad(xa, xb float64, brk, outs []float64, q func(float64) float64, Q, M []float64) []float64 {
+	lo := sort.SearchFloat64s(outs, xa)
+	for j := lo; j < len(outs) && outs[j] < xb; j++ {
+		if outs[j] > xa {
+			brk = append(brk, outs[j])
+		}
+	}
+	sort.Float64s(brk)
+	for i := 1; i < len(brk); i++ {
+		a, b := brk[i-1], brk[i]
+		dx := b - a
+		if !(dx > 0) {
+			continue
+		}
+		k := sort.SearchFloat64s(outs, (a+b)/2)
+		if k == 0 || k == len(outs) {
+			continue // outside the hull: checkGirderData keeps loads inside
+		}
+		end := outs[k]
+		for g := range gaussNode {
+			x := a + gaussNode[g]*dx
+			w := gaussWeight[g] * dx * q(x)
+			Q[k] += w
+			M[k] += w * (end - x)
+		}
+	}
+	return brk
 }
 
 // StrengthMissing says why a vessel's strength cannot be worked out from
@@ -309,54 +328,59 @@ func GirderStrength(v *Vessel, d Damage, pos *Position) (*Strength, string) {
 	sort.Float64s(outs)
 	outs = dedupe(outs, 1e-9*(x1-x0))
 
-	brk := append([]float64(nil), outs...)
+	// Each load is integrated on its own pieces (its breaks and the curve's
+	// points within its reach) and summed into the bins between the
+	// curve's points: per bin k, Q[k] = ∫q and M[k] = ∫(outs[k] − x) q dx.
+	n := len(outs)
+	Q := make([]float64, n)
+	M := make([]float64, n)
+	var scratch []float64
 	for _, l := range lines {
-		brk = append(brk, l.x0, l.x1)
+		scratch = integrateLoad(l.x0, l.x1, append(scratch[:0], l.x0, l.x1), outs, l.at, Q, M)
 	}
-	for _, s := range solids {
-		brk = s.breaks(brk)
-	}
-	sort.Float64s(brk)
-	brk = dedupe(brk, 1e-9*(x1-x0))
-
-	q := func(x float64) float64 {
-		var w float64
-		for _, l := range lines {
-			w += l.at(x)
+	for _, sl := range solids {
+		for i := range sl.s.slabs {
+			b := &sl.s.slabs[i]
+			p, f := sl.p, sl.factor
+			// The plane's lowest and highest z over the slab's box, as in
+			// Solid.Below: a slab wholly above it carries nothing, one
+			// wholly below it its whole section, a polynomial in x
+			// (the prefix sums of waterline_cut.go).
+			zlo := p.A + min(p.B*b.x0, p.B*b.x1) - math.Abs(p.C)*b.ymax
+			zhi := p.A + max(p.B*b.x0, p.B*b.x1) + math.Abs(p.C)*b.ymax
+			switch {
+			case b.zmin >= zhi:
+				continue
+			case b.zmax <= zlo:
+				whole := &b.pre[len(b.p0)]
+				scratch = integrateLoad(b.x0, b.x1, append(scratch[:0], b.x0, b.x1), outs, func(x float64) float64 {
+					a, _, _ := whole.eval(x - b.x0)
+					return f * a / 2
+				}, Q, M)
+				continue
+			}
+			scratch = sl.slabBreaks(b, append(scratch[:0], b.x0, b.x1))
+			scratch = integrateLoad(b.x0, b.x1, scratch, outs, func(x float64) float64 {
+				return f * clipBelow(b.p0, b.dp, x-b.x0, p.C, p.A+p.B*x).A
+			}, Q, M)
 		}
-		for _, s := range solids {
-			w += s.at(x)
-		}
-		return w
 	}
-	// March along the pieces: SF(xb) = SF(xa) + ∫q, BM(xb) = BM(xa) +
-	// SF(xa)·(xb − xa) + ∫(xb − x) q dx. Tonnes and tonne-metres here.
-	sfAt := make([]float64, len(brk))
-	bmAt := make([]float64, len(brk))
+	// March along the bins: SF(x_k) = SF(x_{k−1}) + Q[k], BM(x_k) =
+	// BM(x_{k−1}) + SF(x_{k−1})·(x_k − x_{k−1}) + M[k]. Tonnes and
+	// tonne-metres here.
+	sfAt := make([]float64, n)
+	bmAt := make([]float64, n)
 	var sf, bm float64
-	for i := 1; i < len(brk); i++ {
-		xa, xb := brk[i-1], brk[i]
-		if xa < x0 || xb > x1 {
-			sfAt[i], bmAt[i] = sf, bm
-			continue
-		}
-		dx := xb - xa
-		var iq, iqx float64
-		for g := range gaussNode {
-			x := xa + gaussNode[g]*dx
-			w := gaussWeight[g] * dx * q(x)
-			iq += w
-			iqx += w * (xb - x)
-		}
-		bm += sf*dx + iqx
-		sf += iq
-		sfAt[i], bmAt[i] = sf, bm
+	for k := 1; k < n; k++ {
+		bm += sf*(outs[k]-outs[k-1]) + M[k]
+		sf += Q[k]
+		sfAt[k], bmAt[k] = sf, bm
 	}
 	g := StandardGravity
 	st := &Strength{Harbour: v.Girder.Harbour, ClosingShearKN: g * sf, ClosingMomentKNm: g * bm}
 	corrected := func(x float64) (float64, float64) {
-		j := nearest(brk, x)
-		f := (brk[j] - x0) / (x1 - x0)
+		j := nearest(outs, x)
+		f := (outs[j] - x0) / (x1 - x0)
 		return g * (sfAt[j] - f*sf), g * (bmAt[j] - f*bm)
 	}
 	for _, x := range outs {
