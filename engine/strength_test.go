@@ -277,3 +277,47 @@ func TestStrengthMissingExtents(t *testing.T) {
 	}
 	t.Log(a.StrengthWhy)
 }
+
+// A flooding run of the midship compartment to equalisation holds the
+// water as an added weight; the lost-buoyancy solution of the same
+// compartment gives the same final waterline (Barrass & Derrett, bilging
+// chapter, memory) and so the same load along the ship: the stages'
+// strength at 100 % must match the hand working of
+// TestStrengthFloodedMidshipCompartment to the run's tolerance, and the
+// earlier stages must lie between intact and flooded.
+func TestStrengthAtFloodStages(t *testing.T) {
+	const m, a, mu = 4000.0, 8.0, 0.95
+	g, rho := engine.StandardGravity, engine.SeaWaterDensity
+	v := strBarge(t, []engine.Weight{{Name: "uniform", MassT: m, LCGM: 40, VCGM: 4, ExtentM: [2]float64{0, 80}}},
+		[]engine.Box{{X0: 40 - a, X1: 40 + a, Y0: -8, Y1: 8, Z0: 0, Z1: 8}}, mu)
+	rep, err := engine.RunFlood(engine.FloodCase{Vessel: v, Compartment: 0, Hole: engine.Hole{AreaM2: 0.2, XM: 40, YM: 0, ZM: 0}}, nil)
+	if err != nil {
+		t.Fatal(err)
+	}
+	T := m / rho / (strB * (strL - mu*2*a))
+	q1 := m/strL - rho*strB*T
+	q2 := m/strL - rho*strB*T*(1-mu)
+	want := g * (q1*(strL*strL/4-a*a)/2 + q2*a*a/2)
+	prev := 0.0
+	for _, st := range rep.Stages {
+		if st.Strength == nil {
+			t.Fatalf("stage %.0f %%: no strength", 100*st.Fraction)
+		}
+		var mid float64
+		for i, x := range st.Strength.XM {
+			if x == 40 {
+				mid = st.Strength.MomentKNm[i]
+			}
+		}
+		if !(mid < prev) {
+			t.Errorf("stage %.0f %%: BM amidships %g kN·m does not sag more than the stage before (%g)", 100*st.Fraction, mid, prev)
+		}
+		prev = mid
+		if st.Fraction == 1 {
+			// The run ends a little short of the sea's level: 0.1 %.
+			if rel := math.Abs(mid-want) / math.Abs(want); rel > 1e-3 {
+				t.Errorf("equalised: BM amidships %g kN·m, hand working %g (off by %.2g)", mid, want, rel)
+			}
+		}
+	}
+}
