@@ -497,3 +497,17 @@ func StrengthFlags(s *Strength) []Flag {
 	f.Message = fmt.Sprintf("Still-water %s at %s (x = %.1f m): %.0f %% of the permissible value %s.", what, r.Name, r.XM, pct, set)
 	return []Flag{f}
 }
+
+// IntactStrength returns the hull girder of v intact, to show beside a
+// damaged state; nil with the reason when it cannot be worked out.
+func IntactStrength(v *Vessel) (*Strength, string) {
+	if why := StrengthMissing(v); why != "" {
+		return nil, why
+	}
+	d := v.Intact()
+	pos, err := Solve(v, d)
+	if err != nil {
+		return nil, "intact: " + err.Error()
+	}
+	return GirderStrength(v, d, &pos)
+}

@@ -37,6 +37,7 @@ type Document struct {
 	GZ          GZ           `json:"gz"`
 	Hand        *Hand        `json:"hand"`
 	Flags       []FlagDoc    `json:"flags"`
+	Strength    *StrengthDoc `json:"strength"` // null: not worked out (strength_note says why)
 
 	Outcome          string         `json:"outcome"`           // floats | sinks | capsizes | not converged
 	Reason           string         `json:"reason"`            // why there is no equilibrium, "" when she floats
@@ -45,7 +46,8 @@ type Document struct {
 	HeldWater        []HeldDoc      `json:"partly_flooded"`    // compartments holding floodwater, not open to the sea
 	Freeboards       []Freeboard    `json:"freeboards"`
 	Openings         []OpeningDoc   `json:"openings"`
-	HandNote         string         `json:"hand_note"` // why the hand method is not applied, "" when it is
+	HandNote         string         `json:"hand_note"`     // why the hand method is not applied, "" when it is
+	StrengthNote     string         `json:"strength_note"` // why strength is null, "" when it is worked out
 	Criteria         []CriterionDoc `json:"criteria"`
 	Notes            []string       `json:"notes"` // what could not be computed, and why
 	VesselFile       string         `json:"vessel_file"`
@@ -220,12 +222,14 @@ func Build(r Report) Document {
 		Freeboards:       []Freeboard{},
 		Openings:         []OpeningDoc{},
 		HandNote:         a.HandWhy,
+		StrengthNote:     a.StrengthWhy,
 		Criteria:         []CriterionDoc{},
 		Notes:            append([]string{}, a.Notes...),
 		VesselFile:       r.VesselFile,
 		Condition:        r.Condition,
 		Version:          r.Version,
 		GZ:               buildGZ(a.GZ),
+		Strength:         StrengthJSON(a.Strength, r.IntactStrength),
 	}
 	if !r.Made.IsZero() {
 		d.Made = r.Made.UTC().Format(time.RFC3339)

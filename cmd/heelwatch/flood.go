@@ -664,6 +664,7 @@ type floodStDoc struct {
 	Position *floodPosDoc          `json:"position"`
 	NoEq     string                `json:"no_equilibrium"`
 	Criteria []report.CriterionDoc `json:"criteria"`
+	Strength *report.StrengthDoc   `json:"strength"` // the hull girder at the stage; null without weight extents
 }
 
 type floodSolver struct {
@@ -746,7 +747,7 @@ func writeFloodJSON(w io.Writer, fr floodRun) error {
 	}
 	for _, s := range r.Stages {
 		st := floodStDoc{Fraction: report.Num(s.Fraction), WaterM3: report.Num(s.WaterM3), Reached: s.Reached,
-			Position: posDoc(s.Position), Criteria: report.CriterionDocs(s.Criteria)}
+			Position: posDoc(s.Position), Criteria: report.CriterionDocs(s.Criteria), Strength: report.StrengthJSON(s.Strength, nil)}
 		if s.Reached {
 			st.TimeS = numPtr(s.TimeS)
 		}
