@@ -300,7 +300,7 @@ func GirderStrength(v *Vessel, d Damage, pos *Position) (*Strength, string) {
 		s := d.state(i)
 		switch {
 		case s.Open:
-			solids = append(solids, solidLoad{c.solid, pos.Plane, v.WaterDensity * v.permeability(d, i)})
+			solids = append(solids, solidLoad{c.solid, pos.Plane, v.WaterDensity * v.Permeability(d, i)})
 		case s.WaterM3 > 0:
 			// Held water: below its surface in pos.Held.
 		case v.tanks[i].massT > 0:
@@ -310,7 +310,7 @@ func GirderStrength(v *Vessel, d Damage, pos *Position) (*Strength, string) {
 		}
 	}
 	for _, h := range pos.Held {
-		solids = append(solids, solidLoad{v.Compartments[h.Index].solid, h.Surface, v.WaterDensity * v.permeability(d, h.Index)})
+		solids = append(solids, solidLoad{v.Compartments[h.Index].solid, h.Surface, v.WaterDensity * v.Permeability(d, h.Index)})
 	}
 
 	points := v.Girder.Points
