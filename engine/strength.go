@@ -79,7 +79,9 @@ type Strength struct {
 	XM, ShearKN, MomentKNm []float64
 	Points                 []StrengthReading // at the read-out points, against the set in use
 	Harbour                bool              // the harbour values are in use (sea otherwise)
-	MaxShear, MaxMoment    StrengthPeak
+	// MaxShear and MaxMoment are the largest magnitudes among the curve's
+	// points (at most a StrengthIntervals-th of the hull apart).
+	MaxShear, MaxMoment StrengthPeak
 	// ClosingShearKN and ClosingMomentKNm are the curves' values at the
 	// forward end before the closing error was spread: what weight and
 	// buoyancy fail to balance (solver tolerance, and the moment of weight

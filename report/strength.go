@@ -243,29 +243,46 @@ func markdownStrength(e *errWriter, r Report) {
 		e.line("- ", sentence(l), ".")
 	}
 	e.line()
-	e.line("Bending moment along the ship (`*` the curve, `-` and `+` the permissible sagging and hogging values at the read-out points, `.` zero):")
-	e.line()
-	e.line("```")
-	for _, l := range MomentPlot(s, 64, 11) {
-		e.line(l)
+	for _, moment := range []bool{false, true} {
+		what := "Shear force (kN) along the ship, aft at the left (`*` the curve, `+` and `-` the permissible values at the read-out points, `.` zero):"
+		if moment {
+			what = "Bending moment (kN·m) likewise (`+` the permissible hogging, `-` the sagging values):"
+		}
+		e.line(what)
+		e.line()
+		e.line("```")
+		for _, l := range CurvePlot(s, moment, 64, 11) {
+			e.line(l)
+		}
+		e.line("```")
+		e.line()
 	}
-	e.line("```")
-	e.line()
 }
 
-// MomentPlot draws the bending moment curve in w × h characters, aft at
-// the left: '*' the curve, '+' and '-' the permissible hogging and sagging
-// values at the read-out points (of the set in use), '.' the zero line; a
-// scale in kN·m on the left. Plain ASCII, for the Markdown report.
-func MomentPlot(s *engine.Strength, w, h int) []string {
+// CurvePlot draws the bending moment (moment) or the shear force in
+// w × h characters, aft at the left: '*' the curve, '+' and '-' the
+// permissible values at the read-out points of the set in use (hogging and
+// sagging for the moment, ± the shear force's), '.' the zero line; a scale
+// in kN or kN·m on the left. Plain ASCII, for the Markdown report.
+func CurvePlot(s *engine.Strength, moment bool, w, h int) []string {
+	ys := s.ShearKN
+	if moment {
+		ys = s.MomentKNm
+	}
+	up := func(l engine.Permissible) (float64, float64) {
+		if moment {
+			return l.HogKNm, l.SagKNm
+		}
+		return l.ShearKN, l.ShearKN
+	}
 	lo, hi := 0.0, 0.0
-	for _, m := range s.MomentKNm {
+	for _, m := range ys {
 		lo, hi = math.Min(lo, m), math.Max(hi, m)
 	}
 	for _, p := range s.Points {
-		lim := limitsOf(p.ReadOutPoint, s.Harbour)
-		hi = math.Max(hi, lim.HogKNm)
-		lo = math.Min(lo, -lim.SagKNm)
+		u, d := up(limitsOf(p.ReadOutPoint, s.Harbour))
+		hi = math.Max(hi, u)
+		lo = math.Min(lo, -d)
 	}
 	if hi == lo {
 		hi = lo + 1
@@ -286,16 +303,16 @@ func MomentPlot(s *engine.Strength, w, h int) []string {
 		grid[zero][c] = '.'
 	}
 	for _, p := range s.Points {
-		lim := limitsOf(p.ReadOutPoint, s.Harbour)
-		if lim.HogKNm > 0 {
-			grid[row(lim.HogKNm)][col(p.XM)] = '+'
+		u, d := up(limitsOf(p.ReadOutPoint, s.Harbour))
+		if u > 0 {
+			grid[row(u)][col(p.XM)] = '+'
 		}
-		if lim.SagKNm > 0 {
-			grid[row(-lim.SagKNm)][col(p.XM)] = '-'
+		if d > 0 {
+			grid[row(-d)][col(p.XM)] = '-'
 		}
 	}
 	for i, x := range s.XM {
-		grid[row(s.MomentKNm[i])][col(x)] = '*'
+		grid[row(ys[i])][col(x)] = '*'
 	}
 	label := func(v float64) string {
 		l := num(v, 0, "")
