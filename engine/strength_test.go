@@ -321,3 +321,33 @@ func TestStrengthAtFloodStages(t *testing.T) {
 		}
 	}
 }
+
+// A full-breadth midship tank half full of fresh water is a block load
+// like the cargo of TestStrengthBlockAmidshipsClosedForm: its contents,
+// m_t = 0.5 × 16 × 16 × 8 m³ × 1.000 t/m³ = 1024 t, lie uniformly over the
+// tank, so BM(L/2) = −(m_t·g/4)(L/2 − a) (closed form derived there).
+func TestStrengthTankContentsAsBlock(t *testing.T) {
+	const a = 8.0
+	h, err := engine.NewBoxHull(strL, strB, strD)
+	if err != nil {
+		t.Fatal(err)
+	}
+	c, err := engine.NewCompartment(h, "tank", engine.Box{X0: 40 - a, X1: 40 + a, Y0: -8, Y1: 8, Z0: 0, Z1: 8})
+	if err != nil {
+		t.Fatal(err)
+	}
+	c.Use, c.Liquid = "tank", &engine.Liquid{Name: "fresh water", Density: 1, Fill: 0.5}
+	v, err := engine.NewVessel(engine.Vessel{Name: "tank barge", Hull: h, Compartments: []*engine.Compartment{c},
+		Weights: []engine.Weight{{Name: "lightship", MassT: 1100, LCGM: 40, VCGM: 4.2, ExtentM: [2]float64{0, 80}}}})
+	if err != nil {
+		t.Fatal(err)
+	}
+	s, _ := strAssess(t, v, v.Intact())
+	mt := 0.5 * 16 * 16 * 8.0
+	want := -(mt * engine.StandardGravity / 4) * (strL/2 - a)
+	for i, x := range s.XM {
+		if x == 40 && math.Abs(s.MomentKNm[i]-want) > 1e-9*math.Abs(want) {
+			t.Errorf("BM amidships %g kN·m, closed form %g", s.MomentKNm[i], want)
+		}
+	}
+}
