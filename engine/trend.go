@@ -195,7 +195,6 @@ func EstimateTrend(v *Vessel, rs []Reading, e Explanation, o TrendOptions) (Tren
 			}
 		}
 	}
-	t.Words = trendWords(v, t)
 	return t, nil
 }
 
@@ -347,61 +346,4 @@ func weightedSlope(t, y, sd []float64) (b, sb float64) {
 		}
 	}
 	return b, sb
-}
-
-// trendWords says the trend plainly.
-func trendWords(v *Vessel, t Trend) []string {
-	name := v.Compartments[t.Compartment].Name
-	var out []string
-	if t.InflowM3h <= t.InflowSDM3h {
-		out = append(out, fmt.Sprintf("The water in %s is not rising beyond what the readings can tell (%.0f ± %.0f m³/h).", name, t.InflowM3h, t.InflowSDM3h))
-	} else {
-		where := "at the hole the vessel file gives"
-		if t.HoleAssumed {
-			where = "if the hole is at its lowest point"
-		}
-		out = append(out, fmt.Sprintf("Water comes into %s at %.0f ± %.0f m³/h: a hole of about %.3f ± %.3f m² %s (Torricelli, C_d %.2f, head %.1f m).",
-			name, t.InflowM3h, t.InflowSDM3h, t.Hole.AreaM2, t.HoleAreaSDM2, where, t.Hole.Cd, t.HeadM))
-	}
-	switch t.PumpsHold {
-	case "yes":
-		out = append(out, fmt.Sprintf("The pumps on it (%.0f m³/h) can hold it.", t.PumpsM3h))
-	case "uncertain":
-		out = append(out, fmt.Sprintf("The pumps on it (%.0f m³/h) may or may not hold it: the inflow is too uncertain to say.", t.PumpsM3h))
-	default:
-		if t.PumpsM3h > 0 {
-			out = append(out, fmt.Sprintf("The pumps on it (%.0f m³/h) cannot hold it.", t.PumpsM3h))
-		} else {
-			out = append(out, "The vessel file puts no pumps on it.")
-		}
-	}
-	if t.Hole.AreaM2 > 0 {
-		deck := "the deck edge stays clear"
-		if !math.IsNaN(t.DeckEdgeS) {
-			deck = "the deck edge goes under in " + FormatDuration(t.DeckEdgeS)
-			if a, b := t.DeckEdgeRange[0], t.DeckEdgeRange[1]; !math.IsNaN(a) && !math.IsNaN(b) {
-				deck += " (" + FormatDuration(a) + " to " + FormatDuration(b) + ")"
-			}
-		}
-		open := "no opening goes under"
-		if !math.IsNaN(t.OpeningS) {
-			open = "the first opening" + openingName(t.Opening) + " goes under in " + FormatDuration(t.OpeningS)
-		}
-		out = append(out, "Left as it is, without pumping: "+deck+"; "+open+"; "+lossWords(t)+".")
-	}
-	return out
-}
-
-func openingName(n string) string {
-	if n == "" {
-		return ""
-	}
-	return " (" + n + ")"
-}
-
-func lossWords(t Trend) string {
-	if !math.IsNaN(t.LossS) {
-		return "she is lost in " + FormatDuration(t.LossS) + " (" + t.Projection.End.String() + ")"
-	}
-	return "she is not lost within the projection (" + t.Projection.End.String() + ")"
 }

@@ -2,6 +2,7 @@ package report
 
 import (
 	"encoding/json"
+	"fmt"
 	"io"
 	"math"
 	"strings"
@@ -158,7 +159,7 @@ func BuildDiagnosis(d Diagnosis) DiagnosisDoc {
 			DeckRangeS:    [2]Num{Num(t.DeckEdgeRange[0]), Num(t.DeckEdgeRange[1])},
 			TimeToOpening: Num(t.OpeningS), Opening: t.Opening, TimeToLossS: Num(t.LossS),
 			Outcome: t.Projection.End.String(), PumpsM3h: Num(t.PumpsM3h), PumpsHold: t.PumpsHold,
-			Words: append([]string{}, t.Words...)}
+			Words: TrendWords(v, *t)}
 		for i := range t.Minutes {
 			td.Minutes = append(td.Minutes, Num(t.Minutes[i]))
 			td.WaterM3 = append(td.WaterM3, Num(t.WaterM3[i]))
@@ -280,15 +281,72 @@ func DiagnosisText(w io.Writer, d Diagnosis) error {
 			mins = append(mins, num(m, 1, ""))
 		}
 		e.line("Trend (readings at ", strings.Join(mins, ", "), " min)")
-		for _, s := range t.Words {
+		for _, s := range TrendWords(v, *t) {
 			e.line("  ", s)
 		}
 	} else if d.TrendNote != "" {
 		e.line("Trend: ", d.TrendNote)
 	}
 	e.line()
-	for _, c := range Cautions {
+	for _, c := range Cautions() {
 		e.line(c)
 	}
 	return e.err
+}
+
+// TrendWords says the trend in plain sentences.
+func TrendWords(v *engine.Vessel, t engine.Trend) []string {
+	name := v.Compartments[t.Compartment].Name
+	var out []string
+	if t.InflowM3h <= t.InflowSDM3h {
+		out = append(out, fmt.Sprintf("The water in %s is not rising beyond what the readings can tell (%.0f ± %.0f m³/h).", name, t.InflowM3h, t.InflowSDM3h))
+	} else {
+		where := "at the hole the vessel file gives"
+		if t.HoleAssumed {
+			where = "if the hole is at its lowest point"
+		}
+		out = append(out, fmt.Sprintf("Water comes into %s at %.0f ± %.0f m³/h: a hole of about %.3f ± %.3f m² %s (Torricelli, C_d %.2f, head %.1f m).",
+			name, t.InflowM3h, t.InflowSDM3h, t.Hole.AreaM2, t.HoleAreaSDM2, where, t.Hole.Cd, t.HeadM))
+	}
+	switch t.PumpsHold {
+	case "yes":
+		out = append(out, fmt.Sprintf("The pumps on it (%.0f m³/h) can hold it.", t.PumpsM3h))
+	case "uncertain":
+		out = append(out, fmt.Sprintf("The pumps on it (%.0f m³/h) may or may not hold it: the inflow is too uncertain to say.", t.PumpsM3h))
+	default:
+		if t.PumpsM3h > 0 {
+			out = append(out, fmt.Sprintf("The pumps on it (%.0f m³/h) cannot hold it.", t.PumpsM3h))
+		} else {
+			out = append(out, "The vessel file puts no pumps on it.")
+		}
+	}
+	if t.Hole.AreaM2 > 0 {
+		deck := "the deck edge stays clear"
+		if !math.IsNaN(t.DeckEdgeS) {
+			deck = "the deck edge goes under in " + Duration(t.DeckEdgeS)
+			if a, b := t.DeckEdgeRange[0], t.DeckEdgeRange[1]; !math.IsNaN(a) && !math.IsNaN(b) {
+				deck += " (" + Duration(a) + " to " + Duration(b) + ")"
+			}
+		}
+		open := "no opening goes under"
+		if !math.IsNaN(t.OpeningS) {
+			open = "the first opening" + openingName(t.Opening) + " goes under in " + Duration(t.OpeningS)
+		}
+		out = append(out, "Left as it is, without pumping: "+deck+"; "+open+"; "+lossWords(t)+".")
+	}
+	return out
+}
+
+func openingName(n string) string {
+	if n == "" {
+		return ""
+	}
+	return " (" + n + ")"
+}
+
+func lossWords(t engine.Trend) string {
+	if !math.IsNaN(t.LossS) {
+		return "she is lost in " + Duration(t.LossS) + " (" + t.Projection.End.String() + ")"
+	}
+	return "she is not lost within the projection (" + t.Projection.End.String() + ")"
 }
