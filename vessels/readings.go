@@ -146,6 +146,8 @@ func (r *reader) markReadings(t *table, v *engine.Vessel) []engine.MarkReading {
 		}
 		out = append(out, engine.MarkReading{Mark: idx, DraftM: d})
 	}
+	// In the vessel's order of marks, as the crew goes round them.
+	sort.Slice(out, func(i, j int) bool { return out[i].Mark < out[j].Mark })
 	return out
 }
 
