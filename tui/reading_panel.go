@@ -408,7 +408,6 @@ func wrapStyled(s interface{ Render(...string) string }, text string, w int) []s
 	return out
 }
 
-
 // readingLines draws the panel for the root model.
 func (m model) readingLines(w, h int) []string {
 	return strings.Split(m.rd.with(m.v, m.curPosition(), m.st, m.bar, m.lay.wide).view(w, h), "\n")
