@@ -31,4 +31,3 @@ func BenchmarkDiagnoseFreighter(b *testing.B) {
 	// the figure to read when others are busy (wall time waits for them).
 	b.ReportMetric(float64(cpuTime()-cpu0)/float64(b.N)/1e6, "cpu-ms/op")
 }
-
