@@ -1,6 +1,9 @@
 package engine
 
-import "sort"
+import (
+	"math"
+	"sort"
+)
 
 // This file holds the result types that the screen and the command line
 // show, and Assess, which computes all of them for one keystroke.
@@ -98,6 +101,9 @@ type GZCurve struct {
 
 	Note  string   // why the curve ends early, "" when it runs its full span
 	Other *GZCurve // upright ship only: the curve towards the other side (this one is the worse); nil otherwise
+
+	upright    Plane // the solved 0° sample (free trim, same displacement)
+	hasUpright bool
 }
 
 // CriterionResult is one stability criterion applied to a condition.
@@ -129,8 +135,8 @@ type Assessment struct {
 	Flags    []Flag
 	Notes    []string // what could not be computed, and why
 	// UprightGMM is GM₀, the GM with her held upright at free trim (nil when
-	// unknown): beside Position.GMM, the GM where she lies, it tells a list
-	// from a loll.
+	// unknown), also in Position.GMUprightM: beside Position.GMAtRestM, the
+	// GM where she lies, it tells a list from a loll.
 	UprightGMM *float64
 }
 
@@ -166,24 +172,35 @@ func Assess(v *Vessel, d Damage) Assessment {
 	up := uprightUnknown
 	var upPtr *float64
 	if a.Position != nil {
-		if gm, ok := UprightGM(v, d, a.Position); ok {
-			up, upPtr = gm, &gm
-			a.UprightGMM = upPtr
-		}
-	}
-	if a.Position != nil {
 		gz, err := RightingLevers(pr, pos)
 		if err != nil {
 			a.Notes = append(a.Notes, "GZ curve not computed: "+err.Error())
 		} else {
 			a.GZ = gz
-			if len(v.CriteriaSets) > 0 {
-				res, err := EvaluateCriteria(v.CriteriaSets, CriteriaCase{Curve: gz, Eq: pos, Damaged: IsDamaged(d), ShipType: v.ShipType, UprightGMM: upPtr})
-				if err != nil {
-					a.Notes = append(a.Notes, "criteria not evaluated: "+err.Error())
-				}
-				a.Criteria = res
+		}
+		// The upright GM: from the curve's solved 0° sample where there is
+		// one (no further solve), else solved upright on its own.
+		switch {
+		case math.Abs(pos.HeelDeg) < 1e-9:
+			up = pos.GMM
+		case a.GZ != nil && a.GZ.hasUpright:
+			up = pr.uprightAt(a.GZ.upright)
+		default:
+			if gm, ok := UprightGM(v, d, a.Position); ok {
+				up = gm
 			}
+		}
+		if !math.IsNaN(up) {
+			a.Position.GMUprightM = up
+			upPtr = &up
+			a.UprightGMM = upPtr
+		}
+		if a.GZ != nil && len(v.CriteriaSets) > 0 {
+			res, err := EvaluateCriteria(v.CriteriaSets, CriteriaCase{Curve: a.GZ, Eq: *a.Position, Damaged: IsDamaged(d), ShipType: v.ShipType, UprightGMM: upPtr})
+			if err != nil {
+				a.Notes = append(a.Notes, "criteria not evaluated: "+err.Error())
+			}
+			a.Criteria = res
 		}
 	}
 	a.Flags = flags(v, d, a.Position, a.NoEq, a.Hand, up)

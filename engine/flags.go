@@ -547,6 +547,9 @@ func UprightGM(v *Vessel, d Damage, pos *Position) (gm float64, ok bool) {
 	if math.Abs(pos.HeelDeg) < 1e-9 {
 		return pos.GMM, true
 	}
+	if !math.IsNaN(pos.GMUprightM) && pos.GMUprightM != 0 {
+		return pos.GMUprightM, true
+	}
 	pr := NewProblem(v, d)
 	if !(pr.vmax > 0) || pr.massT/pr.rho >= pr.vmax {
 		return 0, false
@@ -556,6 +559,5 @@ func UprightGM(v *Vessel, d Damage, pos *Position) (gm float64, ok bool) {
 	if err != nil {
 		return 0, false
 	}
-	up := pr.position(pr.eval(pl, false), 0)
-	return up.GMM, true
+	return pr.uprightAt(pl), true
 }

@@ -171,6 +171,9 @@ func (pr *Problem) leverCurve(side Side, eq Position) (*GZCurve, []solvedHeel, e
 			}
 		}
 		push(deg, gz, sh)
+		if k == 0 {
+			c.upright, c.hasUpright = sh.p, true
+		}
 		if deg >= gzEndDeg || (found && deg >= gzMinEndDeg) {
 			break
 		}

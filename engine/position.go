@@ -73,7 +73,17 @@ type Position struct {
 	LCFM, TCFM       float64 // its centroid
 	BMTM, BMLM       float64 // its second moments about its own centroidal axes ÷ V
 	KMTM             float64 // KG + FSC + GM: upright, VCB + BMT
-	GMM              float64 // metacentric height in this position, corrected for free surface
+	GMM              float64 // metacentric height in this position, BMT − BG in the inclined waterplane, corrected for free surface (the solver's own test of stability)
+	// GMUprightM is the upright GM of the condition (see UprightGM): she
+	// brought upright at the same displacement and free trim, KM − KG − FSC.
+	// It is what the screen and the reports call GM. NaN until filled in
+	// (Assess, the flooding run's shown states, the righting options);
+	// equal to GMM when she floats upright.
+	GMUprightM float64
+	// GMAtRestM is the metacentric height where she lies: the slope of the
+	// GZ curve at this heel (free trim, constant displacement), m/rad, from
+	// the exact Jacobian (see gmAtRest). Equal to GMUprightM when upright.
+	GMAtRestM float64
 	GMLM             float64 // longitudinal metacentric height, with the same free-surface correction
 
 	DeckEdge   Clearance
@@ -144,6 +154,11 @@ func (pr *Problem) position(s state, it int) Position {
 		pos.GMLM = pos.BMLM - bg - pos.FSCM
 		// KM as GM implies it: KG + FSC + GM (upright, VCB + BMT).
 		pos.KMTM = pos.KGM + pos.FSCM + pos.GMM
+	}
+	pos.GMUprightM = math.NaN()
+	pos.GMAtRestM = gmAtRest(s, pos.GMM)
+	if math.Abs(pos.HeelDeg) < 1e-9 {
+		pos.GMUprightM, pos.GMAtRestM = pos.GMM, pos.GMM
 	}
 
 	pos.DeckEdge = Clearance{HeightM: math.Inf(1)}
