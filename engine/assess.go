@@ -182,7 +182,7 @@ func Assess(v *Vessel, d Damage) Assessment {
 		// one (no further solve), else solved upright on its own.
 		switch {
 		case math.Abs(pos.HeelDeg) < 1e-9:
-			up = pos.GMM
+			up = a.Position.GMUprightM
 		case a.GZ != nil && a.GZ.hasUpright:
 			up = pr.uprightAt(a.GZ.upright)
 		default:

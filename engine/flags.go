@@ -248,7 +248,7 @@ func flags(v *Vessel, d Damage, pos *Position, noEq *NoEquilibrium, hand *HandWo
 		add(FlagDeckEdge, Danger, "The deck edge is under water on %s %s, %.2f m deep: water lies on deck there and the righting lever falls off from here.",
 			de.Side.On(), flagWhere(de.XM, L), -de.HeightM)
 	}
-	if ml := pos.MarginLine; ml.HeightM < 0 {
+	if ml := pos.MarginLine; ml.HeightM < 0 && v.Passenger() {
 		add(FlagMarginLine, Danger, "The margin line is under water on %s %s, by %.2f m: she is past the limit her subdivision was laid out for and water can spread along the bulkhead deck.",
 			ml.Side.On(), flagWhere(ml.XM, L), -ml.HeightM)
 	}
@@ -544,11 +544,11 @@ func flagWallSided(h *Hull, p Plane) string {
 // one the intact criteria ask for. When she floats upright already it is
 // the solved position's. ok is false when she cannot be solved upright.
 func UprightGM(v *Vessel, d Damage, pos *Position) (gm float64, ok bool) {
-	if math.Abs(pos.HeelDeg) < 1e-9 {
-		return pos.GMM, true
-	}
 	if !math.IsNaN(pos.GMUprightM) && pos.GMUprightM != 0 {
 		return pos.GMUprightM, true
+	}
+	if math.Abs(pos.HeelDeg) < 1e-9 {
+		return pos.GMM * NewProblem(v, d).shipBasis(), true
 	}
 	pr := NewProblem(v, d)
 	if !(pr.vmax > 0) || pr.massT/pr.rho >= pr.vmax {

@@ -693,7 +693,7 @@ func (r *FloodRun) startEvents(e floodEval) {
 	if p.DeckEdge.HeightM <= 0 {
 		r.addEvent(DeckEdgeReached, "", 0, e, fmt.Sprintf("the deck edge is under water from the start (%s side, x %.1f m)", p.DeckEdge.Side, p.DeckEdge.XM))
 	}
-	if p.MarginLine.HeightM <= 0 {
+	if p.MarginLine.HeightM <= 0 && r.v.Passenger() {
 		r.addEvent(MarginLineReached, "", 0, e, "the margin line is under water from the start")
 	}
 	for _, o := range p.Openings {
@@ -732,10 +732,12 @@ func (r *FloodRun) crossings(rec stepRec, e0, e1 floodEval) {
 			func(p *Position) string {
 				return fmt.Sprintf("the deck edge goes under (%s side, x %.1f m)", p.DeckEdge.Side, p.DeckEdge.XM)
 			}},
-		{MarginLineReached, "", func(p *Position) float64 { return p.MarginLine.HeightM },
+	}
+	if r.v.Passenger() {
+		probes = append(probes, probe{MarginLineReached, "", func(p *Position) float64 { return p.MarginLine.HeightM },
 			func(p *Position) string {
 				return fmt.Sprintf("the margin line goes under (%s side, x %.1f m)", p.MarginLine.Side, p.MarginLine.XM)
-			}},
+			}})
 	}
 	for i, o := range r.v.Openings {
 		if o.Weathertight {
@@ -882,7 +884,10 @@ func (r *FloodRun) Report() FloodReport {
 		rep.Trace = append(rep.Trace, r.sample(t, e, false))
 	}
 	rep.Start = rep.Trace[0]
-	rep.Final = rep.Trace[len(rep.Trace)-1]
+	rep.Final = r.sample(rep.Trace[len(rep.Trace)-1].TimeS, r.evals[len(r.evals)-1], false)
+	if p := rep.Final.Position; p != nil {
+		FillUpright(r.v, r.damageAt(rep.Final.WaterM3), p)
+	}
 	rep.FinalWaterM3 = rep.Final.WaterM3
 	if rep.Final.Position != nil && r.lb != nil {
 		f, l := rep.Final.Position, r.lb
@@ -911,6 +916,9 @@ func (r *FloodRun) sample(t float64, e floodEval, judge bool) FloodSample {
 	if e.ok() {
 		p := e.pos
 		s.Position = &p
+		if judge {
+			FillUpright(r.v, r.damageAt(e.water), &p)
+		}
 		if judge && r.c.Criteria != nil {
 			s.Criteria = r.c.Criteria(r.v, r.damageAt(e.water), p)
 		}
@@ -1007,6 +1015,7 @@ func (r *FloodRun) stage(f, of float64) FloodStage {
 	if e.ok() {
 		p := e.pos
 		st.Position = &p
+		FillUpright(r.v, r.damageAt(e.water), &p)
 		if r.c.Criteria != nil {
 			st.Criteria = r.c.Criteria(r.v, r.damageAt(e.water), p)
 		}

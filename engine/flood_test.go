@@ -19,6 +19,7 @@ type flBox struct {
 	L, B, D, T, KG float64
 	comps          []flComp
 	openings       []Opening
+	shipType       string
 }
 
 type flComp struct {
@@ -33,7 +34,7 @@ func (b flBox) vessel(t testing.TB) *Vessel {
 	if err != nil {
 		t.Fatal(err)
 	}
-	v := Vessel{Name: "flooding test barge (invented)", Hull: h, Openings: b.openings,
+	v := Vessel{Name: "flooding test barge (invented)", Hull: h, Openings: b.openings, ShipType: b.shipType,
 		Weights: []Weight{{Name: "barge", MassT: SeaWaterDensity * b.L * b.B * b.T, LCGM: b.L / 2, VCGM: b.KG}}}
 	for _, c := range b.comps {
 		cp, err := NewCompartment(h, c.name, c.box)
@@ -156,7 +157,7 @@ func TestFloodCentreBoxClosedForm(t *testing.T) {
 	}{
 		{"void amidships", flBox{L: 100, B: 20, D: 10, T: 5, KG: 4, comps: []flComp{{"centre void", Box{45, 55, -4, 4, 0, 10}, 1}}}, 0.05, 0.6, false, 0.5, 0.05},
 		{"stores μ 0.6", flBox{L: 100, B: 20, D: 10, T: 5, KG: 4, comps: []flComp{{"centre store", Box{45, 55, -4, 4, 0, 10}, 0.6}}}, 0.1, 0.65, false, 0.5, 0.05},
-		{"full-breadth hold, margin line, door", flBox{L: 100, B: 20, D: 6, T: 5, KG: 4, comps: []flComp{{"hold", Box{42, 58, -10, 10, 0, 6}, 1}},
+		{"full-breadth hold, margin line, door", flBox{L: 100, B: 20, D: 6, T: 5, KG: 4, shipType: "passenger", comps: []flComp{{"hold", Box{42, 58, -10, 10, 0, 6}, 1}},
 			openings: []Opening{{Name: "side door", X: 70, Y: 10, Z: 5.5}, {Name: "closed port", X: 30, Y: -10, Z: 5.3, Weathertight: true}}}, 0.3, 0.6, true, 0.5, 0.2},
 	}
 	for _, c := range cases {

@@ -34,7 +34,17 @@ func gmAtRest(s state, fallback float64) float64 {
 // intact, floodwater held counted with its own free surface.
 func (pr *Problem) uprightAt(p Plane) float64 {
 	p.C = 0
-	return pr.position(pr.eval(p, false), 0).GMM
+	return pr.position(pr.eval(p, false), 0).GMUprightM
+}
+
+// shipBasis is the factor Δ/(Δ − floodwater held) that puts a GM of the
+// whole (ship and floodwater held as added weight) on the lost-buoyancy
+// basis, the ship's own weight, keeping the righting moment Δ·GM.
+func (pr *Problem) shipBasis() float64 {
+	if !(pr.load.MassT > 0) {
+		return 1
+	}
+	return pr.massT / pr.load.MassT
 }
 
 // FillUpright sets pos.GMUprightM for damage state d of v when it is not

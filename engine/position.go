@@ -62,7 +62,13 @@ type Position struct {
 	TrimM                           float64 // draft aft − draft forward
 	HeelDeg                         float64 // positive starboard down
 
-	DisplacementT float64 // mass afloat, floodwater held included
+	// DisplacementT is the mass afloat, floodwater held included. On the
+	// lost-buoyancy basis the sea water in compartments open to the sea is
+	// not in it: it is the ship's weight without the water in open spaces
+	// (OpenWaterT, beside it).
+	DisplacementT float64
+	OpenWaterT    float64 // sea water in the compartments open to the sea, t (μ × their part below the water × ρ)
+	HeldWaterT    float64 // floodwater held as an added weight (in DisplacementT), t
 	VolumeM3      float64 // displaced by the hull still buoyant
 
 	LCBM, TCBM, VCBM float64 // centre of buoyancy
@@ -77,14 +83,20 @@ type Position struct {
 	// GMUprightM is the upright GM of the condition (see UprightGM): she
 	// brought upright at the same displacement and free trim, KM − KG − FSC.
 	// It is what the screen and the reports call GM. NaN until filled in
-	// (Assess, the flooding run's shown states, the righting options);
-	// equal to GMM when she floats upright.
+	// (Solve, Assess, the flooding run's shown states, the righting
+	// options). Like GMAtRestM it is on the lost-buoyancy basis, per the
+	// ship's own weight: with floodwater held as an added weight the GM of
+	// the whole is scaled by Δ/(Δ − HeldWaterT), the righting moment Δ·GM
+	// kept (the two methods give the same moment of statical stability:
+	// Barrass & Derrett, bilging), so that a flooded space shows one GM
+	// whichever way it was solved.
 	GMUprightM float64
 	// GMAtRestM is the metacentric height where she lies: the slope of the
 	// GZ curve at this heel (free trim, constant displacement), m/rad, from
-	// the exact Jacobian (see gmAtRest). Equal to GMUprightM when upright.
+	// the exact Jacobian (see gmAtRest), on the same basis. Equal to
+	// GMUprightM when upright.
 	GMAtRestM float64
-	GMLM             float64 // longitudinal metacentric height, with the same free-surface correction
+	GMLM      float64 // longitudinal metacentric height, with the same free-surface correction
 
 	DeckEdge   Clearance
 	MarginLine Clearance
@@ -155,10 +167,13 @@ func (pr *Problem) position(s state, it int) Position {
 		// KM as GM implies it: KG + FSC + GM (upright, VCB + BMT).
 		pos.KMTM = pos.KGM + pos.FSCM + pos.GMM
 	}
+	pos.OpenWaterT = pr.openWaterT(p)
+	pos.HeldWaterT = W - pr.load.MassT
 	pos.GMUprightM = math.NaN()
-	pos.GMAtRestM = gmAtRest(s, pos.GMM)
+	pos.GMAtRestM = gmAtRest(s, pos.GMM) * pr.shipBasis()
 	if math.Abs(pos.HeelDeg) < 1e-9 {
-		pos.GMUprightM, pos.GMAtRestM = pos.GMM, pos.GMM
+		pos.GMUprightM = pos.GMM * pr.shipBasis()
+		pos.GMAtRestM = pos.GMUprightM
 	}
 
 	pos.DeckEdge = Clearance{HeightM: math.Inf(1)}

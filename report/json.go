@@ -67,9 +67,12 @@ type Equilibrium struct {
 	DraftFwdM Num `json:"draft_fwd_m"`
 	TrimM     Num `json:"trim_m"`
 	HeelDeg   Num `json:"heel_deg"`
-	GMM       Num `json:"gm_m"`
+	GMM       Num `json:"gm_m"`         // upright GM of the condition as solved
+	GMAtRestM Num `json:"gm_at_rest_m"` // GZ slope at the equilibrium heel, m/rad
 
-	DisplacementT    Num       `json:"displacement_t"`
+	DisplacementT    Num       `json:"displacement_t"` // lost-buoyancy basis: the ship's weight without the water in open spaces
+	OpenWaterT       Num       `json:"open_water_t"`   // sea water standing in the compartments open to the sea
+	Loll             bool      `json:"loll"`           // heeled with a negative upright GM
 	VolumeM3         Num       `json:"volume_m3"`
 	LCBM             Num       `json:"lcb_m"`
 	TCBM             Num       `json:"tcb_m"`
@@ -298,8 +301,8 @@ func buildEquilibrium(p *engine.Position) *Equilibrium {
 	}
 	return &Equilibrium{
 		DraftAftM: Num(p.DraftAftM), DraftMidM: Num(p.DraftMidM), DraftFwdM: Num(p.DraftFwdM),
-		TrimM: Num(p.TrimM), HeelDeg: Num(p.HeelDeg), GMM: Num(p.GMM),
-		DisplacementT: Num(p.DisplacementT), VolumeM3: Num(p.VolumeM3),
+		TrimM: Num(p.TrimM), HeelDeg: Num(p.HeelDeg), GMM: Num(p.GMUprightM), GMAtRestM: Num(p.GMAtRestM),
+		DisplacementT: Num(p.DisplacementT), OpenWaterT: Num(p.OpenWaterT), Loll: p.IsLoll(), VolumeM3: Num(p.VolumeM3),
 		LCBM: Num(p.LCBM), TCBM: Num(p.TCBM), VCBM: Num(p.VCBM),
 		LCGM: Num(p.LCGM), TCGM: Num(p.TCGM), KGM: Num(p.KGM), FSCM: Num(p.FSCM),
 		WaterplaneAreaM2: Num(p.WaterplaneAreaM2), LCFM: Num(p.LCFM), TCFM: Num(p.TCFM),

@@ -86,14 +86,17 @@ func Markdown(w io.Writer, r Report) error {
 			{"Draft forward (FP)", num(p.DraftFwdM, 3, "m")},
 			{"Trim", TrimWords(p.TrimM)},
 			{"Heel", HeelWords(p.HeelDeg)},
-			{"GM (free-surface corrected)", gmWords(p, a.UprightGMM)},
+			{"GM upright (free-surface corrected)", GMUprightWords(p)},
+			{"GM where she lies", GMAtRestWords(p)},
 			{"KM", num(p.KMTM, 3, "m")},
 			{"KG", num(p.KGM, 3, "m")},
 			{"Free-surface correction", num(p.FSCM, 3, "m")},
 			{"GM longitudinal", num(p.GMLM, 1, "m")},
-			{"Displacement", num(p.DisplacementT, 1, "t")},
-			{"Buoyant volume", num(p.VolumeM3, 1, "m³")},
 		}
+		for _, row := range displacementRows(p) {
+			rows = append(rows, [2]string{sentence(row[0]), row[1]})
+		}
+		rows = append(rows, [2]string{"Buoyant volume", num(p.VolumeM3, 1, "m³")})
 		for _, row := range rows {
 			e.line("| ", row[0], " | ", row[1], " |")
 		}
@@ -101,8 +104,9 @@ func Markdown(w io.Writer, r Report) error {
 
 		e.line("## Freeboard")
 		e.line()
-		e.line("- Least freeboard to the deck edge: ", clearanceWords(p.DeckEdge))
-		e.line("- Margin line: ", clearanceWords(p.MarginLine))
+		for _, row := range deckLineRows(p, r.Vessel) {
+			e.line("- Least clearance of the ", row[0], ": ", row[1])
+		}
 		if len(p.Freeboards) > 0 {
 			e.line()
 			e.line("| Station x | Deck at side | Port | Starboard |")
@@ -239,7 +243,7 @@ func Markdown(w io.Writer, r Report) error {
 		e.line("| Draft forward | ", num(h.DraftFwdM, 3, "m"), " | ", dash(func() string { return num(p.DraftFwdM, 3, "m") }), " |")
 		e.line("| Trim | ", TrimWords(h.TrimM), " | ", dash(func() string { return TrimWords(p.TrimM) }), " |")
 		e.line("| Heel | ", HeelWords(h.HeelDeg), " | ", dash(func() string { return HeelWords(p.HeelDeg) }), " |")
-		e.line("| GM | ", num(h.GMM, 3, "m"), " | ", dash(func() string { return num(p.GMM, 3, "m") }), " |")
+		e.line("| GM upright | ", num(h.GMM, 3, "m"), " | ", dash(func() string { return num(p.GMUprightM, 3, "m") }), " |")
 	}
 	e.line()
 

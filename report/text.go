@@ -58,13 +58,17 @@ func Text(w io.Writer, r Report) error {
 		t.add("draft forward", num(p.DraftFwdM, 3, "m"))
 		t.add("trim", TrimWords(p.TrimM))
 		t.add("heel", HeelWords(p.HeelDeg))
-		t.add("GM", gmWords(p, a.UprightGMM))
+		t.add(LabelGMUpright, GMUprightWords(p))
+		t.add(LabelGMAtRest, GMAtRestWords(p))
 		t.add("KM", num(p.KMTM, 3, "m"))
 		t.add("KG", num(p.KGM, 3, "m"))
 		t.add("free-surface corr.", num(p.FSCM, 3, "m"))
-		t.add("displacement", num(p.DisplacementT, 1, "t"))
-		t.add("deck edge", clearanceWords(p.DeckEdge))
-		t.add("margin line", clearanceWords(p.MarginLine))
+		for _, row := range displacementRows(p) {
+			t.add(row[0], row[1])
+		}
+		for _, row := range deckLineRows(p, r.Vessel) {
+			t.add(row[0], row[1])
+		}
 		writeLines(e, t.lines("  "))
 		if len(p.Openings) > 0 {
 			e.line()
@@ -144,7 +148,7 @@ func Text(w io.Writer, r Report) error {
 		c.add("draft forward", num(h.DraftFwdM, 3, "m"), direct(func() string { return num(p.DraftFwdM, 3, "m") }))
 		c.add("trim", TrimWords(h.TrimM), direct(func() string { return TrimWords(p.TrimM) }))
 		c.add("heel", HeelWords(h.HeelDeg), direct(func() string { return HeelWords(p.HeelDeg) }))
-		c.add("GM", num(h.GMM, 3, "m"), direct(func() string { return num(p.GMM, 3, "m") }))
+		c.add("GM upright", num(h.GMM, 3, "m"), direct(func() string { return num(p.GMUprightM, 3, "m") }))
 		writeLines(e, c.lines("  "))
 	} else {
 		why := a.HandWhy

@@ -175,7 +175,7 @@ func TestRemedyFiguresAreTheEngines(t *testing.T) {
 				if !w.Advisable {
 					adv = "NO"
 				}
-				for _, fig := range []string{massText(w.MassT), heelShort(w.Position.HeelDeg), num(w.Position.GMM, 2),
+				for _, fig := range []string{massText(w.MassT), heelShort(w.Position.HeelDeg), num(w.Position.GMAtRestM, 2),
 					num(w.Position.DeckEdge.HeightM, 2), num(w.UprightGMM, 2), num(w.LowestOpeningM, 2), adv} {
 					if !strings.Contains(line, " "+fig) {
 						t.Errorf("option %d: %q not in its row %q", i+1, fig, line)

@@ -393,6 +393,9 @@ func writeFloodText(w io.Writer, fr floodRun) error {
 		kind engine.FloodEventKind
 		what string
 	}{{engine.DeckEdgeReached, "deck edge"}, {engine.MarginLineReached, "margin line"}} {
+		if k.kind == engine.MarginLineReached && !fr.v.Passenger() {
+			continue // a cargo ship has no margin line: the deck edge is the line
+		}
 		seen := false
 		for _, e := range r.Events {
 			seen = seen || e.Kind == k.kind
@@ -408,7 +411,7 @@ func writeFloodText(w io.Writer, fr floodRun) error {
 	for _, s := range r.Table {
 		row := []string{engine.FormatDuration(s.TimeS), fnum(s.WaterM3, 1), fnum(s.InflowM3h, 0), fnum(s.PumpedM3h, 0), fnum(s.HeadM, 3), fnum(s.SoundingM, 2)}
 		if p := s.Position; p != nil {
-			row = append(row, fnum(p.HeelDeg, 2), fnum(p.DraftAftM, 3), fnum(p.DraftMidM, 3), fnum(p.DraftFwdM, 3), fnum(p.DeckEdge.HeightM, 3), fnum(p.GMM, 3))
+			row = append(row, fnum(p.HeelDeg, 2), fnum(p.DraftAftM, 3), fnum(p.DraftMidM, 3), fnum(p.DraftFwdM, 3), fnum(p.DeckEdge.HeightM, 3), fnum(p.GMUprightM, 3))
 		} else {
 			// No floating position: the flows and levels are not known either.
 			row = append(row[:2], "—", "—", "—", "—", "—", "—", "—", "—", "—", "—")
@@ -416,7 +419,7 @@ func writeFloodText(w io.Writer, fr floodRun) error {
 		fmt.Fprintf(tw, "  %s\t%s\n", strings.Join(row, "\t"), tableEvent(s))
 	}
 	tw.Flush()
-	b.WriteString("  (heel + starboard down; deck edge: least height of the deck at side above the water)\n")
+	b.WriteString("  (heel + starboard down; deck edge: least height of the deck at side above the water;\n   GM: upright, per the ship's own weight, the floodwater's Δ·GM kept: one basis with the lost-buoyancy solution)\n")
 
 	fmt.Fprintf(&b, "\nIntermediate stages (of %s m³", fnum(r.StagesOfM3, 1))
 	switch r.End {
@@ -449,7 +452,7 @@ func writeFloodText(w io.Writer, fr floodRun) error {
 			if o, ok := lowestOpening(p); ok {
 				low = fnum(o.HeightM, 2)
 			}
-			row = append(row, fnum(p.HeelDeg, 2), fnum(p.DraftAftM, 3), fnum(p.DraftMidM, 3), fnum(p.DraftFwdM, 3), fnum(p.GMM, 3), fnum(p.DeckEdge.HeightM, 3), low)
+			row = append(row, fnum(p.HeelDeg, 2), fnum(p.DraftAftM, 3), fnum(p.DraftMidM, 3), fnum(p.DraftFwdM, 3), fnum(p.GMUprightM, 3), fnum(p.DeckEdge.HeightM, 3), low)
 		} else {
 			why := "no equilibrium"
 			if s.NoEq != nil {
@@ -484,6 +487,7 @@ func writeFloodText(w io.Writer, fr floodRun) error {
 			{"draft mid m", f.DraftMidM, l.DraftMidM, 3, "mm"},
 			{"draft fwd m", f.DraftFwdM, l.DraftFwdM, 3, "mm"},
 			{"heel °", f.HeelDeg, l.HeelDeg, 2, "°"},
+			{"GM upright m", f.GMUprightM, l.GMUprightM, 3, "m"},
 			{"water m³", r.FinalWaterM3, r.LostBuoyancyWaterM3, 1, "m³"},
 		} {
 			d := q.a - q.b
@@ -499,7 +503,7 @@ func writeFloodText(w io.Writer, fr floodRun) error {
 			if r.FinalDiffM > 0.005 {
 				verdict = "NOT within"
 			}
-			fmt.Fprintf(&b, "  Largest draft difference %s mm: %s 5 mm. (GM differs between the two methods; Δ·GM agrees.)\n", fnum(1000*r.FinalDiffM, 2), verdict)
+			fmt.Fprintf(&b, "  Largest draft difference %s mm: %s 5 mm. (GM on one basis: per the ship's own weight, Δ·GM kept.)\n", fnum(1000*r.FinalDiffM, 2), verdict)
 		} else {
 			b.WriteString("  The run did not equalise: the two differ by the water not let in.\n")
 		}
@@ -633,7 +637,8 @@ type floodPosDoc struct {
 	DraftMidM     report.Num `json:"draft_mid_m"`
 	DraftFwdM     report.Num `json:"draft_fwd_m"`
 	TrimM         report.Num `json:"trim_m"`
-	GMM           report.Num `json:"gm_m"`
+	GMM           report.Num `json:"gm_m"`         // upright, lost-buoyancy basis
+	GMAtRestM     report.Num `json:"gm_at_rest_m"` // GZ slope where she lies, same basis
 	DisplacementT report.Num `json:"displacement_t"`
 	DeckEdgeM     report.Num `json:"deck_edge_m"`
 	MarginLineM   report.Num `json:"margin_line_m"`
@@ -677,7 +682,7 @@ func posDoc(p *engine.Position) *floodPosDoc {
 		return nil
 	}
 	d := &floodPosDoc{HeelDeg: report.Num(p.HeelDeg), DraftAftM: report.Num(p.DraftAftM), DraftMidM: report.Num(p.DraftMidM),
-		DraftFwdM: report.Num(p.DraftFwdM), TrimM: report.Num(p.TrimM), GMM: report.Num(p.GMM), DisplacementT: report.Num(p.DisplacementT),
+		DraftFwdM: report.Num(p.DraftFwdM), TrimM: report.Num(p.TrimM), GMM: report.Num(p.GMUprightM), GMAtRestM: report.Num(p.GMAtRestM), DisplacementT: report.Num(p.DisplacementT),
 		DeckEdgeM: report.Num(p.DeckEdge.HeightM), MarginLineM: report.Num(p.MarginLine.HeightM)}
 	if o, ok := lowestOpening(p); ok {
 		d.LowestOpening = &struct {
