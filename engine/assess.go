@@ -134,6 +134,7 @@ type Assessment struct {
 	Criteria []CriterionResult
 	Flags    []Flag
 	Notes    []string // what could not be computed, and why
+	Spills   []Spill  // non-water contents of holed tanks that may escape (see spill.go)
 	// UprightGMM is GM₀, the GM with her held upright at free trim (nil when
 	// unknown), also in Position.GMUprightM: beside Position.GMAtRestM, the
 	// GM where she lies, it tells a list from a loll.
@@ -204,7 +205,9 @@ func Assess(v *Vessel, d Damage) Assessment {
 		}
 	}
 	a.Flags = flags(v, d, a.Position, a.NoEq, a.Hand, up)
-	if more := StabilityFlags(v, a.Position, a.GZ, a.Criteria); len(more) > 0 {
+	a.Spills = Spills(v, d)
+	more := append(StabilityFlags(v, a.Position, a.GZ, a.Criteria), spillFlags(a.Spills)...)
+	if len(more) > 0 {
 		a.Flags = append(a.Flags, more...)
 		sort.SliceStable(a.Flags, func(i, j int) bool { return a.Flags[i].Severity > a.Flags[j].Severity })
 	}

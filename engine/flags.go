@@ -50,6 +50,8 @@ import (
 //	                                       0.05 m (danger); under 20° or 0.10 m (caution)
 //	deck-edge-near        caution          the deck edge is clear but within 0.30 m of    a little more heel or water puts water on deck
 //	                                       the water, or within 5° of further heel        there: how far, and at what heel
+//	spill                 caution          a tank holding oil or another liquid that is   what may be escaping, how much, the rule it is
+//	                                       not water is holed (spill.go)                  counted by, and to report the pollution
 //
 // A flag is a pure function of the state: it clears as soon as its cause is
 // gone.

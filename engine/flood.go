@@ -83,7 +83,7 @@ type FloodEnd int
 
 const (
 	FloodRunning   FloodEnd = iota // not ended yet
-	FloodEqualised                 // the level inside has risen to the sea's: head zero
+	FloodEqualised                 // the level inside has come to the sea's (risen, or fallen for a tank whose contents stood above it): head zero
 	FloodPumpsHold                 // the pumps hold the level where the inflow equals their capacity
 	FloodKeptDry                   // the pumps take all that comes in: no water stays
 	FloodNoInflow                  // the hole is clear of the water: nothing comes in
@@ -287,7 +287,7 @@ type FloodReport struct {
 	Events []FloodEvent  // in time order; the last is RunEnds
 	Table  []FloodSample // rows at round times and at events
 	Trace  []FloodSample // every accepted step, for a plot
-	Stages []FloodStage  // 25, 50, 75 and 100 % of StagesOfM3
+	Stages []FloodStage  // 25, 50, 75 and 100 % of StagesOfM3; only those the water passed through (and the end)
 	// StagesOfM3 is the volume the stages are fractions of: the water at
 	// the end when the run settled (equalised, pumps hold, full) or when she
 	// sank or capsized (the last floating state: the stages lead up to the
@@ -667,7 +667,7 @@ func (r *FloodRun) settled(e floodEval, t float64) {
 				r.eqS = rec.t0 + (rec.t1-rec.t0)*s0/(s0-s1)
 			}
 		}
-		r.finish(FloodEqualised, t, fmt.Sprintf("the level inside has risen to the sea's: %.1f m³ in after %s", e.water, FormatDuration(r.eqS)), nil)
+		r.finish(FloodEqualised, t, fmt.Sprintf("the level inside has %s the sea's: %.1f m³ in after %s", r.levelWent(e.water), e.water, FormatDuration(r.eqS)), nil)
 	case e.inflow == 0 && e.rate == 0:
 		r.finish(FloodNoInflow, t, "nothing flows: the hole is clear of the water on both sides", nil)
 	}
@@ -904,6 +904,9 @@ func (r *FloodRun) Report() FloodReport {
 		rep.StagesOfM3 = r.lbWater
 	}
 	for _, f := range StageFractions {
+		if f < 1 && !r.stagePassed(f*rep.StagesOfM3, rep.FinalWaterM3) {
+			continue // a stage of a filling that never happens
+		}
 		rep.Stages = append(rep.Stages, r.stage(f, rep.StagesOfM3))
 	}
 	rep.Solves = r.solves

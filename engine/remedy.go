@@ -73,7 +73,7 @@ type Remedy struct {
 	Tanks     []int
 	TankNames []string
 	// FillBefore and FillAfter are each tank's fill, as a fraction of its
-	// volume, now and after the option.
+	// capacity, now and after the option.
 	FillBefore, FillAfter []float64
 	Action                string  // in words, e.g. "fill Wing tank 2 P from the sea to 98 %"
 	MassT                 float64 // mass taken on, pumped out or moved, t (> 0)
@@ -277,7 +277,7 @@ type remedyCandidate struct {
 // remedyTank is what the candidate search needs of an intact tank.
 type remedyTank struct {
 	i          int
-	vol        float64 // moulded volume, m³
+	vol        float64 // capacity (μ × moulded volume), m³
 	yFull      float64 // centroid of the whole tank
 	zFull      float64
 	side       Side // 0: across the centreline
@@ -299,7 +299,7 @@ func remedyTanks(v *Vessel, d Damage) []remedyTank {
 			continue
 		}
 		_, yc, zc := c.solid.whole.Centroid()
-		t := remedyTank{i: i, vol: c.solid.Volume(), yFull: yc, zFull: zc, fill: c.Liquid.Fill}
+		t := remedyTank{i: i, vol: c.CapacityM3(), yFull: yc, zFull: zc, fill: c.Liquid.Fill}
 		switch {
 		case yc > tolY:
 			t.side = Starboard
@@ -308,10 +308,8 @@ func remedyTanks(v *Vessel, d Damage) []remedyTank {
 		}
 		t.massT, _, t.y, t.z, _ = v.TankContents(i)
 		name := strings.ToLower(c.Liquid.Name)
-		oily := strings.Contains(name, "oil") || strings.Contains(name, "sludge") ||
-			strings.Contains(name, "bilge") || strings.Contains(name, "sewage")
-		t.ballast = !oily && (strings.Contains(name, "ballast") || strings.Contains(name, "sea water"))
-		t.discharged = !oily && (strings.Contains(name, "ballast") || strings.Contains(name, "water"))
+		t.discharged = IsWater(name)
+		t.ballast = t.discharged && (strings.Contains(name, "ballast") || strings.Contains(name, "sea water"))
 		out = append(out, t)
 	}
 	return out
@@ -389,7 +387,7 @@ func remedyLoading(v *Vessel, c remedyCandidate, m float64) (map[int]Liquid, []i
 	if c.from >= 0 {
 		comp := v.Compartments[c.from]
 		l := *comp.Liquid
-		vol := comp.solid.Volume()
+		vol := comp.CapacityM3()
 		before = append(before, l.Fill)
 		if m >= c.mass && c.kind == RemedyDischarge || c.kind == RemedyTransfer && m >= c.mass && m >= l.Fill*vol*l.Density*(1-1e-12) {
 			l.Fill = 0
@@ -403,7 +401,7 @@ func remedyLoading(v *Vessel, c remedyCandidate, m float64) (map[int]Liquid, []i
 	if c.to >= 0 {
 		comp := v.Compartments[c.to]
 		l := *comp.Liquid
-		vol := comp.solid.Volume()
+		vol := comp.CapacityM3()
 		before = append(before, l.Fill)
 		rho := v.WaterDensity
 		if c.kind == RemedyTransfer {

@@ -103,13 +103,16 @@ func NewVessel(v Vessel) (*Vessel, error) {
 		if !(l.Density > 0) || math.IsInf(l.Density, 0) || !(l.Fill <= 1) {
 			return nil, fmt.Errorf("compartment %q: liquid density %v or fill %v out of range", c.Name, l.Density, l.Fill)
 		}
-		vol := l.Fill * c.solid.Volume()
-		p, im := levelForVolume(c.solid, vol, 0, 0)
-		_ = p
+		// The contents fill μ of the space below their level (the
+		// structure takes the rest), as the sea would: their level is where
+		// μ × the space below it holds them, and their free surface is μ of
+		// the space's plan there.
+		vol := l.Fill * c.CapacityM3()
+		_, im := levelForVolume(c.solid, vol/c.Permeability, 0, 0)
 		x, y, z := im.Centroid()
 		t := tankLoad{massT: vol * l.Density, x: x, y: y, z: z}
 		if l.Fill < PressedFullFill && im.AW > 0 {
-			t.fsm = l.Density * (im.IYY - im.SY*im.SY/im.AW)
+			t.fsm = l.Density * c.Permeability * (im.IYY - im.SY*im.SY/im.AW)
 		}
 		v.tanks[i] = t
 	}

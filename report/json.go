@@ -37,6 +37,7 @@ type Document struct {
 	GZ          GZ           `json:"gz"`
 	Hand        *Hand        `json:"hand"`
 	Flags       []FlagDoc    `json:"flags"`
+	Spills      []SpillDoc   `json:"spills"` // non-water contents of holed tanks that may escape
 
 	Outcome          string         `json:"outcome"`           // floats | sinks | capsizes | not converged
 	Reason           string         `json:"reason"`            // why there is no equilibrium, "" when she floats
@@ -216,6 +217,7 @@ func Build(r Report) Document {
 		Vessel:           r.VesselName,
 		Open:             append([]string{}, r.Open...),
 		Flags:            []FlagDoc{},
+		Spills:           buildSpills(a.Spills),
 		Outcome:          r.Outcome(),
 		Severity:         r.Severity(),
 		OpenCompartments: []OpenDoc{},

@@ -157,6 +157,7 @@ func Markdown(w io.Writer, r Report) error {
 		}
 	}
 	e.line()
+	markdownSpills(e, a.Spills)
 
 	if r.Remedies != nil {
 		markdownRemedies(e, r.Remedies)

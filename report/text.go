@@ -170,6 +170,7 @@ func Text(w io.Writer, r Report) error {
 		}
 		writeLines(e, t.lines("  "))
 	}
+	textSpills(e, a.Spills)
 	if r.Remedies != nil {
 		e.line()
 		textRemedies(e, r.Remedies)

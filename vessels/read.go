@@ -418,8 +418,8 @@ func (r *reader) compartments(ts []*table, hull *engine.Hull) ([]*engine.Compart
 		c.Permeability = mu
 		if liquid != nil {
 			if liquid.volumeM3 >= 0 {
-				if vol := c.Volume(); liquid.volumeM3 > vol*(1+1e-9) {
-					r.addf(t.keyPath("fill_m3"), "%g m³ is more than the tank holds (%.1f m³ inside the hull)", liquid.volumeM3, vol)
+				if vol := c.CapacityM3(); liquid.volumeM3 > vol*(1+1e-9) {
+					r.addf(t.keyPath("fill_m3"), "%g m³ is more than the tank holds (%.1f m³: permeability %g × %.1f m³ inside the hull)", liquid.volumeM3, vol, c.Permeability, c.Volume())
 				} else {
 					liquid.Fill = math.Min(liquid.volumeM3/vol, 1)
 				}
