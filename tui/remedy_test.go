@@ -82,7 +82,7 @@ func TestRemedyPanelGolden(t *testing.T) {
 		}
 		view := m.View()
 		checkScreen(t, view, sz[0], sz[1])
-		for _, want := range []string{"LIST, not a loll", "fill Wing tank 2 P from the sea to 62 %", remedyCautionShort[:20]} {
+		for _, want := range []string{"LIST, not a loll", "fill Wing tank 2 P from the sea to 65 %", remedyCautionShort[:20]} {
 			if sz[1] >= 30 && want == remedyCautionShort[:20] {
 				want = remedyCautionLead
 			}
