@@ -104,6 +104,7 @@ type GZCurve struct {
 
 	upright    Plane // the solved 0° sample (free trim, same displacement)
 	hasUpright bool
+	sp         *cubicSpline // the spline through the samples, fitted once (see GZCurve.fit)
 }
 
 // CriterionResult is one stability criterion applied to a condition.

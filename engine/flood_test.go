@@ -462,7 +462,7 @@ func TestFloodEnds(t *testing.T) {
 			}
 			// Stages of a filling that never happens are not shown: when
 			// nothing comes in only the end is (issue 10).
-			wantStages := len(StageFractions)
+			wantStages := len(stageFractions)
 			if c.end == FloodNoInflow || c.end == FloodKeptDry {
 				wantStages = 1
 			}
