@@ -25,6 +25,7 @@ type Compartment struct {
 	Permeability float64 // μ, 0 < μ ≤ 1: the fraction of the space that water can fill
 	Box          Box
 	Liquid       *Liquid // nil for a dry space
+	PumpM3h      float64 // pumping capacity on the compartment, m³/h (0: none given); the righting options' times
 
 	solid *Solid
 }

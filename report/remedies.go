@@ -45,6 +45,13 @@ type RemedyDoc struct {
 	DeckEdgeImmersed bool   `json:"deck_edge_immersed"`
 	OpeningImmersed  bool   `json:"opening_immersed"`
 	NoEquilibrium    string `json:"no_equilibrium"` // "" when she floats, else why not
+
+	StagesChecked int    `json:"stages_checked"` // steps of carrying it out solved and passed (of stages_of)
+	StagesOf      int    `json:"stages_of"`      // the steps it is solved at, the last being the option itself
+	StageFail     string `json:"stage_fail"`     // the first step at which it is unsafe, and why; "" if none
+	DurationS     Num    `json:"duration_s"`     // how long it takes at pump_m3h; null when the file gives no rate
+	PumpM3h       Num    `json:"pump_m3h"`       // the rate used, m³/h; null when none
+	PumpTank      string `json:"pump_tank"`      // the tank whose rate it is
 }
 
 // buildRemedies returns the JSON options of rs, never nil.
@@ -57,7 +64,12 @@ func buildRemedies(rs *engine.RemedySet) []RemedyDoc {
 			Advisable: o.Advisable, Note: o.Note, Kind: o.Kind.String(), ToUpright: o.ToUpright,
 			FillsBefore: []Num{}, FillsAfter: []Num{}, DraftAftM: nan, DraftMidM: nan, DraftFwdM: nan,
 			UprightGMM: Num(o.UprightGMM), LowestOpening: o.LowestOpening,
-			DeckEdgeImmersed: o.DeckEdgeImmersed, OpeningImmersed: o.OpeningImmersed}
+			DeckEdgeImmersed: o.DeckEdgeImmersed, OpeningImmersed: o.OpeningImmersed,
+			StagesChecked: o.StagesChecked, StagesOf: engine.RemedyStages, StageFail: o.StageFail,
+			DurationS: Num(o.DurationS), PumpM3h: nan, PumpTank: o.PumpName}
+		if o.PumpM3h > 0 {
+			d.PumpM3h = Num(o.PumpM3h)
+		}
 		for _, f := range o.FillBefore {
 			d.FillsBefore = append(d.FillsBefore, Num(f))
 		}
