@@ -62,18 +62,21 @@ const (
 	FlagBilgeEmerged    = "bilge-emerged"
 	FlagKeelEmerged     = "keel-emerged"
 	FlagOpening         = "opening-immersed"
-	FlagClosure         = "closure-immersed"
-	FlagSpaceTopUnder   = "space-top-under"
-	FlagSpaceBottomOut  = "space-bottom-clear"
-	FlagNotWallSided    = "not-wall-sided"
-	FlagGMNegative      = "gm-negative"
-	FlagHeavyTrim       = "heavy-trim"
-	FlagWillSink        = "will-sink"
-	FlagWillCapsize     = "will-capsize"
-	FlagNotSolved       = "not-solved"
-	FlagCriteriaFailed  = "criteria-failed"
-	FlagLittleStability = "little-stability"
-	FlagDeckEdgeNear    = "deck-edge-near"
+	// FlagOpeningIntoFlooded: an immersed opening leads into a compartment
+	// already flooded (Opening.LeadsTo): info, no progressive flooding.
+	FlagOpeningIntoFlooded = "opening-into-flooded"
+	FlagClosure            = "closure-immersed"
+	FlagSpaceTopUnder      = "space-top-under"
+	FlagSpaceBottomOut     = "space-bottom-clear"
+	FlagNotWallSided       = "not-wall-sided"
+	FlagGMNegative         = "gm-negative"
+	FlagHeavyTrim          = "heavy-trim"
+	FlagWillSink           = "will-sink"
+	FlagWillCapsize        = "will-capsize"
+	FlagNotSolved          = "not-solved"
+	FlagCriteriaFailed     = "criteria-failed"
+	FlagLittleStability    = "little-stability"
+	FlagDeckEdgeNear       = "deck-edge-near"
 )
 
 // Thresholds of the flags.
@@ -275,6 +278,11 @@ func flags(v *Vessel, d Damage, pos *Position, noEq *NoEquilibrium, hand *HandWo
 		what := "\"" + o.Name + "\""
 		if o.Kind != "" {
 			what = o.Kind + " " + what
+		}
+		if o.IntoFlooded && !o.Weathertight {
+			add(FlagOpeningIntoFlooded, Info, "The %s %s is %.2f m under water, but it leads into %s, which is flooded already: no further flooding through it.",
+				what, flagPoint(o.X, o.Y, o.Z, L), -o.HeightM, o.LeadsTo)
+			continue
 		}
 		if o.Weathertight {
 			add(FlagClosure, Caution, "The weathertight %s %s is %.2f m under water: the sea is kept out only while its closure holds, and weathertight is not watertight under a standing head of water. Check it is secured and keep watch on it.",

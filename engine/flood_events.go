@@ -60,7 +60,7 @@ func (r *FloodRun) startEvents(e floodEval) {
 		r.addEvent(MarginLineReached, "", 0, e, "the margin line is under water from the start")
 	}
 	for _, o := range p.Openings {
-		if !o.Weathertight && o.HeightM <= 0 {
+		if o.Progressive() && o.HeightM <= 0 {
 			r.addEvent(OpeningReached, o.Name, 0, e, fmt.Sprintf("%s is under water from the start", o.Name))
 		}
 	}
@@ -103,13 +103,13 @@ func (r *FloodRun) crossings(rec stepRec, e0, e1 floodEval) {
 			}})
 	}
 	for i, o := range r.v.Openings {
-		if o.Weathertight {
-			continue
+		if o.Weathertight || r.v.LeadsToIndex(o) == r.ci {
+			continue // closed, or into the compartment flooding already
 		}
 		i, name := i, o.Name
 		probes = append(probes, probe{OpeningReached, name,
 			func(p *Position) float64 {
-				if i < len(p.Openings) {
+				if i < len(p.Openings) && !p.Openings[i].IntoFlooded {
 					return p.Openings[i].HeightM
 				}
 				return math.Inf(1)

@@ -202,7 +202,7 @@ func (pr *Problem) leverCurve(side Side, eq Position) (*GZCurve, []solvedHeel, e
 func (pr *Problem) downflooding(c *GZCurve, sol []solvedHeel) {
 	var open []immersionPoint
 	for _, o := range pr.v.Openings {
-		if !o.Weathertight {
+		if !o.Weathertight && !pr.v.intoFlooded(o, pr.d) {
 			open = append(open, immersionPoint{o.X, o.Y, o.Z, o.Name})
 		}
 	}

@@ -49,7 +49,16 @@ type StationFreeboard struct {
 type OpeningClearance struct {
 	Opening
 	HeightM float64 // along the true vertical; negative: immersed
+	// IntoFlooded: it leads into a compartment already flooded in this
+	// state (open to the sea or holding water), so water through it
+	// spreads no further: no point of progressive flooding.
+	IntoFlooded bool
 }
+
+// Progressive reports whether the opening, once immersed, lets water
+// spread further: it is not closed weathertight and does not lead into a
+// compartment already flooded.
+func (o OpeningClearance) Progressive() bool { return !o.Weathertight && !o.IntoFlooded }
 
 // Immersed reports whether the opening is under water.
 func (o OpeningClearance) Immersed() bool { return o.HeightM < 0 }
@@ -209,7 +218,7 @@ func (pr *Problem) position(s state, it int) Position {
 		pos.Held = append(pos.Held, HeldWater{Index: pr.heldIx[i], VolumeM3: pr.held[i].vol, Surface: pl})
 	}
 	for _, o := range pr.v.Openings {
-		pos.Openings = append(pos.Openings, OpeningClearance{o, p.Height(o.X, o.Y, o.Z)})
+		pos.Openings = append(pos.Openings, OpeningClearance{o, p.Height(o.X, o.Y, o.Z), pr.v.intoFlooded(o, pr.d)})
 	}
 	return pos
 }

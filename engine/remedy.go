@@ -575,7 +575,7 @@ type remedyFigures struct {
 func remedyMeasure(p *Position) remedyFigures {
 	f := remedyFigures{deck: p.DeckEdge.HeightM, openingM: math.Inf(1)}
 	for _, o := range p.Openings {
-		if !o.Weathertight && o.HeightM < f.openingM {
+		if o.Progressive() && o.HeightM < f.openingM {
 			f.opening, f.openingM = o.Name, o.HeightM
 		}
 	}

@@ -36,6 +36,11 @@ type Opening struct {
 	Kind         string // free text: "vent", "air pipe", "door", …
 	X, Y, Z      float64
 	Weathertight bool // closed weathertight: does not count as a downflooding point
+	// LeadsTo names the compartment water runs into through it (matched
+	// ignoring case); "" for a space not modelled, a point of downflooding.
+	// Into a compartment already flooded it is no point of progressive
+	// flooding (see leads.go).
+	LeadsTo string
 }
 
 // Vessel is one ship with one loading condition. Build it with NewVessel.
@@ -120,6 +125,9 @@ func NewVessel(v Vessel) (*Vessel, error) {
 			t.fsm = l.Density * c.Permeability * (im.IYY - im.SY*im.SY/im.AW)
 		}
 		v.tanks[i] = t
+	}
+	if err := v.checkLeadsTo(); err != nil {
+		return nil, err
 	}
 	var m float64
 	for _, w := range v.Weights {

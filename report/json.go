@@ -123,6 +123,8 @@ type OpeningDoc struct {
 	Weathertight bool   `json:"weathertight"`
 	HeightM      Num    `json:"height_m"` // negative: immersed
 	Immersed     bool   `json:"immersed"`
+	LeadsTo      string `json:"leads_to"`    // the compartment it lets water into; "" a space not modelled
+	Progressive  bool   `json:"progressive"` // a point of progressive flooding: not weathertight, not into a space flooded already
 }
 
 // OpenDoc is a compartment open to the sea.
@@ -268,7 +270,7 @@ func Build(r Report) Document {
 		for _, o := range p.Openings {
 			d.Openings = append(d.Openings, OpeningDoc{Name: o.Name, Kind: o.Kind,
 				XM: Num(o.X), YM: Num(o.Y), ZM: Num(o.Z), Weathertight: o.Weathertight,
-				HeightM: Num(o.HeightM), Immersed: o.Immersed()})
+				HeightM: Num(o.HeightM), Immersed: o.Immersed(), LeadsTo: o.LeadsTo, Progressive: o.Progressive()})
 		}
 	}
 	if h := a.Hand; h != nil {

@@ -135,6 +135,9 @@ func Markdown(w io.Writer, r Report) error {
 				if o.Weathertight {
 					state += ", weathertight"
 				}
+				if o.IntoFlooded {
+					state += ", into " + md(o.LeadsTo) + " (flooded already)"
+				}
 				e.line("| ", md(o.Name), " | ", md(orDash(o.Kind)), " | ", num(o.X, 1, "m"), " | ", num(o.Y, 1, "m"), " | ", num(o.Z, 1, "m"), " | ", num(o.HeightM, 3, "m"), " | ", state, " |")
 			}
 		}

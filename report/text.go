@@ -86,6 +86,9 @@ func Text(w io.Writer, r Report) error {
 				if o.Weathertight {
 					note = strings.TrimSpace(note + " weathertight")
 				}
+				if o.IntoFlooded {
+					note = strings.TrimSpace(note + " into " + o.LeadsTo + ", flooded already")
+				}
 				t.add(o.Name, orDash(o.Kind), num(o.HeightM, 3, "m"), note)
 			}
 			writeLines(e, t.lines("  "))

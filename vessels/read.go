@@ -116,7 +116,9 @@ func (r *reader) vessel(root *table) (*engine.Vessel, *Info) {
 
 	weights := r.weights(root.entries("weight", "one item of the loading condition"))
 	comps, cinfo := r.compartments(root.entries("compartment", "one space of the ship"), hull)
-	openings := r.openings(root.entries("opening", "a point where water would spread"))
+	openingTables := root.entries("opening", "a point where water would spread")
+	openings := r.openings(openingTables)
+	r.checkLeadsTo(openingTables, openings, comps)
 	marks := r.draftMarks(root.entries("draft_mark", "a draft mark on the shell"), hull)
 	root.finish()
 
@@ -614,6 +616,7 @@ func (r *reader) openings(ts []*table) []engine.Opening {
 			o.Kind = k
 		}
 		o.Weathertight, _ = t.boolean("closed_weathertight")
+		o.LeadsTo = r.leadsTo(t)
 		t.finish()
 		out = append(out, o)
 	}
