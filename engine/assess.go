@@ -100,7 +100,7 @@ type GZCurve struct {
 	Downflooding    string  // that opening's name, "" if none
 
 	Note  string   // why the curve ends early, "" when it runs its full span
-	Other *GZCurve // upright ship only: the curve towards the other side (this one is the worse); nil otherwise
+	Other *GZCurve // within NearUprightDeg of upright (Assess, FloodCriteria): the curve towards the other side (upright: this one is the worse); nil otherwise
 
 	upright    Plane // the solved 0° sample (free trim, same displacement)
 	hasUpright bool
@@ -178,7 +178,7 @@ func Assess(v *Vessel, d Damage) Assessment {
 		if err != nil {
 			a.Notes = append(a.Notes, "GZ curve not computed: "+err.Error())
 		} else {
-			a.GZ = gz
+			a.GZ = pr.withOtherSide(gz, pos)
 		}
 		// The upright GM: from the curve's solved 0° sample where there is
 		// one (no further solve), else solved upright on its own.
@@ -198,7 +198,7 @@ func Assess(v *Vessel, d Damage) Assessment {
 			a.UprightGMM = upPtr
 		}
 		if a.GZ != nil && len(v.CriteriaSets) > 0 {
-			res, err := EvaluateCriteria(v.CriteriaSets, CriteriaCase{Curve: a.GZ, Eq: *a.Position, Damaged: IsDamaged(d), ShipType: v.ShipType, UprightGMM: upPtr})
+			res, err := JudgeCriteria(v.CriteriaSets, CriteriaCase{Curve: a.GZ, Eq: *a.Position, Damaged: IsDamaged(d), ShipType: v.ShipType, UprightGMM: upPtr})
 			if err != nil {
 				a.Notes = append(a.Notes, "criteria not evaluated: "+err.Error())
 			}

@@ -410,11 +410,13 @@ func FloodCriteria(shipType string) func(v *Vessel, d Damage, pos Position) []Cr
 		if len(v.CriteriaSets) == 0 {
 			return nil
 		}
-		curve, err := RightingLevers(NewProblem(v, d), pos)
+		pr := NewProblem(v, d)
+		curve, err := RightingLevers(pr, pos)
 		if err != nil {
 			return nil
 		}
-		res, err := EvaluateCriteria(v.CriteriaSets, CriteriaCase{Curve: curve, Eq: pos, Damaged: IsDamaged(d), ShipType: shipType})
+		curve = pr.withOtherSide(curve, pos)
+		res, err := JudgeCriteria(v.CriteriaSets, CriteriaCase{Curve: curve, Eq: pos, Damaged: IsDamaged(d), ShipType: shipType})
 		if err != nil {
 			return nil
 		}
