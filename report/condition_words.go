@@ -63,3 +63,8 @@ func deckLineRows(p *engine.Position, v *engine.Vessel) [][2]string {
 	}
 	return [][2]string{{"deck edge", clearanceWords(p.DeckEdge)}, {"margin line", clearanceWords(p.MarginLine)}}
 }
+
+// kmUpright is the KM that goes with the upright GM: KG + FSC + GM upright
+// (the basis of GMUprightM: with floodwater held the GM is per the ship's
+// weight, so this KM is the one that gives it).
+func kmUpright(p *engine.Position) float64 { return p.KGM + p.FSCM + p.GMUprightM }

@@ -88,7 +88,7 @@ func Markdown(w io.Writer, r Report) error {
 			{"Heel", HeelWords(p.HeelDeg)},
 			{"GM upright (free-surface corrected)", GMUprightWords(p)},
 			{"GM where she lies", GMAtRestWords(p)},
-			{"KM", num(p.KMTM, 3, "m")},
+			{"KM upright", num(kmUpright(p), 3, "m")},
 			{"KG", num(p.KGM, 3, "m")},
 			{"Free-surface correction", num(p.FSCM, 3, "m")},
 			{"GM longitudinal", num(p.GMLM, 1, "m")},

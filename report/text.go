@@ -60,7 +60,7 @@ func Text(w io.Writer, r Report) error {
 		t.add("heel", HeelWords(p.HeelDeg))
 		t.add(LabelGMUpright, GMUprightWords(p))
 		t.add(LabelGMAtRest, GMAtRestWords(p))
-		t.add("KM", num(p.KMTM, 3, "m"))
+		t.add("KM upright", num(kmUpright(p), 3, "m"))
 		t.add("KG", num(p.KGM, 3, "m"))
 		t.add("free-surface corr.", num(p.FSCM, 3, "m"))
 		for _, row := range displacementRows(p) {
