@@ -140,6 +140,10 @@ type Assessment struct {
 	// unknown), also in Position.GMUprightM: beside Position.GMAtRestM, the
 	// GM where she lies, it tells a list from a loll.
 	UprightGMM *float64
+	// Strength is the hull girder's still-water shear force and bending
+	// moment (strength.go); nil with StrengthWhy saying why.
+	Strength    *Strength
+	StrengthWhy string
 }
 
 // Assess computes everything shown for damage state d of v: the floating
@@ -205,9 +209,11 @@ func Assess(v *Vessel, d Damage) Assessment {
 			a.Criteria = res
 		}
 	}
+	a.Strength, a.StrengthWhy = GirderStrength(v, d, a.Position)
 	a.Flags = flags(v, d, a.Position, a.NoEq, a.Hand, up)
 	a.Spills = Spills(v, d)
-	more := append(StabilityFlags(v, a.Position, a.GZ, a.Criteria), spillFlags(a.Spills)...)
+	more := append(StabilityFlags(v, a.Position, a.GZ, a.Criteria), StrengthFlags(a.Strength)...)
+	more = append(more, spillFlags(a.Spills)...)
 	if len(more) > 0 {
 		a.Flags = append(a.Flags, more...)
 		sort.SliceStable(a.Flags, func(i, j int) bool { return a.Flags[i].Severity > a.Flags[j].Severity })

@@ -115,5 +115,18 @@ func remedyTimeWords(r *Remedy) string {
 		}
 		return fmt.Sprintf("Time unknown: no pump rate for %s in the file.", r.PumpName)
 	}
-	return fmt.Sprintf("Takes about %s at %.0f m³/h (%s).", FormatDuration(r.DurationS), r.PumpM3h, r.PumpName)
+	return fmt.Sprintf("Takes about %s at %.0f m³/h (%s).", remedyHours(r.DurationS), r.PumpM3h, r.PumpName)
+}
+
+// remedyHours writes a duration of s seconds to the minute: "1 h 05 min",
+// "25 min", or "under a minute".
+func remedyHours(s float64) string {
+	n := int64(math.Round(s / 60))
+	switch {
+	case n >= 60:
+		return fmt.Sprintf("%d h %02d min", n/60, n%60)
+	case n > 0:
+		return fmt.Sprintf("%d min", n)
+	}
+	return "under a minute"
 }

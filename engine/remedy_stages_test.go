@@ -138,7 +138,7 @@ func TestRemedyTimeAtPumpRate(t *testing.T) {
 		if math.Abs(o.DurationS-want) > 1e-6 || o.PumpM3h != 150 {
 			t.Errorf("%s: %.1f s at %v m³/h, want %.1f s at 150", o.Action, o.DurationS, o.PumpM3h, want)
 		}
-		if !strings.Contains(o.Note, fmt.Sprintf("Takes about %s", engine.FormatDuration(want))) {
+		if !strings.Contains(o.Note, fmt.Sprintf("Takes about %d h %02d min", int(math.Round(want/60))/60, int(math.Round(want/60))%60)) {
 			t.Errorf("note %q does not say the time", o.Note)
 		}
 	}
