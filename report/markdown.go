@@ -43,7 +43,7 @@ func Markdown(w io.Writer, r Report) error {
 	if len(r.Open) == 0 && len(held) == 0 {
 		e.line("No compartment is open to the sea: this is the intact loading condition.")
 	} else if len(r.Open) == 0 {
-		e.line("No compartment is open to the sea.")
+		e.line("No compartment is open to the sea; the compartments below are flooded to a level (a stage of flooding).")
 	} else {
 		e.line("Compartments open to the sea (lost buoyancy, each with its permeability μ):")
 		e.line()
@@ -55,7 +55,7 @@ func Markdown(w io.Writer, r Report) error {
 	}
 	if len(held) > 0 {
 		e.line()
-		e.line("Compartments partly flooded (water held, the added-weight method):")
+		e.line("Compartments flooded to a level (a stage of flooding: water held, the added-weight method):")
 		e.line()
 		e.line("| Compartment | Water held |")
 		e.line("|---|--:|")

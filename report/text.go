@@ -22,8 +22,11 @@ func Text(w io.Writer, r Report) error {
 	}
 	e.line()
 
-	if len(r.Open) == 0 {
+	held := r.heldWater()
+	if len(r.Open) == 0 && len(held) == 0 {
 		e.line("Open to the sea: none (intact)")
+	} else if len(r.Open) == 0 {
+		e.line("Open to the sea: none")
 	} else {
 		e.line("Open to the sea: ", plural(len(r.Open), "compartment"))
 		t := table{right: []bool{false, false, true, true}}
@@ -32,8 +35,8 @@ func Text(w io.Writer, r Report) error {
 		}
 		writeLines(e, t.lines("  "))
 	}
-	if held := r.heldWater(); len(held) > 0 {
-		e.line("Partly flooded (water held): ", plural(len(held), "compartment"))
+	if len(held) > 0 {
+		e.line("Flooded to a level (a stage of flooding, water held as added weight): ", plural(len(held), "compartment"))
 		t := table{right: []bool{false, true}}
 		for _, h := range held {
 			t.add(h.Name, num(float64(h.WaterM3), 1, "m³"))
