@@ -97,6 +97,9 @@ type FloodReport struct {
 	Permeability   float64 // μ of the flooded compartment, as used (Vessel.Permeability of the base state)
 	CapacityM3     float64 // μ × the compartment's volume
 	ContentsM3     float64 // a tank's contents at the start, as sea water of the same mass; 0 for a dry space
+	// Spills is the holed tank's contents when they are not water (oil,
+	// cargo liquid): what may escape to the sea (see spill.go); nil else.
+	Spills []Spill
 
 	Start FloodSample // at time zero
 	// Final is the last state solved: at EndS, or, when she sinks or
@@ -157,7 +160,7 @@ func (r *FloodRun) Report() FloodReport {
 		Vessel: r.v.Name, Compartment: r.comp.Name, Hole: r.c.Hole, PumpM3h: r.pumpM3s * 3600, LimitS: r.limit,
 		End: r.end, EndS: r.endS, EndReason: r.endWhy, EndNoEq: r.endNoEq, SteadyHeadM: r.hs,
 		PumpsHoldLevel: r.end == FloodPumpsHold || r.end == FloodKeptDry,
-		Permeability:   r.mu, CapacityM3: r.capacity, ContentsM3: r.contentsM3, LostBuoyancy: r.lb, LostBuoyancyNoEq: r.lbNoEq, LostBuoyancyWaterM3: r.lbWater,
+		Permeability:   r.mu, CapacityM3: r.capacity, ContentsM3: r.contentsM3, Spills: r.spills(), LostBuoyancy: r.lb, LostBuoyancyNoEq: r.lbNoEq, LostBuoyancyWaterM3: r.lbWater,
 		Events: append([]FloodEvent(nil), r.events...),
 		Steps:  len(r.recs), Rejected: r.st.tries - len(r.recs),
 	}

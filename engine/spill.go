@@ -69,3 +69,11 @@ func spillFlags(sp []Spill) []Flag {
 	}
 	return out
 }
+
+// spills returns the flooding run's holed tank's contents when they are
+// not water: the hole lets them out as the sea comes in.
+func (r *FloodRun) spills() []Spill {
+	d := make(Damage, len(r.v.Compartments))
+	d[r.ci].Open = true
+	return Spills(r.v, d)
+}

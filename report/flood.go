@@ -83,6 +83,10 @@ func FloodText(w io.Writer, f Flood) error {
 	default:
 		fmt.Fprintf(&b, "  %s\n", sentenceCase(r.EndReason))
 	}
+	for _, s := range r.Spills {
+		fmt.Fprintf(&b, "  %s held %s of %s, which may escape to the sea: report the pollution. Counted so: %s.\n",
+			s.Compartment, num(s.MassT, 1, "t"), s.Liquid, engine.SpillRule)
+	}
 	if r.End == engine.FloodEqualised {
 		fmt.Fprintf(&b, "  Time to equalise: %s (%s s), %s m³ in. The run stops at 1 mm of head (%s);\n  the last millimetre follows the √h law.\n",
 			Duration(r.EqualiseS), num(r.EqualiseS, 0, ""), num(r.FinalWaterM3, 1, ""), Duration(r.EndS))
