@@ -307,6 +307,7 @@ func (m model) Update(msg tea.Msg) (tea.Model, tea.Cmd) {
 		return m.takeRemedies(msg)
 
 	case tea.KeyMsg:
+		msg = plainKey(msg)
 		if m.lay.small {
 			return m.smallScreenKey(msg)
 		}
