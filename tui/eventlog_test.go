@@ -298,3 +298,22 @@ func TestNoClipboardProgram(t *testing.T) {
 		t.Errorf("pasted %q into the field", v)
 	}
 }
+
+// TestLogAfterATornLine: a file left with a torn last line (a power cut in
+// an earlier session) gets the next line on a fresh line.
+func TestLogAfterATornLine(t *testing.T) {
+	path := filepath.Join(t.TempDir(), "watch.log")
+	if err := os.WriteFile(path, []byte("2025-03-14T02:00:00Z  whole\n2025-03-14T02:00:01Z  tor"), 0o644); err != nil {
+		t.Fatal(err)
+	}
+	lg, err := openEventLog(path)
+	if err != nil {
+		t.Fatal(err)
+	}
+	lg.add("2025-03-14T02:30:00Z  next")
+	lg.close()
+	lines := fileLines(t, path)
+	if len(lines) != 3 || lines[2] != "2025-03-14T02:30:00Z  next" {
+		t.Errorf("lines %q", lines)
+	}
+}
