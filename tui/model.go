@@ -64,8 +64,8 @@ type model struct {
 	spaces    []space
 	into      []int // the compartment each opening leads into (leadsInto)
 	opts      Options
-	condition string // the loading condition's name from the file
-	shipType  string // "cargo" or "passenger", for the criteria of a flooding run
+	condition string        // the loading condition's name from the file
+	info      *vessels.Info // the vessel file's holes, pumps and ship type for a flooding run; may be nil
 	now       func() time.Time
 
 	keys     keyMap
@@ -78,9 +78,10 @@ type model struct {
 	editing  bool
 	inputErr string
 
-	form  floodForm   // the hole-and-pumps form of a flooding run
-	flood floodState  // the flooding run and its panel
-	rem   remedyState // the righting options and their panel
+	form   floodForm   // the hole-and-pumps form of a flooding run
+	flood  floodState  // the flooding run and its panel
+	rem    remedyState // the righting options and their panel
+	girder girderPanel // the hull girder's shear force and bending moment (strength_view.go)
 
 	rend    *lipgloss.Renderer
 	palette int
@@ -154,9 +155,9 @@ func newModel(v *engine.Vessel, info *vessels.Info, opts Options) model {
 		width:   80,
 		height:  24,
 	}
+	m.info = info
 	if info != nil {
 		m.condition = info.Condition
-		m.shipType = info.ShipType
 	}
 	m.into = leadsInto(v)
 	m.derived = derive(v, m.into, nil)
@@ -230,14 +231,9 @@ func (m *model) setStyles() {
 // Init computes the intact condition, the reference for every change.
 func (m model) Init() tea.Cmd {
 	v := m.v
-	return func() (msg tea.Msg) {
-		defer func() {
-			if r := recover(); r != nil {
-				msg = resultMsg{seq: 0, failure: fmt.Sprint(r)}
-			}
-		}()
-		return baselineMsg{engine.Assess(v, v.Intact())}
-	}
+	return newest(0, nil, nil,
+		func(why string) tea.Msg { return resultMsg{seq: 0, failure: why} },
+		func() tea.Msg { return baselineMsg{engine.Assess(v, v.Intact())} })
 }
 
 // pending reports whether the figures shown are not yet those of the
@@ -246,12 +242,20 @@ func (m model) pending() bool {
 	return m.shown != m.seq || (m.base == nil && m.failure == "")
 }
 
-// Update handles one message.
+// Update handles one message, then divides the screen for what it left:
+// the one place sizes are decided (resize), once per message.
 func (m model) Update(msg tea.Msg) (tea.Model, tea.Cmd) {
+	next, cmd := m.update(msg)
+	mm := next.(model)
+	mm.resize()
+	return mm, cmd
+}
+
+// update handles one message.
+func (m model) update(msg tea.Msg) (tea.Model, tea.Cmd) {
 	switch msg := msg.(type) {
 	case tea.WindowSizeMsg:
 		m.width, m.height = msg.Width, msg.Height
-		m.resize()
 		return m, nil
 
 	case baselineMsg:
@@ -343,7 +347,6 @@ func (m model) key(msg tea.KeyMsg) (tea.Model, tea.Cmd) {
 		return m, tea.Quit
 	case key.Matches(msg, k.Help):
 		m.help.ShowAll = !m.help.ShowAll
-		m.resize()
 	case key.Matches(msg, k.Up):
 		m.move(-1)
 	case key.Matches(msg, k.Down):
@@ -384,6 +387,12 @@ func (m model) key(msg tea.KeyMsg) (tea.Model, tea.Cmd) {
 		return m, m.writeReport()
 	case key.Matches(msg, k.Remedies):
 		return m.remedyKey()
+	case key.Matches(msg, k.Girder):
+		return m.girderKey()
+	case m.girder.handles(msg):
+		var cmd tea.Cmd
+		m.girder, cmd = m.girder.update(msg)
+		return m, cmd
 	case key.Matches(msg, k.RunPanel):
 		if m.rem.show {
 			// The righting options give way to the run's panel.
@@ -431,7 +440,6 @@ func (m model) key(msg tea.KeyMsg) (tea.Model, tea.Cmd) {
 		m.inputErr = ""
 		m.input.SetValue("")
 		m.input.Placeholder = muText(m.mu(m.damage, m.sel))
-		m.resize()
 		cmd := m.input.Focus()
 		if !m.animate {
 			// Tests: a still cursor, so that no blink timer runs.
@@ -482,7 +490,6 @@ func (m model) editKey(msg tea.KeyMsg) (tea.Model, tea.Cmd) {
 	case tea.KeyEsc:
 		m.editing = false
 		m.input.Blur()
-		m.resize()
 		return m, nil
 	case tea.KeyCtrlC:
 		return m, tea.Quit
@@ -494,7 +501,6 @@ func (m model) editKey(msg tea.KeyMsg) (tea.Model, tea.Cmd) {
 		}
 		m.editing = false
 		m.input.Blur()
-		m.resize()
 		if mu == m.mu(m.damage, m.sel) {
 			return m, nil
 		}
@@ -553,17 +559,10 @@ func (m model) commit(d engine.Damage, what string) (tea.Model, tea.Cmd) {
 // result could never be shown), and it turns an engine failure into a
 // message instead of taking the screen down.
 func recompute(v *engine.Vessel, d engine.Damage, seq int, latest *atomic.Int64) tea.Cmd {
-	return func() (msg tea.Msg) {
-		if latest != nil && latest.Load() != int64(seq) {
-			return resultMsg{seq: seq, skipped: true}
-		}
-		defer func() {
-			if r := recover(); r != nil {
-				msg = resultMsg{seq: seq, failure: fmt.Sprint(r)}
-			}
-		}()
-		return resultMsg{seq: seq, a: engine.Assess(v, d)}
-	}
+	return newest(seq, latest,
+		func() tea.Msg { return resultMsg{seq: seq, skipped: true} },
+		func(why string) tea.Msg { return resultMsg{seq: seq, failure: why} },
+		func() tea.Msg { return resultMsg{seq: seq, a: engine.Assess(v, d)} })
 }
 
 // takeResult shows a result if it is the newest and logs every change in
