@@ -7,7 +7,7 @@ import (
 
 	tea "github.com/charmbracelet/bubbletea"
 
-	"heelwatch/plaintext"
+	"heelwatch/report/plaintext"
 )
 
 // FuzzFieldReadings feeds any text to the dashboard's text fields: the

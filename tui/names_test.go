@@ -8,7 +8,7 @@ import (
 
 	tea "github.com/charmbracelet/bubbletea"
 
-	"heelwatch/plaintext"
+	"heelwatch/report/plaintext"
 )
 
 // TestNamesSanitisedOnScreenAndInTheLog: a vessel built without the

@@ -4,7 +4,7 @@ import (
 	"github.com/charmbracelet/bubbles/textinput"
 	tea "github.com/charmbracelet/bubbletea"
 
-	"heelwatch/plaintext"
+	"heelwatch/report/plaintext"
 )
 
 // newTextField is a text field that takes typed and pasted text only as

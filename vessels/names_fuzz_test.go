@@ -6,7 +6,7 @@ import (
 	"testing"
 	"unicode"
 
-	"heelwatch/plaintext"
+	"heelwatch/report/plaintext"
 )
 
 // FuzzNames puts any text into a compartment's name (written as a TOML
