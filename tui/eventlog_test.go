@@ -216,11 +216,7 @@ func TestLogFileMovedOrDeleted(t *testing.T) {
 // and a FIFO (without blocking) are refused before the dashboard starts.
 func TestLogFileRefusedAtStart(t *testing.T) {
 	dir := t.TempDir()
-	fifo := filepath.Join(dir, "fifo")
-	if err := syscall.Mkfifo(fifo, 0o600); err != nil {
-		t.Fatal(err)
-	}
-	for _, p := range []string{"/proc/heelwatch-cannot/log", dir, fifo, filepath.Join(dir, "no", "such", "dir.log")} {
+	for _, p := range append(specialFiles(t, dir), dir, filepath.Join(dir, "no", "such", "dir.log")) {
 		if err := CheckLogFile(p); err == nil {
 			t.Errorf("CheckLogFile(%s) accepted it", p)
 		}
