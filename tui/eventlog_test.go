@@ -122,7 +122,7 @@ func TestDiskFullKeepsEveryLineWhole(t *testing.T) {
 		if err, _ := lg.failing(); err == nil {
 			t.Fatal("the log does not know it is failing")
 		}
-		if v := m.View(); !strings.Contains(v, "LOG FILE NOT WRITTEN") {
+		if v := m.View(); !strings.Contains(v, "LOG NOT WRITTEN since ") {
 			t.Errorf("no lasting warning in the header while failing:\n%s", v)
 		}
 		if !strings.Contains(strings.Join(m.log, "\n"), "event log file not written") {
@@ -131,7 +131,7 @@ func TestDiskFullKeepsEveryLineWhole(t *testing.T) {
 		m = press(t, m, "u") // undo: one more line while full
 		disk.full = false
 		m = drive(t, m, nil, m.syncLog()) // the retry
-		if v := m.View(); strings.Contains(v, "LOG FILE NOT WRITTEN") {
+		if v := m.View(); strings.Contains(v, "LOG NOT WRITTEN since ") {
 			t.Error("the warning stays after the file recovered")
 		}
 		if !strings.Contains(strings.Join(m.log, "\n"), "event log file written again") {
