@@ -315,6 +315,7 @@ func (m model) update(msg tea.Msg) (tea.Model, tea.Cmd) {
 		return m.takeRemedies(msg)
 
 	case tea.KeyMsg:
+		msg = plainKey(msg)
 		if m.lay.small {
 			return m.smallScreenKey(msg)
 		}

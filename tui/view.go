@@ -69,7 +69,7 @@ func (m model) headerView(w int) string {
 	}
 	if m.cur != nil && m.cur.Position != nil {
 		p := m.cur.Position
-		sum = append(sum, "heel "+heelShort(p.HeelDeg), "GM "+num(p.GMM, 2)+" m")
+		sum = append(sum, "heel "+heelShort(p.HeelDeg), "GM "+num(p.GMUprightM, 2)+" m")
 	} else if m.noPosition() {
 		sum = append(sum, "NO FLOATING POSITION")
 	}
