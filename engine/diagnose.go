@@ -18,6 +18,8 @@ type DiagnoseOptions struct {
 	// Progress, when set, is told how many candidate sets are done of how
 	// many (the last call has done == total).
 	Progress func(done, total int)
+
+	noRecheck bool // the diagnosis without the readings that disagree is not run again
 }
 
 // FloodedSpace is the water one explanation puts in one compartment.
@@ -82,8 +84,12 @@ type Diagnosis struct {
 	Verdict       string        // a plain sentence
 	Tellers       []string      // what would tell the best from the next ones
 	Disagreements []Disagreement
-	Searched      int   // candidate sets fitted
-	NotSearched   []int // compartments left out: tanks pressed full of sea water, which a hole below the water does not change
+	// Without is the best explanation of the latest reading without its
+	// readings that disagree with the rest, when nothing fits with them and
+	// something does without; nil otherwise. The verdict says so.
+	Without     *Explanation
+	Searched    int   // candidate sets fitted
+	NotSearched []int // compartments left out: tanks pressed full of sea water, which a hole below the water does not change
 }
 
 // Diagnose finds the flooding states that best explain the latest of the
@@ -179,7 +185,51 @@ func Diagnose(v *Vessel, rs []Reading, o DiagnoseOptions) (Diagnosis, error) {
 	}
 	dg.Fits, dg.Verdict = verdict(v, dg.Explanations, nRead)
 	dg.Tellers = tellers(v, dg.Explanations)
+	if !dg.Fits && !o.noRecheck {
+		dg.recheck(v, rs, o)
+	}
 	return dg, nil
+}
+
+// recheck diagnoses the latest reading once more without the readings of
+// it that disagree with the rest, and says what would fit then: the
+// officer sees both, and which reading to take again.
+func (dg *Diagnosis) recheck(v *Vessel, rs []Reading, o DiagnoseOptions) {
+	ri := len(rs) - 1
+	r := rs[ri]
+	drop := map[string]bool{}
+	for _, g := range dg.Disagreements {
+		if g.Reading == ri {
+			drop[g.What] = true
+		}
+	}
+	if len(drop) == 0 {
+		return
+	}
+	var kept Reading
+	kept.Minutes, kept.Levels = r.Minutes, r.Levels
+	if r.HasHeel && !drop["heel"] {
+		kept.HeelDeg, kept.HasHeel = r.HeelDeg, true
+	}
+	var left []string
+	for _, d := range r.Drafts {
+		if n := v.DraftMarks[d.Mark].Name; drop[n] {
+			left = append(left, n)
+		} else {
+			kept.Drafts = append(kept.Drafts, d)
+		}
+	}
+	if drop["heel"] {
+		left = append(left, "the inclinometer")
+	}
+	o.noRecheck, o.Progress = true, nil
+	alt, err := Diagnose(v, append(append([]Reading(nil), rs[:ri]...), kept), o)
+	if err != nil || !alt.Fits || len(alt.Explanations) == 0 {
+		return
+	}
+	b := alt.Explanations[0]
+	dg.Without = &b
+	dg.Verdict += fmt.Sprintf(" Leaving out %s, %s fits, off by %s.", strings.Join(left, " and "), b.Names(v), misfitWords(b))
 }
 
 // refineCount is how many of the best candidates are refined on the
@@ -548,11 +598,16 @@ func (f *diagFitter) explain(c *diagCand) Explanation {
 	// The readings hardly tell a space's permeability from its level:
 	// the level and the sea are given at the file's permeability (or the
 	// least that holds the water), the officer's best knowledge of it.
-	d0 := f.damage(c.set, c.vol, 0)
+	// A space that was sounded shows at the fitted permeability: the
+	// sounding and the water together fix it.
+	d0, dFit := f.damage(c.set, c.vol, 0), f.damage(c.set, c.vol, c.mu)
 	sea := p.Plane
 	for i, ci := range c.set {
 		comp := f.v.Compartments[ci]
 		fs := FloodedSpace{Compartment: ci, WaterM3: c.vol[i], Permeability: f.v.Permeability(d0, ci)}
+		if _, sounded := f.levels[ci]; sounded {
+			fs.Permeability = f.v.Permeability(dFit, ci)
+		}
 		V := comp.solid.Volume()
 		in, _ := levelForVolume(comp.solid, math.Min(c.vol[i]/fs.Permeability, V*(1-1e-9)), sea.B, sea.C)
 		fs.LevelM = sounding(comp, in)
@@ -578,20 +633,32 @@ func verdict(v *Vessel, es []Explanation, nRead int) (bool, string) {
 	}
 	b := es[0]
 	if b.Misfit > FitLimit*math.Max(float64(nRead), 1) {
-		return false, fmt.Sprintf("Nothing fits the readings within their errors: the best, %s, is still %s off at the marks. A reading may be wrong, a weight may have shifted (cargo, a tank), or water is where the vessel file has no compartment.",
-			b.Names(v), cmWords(b.DraftRMSM))
+		return false, fmt.Sprintf("Nothing fits the readings within their errors: the best, %s, is still off by %s. A reading may be wrong, a weight may have shifted (cargo, a tank), or water is where the vessel file has no compartment.",
+			b.Names(v), misfitWords(b))
 	}
 	if len(b.Spaces) == 0 {
-		return true, "The readings agree with the ship intact: no flooding that the marks can show."
+		return true, "The readings agree with the ship intact: no flooding that they can show."
 	}
-	return true, fmt.Sprintf("Best explanation: %s (%s at the marks).", b.Names(v), cmWords(b.DraftRMSM))
+	return true, fmt.Sprintf("Best explanation: %s, off by %s.", b.Names(v), misfitWords(b))
 }
 
-func cmWords(m float64) string {
-	if math.IsNaN(m) {
-		return "no marks read,"
+// misfitWords says how far an explanation is from the reading, in what was
+// read: "0.4 cm RMS at the marks", "0.1° of heel", "3 cm RMS in the soundings".
+func misfitWords(e Explanation) string {
+	var parts []string
+	if !math.IsNaN(e.DraftRMSM) {
+		parts = append(parts, fmt.Sprintf("%.1f cm RMS at the marks", 100*e.DraftRMSM))
 	}
-	return fmt.Sprintf("%.1f cm RMS", 100*m)
+	if !math.IsNaN(e.HeelErrDeg) {
+		parts = append(parts, fmt.Sprintf("%.1f° of heel", math.Abs(e.HeelErrDeg)))
+	}
+	if !math.IsNaN(e.LevelRMSM) {
+		parts = append(parts, fmt.Sprintf("%.0f cm RMS in the soundings", 100*e.LevelRMSM))
+	}
+	if len(parts) > 1 {
+		return strings.Join(parts[:len(parts)-1], ", ") + " and " + parts[len(parts)-1]
+	}
+	return strings.Join(parts, "")
 }
 
 // tellers says, for the runners-up, which sounding would tell them from the

@@ -47,6 +47,12 @@
 //     run: Torricelli inflow, the re-solve at each evaluation, stopping),
 //     dormand_prince.go (the integrator), flood_events.go, flood_end.go,
 //     flood_report.go (table, trace, intermediate stages) and shell_hole.go.
+//   - From what the crew reads to what is flooding: draftmark.go (the draft
+//     at each mark), draftsurvey.go (marks to the perpendiculars, hog/sag),
+//     reading.go (readings, the plane they imply, readings that disagree),
+//     neighbours.go, diagnose.go and diagnose_fit.go (the ranked
+//     explanations, bounded least squares) and trend.go (inflow, equivalent
+//     hole, projection).
 //   - One root-finder for functions that cost a solve per value:
 //     illinois.go (the vanishing angle, flooding events, righting options).
 //
