@@ -136,7 +136,13 @@ func Diagnose(v *Vessel, rs []Reading, o DiagnoseOptions) (Diagnosis, error) {
 		pool = append(pool, i)
 	}
 	sets := candidateSets(v, pool, o)
-	total := len(sets) + refineCount
+	singles := 0
+	for _, s := range sets {
+		if len(s) == 1 {
+			singles++
+		}
+	}
+	total := len(sets) + singles + 2*refineCount
 	var cands []*diagCand
 	for n, s := range sets {
 		c := f.fitToPlane(s)
@@ -149,15 +155,20 @@ func Diagnose(v *Vessel, rs []Reading, o DiagnoseOptions) (Diagnosis, error) {
 	}
 	dg.Searched = len(sets)
 	sort.SliceStable(cands, func(i, j int) bool { return cands[i].score < cands[j].score })
-	// Refine the best few, and every one close enough to the best that
-	// reading noise could have put it behind.
-	for i := 0; i < len(cands) && i < 2*refineCount; i++ {
-		if i >= refineCount && cands[i].score > cands[0].score+refineMargin {
-			break
+	// Refine every single compartment (cheap, and the plane the readings
+	// imply can be a poor start: with the marks at one end under water it
+	// does not know the trim), the best few groups, and every group close
+	// enough to the best that reading noise could have put it behind.
+	done := 0
+	for i, c := range cands {
+		close := i < refineCount || (i < 2*refineCount && c.score <= cands[0].score+refineMargin)
+		if len(c.set) > 1 && !close {
+			continue
 		}
-		f.refine(cands[i])
+		f.refine(c)
+		done++
 		if o.Progress != nil {
-			o.Progress(min(len(sets)+i+1, total-1), total)
+			o.Progress(min(len(sets)+done, total-1), total)
 		}
 	}
 	if o.Progress != nil {
@@ -539,6 +550,19 @@ func (f *diagFitter) refine(c *diagCand) {
 	}
 	k := len(c.set)
 	x0 := append([]float64(nil), c.vol...)
+	if k == 1 {
+		// A coarse look along the space's volume first: the misfit can be
+		// flat where the start lies (two effects of the water cancelling
+		// at the marks read) and steep elsewhere (the deck edge going
+		// under), so a start from the plane alone may stall.
+		best := c.misfit
+		for _, frac := range []float64{0.05, 0.2, 0.4, 0.6, 0.8, 0.95} {
+			w := []float64{frac * c.moul[0]}
+			if res, _, ok := f.readingResiduals(f.damage(c.set, w, 0)); ok && sumSq(res) < best {
+				best, x0 = sumSq(res), w
+			}
+		}
+	}
 	if k < 3 {
 		// The permeability too, one for the group, within the range of
 		// the trade's values (SOLAS II-1 Reg. 7-3: 0.60 stores to 0.95).
