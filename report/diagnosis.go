@@ -40,6 +40,7 @@ type DiagnosisDoc struct {
 	Disagreements []DisagreementDoc `json:"disagreements"`
 	Readings      int               `json:"readings"`
 	Explained     Num               `json:"explained_minutes"`   // the reading explained: the latest
+	MarksSurvey   *SurveyDoc        `json:"marks_to_perpendiculars"` // the latest reading's marks carried to the perpendiculars; null if they cannot be
 	Without       *ExplanationDoc   `json:"without_disagreeing"` // the best without the readings that disagree, when nothing fits with them; null otherwise
 	Searched      int               `json:"searched"`
 	NotSearched   []string          `json:"not_searched"`
@@ -115,7 +116,11 @@ func BuildDiagnosis(d Diagnosis) DiagnosisDoc {
 		doc.Made = d.Made.UTC().Format(time.RFC3339)
 	}
 	if res.Reading < len(d.Readings) {
-		doc.Explained = Num(d.Readings[res.Reading].Minutes)
+		r := d.Readings[res.Reading]
+		doc.Explained = Num(r.Minutes)
+		if s, err := engine.SurveyReading(v, r); err == nil {
+			doc.MarksSurvey = &SurveyDoc{Num(s.AftM), Num(s.MidM), Num(s.FwdM), Num(s.TrimM), Num(s.DeflectionM)}
+		}
 	}
 	for _, ci := range res.NotSearched {
 		doc.NotSearched = append(doc.NotSearched, v.Compartments[ci].Name)
@@ -282,6 +287,10 @@ func DiagnosisText(w io.Writer, d Diagnosis) error {
 				t.add(name, num(m.DraftM, 2, "m"), num(pred, 2, "m"), signed(100*(m.DraftM-pred), 1, "cm"))
 			}
 			writeLines(e, t.lines("  "))
+			if s, err := engine.SurveyReading(v, r); err == nil {
+				e.line("  read, to the perpendiculars: aft ", num(s.AftM, 2, "m"), ", amidships ", num(s.MidM, 2, "m"),
+					", forward ", num(s.FwdM, 2, "m"), "; hog/sag ", HogSagWords(s.DeflectionM))
+			}
 		}
 	}
 	e.line()
