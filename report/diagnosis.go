@@ -39,9 +39,9 @@ type DiagnosisDoc struct {
 	Tellers       []string          `json:"tell_apart"`
 	Disagreements []DisagreementDoc `json:"disagreements"`
 	Readings      int               `json:"readings"`
-	Explained     Num               `json:"explained_minutes"`   // the reading explained: the latest
+	Explained     Num               `json:"explained_minutes"`       // the reading explained: the latest
 	MarksSurvey   *SurveyDoc        `json:"marks_to_perpendiculars"` // the latest reading's marks carried to the perpendiculars; null if they cannot be
-	Without       *ExplanationDoc   `json:"without_disagreeing"` // the best without the readings that disagree, when nothing fits with them; null otherwise
+	Without       *ExplanationDoc   `json:"without_disagreeing"`     // the best without the readings that disagree, when nothing fits with them; null otherwise
 	Searched      int               `json:"searched"`
 	NotSearched   []string          `json:"not_searched"`
 	TrendNote     string            `json:"trend_note"`
