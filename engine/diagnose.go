@@ -544,44 +544,70 @@ func (f *diagFitter) refine(c *diagCand) {
 	if len(c.set) == 0 || c.pos == nil {
 		return
 	}
+	k := len(c.set)
+	if k == 3 {
+		f.refineVolumes(c)
+		return
+	}
+	// Singles and pairs: the part of each space filled, q ∈ [0, 1], and one
+	// permeability μ for the group, within the range of the trade's values
+	// (SOLAS II-1 Reg. 7-3: 0.60 stores to 0.95, here 0.5 to 1); the water
+	// is q·μ·V. So written the misfit has no kink where a space fills up
+	// (a space full to its top only says q = 1, whatever μ).
+	mu0 := f.v.Compartments[c.set[0]].Permeability
+	water := func(x []float64) []float64 {
+		w := make([]float64, k)
+		for i := range w {
+			w[i] = x[i] * x[k] * c.moul[i]
+		}
+		return w
+	}
+	x0 := make([]float64, k+1)
+	x0[k] = mu0
+	for i := range c.set {
+		x0[i] = math.Min(1, c.vol[i]/(mu0*c.moul[i]))
+	}
+	if k == 1 {
+		// A coarse look along the space first: the misfit can be flat
+		// where the start lies (two effects of the water cancelling at the
+		// marks read) and steep elsewhere (the deck edge going under), so
+		// a start from the plane alone may stall.
+		best := c.misfit
+		for _, q := range []float64{0.05, 0.2, 0.4, 0.6, 0.8, 1} {
+			x := []float64{q, mu0}
+			if res, _, ok := f.readingResiduals(f.damage(c.set, water(x), mu0)); ok && sumSq(res) < best {
+				best, x0 = sumSq(res), x
+			}
+		}
+	}
+	lo, hi, h := make([]float64, k+1), make([]float64, k+1), make([]float64, k+1)
+	for i := 0; i < k; i++ {
+		hi[i], h[i] = 1, math.Max(1e-3, 0.5/c.moul[i])
+	}
+	lo[k], hi[k], h[k] = 0.5, 1, 0.01
+	x, _, ok := boundedLeastSquares(x0, lo, hi, h, 10, 0, func(x []float64) ([]float64, bool) {
+		res, _, ok := f.readingResiduals(f.damage(c.set, water(x), x[k]))
+		return res, ok
+	})
+	if ok {
+		c.vol, c.mu = water(x), x[k]
+		f.forward(c)
+	}
+}
+
+// refineVolumes fits the water of each space of c (triples) on the
+// readings, each at its own permeability.
+func (f *diagFitter) refineVolumes(c *diagCand) {
 	lo, hi, h := make([]float64, len(c.set)), append([]float64(nil), c.moul...), make([]float64, len(c.set))
 	for i := range c.set {
 		h[i] = math.Max(0.5, 1e-3*c.moul[i])
 	}
-	k := len(c.set)
-	x0 := append([]float64(nil), c.vol...)
-	if k == 1 {
-		// A coarse look along the space's volume first: the misfit can be
-		// flat where the start lies (two effects of the water cancelling
-		// at the marks read) and steep elsewhere (the deck edge going
-		// under), so a start from the plane alone may stall.
-		best := c.misfit
-		for _, frac := range []float64{0.05, 0.2, 0.4, 0.6, 0.8, 0.95} {
-			w := []float64{frac * c.moul[0]}
-			if res, _, ok := f.readingResiduals(f.damage(c.set, w, 0)); ok && sumSq(res) < best {
-				best, x0 = sumSq(res), w
-			}
-		}
-	}
-	if k < 3 {
-		// The permeability too, one for the group, within the range of
-		// the trade's values (SOLAS II-1 Reg. 7-3: 0.60 stores to 0.95).
-		mu := f.v.Compartments[c.set[0]].Permeability
-		x0, lo, hi, h = append(x0, mu), append(lo, 0.5), append(hi, 1), append(h, 0.01)
-	}
-	x, _, ok := boundedLeastSquares(x0, lo, hi, h, 6, 0, func(x []float64) ([]float64, bool) {
-		mu := 0.0
-		if len(x) > k {
-			mu = x[k]
-		}
-		res, _, ok := f.readingResiduals(f.damage(c.set, x[:k], mu))
+	x, _, ok := boundedLeastSquares(c.vol, lo, hi, h, 6, 0, func(x []float64) ([]float64, bool) {
+		res, _, ok := f.readingResiduals(f.damage(c.set, x, 0))
 		return res, ok
 	})
 	if ok {
-		c.vol = x[:k]
-		if len(x) > k {
-			c.mu = x[k]
-		}
+		c.vol = x
 		f.forward(c)
 	}
 }

@@ -83,14 +83,16 @@ func boundedLeastSquares(x0, lo, hi, h []float64, maxIt int, enough float64, res
 			}
 			clipTo(xn, lo, hi)
 			rn, ok := res(xn)
-			if ok && sumSq(rn) < cost {
-				small := true
+			if cn := sumSq(rn); ok && cn < cost {
+				// Converged: the step is a small part of the difference
+				// step and the misfit hardly fell.
+				small := cost-cn <= 1e-4*cost
 				for p := 0; p < k; p++ {
 					if math.Abs(xn[p]-x[p]) > 1e-3*h[p] {
 						small = false
 					}
 				}
-				x, r, cost = xn, rn, sumSq(rn)
+				x, r, cost = xn, rn, cn
 				lambda = math.Max(lambda/10, 1e-9)
 				improved = true
 				if small {

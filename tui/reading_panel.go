@@ -83,7 +83,9 @@ func (m model) readingMsg(msg tea.Msg) (tea.Model, tea.Cmd, bool) {
 	switch msg := msg.(type) {
 	case diagProgressMsg:
 		if msg.seq != m.rd.seq {
-			return m, nil, true
+			// An older diagnosis: read it to its end so that its goroutine
+			// can finish, and show none of it.
+			return m, waitDiagnosis(msg.ch), true
 		}
 		m.rd.done, m.rd.total = msg.done, msg.total
 		return m, waitDiagnosis(msg.ch), true
