@@ -76,8 +76,8 @@ type model struct {
 	animate  bool // false in tests: no spinner ticks
 	input    textinput.Model
 	bar      progress.Model // a flooding run's progress, drawn with ViewAs
-	editing  bool
 	inputErr string
+	mode     mode // what the keys work on
 
 	form  floodForm   // the hole-and-pumps form of a flooding run
 	flood floodState  // the flooding run and its panel
@@ -117,6 +117,15 @@ type model struct {
 	height     int
 	lay        layout
 }
+
+// mode is what the keys work on: one value routes every key.
+type mode int
+
+const (
+	modeBrowse mode = iota // the list, the panels and their keys
+	modeForm               // the flooding run's form (floodForm.update)
+	modeMu                 // a permeability being typed (editKey)
+)
 
 type undoEntry struct {
 	damage engine.Damage
@@ -222,6 +231,7 @@ func (m *model) setStyles() {
 	m.input.TextStyle = m.st.Value
 	m.bar = progress.New(progress.WithSolidFill(m.st.BarColor), progress.WithColorProfile(m.rend.ColorProfile()))
 	m.bar.EmptyColor = ""
+	m.form.st = m.st
 	for k := range m.form.fields {
 		m.form.fields[k].PromptStyle, m.form.fields[k].TextStyle = m.st.Prompt, m.st.Value
 	}
@@ -322,10 +332,10 @@ func (m model) update(msg tea.Msg) (tea.Model, tea.Cmd) {
 			}
 			return cur, tea.Batch(cmds...)
 		}
-		switch {
-		case m.form.on:
+		switch m.mode {
+		case modeForm:
 			return m.formKey(msg)
-		case m.editing:
+		case modeMu:
 			return m.editKey(msg)
 		}
 		return m.key(msg)
@@ -354,19 +364,11 @@ func (m model) key(msg tea.KeyMsg) (tea.Model, tea.Cmd) {
 	case key.Matches(msg, k.Hand):
 		m.showHand = !m.showHand
 	case key.Matches(msg, k.WorkUp), key.Matches(msg, k.WorkDown):
-		step := 3
+		step := scrollStep
 		if key.Matches(msg, k.WorkUp) {
-			step = -3
+			step = -scrollStep
 		}
-		// The righting options while their panel is shown, else the hand
-		// working while it is shown, else the flags and criteria.
-		if m.rem.show {
-			m.rem.scroll = min(max(0, m.rem.scroll+step), m.remedyScrollMax())
-		} else if m.showHand && m.cur != nil && m.cur.Hand != nil {
-			m.handScroll = min(max(0, m.handScroll+step), max(0, len(m.cur.Hand.Steps)-1))
-		} else {
-			m.textScroll = min(max(0, m.textScroll+step), 200)
-		}
+		m.scroll(step)
 	case key.Matches(msg, k.Palette):
 		m.palette = (m.palette + 1) % len(paletteNames)
 		m.setStyles()
@@ -424,7 +426,7 @@ func (m model) key(msg tea.KeyMsg) (tea.Model, tea.Cmd) {
 		}
 		return m.setMu(mu)
 	case key.Matches(msg, k.MuSet):
-		m.editing = true
+		m.mode = modeMu
 		m.inputErr = ""
 		m.input.SetValue("")
 		m.input.Placeholder = muText(m.mu(m.damage, m.sel))
@@ -449,6 +451,32 @@ func (m model) key(msg tea.KeyMsg) (tea.Model, tea.Cmd) {
 		return m.apply(m.v.Intact(), "all compartments intact (reset)")
 	}
 	return m, nil
+}
+
+// scroll moves by step lines (up when negative) the text the scroll keys
+// work on: the righting options while their panel is shown, else the hand
+// working while it is shown (a step at a time), else the flags and
+// criteria where they are on screen.
+func (m *model) scroll(step int) {
+	switch {
+	case m.rem.show:
+		head, body, foot := m.remedyParts(m.width, m.lay.bodyH)
+		m.rem.scroll = scrolled(m.rem.scroll, body, m.lay.bodyH-len(head)-len(foot), step)
+	case m.showHand && m.cur != nil && m.cur.Hand != nil:
+		m.handScroll = scrolled(m.handScroll, make([]string, len(m.cur.Hand.Steps)), 1, step)
+	case m.cur != nil:
+		w, h := m.criteriaBox()
+		m.textScroll = scrolled(m.textScroll, m.criteriaLines(w, true), h-1, step)
+	}
+}
+
+// criteriaBox is the size the flags and criteria are drawn in: the wide
+// screen's third column, else the narrow screen's sheet.
+func (m model) criteriaBox() (w, h int) {
+	if m.lay.wide {
+		return m.lay.thirdW, m.lay.topH
+	}
+	return m.lay.rightW, m.lay.sheetH
 }
 
 // move selects the compartment steps rows down the list (up when
@@ -476,7 +504,7 @@ func (m *model) move(steps int) {
 func (m model) editKey(msg tea.KeyMsg) (tea.Model, tea.Cmd) {
 	switch msg.Type {
 	case tea.KeyEsc:
-		m.editing = false
+		m.mode = modeBrowse
 		m.input.Blur()
 		return m, nil
 	case tea.KeyCtrlC:
@@ -487,7 +515,7 @@ func (m model) editKey(msg tea.KeyMsg) (tea.Model, tea.Cmd) {
 			m.inputErr = err.Error()
 			return m, nil
 		}
-		m.editing = false
+		m.mode = modeBrowse
 		m.input.Blur()
 		if mu == m.mu(m.damage, m.sel) {
 			return m, nil

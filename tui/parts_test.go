@@ -187,19 +187,19 @@ func TestKeys(t *testing.T) {
 	}
 	// Type an exact value: a bad one is refused and the prompt stays.
 	m = press(t, m, "m", "1", ".", "5", "enter")
-	if !m.editing || m.inputErr == "" {
-		t.Fatalf("μ 1.5 accepted (editing %v, error %q)", m.editing, m.inputErr)
+	if m.mode != modeMu || m.inputErr == "" {
+		t.Fatalf("μ 1.5 accepted (editing %v, error %q)", m.mode == modeMu, m.inputErr)
 	}
 	if !strings.Contains(m.View(), "outside") {
 		t.Error("the refusal is not on screen")
 	}
 	m = press(t, m, "esc")
-	if m.editing || m.mu(m.damage, i) != 0.05 {
+	if m.mode == modeMu || m.mu(m.damage, i) != 0.05 {
 		t.Error("esc did not cancel")
 	}
 	m = press(t, m, "m", "8", "2", "%", "enter")
-	if m.editing || math.Abs(m.mu(m.damage, i)-0.82) > 1e-12 {
-		t.Errorf("82%%: μ %v, editing %v", m.mu(m.damage, i), m.editing)
+	if m.mode == modeMu || math.Abs(m.mu(m.damage, i)-0.82) > 1e-12 {
+		t.Errorf("82%%: μ %v, editing %v", m.mu(m.damage, i), m.mode == modeMu)
 	}
 	m = press(t, m, "space")
 	if !m.damage[i].Open {

@@ -52,7 +52,7 @@ func (m model) remedyPanel(w, h int) []string {
 func (m model) remedyScrollMax() int {
 	w, h := m.width, m.lay.bodyH
 	head, body, foot := m.remedyParts(w, h)
-	return max(0, len(body)-(h-len(head)-len(foot)))
+	return scrolled(len(body), body, h-len(head)-len(foot), 0)
 }
 
 // remedyParts is the panel's fixed head, its scrolling body and its fixed

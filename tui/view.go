@@ -189,10 +189,10 @@ func (m model) logView(w, n int) []string {
 // footView is the help bar, or the permeability prompt while one is typed.
 func (m model) footView() []string {
 	st := m.st
-	if m.form.on {
-		return m.formView()
-	}
-	if m.editing {
+	switch m.mode {
+	case modeForm:
+		return m.form.view(m.width, formLines)
+	case modeMu:
 		name := ""
 		if len(m.v.Compartments) > 0 {
 			name = m.v.Compartments[m.sel].Name
