@@ -85,7 +85,7 @@ func (m model) openForm() (tea.Model, tea.Cmd) {
 		state: m.damage[i], animate: m.animate, st: m.st}
 	vals := [numFields]string{short(area, 4), short(z, 2), short(cd, 2), short(sp.pump, 0)}
 	for k := range f.fields {
-		in := textinput.New()
+		in := newTextField()
 		in.Prompt = ""
 		in.CharLimit = 9
 		in.SetValue(vals[k])

@@ -51,7 +51,6 @@ type (
 	// baselineMsg carries the intact assessment, the reference for every
 	// "since intact" figure.
 	baselineMsg struct{ a engine.Assessment }
-	logErrMsg   struct{ err error }
 	reportMsg   struct {
 		path string
 		err  error
@@ -143,6 +142,7 @@ const (
 
 // newModel builds the dashboard for v. info may be nil.
 func newModel(v *engine.Vessel, info *vessels.Info, opts Options) model {
+	v, info, opts = plainNames(v), plainInfo(info), plainOptions(opts)
 	m := model{
 		v:       v,
 		opts:    opts,
@@ -151,7 +151,7 @@ func newModel(v *engine.Vessel, info *vessels.Info, opts Options) model {
 		help:    help.New(),
 		spin:    spinner.New(spinner.WithSpinner(spinner.MiniDot)),
 		animate: true,
-		input:   textinput.New(),
+		input:   newTextField(),
 		rend:    lipgloss.DefaultRenderer(),
 		damage:  v.Intact(),
 		latest:  new(atomic.Int64),
@@ -289,9 +289,10 @@ func (m model) update(msg tea.Msg) (tea.Model, tea.Cmd) {
 	case resultMsg:
 		return m.takeResult(msg)
 
-	case logErrMsg:
-		m.log = append(m.log, m.now().Format("15:04:05")+" event log file: "+msg.err.Error())
-		return m, nil
+	case logStatusMsg:
+		return m.takeLogStatus()
+	case logRetryMsg:
+		return m.retryLog()
 
 	case reportMsg:
 		line := "report written to " + msg.path
@@ -319,6 +320,9 @@ func (m model) update(msg tea.Msg) (tea.Model, tea.Cmd) {
 		return m.takeRemedies(msg)
 
 	case tea.KeyMsg:
+		if m.lay.small {
+			return m.smallScreenKey(msg)
+		}
 		if msg.Type == tea.KeyRunes && len(msg.Runes) > 1 && !msg.Paste {
 			// Keys pressed faster than the terminal is read arrive as one
 			// message ("jj"): take them one at a time, each in the mode the
@@ -565,8 +569,9 @@ func (m model) commit(d engine.Damage, what string) (tea.Model, tea.Cmd) {
 	m.seq++
 	m.latest.Store(int64(m.seq))
 	m.changes[m.seq] = change{at: m.now(), what: what}
-	spin := m.startSpinner() // before m is copied out: the order is not Go's to promise
-	return m, tea.Batch(recompute(m.v, cloneDamage(d), m.seq, m.latest), spin)
+	logged := m.logChange(m.seq, m.changes[m.seq]) // in the file before it is computed or shown
+	spin := m.startSpinner()                       // before m is copied out: the order is not Go's to promise
+	return m, tea.Batch(logged, recompute(m.v, cloneDamage(d), m.seq, m.latest), spin)
 }
 
 // recompute returns the Cmd that assesses damage state d, change number seq.
@@ -618,8 +623,8 @@ func (m model) takeResult(r resultMsg) (tea.Model, tea.Cmd) {
 		ch := m.changes[m.logNext]
 		delete(m.results, m.logNext)
 		delete(m.changes, m.logNext)
+		cmds = append(cmds, m.addLogResult(m.logNext, ch, res))
 		m.logNext++
-		cmds = append(cmds, m.addLogPair(ch.at, ch.what+" → "+res[0], ch.what+" → "+res[1]))
 	}
 	return m, tea.Batch(cmds...)
 }
@@ -649,21 +654,8 @@ func (m *model) addLog(at time.Time, line string) tea.Cmd { return m.addLogPair(
 
 // addLogPair is addLog with a fuller line for the file than for the screen.
 func (m *model) addLogPair(at time.Time, line, fileLine string) tea.Cmd {
-	m.log = append(m.log, at.Format("15:04:05")+" "+line)
-	if len(m.log) > 200 {
-		m.log = m.log[len(m.log)-200:]
-	}
-	if m.file == nil {
-		return nil
-	}
-	m.file.add(at.Format(time.RFC3339) + "  " + fileLine)
-	f := m.file
-	return func() tea.Msg {
-		if err := f.flush(); err != nil {
-			return logErrMsg{err}
-		}
-		return nil
-	}
+	m.screenLog(at, line)
+	return m.fileLine(at, fileLine)
 }
 
 func (m *model) startSpinner() tea.Cmd {

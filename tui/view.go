@@ -74,6 +74,7 @@ func (m model) headerView(w int) string {
 		sum = append(sum, "NO FLOATING POSITION")
 	}
 	right := st.Header.Render(strings.Join(sum, " · "))
+	right = m.logWarning() + right
 	if m.pending() {
 		right = st.Busy.Render(m.spin.View()+" computing") + "  " + right
 	}

@@ -44,11 +44,20 @@ type CompartmentInfo struct {
 // Parse reads a vessel file. file is the name used in messages. Any problem
 // in the file is returned as Problems, all of them at once.
 func Parse(file string, data []byte) (*engine.Vessel, *Info, error) {
+	if len(data) > MaxFileBytes {
+		return nil, nil, Problems{{File: file, Line: 1, Key: "syntax", Msg: errTooLarge.Error()}}
+	}
+	if p := tooDeep(file, data); p != nil {
+		return nil, nil, Problems{*p}
+	}
 	var doc map[string]any
 	if _, err := toml.Decode(string(data), &doc); err != nil {
 		return nil, nil, syntaxProblem(file, err)
 	}
 	r := &reader{file: file, lines: indexLines(string(data))}
+	if r.tooMany("", doc) {
+		return nil, nil, r.probs.sorted()
+	}
 	v, info := r.vessel(r.table("", doc))
 	if len(r.probs) > 0 {
 		return nil, nil, r.probs.sorted()
@@ -117,6 +126,12 @@ func (r *reader) vessel(root *table) (*engine.Vessel, *Info) {
 	weights := r.weights(root.entries("weight", "one item of the loading condition"))
 	comps, cinfo := r.compartments(root.entries("compartment", "one space of the ship"), hull)
 	openings := r.openings(root.entries("opening", "a point where water would spread"))
+	if hull != nil && (marginOK && margin < hull.DepthM || !root.has("margin_line_depth")) {
+		r.marginBelowKeel(hull, margin, marginOK)
+	}
+	if hull != nil {
+		r.openingsNearHull(hull, openings)
+	}
 	marks := r.draftMarks(root.entries("draft_mark", "a draft mark on the shell"), hull)
 	root.finish()
 
@@ -243,7 +258,7 @@ func (r *reader) stations(t *table, sections []*table) ([]engine.Station, bool) 
 		ok = ok && offOK
 		out = append(out, engine.Station{X: x, Offsets: off})
 	}
-	return out, ok
+	return out, ok && !r.spanTooLong(out)
 }
 
 func (r *reader) offsets(s *table) ([]engine.Point, bool) {
@@ -283,6 +298,9 @@ func (r *reader) offsets(s *table) ([]engine.Point, bool) {
 			r.addf(ep, "[%v, %v] is not a pair of finite metres (at most %g in size)", y, z, maxMagnitude)
 			ok = false
 			continue
+		}
+		if r.pointTooFar(ep, y, z) {
+			ok = false
 		}
 		if y < 0 {
 			r.addf(ep, "half-breadth %g m is negative: give the starboard half, 0 or more", y)
