@@ -18,7 +18,7 @@ func (m model) floodPanel(w, h int) []string {
 	if len(text)+minPlot > h {
 		return fit(m.floodText(w, h, h), w, h)
 	}
-	out := append(text, m.floodPlot(w, h-len(text))...)
+	out := append(text, m.cached(picFloodPlot, w, h-len(text), m.floodPlot)...)
 	return fit(out, w, h)
 }
 
@@ -466,7 +466,7 @@ func (m model) floodRow(w, h int) []string {
 	sw := (w - 2 - tw) / 2
 	pw := w - 2 - tw - sw
 	return besides(sep,
-		fit(m.sectionView(sw, h), sw, h),
+		fit(m.cached(picSection, sw, h, m.sectionView), sw, h),
 		fit(m.floodText(tw, h, h), tw, h),
-		fit(m.floodPlot(pw, h), pw, h))
+		fit(m.cached(picFloodPlot, pw, h, m.floodPlot), pw, h))
 }

@@ -115,6 +115,7 @@ type model struct {
 	width      int
 	height     int
 	lay        layout
+	pics       *pictureCache // the pictures as last drawn (View's only state)
 }
 
 // mode is what the keys work on: one value routes every key.
@@ -144,6 +145,7 @@ const (
 func newModel(v *engine.Vessel, info *vessels.Info, opts Options) model {
 	v, info, opts = plainNames(v), plainInfo(info), plainOptions(opts)
 	m := model{
+		pics:    &pictureCache{},
 		v:       v,
 		opts:    opts,
 		now:     time.Now,

@@ -123,11 +123,11 @@ func (m model) sheetView(w, h int) []string {
 func (m model) pictureView(which, w, h int) []string {
 	switch which {
 	case picSection:
-		return m.sectionView(w, h)
+		return m.cached(picSection, w, h, m.sectionView)
 	case picProfile:
-		return m.profileView(w, h)
+		return m.cached(picProfile, w, h, m.profileView)
 	case picGZ:
-		return m.gzView(w, h)
+		return m.cached(picGZ, w, h, m.gzView)
 	}
 	return m.criteriaView(w, h, true)
 }
@@ -168,9 +168,9 @@ func (m model) wideBody() []string {
 		pics = m.handView(m.width, l.picH, false)
 	default:
 		pics = besides(sep,
-			fit(m.sectionView(l.picW[0], l.picH), l.picW[0], l.picH),
-			fit(m.profileView(l.picW[1], l.picH), l.picW[1], l.picH),
-			fit(m.gzView(l.picW[2], l.picH), l.picW[2], l.picH))
+			fit(m.cached(picSection, l.picW[0], l.picH, m.sectionView), l.picW[0], l.picH),
+			fit(m.cached(picProfile, l.picW[1], l.picH, m.profileView), l.picW[1], l.picH),
+			fit(m.cached(picGZ, l.picW[2], l.picH, m.gzView), l.picW[2], l.picH))
 	}
 	out := append(top, rule)
 	return append(out, pics...)
