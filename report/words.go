@@ -69,18 +69,22 @@ func Signed(x float64, prec int, unit string) string {
 // signed is Signed, the report package's own short name for it.
 func signed(x float64, prec int, unit string) string { return Signed(x, prec, unit) }
 
-// heelSide returns the heel's size at prec decimals in degrees and its
-// side: +1 starboard, -1 port, 0 upright (the figure rounds to zero).
-func heelSide(deg float64, prec int) (string, int) {
-	s := Fixed(math.Abs(deg), prec, "°")
+// sized returns the size of x at prec decimals with its unit and its
+// sign: +1, -1, or 0 when it rounds to zero (it then has no side).
+func sized(x float64, prec int, unit string) (string, int) {
+	s := Fixed(math.Abs(x), prec, unit)
 	switch {
-	case s == Fixed(0, prec, "°"):
+	case s == Fixed(0, prec, unit):
 		return s, 0
-	case deg > 0:
+	case x > 0:
 		return s, 1
 	}
 	return s, -1
 }
+
+// heelSide is a heel's size in degrees and its side: +1 starboard, -1
+// port, 0 upright.
+func heelSide(deg float64, prec int) (string, int) { return sized(deg, prec, "°") }
 
 // Heel says a heel in a sentence: "3.2° to starboard", "0.5° to port",
 // "upright" (when it rounds to zero at prec decimals).
@@ -137,18 +141,9 @@ func HeelWords(deg float64) string {
 	return s + " " + HeelSide(deg, 2)
 }
 
-// trimSide returns the trim's size at prec decimals in metres and its
-// sense: +1 by the stern, -1 by the head, 0 even keel.
-func trimSide(m float64, prec int) (string, int) {
-	s := Fixed(math.Abs(m), prec, "m")
-	switch {
-	case s == Fixed(0, prec, "m"):
-		return s, 0
-	case m > 0:
-		return s, 1
-	}
-	return s, -1
-}
+// trimSide is a trim's size in metres and its sense: +1 by the stern,
+// -1 by the head, 0 even keel.
+func trimSide(m float64, prec int) (string, int) { return sized(m, prec, "m") }
 
 // trimSenseWords are the senses of a trim, by sense+1.
 var trimSenseWords = [3]string{"by the head", "even keel", "by the stern"}
