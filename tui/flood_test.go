@@ -75,15 +75,7 @@ func TestFloodPanelGolden(t *testing.T) {
 	check := func(t *testing.T, name string, m model, w, h int) {
 		t.Helper()
 		view := m.View()
-		lines := strings.Split(view, "\n")
-		if len(lines) != h {
-			t.Errorf("view has %d lines, want %d", len(lines), h)
-		}
-		for i, l := range lines {
-			if lw := lipgloss.Width(l); lw != w {
-				t.Errorf("line %d is %d wide, want %d: %q", i+1, lw, w, l)
-			}
-		}
+		checkScreen(t, view, w, h)
 		checkGolden(t, name, view)
 	}
 	for _, sz := range [][2]int{{80, 24}, {120, 40}} {
