@@ -37,6 +37,7 @@ type FloodStage struct {
 	Position *Position
 	NoEq     *NoEquilibrium
 	Criteria []CriterionResult
+	Strength *Strength // the hull girder at this stage (strength.go); nil without weight extents
 }
 
 // FloodProgress is what a run can show while it computes.
@@ -299,6 +300,7 @@ func (r *FloodRun) stage(f, of float64) FloodStage {
 		if r.c.Criteria != nil {
 			st.Criteria = r.c.Criteria(r.v, r.damageAt(e.water), p)
 		}
+		st.Strength, _ = GirderStrength(r.v, r.damageAt(e.water), &p)
 	} else {
 		st.NoEq = e.noEq
 	}

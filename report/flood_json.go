@@ -93,6 +93,7 @@ type floodStDoc struct {
 	Position *floodPosDoc   `json:"position"`
 	NoEq     string         `json:"no_equilibrium"`
 	Criteria []CriterionDoc `json:"criteria"`
+	Strength *StrengthDoc   `json:"strength"` // the hull girder at the stage; null without weight extents
 }
 
 type floodSolver struct {
@@ -173,7 +174,7 @@ func FloodJSON(w io.Writer, f Flood) error {
 	}
 	for _, s := range r.Stages {
 		st := floodStDoc{Fraction: Num(s.Fraction), WaterM3: Num(s.WaterM3), Reached: s.Reached,
-			Position: posDoc(s.Position), Criteria: CriterionDocs(s.Criteria)}
+			Position: posDoc(s.Position), Criteria: CriterionDocs(s.Criteria), Strength: StrengthJSON(s.Strength, nil)}
 		if s.Reached {
 			st.TimeS = numPtr(s.TimeS)
 		}

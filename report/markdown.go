@@ -109,6 +109,8 @@ func Markdown(w io.Writer, r Report) error {
 	}
 	e.line()
 
+	markdownStrength(e, r)
+
 	e.line("## Hand method")
 	e.line()
 	if h := a.Hand; h == nil {

@@ -43,8 +43,11 @@ type Report struct {
 	// state (engine.FindRemedies), shown after the flags; nil leaves them
 	// out of every format.
 	Remedies *engine.RemedySet
-	Made     time.Time // when the assessment was made (shown in UTC)
-	Version  string    // heelwatch's version
+	// IntactStrength is the hull girder of the same ship intact, shown
+	// beside a damaged state's (nil when intact or not worked out).
+	IntactStrength *engine.Strength
+	Made           time.Time // when the assessment was made (shown in UTC)
+	Version        string    // heelwatch's version
 }
 
 // New returns the Report of assessment a of vessel v: the open
@@ -58,6 +61,9 @@ func New(v *engine.Vessel, file string, a engine.Assessment, made time.Time, ver
 		}
 		r.Open = append(r.Open, c.Name)
 		r.Permeabilities[c.Name] = v.Permeability(a.Damage, i)
+	}
+	if a.Strength != nil && engine.IsDamaged(a.Damage) {
+		r.IntactStrength, _ = engine.IntactStrength(v)
 	}
 	return r
 }

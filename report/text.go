@@ -127,6 +127,8 @@ func Text(w io.Writer, r Report) error {
 		writeLines(e, t.lines("  "))
 	}
 
+	textStrength(e, r)
+
 	e.line()
 	if h := a.Hand; h != nil {
 		e.line("Hand method (lost buoyancy, small angles)")

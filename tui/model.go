@@ -78,9 +78,10 @@ type model struct {
 	inputErr string
 	mode     mode // what the keys work on
 
-	form  floodForm   // the hole-and-pumps form of a flooding run
-	flood floodState  // the flooding run and its panel
-	rem   remedyState // the righting options and their panel
+	form   floodForm   // the hole-and-pumps form of a flooding run
+	flood  floodState  // the flooding run and its panel
+	rem    remedyState // the righting options and their panel
+	girder girderPanel // the hull girder's shear force and bending moment (strength_view.go)
 
 	rend    *lipgloss.Renderer
 	palette int
@@ -389,6 +390,12 @@ func (m model) key(msg tea.KeyMsg) (tea.Model, tea.Cmd) {
 		return m, m.writeReport()
 	case key.Matches(msg, k.Remedies):
 		return m.remedyKey()
+	case key.Matches(msg, k.Girder):
+		return m.girderKey()
+	case m.girder.handles(msg):
+		var cmd tea.Cmd
+		m.girder, cmd = m.girder.update(msg)
+		return m, cmd
 	case key.Matches(msg, k.RunPanel):
 		if m.rem.show {
 			// The righting options give way to the run's panel.

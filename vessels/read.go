@@ -124,7 +124,7 @@ func (r *reader) vessel(root *table) (*engine.Vessel, *Info) {
 		r.addf("margin_line_depth", "%g m is not less than the depth %g m: the margin line lies just below the deck (SOLAS: 0.076 m)", margin, hull.DepthM)
 	}
 
-	weights := r.weights(root.entries("weight", "one item of the loading condition"))
+	weights := r.weights(root.entries("weight", "one item of the loading condition"), hull)
 	comps, cinfo := r.compartments(root.entries("compartment", "one space of the ship"), hull)
 	openings := r.openings(root.entries("opening", "a point where water would spread"))
 	if hull != nil && (marginOK && margin < hull.DepthM || !root.has("margin_line_depth")) {
@@ -134,6 +134,7 @@ func (r *reader) vessel(root *table) (*engine.Vessel, *Info) {
 		r.openingsNearHull(hull, openings)
 	}
 	marks := r.draftMarks(root.entries("draft_mark", "a draft mark on the shell"), hull)
+	girder := r.girder(root, hull)
 	root.finish()
 
 	if len(r.probs) > 0 || hull == nil {
@@ -143,6 +144,7 @@ func (r *reader) vessel(root *table) (*engine.Vessel, *Info) {
 		Name: name, WaterDensity: rho, Hull: hull, Weights: weights,
 		Compartments: comps, Openings: openings, MarginLineM: margin, CriteriaSets: criteria, ShipType: info.ShipType,
 		DraftMarks: marks,
+		Girder:     girder,
 	})
 	if err != nil {
 		r.addf("weight", "%v", err)
@@ -325,7 +327,7 @@ func (r *reader) offsets(s *table) ([]engine.Point, bool) {
 }
 
 // weights reads the [[weight]] tables.
-func (r *reader) weights(ts []*table) []engine.Weight {
+func (r *reader) weights(ts []*table, hull *engine.Hull) []engine.Weight {
 	if len(ts) == 0 {
 		r.addf("weight", "missing: the loading condition needs at least one [[weight]] (lightship at least) with name, mass, lcg, vcg")
 	}
@@ -335,7 +337,8 @@ func (r *reader) weights(ts []*table) []engine.Weight {
 		var w engine.Weight
 		w.Name, _ = r.name(t, names, "weight")
 		w.MassT, _ = t.positive("mass", "t", true)
-		w.LCGM, _ = t.num("lcg", "m from the aft perpendicular", true)
+		var lcgOK bool
+		w.LCGM, lcgOK = t.num("lcg", "m from the aft perpendicular", true)
 		w.TCGM, _ = t.num("tcg", "m from the centreline, + to starboard", false)
 		w.VCGM, _ = t.num("vcg", "m above the baseline", true)
 		if f, ok := t.num("fsm", "t·m", false); ok {
@@ -344,6 +347,7 @@ func (r *reader) weights(ts []*table) []engine.Weight {
 			}
 			w.FSMTm = f
 		}
+		w.ExtentM = r.weightExtent(t, w.LCGM, lcgOK, hull)
 		t.finish()
 		out = append(out, w)
 	}
