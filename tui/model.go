@@ -110,9 +110,8 @@ type model struct {
 	sel        int
 	offset     int
 	picture    int
-	showHand   bool
-	handScroll int // the first step of the hand working shown
-	textScroll int // the first line of the flags and criteria shown
+	hand       handPanel // the hand method's panel
+	textScroll int       // the first line of the flags and criteria shown
 	width      int
 	height     int
 	lay        layout
@@ -352,6 +351,14 @@ func (m model) update(msg tea.Msg) (tea.Model, tea.Cmd) {
 
 func (m model) key(msg tea.KeyMsg) (tea.Model, tea.Cmd) {
 	k := m.keys
+	if !m.rem.show || key.Matches(msg, k.Hand) {
+		// The hand panel's own keys (the righting options' panel, when
+		// shown, takes the scroll keys first).
+		var took bool
+		if m.hand, took = m.hand.with(m.cur, m.st).update(msg, k); took {
+			return m, nil
+		}
+	}
 	n := len(m.v.Compartments)
 	switch {
 	case key.Matches(msg, k.Quit):
@@ -368,8 +375,6 @@ func (m model) key(msg tea.KeyMsg) (tea.Model, tea.Cmd) {
 		m.move(len(m.rows))
 	case key.Matches(msg, k.Picture):
 		m.picture = (m.picture + 1) % numPictures
-	case key.Matches(msg, k.Hand):
-		m.showHand = !m.showHand
 	case key.Matches(msg, k.WorkUp), key.Matches(msg, k.WorkDown):
 		step := scrollStep
 		if key.Matches(msg, k.WorkUp) {
@@ -475,8 +480,6 @@ func (m *model) scroll(step int) {
 	case m.rem.show:
 		head, body, foot := m.remedyParts(m.width, m.lay.bodyH)
 		m.rem.scroll = scrolled(m.rem.scroll, body, m.lay.bodyH-len(head)-len(foot), step)
-	case m.showHand && m.cur != nil && m.cur.Hand != nil:
-		m.handScroll = scrolled(m.handScroll, make([]string, len(m.cur.Hand.Steps)), 1, step)
 	case m.cur != nil:
 		w, h := m.criteriaBox()
 		m.textScroll = scrolled(m.textScroll, m.criteriaLines(w, true), h-1, step)

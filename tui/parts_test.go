@@ -69,7 +69,7 @@ func TestNumberGuard(t *testing.T) {
 	bad.Hand = &engine.HandWorking{GMM: nan, HeelDeg: math.Inf(1), Steps: []engine.HandStep{{Label: "sinkage", Formula: "V/A", Value: nan, Unit: "m"}}}
 	m = drive(t, m, resultMsg{seq: m.seq, a: bad})
 	for _, hand := range []bool{false, true} {
-		m.showHand = hand
+		m.hand.show = hand
 		for _, size := range [][2]int{{120, 40}, {80, 24}} {
 			mm, _ := m.Update(tea.WindowSizeMsg{Width: size[0], Height: size[1]})
 			mv := mm.(model)
@@ -451,11 +451,11 @@ func TestHandWorkingShown(t *testing.T) {
 			t.Errorf("%v: the first step of the working is not on screen", size)
 		}
 		m = press(t, m, "]")
-		if m.handScroll == 0 || strings.Contains(m.View(), "steps 1–") {
+		if m.hand.scroll == 0 || strings.Contains(m.View(), "steps 1–") {
 			t.Errorf("%v: ] did not scroll the working", size)
 		}
 		m = press(t, m, "[")
-		if m.handScroll != 0 {
+		if m.hand.scroll != 0 {
 			t.Errorf("%v: [ did not scroll back", size)
 		}
 	}

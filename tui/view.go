@@ -117,8 +117,8 @@ func (m model) narrowBody() []string {
 // criteria (the picture key turns to the next), or the hand working while
 // it is shown.
 func (m model) sheetView(w, h int) []string {
-	if m.showHand {
-		return fit(m.handView(w, h, true), w, h)
+	if m.hand.show {
+		return fit(m.hand.with(m.cur, m.st).view(w, h, true), w, h)
 	}
 	return fit(m.pictureView(m.picture, w, h), w, h)
 }
@@ -144,14 +144,14 @@ func (m model) wideBody() []string {
 	sep := m.st.Dim.Render("│")
 	list := m.listView(l.listW, l.topH)
 	mid := m.figuresView(l.posW)
-	if m.showHand && m.cur != nil {
+	if m.hand.show && m.cur != nil {
 		// The hand method's answers right under the direct figures.
 		if m.cur.Hand != nil {
 			mid = append(mid, m.st.Heading.Render("HAND METHOD"))
-			mid = append(mid, m.handAnswers(l.posW)...)
+			mid = append(mid, m.hand.with(m.cur, m.st).answers(l.posW)...)
 		} else {
 			mid = append(mid, m.st.Heading.Render("HAND METHOD"))
-			for _, s := range wrap(m.handWhy(), l.posW) {
+			for _, s := range wrap(m.hand.with(m.cur, m.st).why(), l.posW) {
 				mid = append(mid, m.st.Dim.Render(s))
 			}
 		}
@@ -169,8 +169,8 @@ func (m model) wideBody() []string {
 		pics = m.floodRow(m.width, l.picH)
 	case m.noPosition():
 		pics = m.bannerView(m.width, l.picH)
-	case m.showHand && m.cur != nil && m.cur.Hand != nil:
-		pics = m.handView(m.width, l.picH, false)
+	case m.hand.with(m.cur, m.st).hasWorking():
+		pics = m.hand.with(m.cur, m.st).view(m.width, l.picH, false)
 	default:
 		pics = besides(sep,
 			fit(m.cached(picSection, l.picW[0], l.picH, m.sectionView), l.picW[0], l.picH),
