@@ -478,7 +478,7 @@ func (m model) key(msg tea.KeyMsg) (tea.Model, tea.Cmd) {
 func (m *model) scroll(step int) {
 	switch {
 	case m.rem.show:
-		head, body, foot := m.remedyParts(m.width, m.lay.bodyH)
+		head, body, foot := m.rem.with(*m).parts(m.width, m.lay.bodyH)
 		m.rem.scroll = scrolled(m.rem.scroll, body, m.lay.bodyH-len(head)-len(foot), step)
 	case m.cur != nil:
 		w, h := m.criteriaBox()
