@@ -95,6 +95,9 @@ func (m model) narrowBody() []string {
 	l := m.lay
 	sep := m.st.Dim.Render("│")
 	list := m.listView(l.listW, l.bodyH)
+	if m.rd.show {
+		return besides(sep, fit(list, l.listW, l.bodyH), fit(m.readingLines(l.rightW, l.bodyH), l.rightW, l.bodyH))
+	}
 	if m.girder.show {
 		return besides(sep, fit(list, l.listW, l.bodyH), fit(m.girderLines(l.rightW, l.bodyH), l.rightW, l.bodyH))
 	}
@@ -163,6 +166,8 @@ func (m model) wideBody() []string {
 	rule := m.st.Dim.Render(strings.Repeat("─", m.width))
 	var pics []string
 	switch {
+	case m.rd.show:
+		pics = m.readingLines(m.width, l.picH)
 	case m.girder.show:
 		pics = m.girderLines(m.width, l.picH)
 	case m.flood.show:
