@@ -114,6 +114,8 @@ func run(args []string, stdout, stderr io.Writer) int {
 		return runVessels(rest, stdout, stderr)
 	case "flood":
 		return runFlood(withVessel(rest), stdout, stderr)
+	case "drill":
+		return runDrill(rest, stdout, stderr)
 	case "help":
 		if len(rest) == 0 {
 			fmt.Fprintf(stdout, mainHelp, vessels.Default)
