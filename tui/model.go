@@ -78,10 +78,11 @@ type model struct {
 	editing  bool
 	inputErr string
 
-	form   floodForm   // the hole-and-pumps form of a flooding run
-	flood  floodState  // the flooding run and its panel
-	rem    remedyState // the righting options and their panel
-	girder girderPanel // the hull girder's shear force and bending moment (strength_view.go)
+	form   floodForm    // the hole-and-pumps form of a flooding run
+	flood  floodState   // the flooding run and its panel
+	rem    remedyState  // the righting options and their panel
+	girder girderPanel  // the hull girder's shear force and bending moment (strength_view.go)
+	rd     readingPanel // draft marks, readings by hand and their diagnosis (reading_panel.go)
 
 	rend    *lipgloss.Renderer
 	palette int
@@ -253,6 +254,9 @@ func (m model) Update(msg tea.Msg) (tea.Model, tea.Cmd) {
 
 // update handles one message.
 func (m model) update(msg tea.Msg) (tea.Model, tea.Cmd) {
+	if mm, cmd, ok := m.readingMsg(msg); ok {
+		return mm, cmd
+	}
 	switch msg := msg.(type) {
 	case tea.WindowSizeMsg:
 		m.width, m.height = msg.Width, msg.Height
@@ -311,6 +315,7 @@ func (m model) update(msg tea.Msg) (tea.Model, tea.Cmd) {
 		return m.takeRemedies(msg)
 
 	case tea.KeyMsg:
+		msg = plainKey(msg)
 		if m.lay.small {
 			return m.smallScreenKey(msg)
 		}

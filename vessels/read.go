@@ -125,7 +125,9 @@ func (r *reader) vessel(root *table) (*engine.Vessel, *Info) {
 
 	weights := r.weights(root.entries("weight", "one item of the loading condition"), hull)
 	comps, cinfo := r.compartments(root.entries("compartment", "one space of the ship"), hull)
-	openings := r.openings(root.entries("opening", "a point where water would spread"))
+	openingTables := root.entries("opening", "a point where water would spread")
+	openings := r.openings(openingTables)
+	r.checkLeadsTo(openingTables, openings, comps)
 	if hull != nil && (marginOK && margin < hull.DepthM || !root.has("margin_line_depth")) {
 		r.marginBelowKeel(hull, margin, marginOK)
 	}
@@ -439,10 +441,11 @@ func (r *reader) compartments(ts []*table, hull *engine.Hull) ([]*engine.Compart
 		}
 		c.Use = use
 		c.Permeability = mu
+		c.PumpM3h = ci.PumpM3h
 		if liquid != nil {
 			if liquid.volumeM3 >= 0 {
-				if vol := c.Volume(); liquid.volumeM3 > vol*(1+1e-9) {
-					r.addf(t.keyPath("fill_m3"), "%g m³ is more than the tank holds (%.1f m³ inside the hull)", liquid.volumeM3, vol)
+				if vol := c.CapacityM3(); liquid.volumeM3 > vol*(1+1e-9) {
+					r.addf(t.keyPath("fill_m3"), "%g m³ is more than the tank holds (%.1f m³: permeability %g × %.1f m³ inside the hull)", liquid.volumeM3, vol, c.Permeability, c.Volume())
 				} else {
 					liquid.Fill = math.Min(liquid.volumeM3/vol, 1)
 				}
@@ -635,6 +638,7 @@ func (r *reader) openings(ts []*table) []engine.Opening {
 			o.Kind = k
 		}
 		o.Weathertight, _ = t.boolean("closed_weathertight")
+		o.LeadsTo = r.leadsTo(t)
 		t.finish()
 		out = append(out, o)
 	}
