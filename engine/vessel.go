@@ -36,6 +36,10 @@ type Opening struct {
 	Kind         string // free text: "vent", "air pipe", "door", …
 	X, Y, Z      float64
 	Weathertight bool // closed weathertight: does not count as a downflooding point
+	// LeadsTo is the compartment (by name) it lets water into; "" for a
+	// space not modelled (a point of downflooding). See connection.go.
+	LeadsTo string
+	AreaM2  float64 // flow area for a run through it, m²; 0: DefaultOpeningAreaM2
 }
 
 // Vessel is one ship with one loading condition. Build it with NewVessel.
@@ -46,9 +50,10 @@ type Vessel struct {
 	Weights      []Weight
 	Compartments []*Compartment
 	Openings     []Opening
-	MarginLineM  float64  // margin line's depth below the deck at side, m
-	CriteriaSets []string // the criteria sets she is held to (see criteria.go)
-	ShipType     string   // "cargo" or "passenger" (SOLAS s's heel limits); "" is cargo
+	Connections  []Connection // ways for water between compartments (connection.go)
+	MarginLineM  float64      // margin line's depth below the deck at side, m
+	CriteriaSets []string     // the criteria sets she is held to (see criteria.go)
+	ShipType     string       // "cargo" or "passenger" (SOLAS s's heel limits); "" is cargo
 
 	tanks []tankLoad // contents of each compartment at its fill, upright
 }
@@ -78,6 +83,10 @@ func NewVessel(v Vessel) (*Vessel, error) {
 	v.Compartments = append([]*Compartment(nil), v.Compartments...)
 	v.Openings = append([]Opening(nil), v.Openings...)
 	v.CriteriaSets = append([]string(nil), v.CriteriaSets...)
+	v.Connections = append([]Connection(nil), v.Connections...)
+	if err := checkConnections(&v); err != nil {
+		return nil, err
+	}
 	for i, w := range v.Weights {
 		for _, f := range []float64{w.MassT, w.LCGM, w.TCGM, w.VCGM, w.FSMTm} {
 			if math.IsNaN(f) || math.IsInf(f, 0) {

@@ -27,6 +27,9 @@ type Info struct {
 
 	// Compartments is index-aligned with engine.Vessel.Compartments.
 	Compartments []CompartmentInfo
+	// Warnings are things in the file that are allowed but look wrong (see
+	// connections.go); the file is still used.
+	Warnings Problems
 }
 
 // CompartmentInfo is the file's extra data on one compartment.
@@ -120,7 +123,10 @@ func (r *reader) vessel(root *table) (*engine.Vessel, *Info) {
 
 	weights := r.weights(root.entries("weight", "one item of the loading condition"))
 	comps, cinfo := r.compartments(root.entries("compartment", "one space of the ship"), hull)
-	openings := r.openings(root.entries("opening", "a point where water would spread"))
+	openingTables := root.entries("opening", "a point where water would spread")
+	openings := r.openings(openingTables)
+	r.checkLeadsTo(openingTables, openings, compartmentNames(comps))
+	conns, warns := r.connections(root.entries("connection", "a door, hatch, duct or pipe between two compartments"), comps, len(r.probs) == 0)
 	root.finish()
 
 	if len(r.probs) > 0 || hull == nil {
@@ -128,13 +134,14 @@ func (r *reader) vessel(root *table) (*engine.Vessel, *Info) {
 	}
 	v, err := engine.NewVessel(engine.Vessel{
 		Name: name, WaterDensity: rho, Hull: hull, Weights: weights,
-		Compartments: comps, Openings: openings, MarginLineM: margin, CriteriaSets: criteria, ShipType: info.ShipType,
+		Compartments: comps, Openings: openings, Connections: conns, MarginLineM: margin, CriteriaSets: criteria, ShipType: info.ShipType,
 	})
 	if err != nil {
 		r.addf("weight", "%v", err)
 		return nil, nil
 	}
 	info.Compartments = cinfo
+	info.Warnings = warns
 	return v, info
 }
 
@@ -611,6 +618,7 @@ func (r *reader) openings(ts []*table) []engine.Opening {
 			o.Kind = k
 		}
 		o.Weathertight, _ = t.boolean("closed_weathertight")
+		r.openingFlow(t, &o)
 		t.finish()
 		out = append(out, o)
 	}
