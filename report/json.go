@@ -37,6 +37,8 @@ type Document struct {
 	GZ          GZ           `json:"gz"`
 	Hand        *Hand        `json:"hand"`
 	Flags       []FlagDoc    `json:"flags"`
+	Flooded     []string     `json:"flooded"`          // every compartment holding sea water in the final state
+	Spread      *SpreadDoc   `json:"spread,omitempty"` // how it spread through connections and openings
 
 	Outcome          string         `json:"outcome"`           // floats | sinks | capsizes | not converged
 	Reason           string         `json:"reason"`            // why there is no equilibrium, "" when she floats
@@ -278,6 +280,7 @@ func Build(r Report) Document {
 		d.Remedies, d.RemediesSummary, d.RemediesLoll, d.RemediesCaution = &list, rs.Summary, &loll, RemediesCaution
 	}
 	d.Criteria = append(d.Criteria, CriterionDocs(a.Criteria)...)
+	d.Flooded, d.Spread = flooded(r), buildSpread(r)
 	return d
 }
 

@@ -43,8 +43,11 @@ type Report struct {
 	// state (engine.FindRemedies), shown after the flags; nil leaves them
 	// out of every format.
 	Remedies *engine.RemedySet
-	Made     time.Time // when the assessment was made (shown in UTC)
-	Version  string    // heelwatch's version
+	// Spread, when set, is how flooding spread through connections and
+	// openings (engine.Progressive); Assessment is then of its final state.
+	Spread  *engine.Spread
+	Made    time.Time // when the assessment was made (shown in UTC)
+	Version string    // heelwatch's version
 }
 
 // New returns the Report of assessment a of vessel v: the open

@@ -73,12 +73,14 @@ func runSolve(args []string, stdout, stderr io.Writer) int {
 		fmt.Fprintln(stderr, "heelwatch solve:", msg)
 		return exitUsage
 	}
-	a := engine.Assess(v, d)
+	sp := engine.Progressive(v, d)
+	a := engine.Assess(v, sp.Damage)
 	r := report.New(v, source(info), a, now(), version)
+	r.Spread = &sp
 	r.Condition = info.Condition
 	r.Open = inOrderGiven(open)
 	if *remedies {
-		rs := engine.FindRemedies(v, d)
+		rs := engine.FindRemedies(v, sp.Damage)
 		r.Remedies = &rs
 	}
 	if err := write(stdout, r); err != nil {
