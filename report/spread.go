@@ -14,6 +14,33 @@ type SpreadDoc struct {
 	Links   []LinkDoc   `json:"links"`
 	LostBy  *LinkDoc    `json:"lost_by"` // the link after which she no longer floats; null if she floats or is lost without it
 	Savings []SavingDoc `json:"savings"` // what closing each link would keep (only when lost_by is set)
+	// CrossFlooding is the time each cross-flooding fitting the water
+	// passed takes to equalise (MSC.362(92)), against the limits.
+	CrossFlooding []CrossDoc `json:"cross_flooding"`
+}
+
+// CrossDoc is one cross-flooding fitting's time to equalise.
+type CrossDoc struct {
+	Name          string `json:"name"`
+	TimeS         Num    `json:"time_s"`
+	LimitS        Num    `json:"limit_s"`   // 600: SOLAS II-1 Reg. 7-2
+	InstantS      Num    `json:"instant_s"` // 60: MSC.1/Circ.1461 §9.2.2
+	WithinLimit   bool   `json:"within_limit"`
+	Instantaneous bool   `json:"instantaneous"`
+	HeadM         Num    `json:"head_m"`    // H0
+	VolumeM3      Num    `json:"volume_m3"` // W
+	Method        string `json:"method"`
+	Message       string `json:"message"`
+}
+
+func crossDocs(v *engine.Vessel, sp engine.Spread) []CrossDoc {
+	out := []CrossDoc{}
+	for _, e := range engine.CrossFloodingTimes(v, sp) {
+		out = append(out, CrossDoc{Name: e.Name, TimeS: Num(e.TimeS), LimitS: engine.CrossFloodingLimitS, InstantS: engine.CrossFloodingInstantS,
+			WithinLimit: e.WithinTen, Instantaneous: e.Instant, HeadM: Num(e.HeadM), VolumeM3: Num(e.VolumeM3),
+			Method: "T = 2W/(S·F·√(2g·H0)), IMO Res. MSC.362(92)", Message: e.Message})
+	}
+	return out
 }
 
 // LinkDoc is one way the water went further.
@@ -65,7 +92,7 @@ func buildSpread(r Report) *SpreadDoc {
 	if sp == nil || r.Vessel == nil || len(sp.Links) == 0 {
 		return nil
 	}
-	d := &SpreadDoc{Chain: sp.Chain(r.Vessel), Links: []LinkDoc{}, Savings: []SavingDoc{}}
+	d := &SpreadDoc{Chain: sp.Chain(r.Vessel), Links: []LinkDoc{}, Savings: []SavingDoc{}, CrossFlooding: crossDocs(r.Vessel, *sp)}
 	for _, l := range sp.Links {
 		d.Links = append(d.Links, linkDoc(r.Vessel, l))
 	}
@@ -89,6 +116,9 @@ func writeSpread(e *errWriter, r Report) {
 	e.line("Water spreads: ", plural(len(sp.Links), "compartment"), " beyond those open to the sea")
 	for _, l := range sp.Links {
 		e.line("  ", sentence(l.Message), ".")
+	}
+	for _, c := range engine.CrossFloodingTimes(r.Vessel, *sp) {
+		e.line("  Cross-flooding: ", c.Message, ".")
 	}
 	if sp.LostBy != nil {
 		e.line("  She floats with the compartments opened but is LOST through progressive flooding: ", sp.LostBy.Message, ".")

@@ -16,7 +16,8 @@ import (
 const solveHelp = `heelwatch solve: where the ship floats with compartments open to the sea.
 
 Usage:
-  heelwatch solve [--vessel FILE|NAME] [--open A,B] [--perm NAME=μ,...] [--remedies] [--format F]
+  heelwatch solve [--vessel FILE|NAME] [--open A,B] [--perm NAME=μ,...]
+                  [--connection NAME=open|closed] [--remedies] [--format F]
 
 Flags:
   --vessel FILE|NAME  the vessel file, or a bundled vessel's name (default %q)
@@ -24,16 +25,19 @@ Flags:
                       in the vessel file; repeat the flag or separate with commas
   --perm NAME=μ,...   permeability of an open compartment for this solve,
                       0 < μ ≤ 1, in place of the file's (e.g. --perm "Hold 2=0.85")
-  --remedies          also work out the righting options: ballast into an intact
+` + connectionHelp + `  --remedies          also work out the righting options: ballast into an intact
                       tank on the high side, a low-side tank pumped out, liquid
                       moved to the mirror tank; with negative upright GM (a loll)
                       only options that lower G. Each is solved from the hull
                       geometry; they are options to weigh, not orders.
   --format F          text (default), json or markdown
 
-The answer is the direct solution from the hull geometry at the actual heel
-and trim, with the hand method (lost buoyancy, small angles) beside it where
-it applies, the flags, and the criteria the vessel is held to.
+Water spreads from the open compartments through every open connection whose
+sill is under the water inside and every opening that goes under and leads
+into a compartment, to a fixed point; the chain is printed. The answer is the
+direct solution from the hull geometry at the actual heel and trim (of that
+final state), with the hand method (lost buoyancy, small angles) beside it
+where it applies, the flags, and the criteria the vessel is held to.
 
 Exit status: 0 solved; 1 bad vessel file; 2 bad usage (an unknown compartment,
 a permeability out of range); 3 no equilibrium (she sinks or capsizes).
@@ -44,8 +48,9 @@ func runSolve(args []string, stdout, stderr io.Writer) int {
 	fs.SetOutput(stderr)
 	fs.Usage = func() {}
 	vessel := fs.String("vessel", vessels.Default, "")
-	var open, perm listFlag
+	var open, perm, conns listFlag
 	fs.Var(&open, "open", "")
+	fs.Var(&conns, "connection", "")
 	fs.Var(&perm, "perm", "")
 	format := fs.String("format", "text", "")
 	remedies := fs.Bool("remedies", false, "")
@@ -67,6 +72,11 @@ func runSolve(args []string, stdout, stderr io.Writer) int {
 	v, info, status := openVessel(*vessel, stderr)
 	if status != exitOK {
 		return status
+	}
+	v, msg := applyConnections(v, conns)
+	if msg != "" {
+		fmt.Fprintln(stderr, "heelwatch solve:", msg)
+		return exitUsage
 	}
 	d, msg := damageOf(v, open, perm)
 	if msg != "" {
