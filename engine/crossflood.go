@@ -44,7 +44,7 @@ func CrossFloodingTimes(v *Vessel, sp Spread) []CrossFloodingEstimate {
 		if c.Kind != CrossFloodingKind || !(l.DepthM > 0) {
 			continue
 		}
-		mu := v.permeability(sp.Damage, l.Compartment)
+		mu := v.Permeability(sp.Damage, l.Compartment)
 		w := mu * v.Compartments[l.Compartment].solid.Below(sp.Position.Plane).V
 		f := c.SpeedFactor()
 		t := 2 * w / (c.AreaM2 * f * math.Sqrt(2*StandardGravity*l.DepthM))

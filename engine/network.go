@@ -149,6 +149,9 @@ func checkNetworkCase(c *NetworkCase) error {
 		return errors.New("flooding: no vessel")
 	}
 	n := len(v.Compartments)
+	if err := CheckDamage(v, c.Base); err != nil {
+		return fmt.Errorf("flooding: %v", err)
+	}
 	water := false
 	for _, s := range c.Base {
 		water = water || s.WaterM3 > 0

@@ -218,7 +218,7 @@ func NewNetworkRun(c NetworkCase) (*NetworkRun, error) {
 	n := len(r.nodes)
 	for k, i := range r.nodes {
 		r.slot[i] = k
-		mu := v.permeability(c.Base, i)
+		mu := v.Permeability(c.Base, i)
 		r.mu = append(r.mu, mu)
 		r.cap = append(r.cap, mu*v.Compartments[i].solid.Volume())
 		fl := 0.0
@@ -618,43 +618,24 @@ func (r *NetworkRun) bisect(rec vecRec, pred func(th float64) bool) float64 {
 	return b
 }
 
-// locate places the zero of g inside rec (g0 > 0 ≥ g1) by the Illinois
-// method, each g from a solve at the interpolated volumes; at most 12
-// solves.
+// locate places the zero of g inside rec (g0 > 0 ≥ g1) by the engine's
+// Illinois root-finder (illinois.go) on the step fraction, each g from a
+// solve at the interpolated volumes; at most 12 solves. The time returned
+// is on the far side of the zero (g ≤ 0 there).
 func (r *NetworkRun) locate(rec vecRec, g0, g1 float64, g func(p *Position) float64) (float64, Position) {
-	a, b, ga, gb := 0.0, 1.0, g0, g1
 	best := r.evals[len(r.evals)-1].pos
 	bestT := rec.t1
-	side := 0
-	for i := 0; i < 12 && b-a > 1e-6; i++ {
-		th := (a*gb - b*ga) / (gb - ga)
-		if !(th > a && th < b) {
-			th = (a + b) / 2
-		}
+	illinois(0, 1, g0, g1, math.NaN(), 12, 1e-6, 1e-7*math.Max(g0, -g1), true, func(th float64) (float64, bool) {
 		e := r.eval(rec.state(th))
 		if !e.ok() {
-			b, gb = th, -math.Abs(ga)
-			continue
+			return 0, false
 		}
 		gt := g(&e.pos)
 		if gt <= 0 {
 			best, bestT = e.pos, rec.t0+th*(rec.t1-rec.t0)
-			b, gb = th, gt
-			if side == -1 {
-				ga /= 2
-			}
-			side = -1
-		} else {
-			a, ga = th, gt
-			if side == 1 {
-				gb /= 2
-			}
-			side = 1
 		}
-		if math.Abs(gt) <= 1e-7*math.Max(g0, -g1) {
-			break
-		}
-	}
+		return gt, true
+	})
 	return bestT, best
 }
 
@@ -746,7 +727,7 @@ func (r *NetworkRun) Report() NetworkReport {
 	rep.Table = r.table()
 	final := sum(rep.Final.WaterM3)
 	start := sum(rep.Start.WaterM3)
-	for _, f := range StageFractions {
+	for _, f := range stageFractions {
 		rep.Stages = append(rep.Stages, r.stage(f, start, final))
 	}
 	rep.Solves = r.solves

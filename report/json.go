@@ -39,6 +39,9 @@ type Document struct {
 	Flags       []FlagDoc    `json:"flags"`
 	Flooded     []string     `json:"flooded"`          // every compartment holding sea water in the final state
 	Spread      *SpreadDoc   `json:"spread,omitempty"` // how it spread through connections and openings
+	DraftMarks  []MarkDoc    `json:"draft_marks"`
+	// MarksSurvey: the marks carried to the perpendiculars (draftmarks.go).
+	MarksSurvey *SurveyDoc `json:"marks_to_perpendiculars"`
 
 	Outcome          string         `json:"outcome"`           // floats | sinks | capsizes | not converged
 	Reason           string         `json:"reason"`            // why there is no equilibrium, "" when she floats
@@ -228,6 +231,11 @@ func Build(r Report) Document {
 		Condition:        r.Condition,
 		Version:          r.Version,
 		GZ:               buildGZ(a.GZ),
+	}
+	if md := MarkDrafts(r.Vessel, a.Position); md != nil {
+		d.DraftMarks, d.MarksSurvey = MarkDocs(md), Survey(r.Vessel.Hull.LengthM, a.Position.Plane.C, md)
+	} else {
+		d.DraftMarks = []MarkDoc{}
 	}
 	if !r.Made.IsZero() {
 		d.Made = r.Made.UTC().Format(time.RFC3339)
