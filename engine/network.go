@@ -72,6 +72,12 @@ type flowPath struct {
 // Fully submerged (Hd ≥ H) this is c·A·√(2g(Hu−Hd)); with the lower side
 // dry and Hu ≤ H it is the weir law ⅔·c·w·√(2g)·Hu^{3/2}. A small hole
 // (H = 0) is the orifice law at its point with Δh = Hu⁺ − Hd⁺.
+//
+// Below 1 mm of head (FloodHeadTolM, where the run calls the levels met)
+// the √Δh is taken linear in Δh, through the same value at 1 mm: the
+// orifice law's infinite slope at Δh = 0 would otherwise hold the
+// integrator to steps of a second while two levels tied by a wide door
+// creep together.
 func pathFlow(p *flowPath, da, db float64) float64 {
 	sign := 1.0
 	hu, hd := da, db
@@ -84,16 +90,27 @@ func pathFlow(p *flowPath, da, db float64) float64 {
 	g2 := math.Sqrt(2 * StandardGravity)
 	if p.height <= 0 {
 		dh := hu - math.Max(hd, 0)
-		return sign * p.coef * p.area * g2 * math.Sqrt(math.Max(dh, 0))
+		return sign * p.coef * p.area * g2 * rootHead(dh)
 	}
 	H := p.height
 	w := p.area / H
 	hdp := math.Max(hd, 0)
-	q := math.Sqrt(hu-hd) * math.Min(hdp, H)
+	var q float64
+	if hdp > 0 {
+		q = rootHead(hu-hd) * math.Min(hdp, H)
+	}
 	if top := math.Min(hu, H); top > hdp {
 		q += 2.0 / 3 * (math.Pow(hu-hdp, 1.5) - math.Pow(hu-top, 1.5))
 	}
 	return sign * p.coef * w * g2 * q
+}
+
+// rootHead is √h for h ≥ 1 mm and h/√(1 mm) below (see pathFlow).
+func rootHead(h float64) float64 {
+	if h >= FloodHeadTolM {
+		return math.Sqrt(h)
+	}
+	return math.Max(h, 0) / math.Sqrt(FloodHeadTolM)
 }
 
 // networkNodes returns the compartments the water can reach from the
@@ -102,44 +119,27 @@ func pathFlow(p *flowPath, da, db float64) float64 {
 // at the start (not those open to the
 // sea in the base state, which stand at the sea's level).
 func networkNodes(v *Vessel, base Damage, holes []NetHole) []int {
-	in := map[int]bool{}
-	var nodes []int
-	add := func(i int) {
-		if !in[i] && !base.state(i).Open {
-			in[i] = true
-			nodes = append(nodes, i)
-		}
-	}
+	var start []int
 	for _, h := range holes {
-		add(h.Compartment)
-	}
-	for i := range v.Compartments {
-		if base.state(i).WaterM3 > 0 {
-			add(i)
-		}
+		start = append(start, h.Compartment)
 	}
 	for _, o := range v.Openings {
 		if j := v.LeadsToIndex(o); j >= 0 && !o.Weathertight {
-			add(j)
+			start = append(start, j)
 		}
 	}
-	for changed := true; changed; {
-		changed = false
-		for _, c := range v.Connections {
-			if !c.Open {
-				continue
-			}
-			if in[c.From] && !in[c.To] && !base.state(c.To).Open {
-				add(c.To)
-				changed = true
-			}
-			if in[c.To] && !in[c.From] && !base.state(c.From).Open {
-				add(c.From)
-				changed = true
-			}
+	for i := range v.Compartments {
+		if base.state(i).WaterM3 > 0 {
+			start = append(start, i)
 		}
 	}
-	return nodes
+	var keep []int
+	for _, i := range start {
+		if !base.state(i).Open {
+			keep = append(keep, i)
+		}
+	}
+	return networkNodesFrom(v, base, keep)
 }
 
 // checkNetworkCase checks c and fills in the defaults.
@@ -201,4 +201,40 @@ func checkNetworkCase(c *NetworkCase) error {
 	copy(base, c.Base)
 	c.Base = base
 	return nil
+}
+
+// ConnectedTo returns the compartments joined to compartment ci through
+// open connections, directly or through others (ci itself left out, and
+// those open to the sea in base: they stand at the sea's level).
+func ConnectedTo(v *Vessel, base Damage, ci int) []int {
+	nodes := networkNodesFrom(v, base, []int{ci})
+	return nodes[1:]
+}
+
+// networkNodesFrom is the closure of start through open connections.
+func networkNodesFrom(v *Vessel, base Damage, start []int) []int {
+	in := map[int]bool{}
+	var nodes []int
+	for _, i := range start {
+		if !in[i] {
+			in[i] = true
+			nodes = append(nodes, i)
+		}
+	}
+	for changed := true; changed; {
+		changed = false
+		for _, c := range v.Connections {
+			if !c.Open {
+				continue
+			}
+			for _, e := range [][2]int{{c.From, c.To}, {c.To, c.From}} {
+				if in[e[0]] && !in[e[1]] && !base.state(e[1]).Open {
+					in[e[1]] = true
+					nodes = append(nodes, e[1])
+					changed = true
+				}
+			}
+		}
+	}
+	return nodes
 }

@@ -15,6 +15,13 @@ import (
 // pumps; the ship is re-solved with all the water held at every
 // evaluation.
 
+// Tolerances of the network run's integrator (second order: looser than
+// the single compartment's fifth-order run).
+const (
+	networkRelTol = 1e-5
+	networkAbsTol = 1e-5 // of each compartment's capacity
+)
+
 // NetEventKind names what happened at a NetEvent.
 type NetEventKind int
 
@@ -136,8 +143,9 @@ type NetworkReport struct {
 	// path must reproduce it. FinalDiffM is the largest difference of the
 	// drafts aft, amidships and forward between Final and Static (0 when
 	// either is missing).
-	Static     *Spread
-	FinalDiffM float64
+	Static        *Spread
+	StaticFlooded []string // the names of the compartments open in Static
+	FinalDiffM    float64
 
 	Events        []NetEvent
 	Trace         []NetSample // every accepted step
@@ -167,8 +175,8 @@ func (e *netEval) ok() bool { return e.noEq == nil }
 // NetworkRun is a network flooding run in progress: NewNetworkRun, then
 // Step until false, then Report (RunNetwork does all of it).
 //
-// Integration: Dormand–Prince 5(4) on the vector of volumes (vecStepper),
-// relative 1e-8 and absolute 1e-8 of each capacity; a step whose solve
+// Integration: the linearly implicit Rosenbrock 2(3) pair on the vector of
+// volumes (rosStepper), relative 1e-6 and absolute 1e-6 of each capacity; a step whose solve
 // fails is halved, below 0.5 s the failure is the answer. A full
 // compartment takes no more in than goes out of it: its inflows are
 // scaled down to its outflows and pumps (the water that cannot enter
@@ -185,9 +193,11 @@ type NetworkRun struct {
 	cap    []float64
 	floor  []float64
 	pump   []float64 // m³/s per node
+	start  []float64 // water at the start per node
+	holed  []bool    // a hole leads into the node, or it holds sea water from the start
 	paths  []flowPath
 	qTol   []float64 // per path: the flow at 1 mm of head
-	st     vecStepper
+	st     rosStepper
 	guess  Plane
 	haveG  bool
 	last   netEval
@@ -286,9 +296,11 @@ func NewNetworkRun(c NetworkCase) (*NetworkRun, error) {
 		y0[k] = math.Min(w, r.cap[k])
 		r.comps = append(r.comps, NetCompartment{Index: i, Name: v.Compartments[i].Name, CapacityM3: r.cap[k], StartM3: y0[k],
 			FirstWaterS: math.NaN(), FullS: math.NaN(), EqualisedS: math.NaN()})
-		if y0[k] > r.floor[k] {
-			r.comps[k].FirstWaterS = 0
-		}
+		r.start = append(r.start, y0[k])
+		r.holed = append(r.holed, c.Base.state(i).WaterM3 > 0)
+	}
+	for _, h := range c.Holes {
+		r.holed[r.slot[h.Compartment]] = true
 	}
 	e0 := r.eval(y0)
 	r.last = e0
@@ -296,11 +308,11 @@ func NewNetworkRun(c NetworkCase) (*NetworkRun, error) {
 	atol := make([]float64, n+2)
 	var total float64
 	for k := range r.cap {
-		atol[k] = floodAbsTol * r.cap[k]
+		atol[k] = networkAbsTol * r.cap[k]
 		total += r.cap[k]
 	}
-	atol[n], atol[n+1] = floodAbsTol*total, floodAbsTol*total
-	r.st = vecStepper{f: r.rhs, y: y0, fy: e0.rate, atol: atol, rtol: floodRelTol, dtMin: 0.5, maxTries: floodMaxTries}
+	atol[n], atol[n+1] = networkAbsTol*total, networkAbsTol*total
+	r.st = rosStepper{f: r.rhs, jac: r.jacobian, y: y0, fy: e0.rate, atol: atol, rtol: networkRelTol, dtMin: 0.5, maxTries: floodMaxTries}
 	var in float64
 	for _, q := range e0.rate[:n] {
 		in += math.Abs(q)
@@ -312,7 +324,7 @@ func NewNetworkRun(c NetworkCase) (*NetworkRun, error) {
 		return r, nil
 	}
 	r.startEvents(e0)
-	r.settled(e0, 0, true)
+	r.settled(vecRec{}, e0, 0, true)
 	return r, nil
 }
 
@@ -320,6 +332,11 @@ func NewNetworkRun(c NetworkCase) (*NetworkRun, error) {
 func (r *NetworkRun) damageAt(w []float64) Damage {
 	d := append(Damage(nil), r.c.Base...)
 	for k, i := range r.nodes {
+		if !r.holed[k] && w[k] <= r.start[k]+1e-9*r.cap[k] {
+			// No sea water has come in yet: a tank keeps its contents
+			// as loaded.
+			continue
+		}
 		s := d[i]
 		s.WaterM3 = math.Max(math.Max(0, math.Min(w[k], r.cap[k])), r.floor[k])
 		d[i] = s
@@ -342,7 +359,14 @@ func (r *NetworkRun) eval(y []float64) netEval {
 	}
 	r.guess, r.haveG = pos.Plane, true
 	e.pos = pos
-	p := pos.Plane
+	r.flows(&e, pos.Plane)
+	return e
+}
+
+// flows works out every flow and rate of e (its volumes set) with the sea
+// at plane p.
+func (r *NetworkRun) flows(e *netEval, p Plane) {
+	n := len(r.nodes)
 	// The water surface in each node, parallel to the sea's.
 	levels := make([]Plane, n)
 	for k, i := range r.nodes {
@@ -416,7 +440,66 @@ func (r *NetworkRun) eval(y []float64) netEval {
 		e.rate[k] -= e.pumped[k]
 		e.rate[n+1] += e.pumped[k]
 	}
-	return e
+}
+
+// jacobian returns ∂(dy/dt)/∂y at y by forward differences, one column
+// per compartment. A compartment that holds water or has water moving
+// through its paths is differenced with the ship solved afresh (the ship's
+// trim and heel move every level at once: between two spaces joined by a
+// wide door that coupling is as stiff as the door itself); the others with
+// the ship held where she was last solved.
+func (r *NetworkRun) jacobian(y []float64) [][]float64 {
+	n := len(r.nodes)
+	m := len(y)
+	J := make([][]float64, m)
+	for i := range J {
+		J[i] = make([]float64, m)
+	}
+	clamp := func(w []float64) netEval {
+		e := netEval{w: make([]float64, n)}
+		for k := range e.w {
+			e.w[k] = math.Max(0, math.Min(w[k], r.cap[k]))
+		}
+		return e
+	}
+	guess := r.guess
+	base := clamp(y)
+	r.flows(&base, guess)
+	full := r.eval(y)
+	active := make([]bool, n)
+	for j, pa := range r.paths {
+		if base.q[j] != 0 {
+			for _, k := range []int{pa.a, pa.b} {
+				if k >= 0 {
+					active[k] = true
+				}
+			}
+		}
+	}
+	for k := 0; k < n; k++ {
+		d := 1e-6 * r.cap[k]
+		if y[k]+d > r.cap[k] {
+			d = -d
+		}
+		w := append([]float64(nil), y...)
+		w[k] += d
+		f0, f1 := base.rate, []float64(nil)
+		if (active[k] || base.w[k] > 0) && full.ok() {
+			if e := r.eval(w); e.ok() {
+				f0, f1 = full.rate, e.rate
+			}
+		}
+		if f1 == nil {
+			e := clamp(w)
+			r.flows(&e, guess)
+			f1 = e.rate
+		}
+		for i := range f1 {
+			J[i][k] = (f1[i] - f0[i]) / d
+		}
+	}
+	r.guess = guess
+	return J
 }
 
 func (r *NetworkRun) rhs(y []float64) ([]float64, error) {
@@ -453,7 +536,7 @@ func (r *NetworkRun) Step() bool {
 	r.recs = append(r.recs, rec)
 	r.evals = append(r.evals, e)
 	r.crossings(rec, prev, e)
-	r.settled(e, rec.t1, false)
+	r.settled(rec, e, rec.t1, false)
 	if r.end == FloodRunning && rec.t1 >= r.c.LimitS*(1-1e-12) {
 		r.finish(FloodTimeLimit, rec.t1, fmt.Sprintf("the time limit (%s) came first, water still moving", FormatDuration(r.c.LimitS)), nil)
 	}
@@ -463,41 +546,89 @@ func (r *NetworkRun) Step() bool {
 // resting reports whether path j carries less than at 1 mm of head.
 func (r *NetworkRun) resting(e *netEval, j int) bool { return math.Abs(e.q[j]) <= r.qTol[j] }
 
-// settled records the compartments at rest and ends the run when all are.
-func (r *NetworkRun) settled(e netEval, t float64, start bool) {
+// met reports whether the levels have met through path j: both sides
+// below its lowest point, or both above it with less flow than at 1 mm
+// of head (not a path that has only just been wetted on one side).
+func (r *NetworkRun) met(e *netEval, j int) bool {
+	a, b := e.depthA[j], e.depthB[j]
+	return (a <= 0 && b <= 0) || (a > 0 && b > 0 && r.resting(e, j))
+}
+
+// restRatio is the largest flow through the paths touching node k as a
+// multiple of each path's flow at 1 mm of head: at most 1 when the node is
+// at rest.
+func (r *NetworkRun) restRatio(e *netEval, k int) float64 {
+	var m float64
+	for j, pa := range r.paths {
+		if pa.a == k || pa.b == k {
+			q := math.Abs(e.q[j]) / r.qTol[j]
+			if !r.met(e, j) {
+				q = math.Max(q, 1+1e-9)
+			}
+			m = math.Max(m, q)
+		}
+	}
+	return m
+}
+
+// restTime places inside the step rec the first moment pred holds (it
+// holds at the step's end): bisection on the step's interpolated volumes,
+// the flows worked out with the ship as last solved (she moves little in
+// a step; no solves).
+func (r *NetworkRun) restTime(rec vecRec, pred func(e *netEval) bool) float64 {
+	if len(rec.y0) == 0 {
+		return rec.t1
+	}
+	n := len(r.nodes)
+	th := r.bisect(rec, func(th float64) bool {
+		y := rec.state(th)
+		e := netEval{w: make([]float64, n)}
+		for k := range e.w {
+			e.w[k] = math.Max(0, math.Min(y[k], r.cap[k]))
+		}
+		r.flows(&e, r.guess)
+		return pred(&e)
+	})
+	return rec.t0 + th*(rec.t1-rec.t0)
+}
+
+// settled records the compartments that came to rest in the step from
+// prev (t0) to e (t1) and ends the run when all are.
+func (r *NetworkRun) settled(rec vecRec, e netEval, t1 float64, start bool) {
 	all := true
 	for j := range r.paths {
-		if !r.resting(&e, j) {
+		if !r.met(&e, j) {
 			all = false
 		}
 	}
 	for k := range r.nodes {
-		rest := true
-		for j, pa := range r.paths {
-			if (pa.a == k || pa.b == k) && !r.resting(&e, j) {
-				rest = false
-			}
-		}
+		r1 := r.restRatio(&e, k)
 		c := &r.comps[k]
 		switch {
-		case rest && e.w[k] > r.floor[k] && math.IsNaN(c.EqualisedS) && !start:
-			c.EqualisedS = t
-			r.events = append(r.events, NetEvent{NetEqualised, c.Name, t, fmt.Sprintf("%s comes to rest with %.1f m³ in", c.Name, e.w[k])})
-		case !rest:
+		case r1 <= 1 && !math.IsNaN(c.FirstWaterS) && math.IsNaN(c.EqualisedS) && !start:
+			k := k
+			c.EqualisedS = r.restTime(rec, func(e *netEval) bool { return r.restRatio(e, k) <= 1 })
+			r.events = append(r.events, NetEvent{NetEqualised, c.Name, c.EqualisedS, fmt.Sprintf("%s comes to rest with %.1f m³ in", c.Name, e.w[k])})
+		case r1 > 1:
 			c.EqualisedS = math.NaN()
 		}
 	}
-	var moving float64
+	var moving, pumps float64
+	qMin := math.Inf(1)
 	for k := range r.nodes {
 		moving = math.Max(moving, math.Abs(e.rate[k]))
+		pumps += r.pump[k]
+	}
+	for _, q := range r.qTol {
+		qMin = math.Min(qMin, q)
 	}
 	switch {
 	case all && start:
-		r.finish(FloodNoInflow, t, "nothing flows: every hole, opening and connection is clear of the water or level on both sides", nil)
+		r.finish(FloodNoInflow, t1, "nothing flows: every hole, opening and connection is clear of the water or level on both sides", nil)
 	case all:
-		r.finish(FloodEqualised, t, fmt.Sprintf("the water has come to rest: the levels meet through every open path (%.1f m³ in the ship)", sum(e.w)), nil)
-	case !start && moving < 1e-7:
-		r.finish(FloodPumpsHold, t, "the pumps hold the levels: nothing more gathers", nil)
+		r.finish(FloodEqualised, t1, fmt.Sprintf("the water has come to rest: the levels meet through every open path (%.1f m³ came in)", sum(e.w)-sum(r.start)), nil)
+	case !start && pumps > 0 && moving <= qMin:
+		r.finish(FloodPumpsHold, t1, fmt.Sprintf("the pumps hold the levels: the water in each compartment changes by less than %.1f m³/h", qMin*3600), nil)
 	}
 }
 
@@ -537,8 +668,9 @@ func (r *NetworkRun) crossings(rec vecRec, e0, e1 netEval) {
 	var found []NetEvent
 	for k := range r.nodes {
 		c := &r.comps[k]
-		if math.IsNaN(c.FirstWaterS) && e1.w[k] > r.floor[k] {
-			th := r.bisect(rec, func(th float64) bool { return rec.at(k, th) > r.floor[k]+1e-9*r.cap[k] })
+		above := r.start[k] + math.Max(r.floor[k], 1e-9*r.cap[k])
+		if math.IsNaN(c.FirstWaterS) && e1.w[k] > above {
+			th := r.bisect(rec, func(th float64) bool { return rec.at(k, th) > above })
 			c.FirstWaterS = rec.t0 + th*(rec.t1-rec.t0)
 			found = append(found, NetEvent{NetFirstWater, c.Name, c.FirstWaterS, "water first enters " + c.Name})
 		}
@@ -578,14 +710,10 @@ func (r *NetworkRun) crossings(rec vecRec, e0, e1 netEval) {
 		if !cf.Flowed || !math.IsNaN(cf.EqualiseS) {
 			continue
 		}
-		// The head falls as √h linear in time near the end: carry the
-		// step on to zero head.
-		h0 := math.Abs(math.Max(e0.depthA[j], 0) - math.Max(e0.depthB[j], 0))
-		h1 := math.Abs(math.Max(e1.depthA[j], 0) - math.Max(e1.depthB[j], 0))
-		t := rec.t1
-		if s0, s1 := math.Sqrt(h0), math.Sqrt(h1); s0 > s1 {
-			t = rec.t1 + (rec.t1-rec.t0)*s1/(s0-s1)
-		}
+		// The flow falls linearly in time near the end (the √h law):
+		// the time of 1 mm of head inside the step.
+		j := j
+		t := r.restTime(rec, func(e *netEval) bool { return r.resting(e, j) })
 		cf.EqualiseS = t
 		found = append(found, NetEvent{NetCrossFlooded, cf.Name, t, fmt.Sprintf("%s has equalised: %s", cf.Name, crossWords(t))})
 	}
@@ -674,6 +802,13 @@ func (r *NetworkRun) Report() NetworkReport {
 	n := len(r.nodes)
 	rep := NetworkReport{Vessel: r.v.Name, LimitS: r.c.LimitS, End: r.end, EndS: r.endS, EndReason: r.endWhy, EndNoEq: r.endNoEq,
 		Events: append([]NetEvent(nil), r.events...), Steps: len(r.recs), Rejected: r.st.tries - len(r.recs)}
+	sort.SliceStable(rep.Events, func(a, b int) bool {
+		ea, eb := rep.Events[a], rep.Events[b]
+		if (ea.Kind == NetEnds) != (eb.Kind == NetEnds) {
+			return eb.Kind == NetEnds
+		}
+		return ea.TimeS < eb.TimeS
+	})
 	for _, pa := range r.paths {
 		np := NetPath{Kind: pa.kind, Name: pa.name, From: "sea", To: "sea"}
 		if pa.a >= 0 {
@@ -721,6 +856,9 @@ func (r *NetworkRun) Report() NetworkReport {
 	}
 	sp := Progressive(r.v, d)
 	rep.Static = &sp
+	for _, i := range sp.Flooded {
+		rep.StaticFlooded = append(rep.StaticFlooded, r.v.Compartments[i].Name)
+	}
 	if f, s := rep.Final.Position, sp.Position; f != nil && s != nil && r.end != FloodTimeLimit {
 		rep.FinalDiffM = math.Max(math.Abs(f.DraftAftM-s.DraftAftM), math.Max(math.Abs(f.DraftMidM-s.DraftMidM), math.Abs(f.DraftFwdM-s.DraftFwdM)))
 	}
@@ -764,12 +902,15 @@ func (r *NetworkRun) table() []NetSample {
 		times = append(times, at{float64(k) * dt, ""})
 	}
 	for _, ev := range r.events {
-		if ev.Kind != NetEnds && ev.TimeS <= end {
+		if ev.Kind != NetEnds && ev.TimeS <= end && ev.TimeS > 0 {
 			times = append(times, at{ev.TimeS, ev.Kind.String() + nameSuffix(ev.Name)})
 		}
 	}
 	sort.SliceStable(times, func(a, b int) bool { return times[a].t < times[b].t })
-	for _, x := range times {
+	for i, x := range times {
+		if i > 0 && x.t-times[i-1].t < 0.5 {
+			continue // one row for moments within half a second
+		}
 		y, _, _ := r.stateAt(x.t)
 		if x.t <= 0 && len(r.recs) > 0 {
 			y = r.recs[0].y0

@@ -71,8 +71,9 @@ func runFlood(args []string, stdout, stderr io.Writer) int {
 	var holes, pumps pumpFlag
 	fs.Var(&holes, "hole", "")
 	fs.Var(&pumps, "pump", "")
-	var open listFlag
+	var open, conns listFlag
 	fs.Var(&open, "open", "")
+	fs.Var(&conns, "connection", "")
 	cdText := fs.String("cd", "", "")
 	limit := fs.Duration("limit", 24*time.Hour, "")
 	criteria := fs.Bool("criteria", true, "")
@@ -110,6 +111,10 @@ func runFlood(args []string, stdout, stderr io.Writer) int {
 	v, info, status := openVessel(*vessel, stderr)
 	if status != exitOK {
 		return status
+	}
+	v, msg := applyConnections(v, conns)
+	if msg != "" {
+		return fail("%s", msg)
 	}
 	index := map[string]int{}
 	for i, c := range v.Compartments {
@@ -265,14 +270,21 @@ func runFlood(args []string, stdout, stderr io.Writer) int {
 		return fail("%v", err)
 	}
 	fr := floodRun{rep: rep, v: v, source: source(info), open: inOrderGiven(open), holeFrom: from, pumpFrom: pumpFrom}
+	if fr.net, err = floodNetwork(v, base, ci, hole, enginePumps, limit.Seconds(), rep); err != nil {
+		return fail("%v", err)
+	}
 	if *format == "json" {
 		err = writeFloodJSON(stdout, fr)
-	} else {
-		err = writeFloodText(stdout, fr)
+	} else if err = writeFloodText(stdout, fr); err == nil && fr.net != nil {
+		err = report.NetworkText(stdout, *fr.net)
 	}
 	if err != nil {
 		fmt.Fprintln(stderr, "heelwatch flood: writing the report:", err)
 		return exitFailed
+	}
+	if fr.net != nil && (fr.net.End == engine.FloodSinks || fr.net.End == engine.FloodCapsizes) {
+		fmt.Fprintf(stderr, "heelwatch flood: through the ship: %s\n", fr.net.EndReason)
+		return exitNoEq
 	}
 	switch rep.End {
 	case engine.FloodSinks, engine.FloodCapsizes:
@@ -312,6 +324,7 @@ type floodRun struct {
 	open     []string
 	holeFrom string
 	pumpFrom string
+	net      *engine.NetworkReport // the run through the ship, nil when the water goes nowhere else (network.go)
 }
 
 // fnum formats x with prec decimals, "—" when not finite.
@@ -609,6 +622,9 @@ type floodDoc struct {
 	Trace        []floodRowDoc `json:"trace"`
 	Solver       floodSolver   `json:"solver"`
 	Version      string        `json:"heelwatch_version"`
+	// Compartments: each compartment that took water (network.go).
+	Compartments []report.NetCompDoc `json:"compartments"`
+	Network      *report.NetworkDoc  `json:"network"` // the run through the ship; null when the water goes nowhere else
 }
 
 type floodHoleDoc struct {
@@ -756,6 +772,7 @@ func writeFloodJSON(w io.Writer, fr floodRun) error {
 		}
 		doc.Stages = append(doc.Stages, st)
 	}
+	networkKeys(&doc, fr)
 	enc := json.NewEncoder(w)
 	enc.SetIndent("", "  ")
 	return enc.Encode(doc)
