@@ -465,7 +465,15 @@ func (r *NetworkRun) jacobian(y []float64) [][]float64 {
 	guess := r.guess
 	base := clamp(y)
 	r.flows(&base, guess)
-	full := r.eval(y)
+	// The rates at y itself: the last accepted state's (first same as
+	// last), else a solve.
+	full := r.evals[len(r.evals)-1]
+	for k := 0; k < n; k++ {
+		if full.ok() && full.w[k] != math.Max(0, math.Min(y[k], r.cap[k])) {
+			full = r.eval(y)
+			break
+		}
+	}
 	active := make([]bool, n)
 	for j, pa := range r.paths {
 		if base.q[j] != 0 {
