@@ -145,7 +145,11 @@ type NetworkReport struct {
 	// either is missing).
 	Static        *Spread
 	StaticFlooded []string // the names of the compartments open in Static
-	FinalDiffM    float64
+	// StaticCrossFlooding is the MSC.362(92) estimate of each
+	// cross-flooding fitting's time in Static (the damaged side flooded at
+	// once), beside the run's own CrossFlooding times.
+	StaticCrossFlooding []CrossFloodingEstimate
+	FinalDiffM          float64
 
 	Events        []NetEvent
 	Trace         []NetSample // every accepted step
@@ -679,6 +683,9 @@ func (r *NetworkRun) crossings(rec vecRec, e0, e1 netEval) {
 		above := r.start[k] + math.Max(r.floor[k], 1e-9*r.cap[k])
 		if math.IsNaN(c.FirstWaterS) && e1.w[k] > above {
 			th := r.bisect(rec, func(th float64) bool { return rec.at(k, th) > above })
+			if th < 1e-6 {
+				th = 0 // water was coming in at the step's start
+			}
 			c.FirstWaterS = rec.t0 + th*(rec.t1-rec.t0)
 			found = append(found, NetEvent{NetFirstWater, c.Name, c.FirstWaterS, "water first enters " + c.Name})
 		}
@@ -867,6 +874,7 @@ func (r *NetworkRun) Report() NetworkReport {
 	for _, i := range sp.Flooded {
 		rep.StaticFlooded = append(rep.StaticFlooded, r.v.Compartments[i].Name)
 	}
+	rep.StaticCrossFlooding = CrossFloodingTimes(r.v, sp)
 	if f, s := rep.Final.Position, sp.Position; f != nil && s != nil && r.end != FloodTimeLimit {
 		rep.FinalDiffM = math.Max(math.Abs(f.DraftAftM-s.DraftAftM), math.Max(math.Abs(f.DraftMidM-s.DraftMidM), math.Abs(f.DraftFwdM-s.DraftFwdM)))
 	}

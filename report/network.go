@@ -26,21 +26,24 @@ type NetCompDoc struct {
 
 // NetworkDoc is a network run.
 type NetworkDoc struct {
-	End           string         `json:"end"`
-	EndS          Num            `json:"end_s"`
-	EndReason     string         `json:"end_reason"`
-	Final         *Equilibrium   `json:"final"` // the end position, shaped as solve's equilibrium; null if she does not float
-	Static        *Equilibrium   `json:"static"`
-	StaticChain   string         `json:"static_chain"`
-	FinalDiffM    Num            `json:"final_difference_m"` // largest draft difference between final and static
-	Paths         []NetPathDoc   `json:"paths"`
-	CrossFlooding []NetCrossDoc  `json:"cross_flooding"`
-	Events        []NetEventDoc  `json:"events"`
-	Trace         []NetSampleDoc `json:"trace"`
-	SeaInM3       Num            `json:"sea_in_m3"`
-	PumpedM3      Num            `json:"pumped_m3"`
-	Steps         int            `json:"steps"`
-	Solves        int            `json:"solves"`
+	End           string        `json:"end"`
+	EndS          Num           `json:"end_s"`
+	EndReason     string        `json:"end_reason"`
+	Final         *Equilibrium  `json:"final"` // the end position, shaped as solve's equilibrium; null if she does not float
+	Static        *Equilibrium  `json:"static"`
+	StaticChain   string        `json:"static_chain"`
+	FinalDiffM    Num           `json:"final_difference_m"` // largest draft difference between final and static
+	Paths         []NetPathDoc  `json:"paths"`
+	CrossFlooding []NetCrossDoc `json:"cross_flooding"`
+	// StaticCrossFlooding: MSC.362(92)'s estimate with the damaged side
+	// flooded at once, as solve gives it.
+	StaticCrossFlooding []CrossDoc     `json:"static_cross_flooding"`
+	Events              []NetEventDoc  `json:"events"`
+	Trace               []NetSampleDoc `json:"trace"`
+	SeaInM3             Num            `json:"sea_in_m3"`
+	PumpedM3            Num            `json:"pumped_m3"`
+	Steps               int            `json:"steps"`
+	Solves              int            `json:"solves"`
 }
 
 // NetPathDoc is one way the water moved.
@@ -115,6 +118,7 @@ func BuildNetwork(rep engine.NetworkReport) NetworkDoc {
 	if rep.Static != nil {
 		d.Static = EquilibriumOf(rep.Static.Position)
 	}
+	d.StaticCrossFlooding = crossDocsOf(rep.StaticCrossFlooding)
 	for _, p := range rep.Paths {
 		d.Paths = append(d.Paths, NetPathDoc{p.Kind, p.Name, p.From, p.To})
 	}
@@ -179,7 +183,10 @@ func NetworkText(w io.Writer, rep engine.NetworkReport) error {
 	}
 	writeLines(e, t.lines("  "))
 	for _, c := range rep.CrossFlooding {
-		e.line("  Cross-flooding: ", c.Message, " (60 s or less counts as instantaneous, MSC.1/Circ.1461).")
+		e.line("  Cross-flooding in this run: ", c.Message, " (60 s or less counts as instantaneous, MSC.1/Circ.1461).")
+	}
+	for _, c := range rep.StaticCrossFlooding {
+		e.line("  Cross-flooding with the damaged side flooded at once: ", c.Message, ".")
 	}
 	e.line("Events")
 	for _, ev := range rep.Events {

@@ -34,8 +34,12 @@ type CrossDoc struct {
 }
 
 func crossDocs(v *engine.Vessel, sp engine.Spread) []CrossDoc {
+	return crossDocsOf(engine.CrossFloodingTimes(v, sp))
+}
+
+func crossDocsOf(es []engine.CrossFloodingEstimate) []CrossDoc {
 	out := []CrossDoc{}
-	for _, e := range engine.CrossFloodingTimes(v, sp) {
+	for _, e := range es {
 		out = append(out, CrossDoc{Name: e.Name, TimeS: Num(e.TimeS), LimitS: engine.CrossFloodingLimitS, InstantS: engine.CrossFloodingInstantS,
 			WithinLimit: e.WithinTen, Instantaneous: e.Instant, HeadM: Num(e.HeadM), VolumeM3: Num(e.VolumeM3),
 			Method: "T = 2W/(S·F·√(2g·H0)), IMO Res. MSC.362(92)", Message: e.Message})
