@@ -50,8 +50,8 @@ func CrossFloodingTimes(v *Vessel, sp Spread) []CrossFloodingEstimate {
 		t := 2 * w / (c.AreaM2 * f * math.Sqrt(2*StandardGravity*l.DepthM))
 		e := CrossFloodingEstimate{Name: c.Name, Connection: l.Connection, HeadM: l.DepthM, VolumeM3: w, AreaM2: c.AreaM2, F: f, TimeS: t,
 			Instant: t <= CrossFloodingInstantS, WithinTen: t <= CrossFloodingLimitS}
-		e.Message = fmt.Sprintf("%s equalises in %s (MSC.362(92): W %.1f m³, S %.3f m², F %.2f, H0 %.2f m)",
-			c.Name, crossWords(t), w, c.AreaM2, f, l.DepthM)
+		e.Message = fmt.Sprintf("%s equalises in %.0f s, %s (MSC.362(92): W %.1f m³, S %.3f m², F %.2f, H0 %.2f m)",
+			c.Name, t, CrossFloodingVerdict(t), w, c.AreaM2, f, l.DepthM)
 		out = append(out, e)
 	}
 	return out

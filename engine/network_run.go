@@ -550,7 +550,7 @@ func (r *NetworkRun) Step() bool {
 	r.crossings(rec, prev, e)
 	r.settled(rec, e, rec.t1, false)
 	if r.end == FloodRunning && rec.t1 >= r.c.LimitS*(1-1e-12) {
-		r.finish(FloodTimeLimit, rec.t1, fmt.Sprintf("the time limit (%s) came first, water still moving", FormatDuration(r.c.LimitS)), nil)
+		r.finish(FloodTimeLimit, rec.t1, fmt.Sprintf("the time limit (%.0f s) came first, water still moving", r.c.LimitS), nil)
 	}
 	return r.end == FloodRunning
 }
@@ -730,21 +730,22 @@ func (r *NetworkRun) crossings(rec vecRec, e0, e1 netEval) {
 		j := j
 		t := r.restTime(rec, func(e *netEval) bool { return r.resting(e, j) })
 		cf.EqualiseS = t
-		found = append(found, NetEvent{NetCrossFlooded, cf.Name, t, fmt.Sprintf("%s has equalised: %s", cf.Name, crossWords(t))})
+		found = append(found, NetEvent{NetCrossFlooded, cf.Name, t, fmt.Sprintf("%s has equalised, %s", cf.Name, CrossFloodingVerdict(t))})
 	}
 	sort.SliceStable(found, func(a, b int) bool { return found[a].TimeS < found[b].TimeS })
 	r.events = append(r.events, found...)
 }
 
-// crossWords says a cross-flooding time against the limits.
-func crossWords(t float64) string {
+// CrossFloodingVerdict says a cross-flooding time of t seconds against
+// the limits of SOLAS II-1 Reg. 7-2 and MSC.1/Circ.1461 §9.2.2.
+func CrossFloodingVerdict(t float64) string {
 	switch {
 	case t <= CrossFloodingInstantS:
-		return fmt.Sprintf("%s, within 60 s: counts as instantaneous (MSC.1/Circ.1461)", FormatDuration(t))
+		return "within 60 s: counts as instantaneous (MSC.1/Circ.1461)"
 	case t <= CrossFloodingLimitS:
-		return fmt.Sprintf("%s, within the 10 min limit (SOLAS II-1 Reg. 7-2)", FormatDuration(t))
+		return "within the 10 min limit (SOLAS II-1 Reg. 7-2)"
 	}
-	return fmt.Sprintf("%s, BEYOND the 10 min limit (SOLAS II-1 Reg. 7-2)", FormatDuration(t))
+	return "BEYOND the 10 min limit (SOLAS II-1 Reg. 7-2)"
 }
 
 // bisect returns the least θ in (0, 1] where pred holds (pred(1) holds).
@@ -857,7 +858,7 @@ func (r *NetworkRun) Report() NetworkReport {
 		cf := &rep.CrossFlooding[k]
 		if !math.IsNaN(cf.EqualiseS) {
 			cf.Instant, cf.WithinTen = cf.EqualiseS <= CrossFloodingInstantS, cf.EqualiseS <= CrossFloodingLimitS
-			cf.Message = cf.Name + " equalises in " + crossWords(cf.EqualiseS)
+			cf.Message = fmt.Sprintf("%s equalises in %.0f s, %s", cf.Name, cf.EqualiseS, CrossFloodingVerdict(cf.EqualiseS))
 		} else if cf.Flowed {
 			cf.Message = cf.Name + " had not equalised when the run ended"
 		} else {

@@ -152,7 +152,7 @@ func TestNetworkHoleAndDuct(t *testing.T) {
 	if math.Abs(rep.SeaInM3-rep.PumpedM3-in) > 1e-6*in {
 		t.Errorf("through the hole %.6f m³, in the ship %.6f m³", rep.SeaInM3, in)
 	}
-	t.Logf("equalised after %s, %d steps, %d solves", FormatDuration(rep.EndS), rep.Steps, rep.Solves)
+	t.Logf("equalised after %.0f s, %d steps, %d solves", rep.EndS, rep.Steps, rep.Solves)
 }
 
 // The duct closed: only A floods, to the state of A alone open.

@@ -1,6 +1,7 @@
 package report
 
 import (
+	"fmt"
 	"io"
 	"math"
 	"strings"
@@ -158,7 +159,7 @@ func durationOrDash(s float64) string {
 	if math.IsNaN(s) {
 		return "—"
 	}
-	return engine.FormatDuration(s)
+	return Duration(s)
 }
 
 // NetworkText writes the run for a person: the paths, the outcome, each
@@ -174,7 +175,7 @@ func NetworkText(w io.Writer, rep engine.NetworkReport) error {
 	for _, p := range rep.Paths {
 		e.line("  ", p.Name, " (", p.Kind, "): ", p.From, " → ", p.To)
 	}
-	e.line("Outcome: ", rep.End.Headline(), " after ", engine.FormatDuration(rep.EndS), ". ", sentence(rep.EndReason), ".")
+	e.line("Outcome: ", FloodHeadline(rep.End), " after ", Duration(rep.EndS), ". ", sentence(rep.EndReason), ".")
 	t := table{right: []bool{false, true, true, true, true, true}}
 	t.add("compartment", "capacity m³", "first water", "full", "at rest", "water at end m³")
 	for _, k := range keptCompartments(rep) {
@@ -183,14 +184,19 @@ func NetworkText(w io.Writer, rep engine.NetworkReport) error {
 	}
 	writeLines(e, t.lines("  "))
 	for _, c := range rep.CrossFlooding {
-		e.line("  Cross-flooding in this run: ", c.Message, " (60 s or less counts as instantaneous, MSC.1/Circ.1461).")
+		if math.IsNaN(c.EqualiseS) {
+			e.line("  Cross-flooding in this run: ", c.Message, ".")
+			continue
+		}
+		e.line("  Cross-flooding in this run: ", c.Name, " equalises in ", Duration(c.EqualiseS), ", ", engine.CrossFloodingVerdict(c.EqualiseS),
+			" (60 s or less counts as instantaneous, MSC.1/Circ.1461).")
 	}
 	for _, c := range rep.StaticCrossFlooding {
-		e.line("  Cross-flooding with the damaged side flooded at once: ", c.Message, ".")
+		e.line("  With the damaged side flooded at once: ", CrossFloodingWords(c), ".")
 	}
 	e.line("Events")
 	for _, ev := range rep.Events {
-		e.line("  ", engine.FormatDuration(ev.TimeS), "  ", ev.Message)
+		e.line("  ", Duration(ev.TimeS), "  ", ev.Message)
 	}
 	e.line("Water against time (m³)")
 	keep := keptCompartments(rep)
@@ -205,7 +211,7 @@ func NetworkText(w io.Writer, rep engine.NetworkReport) error {
 		t.right[i] = i > 0
 	}
 	for _, s := range rep.Table {
-		row := []string{engine.FormatDuration(s.TimeS)}
+		row := []string{Duration(s.TimeS)}
 		for _, k := range keep {
 			row = append(row, num(s.WaterM3[k], 1, ""))
 		}
@@ -233,3 +239,35 @@ func NetworkText(w io.Writer, rep engine.NetworkReport) error {
 
 // staticNames names the compartments open in the static spread.
 func staticNames(rep engine.NetworkReport) []string { return rep.StaticFlooded }
+
+// singleCompartments is the `compartments` key of a run through one
+// compartment only.
+func singleCompartments(r engine.FloodReport) []NetCompDoc {
+	c := NetCompDoc{Name: r.Compartment, WaterM3: Num(r.FinalWaterM3), CapacityM3: Num(r.CapacityM3), StartM3: Num(r.Start.WaterM3)}
+	if r.FinalWaterM3 > r.Start.WaterM3 || r.Start.WaterM3 > 0 {
+		c.FirstWaterS = numPtr(0)
+	}
+	if r.End == engine.FloodFull {
+		c.FullS = numPtr(r.EndS)
+	}
+	if r.End == engine.FloodEqualised {
+		c.EqualisedS = optNum(r.EqualiseS)
+	}
+	return []NetCompDoc{c}
+}
+
+// networkKeys returns the flood JSON's `compartments` and `network` keys.
+func networkKeys(f Flood) ([]NetCompDoc, *NetworkDoc) {
+	if f.Network == nil {
+		return singleCompartments(f.Run), nil
+	}
+	n := BuildNetwork(*f.Network)
+	return NetCompartmentDocs(*f.Network), &n
+}
+
+// CrossFloodingWords says an MSC.362(92) estimate: the fitting, its time
+// beside the limits, and the figures that went in.
+func CrossFloodingWords(c engine.CrossFloodingEstimate) string {
+	return fmt.Sprintf("%s equalises in %s, %s (MSC.362(92): T = 2W/(S·F·√(2g·H0)), W %.1f m³, S %.3f m², F %.2f, H0 %.2f m)",
+		c.Name, Duration(c.TimeS), engine.CrossFloodingVerdict(c.TimeS), c.VolumeM3, c.AreaM2, c.F, c.HeadM)
+}

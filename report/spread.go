@@ -42,7 +42,7 @@ func crossDocsOf(es []engine.CrossFloodingEstimate) []CrossDoc {
 	for _, e := range es {
 		out = append(out, CrossDoc{Name: e.Name, TimeS: Num(e.TimeS), LimitS: engine.CrossFloodingLimitS, InstantS: engine.CrossFloodingInstantS,
 			WithinLimit: e.WithinTen, Instantaneous: e.Instant, HeadM: Num(e.HeadM), VolumeM3: Num(e.VolumeM3),
-			Method: "T = 2W/(S·F·√(2g·H0)), IMO Res. MSC.362(92)", Message: e.Message})
+			Method: "T = 2W/(S·F·√(2g·H0)), IMO Res. MSC.362(92)", Message: CrossFloodingWords(e)})
 	}
 	return out
 }
@@ -122,7 +122,7 @@ func writeSpread(e *errWriter, r Report) {
 		e.line("  ", sentence(l.Message), ".")
 	}
 	for _, c := range engine.CrossFloodingTimes(r.Vessel, *sp) {
-		e.line("  Cross-flooding: ", c.Message, ".")
+		e.line("  Cross-flooding: ", CrossFloodingWords(c), ".")
 	}
 	if sp.LostBy != nil {
 		e.line("  She floats with the compartments opened but is LOST through progressive flooding: ", sp.LostBy.Message, ".")

@@ -20,7 +20,7 @@ const (
 	posWidthWide    = 44
 )
 
-// layout is the division of the screen, worked out once per size change by
+// layout is the division of the screen, worked out at the end of every Update by
 // resize (the one place sizes are decided) and read by View.
 type layout struct {
 	small bool // below the minimum
