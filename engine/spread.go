@@ -226,3 +226,33 @@ func (sp Spread) Chain(v *Vessel) string {
 	}
 	return b.String()
 }
+
+// SpreadFlags says the spread as flags for a screen: one Danger flag per
+// link ("water-spreads"), and when she is lost through the spread, what
+// does it ("lost-through-spread") and what closing each link would keep.
+func SpreadFlags(v *Vessel, sp Spread) []Flag {
+	var out []Flag
+	for _, l := range sp.Links {
+		out = append(out, Flag{Code: "water-spreads", Severity: Danger, Message: l.Message})
+	}
+	if sp.LostBy != nil {
+		out = append(out, Flag{Code: "lost-through-spread", Severity: Danger,
+			Message: "she floats with the compartments opened but is lost through progressive flooding: " + sp.LostBy.Message})
+		for _, s := range sp.Savings {
+			sev := Caution
+			if s.Position != nil {
+				sev = Danger
+			}
+			out = append(out, Flag{Code: "closing-saves", Severity: sev, Message: s.Message})
+		}
+	}
+	for _, c := range CrossFloodingTimes(v, sp) {
+		sev := Info
+		if !c.WithinTen {
+			sev = Caution
+		}
+		out = append(out, Flag{Code: "cross-flooding-time", Severity: sev,
+			Message: fmt.Sprintf("%s equalises in %.0f s by MSC.362(92), %s", c.Name, c.TimeS, CrossFloodingVerdict(c.TimeS))})
+	}
+	return out
+}
