@@ -145,6 +145,7 @@ type NetworkReport struct {
 	// either is missing).
 	Static        *Spread
 	StaticFlooded []string // the names of the compartments open in Static
+	StaticChain   string   // Static's chain in words (Spread.Chain)
 	// StaticCrossFlooding is the MSC.362(92) estimate of each
 	// cross-flooding fitting's time in Static (the damaged side flooded at
 	// once), beside the run's own CrossFlooding times.
@@ -876,6 +877,7 @@ func (r *NetworkRun) Report() NetworkReport {
 		rep.StaticFlooded = append(rep.StaticFlooded, r.v.Compartments[i].Name)
 	}
 	rep.StaticCrossFlooding = CrossFloodingTimes(r.v, sp)
+	rep.StaticChain = sp.Chain(r.v)
 	if f, s := rep.Final.Position, sp.Position; f != nil && s != nil && r.end != FloodTimeLimit {
 		rep.FinalDiffM = math.Max(math.Abs(f.DraftAftM-s.DraftAftM), math.Max(math.Abs(f.DraftMidM-s.DraftMidM), math.Abs(f.DraftFwdM-s.DraftFwdM)))
 	}

@@ -120,6 +120,7 @@ func BuildNetwork(rep engine.NetworkReport) NetworkDoc {
 		d.Static = EquilibriumOf(rep.Static.Position)
 	}
 	d.StaticCrossFlooding = crossDocsOf(rep.StaticCrossFlooding)
+	d.StaticChain = rep.StaticChain
 	for _, p := range rep.Paths {
 		d.Paths = append(d.Paths, NetPathDoc{p.Kind, p.Name, p.From, p.To})
 	}

@@ -328,6 +328,9 @@ func timeUnit(T float64) (scale float64, unit string) {
 // was made, with the events marked by their letters; while the run
 // computes, the water so far.
 func (m model) floodPlot(w, h int) []string {
+	if m.flood.net != nil {
+		return m.netPlot(w, h)
+	}
 	st := m.st
 	f := m.flood
 	const rightW = 6

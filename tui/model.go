@@ -313,6 +313,8 @@ func (m model) update(msg tea.Msg) (tea.Model, tea.Cmd) {
 
 	case doorMsg:
 		return m.takeDoor(msg)
+	case netDoneMsg:
+		return m.takeNet(msg)
 
 	case tea.KeyMsg:
 		if m.lay.small {
