@@ -72,9 +72,6 @@ func checkConnections(v *Vessel) error {
 		}
 	}
 	for i, o := range v.Openings {
-		if o.LeadsTo != "" && v.CompartmentIndex(o.LeadsTo) < 0 {
-			return fmt.Errorf("opening %d (%q): it leads to %q, which is not a compartment of the vessel", i+1, o.Name, o.LeadsTo)
-		}
 		if o.AreaM2 < 0 || math.IsNaN(o.AreaM2) || math.IsInf(o.AreaM2, 0) {
 			return fmt.Errorf("opening %d (%q): area %v m² must be a finite number, zero or more", i+1, o.Name, o.AreaM2)
 		}
@@ -91,15 +88,6 @@ func (v *Vessel) CompartmentIndex(name string) int {
 		}
 	}
 	return -1
-}
-
-// LeadsToIndex returns the compartment opening o lets water into, or -1
-// when it leads to a space not modelled.
-func (v *Vessel) LeadsToIndex(o Opening) int {
-	if o.LeadsTo == "" {
-		return -1
-	}
-	return v.CompartmentIndex(o.LeadsTo)
 }
 
 // flowAreaM2 returns the area water flows through an opening: its own, or

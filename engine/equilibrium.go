@@ -141,6 +141,7 @@ type state struct {
 	j      [3][3]float64
 	heldIm []Immersion // held water at its own level, scaled by μ
 	heldPl []Plane     // the held water's surface in each compartment
+	jac    bool        // j was computed
 }
 
 // eval computes the residuals of equilibrium and their exact Jacobian with
@@ -202,6 +203,7 @@ func (pr *Problem) eval(p Plane, withJac bool) state {
 	if !withJac {
 		return s
 	}
+	s.jac = true
 	dV := [3]float64{e.AW, e.SX, e.SY}
 	dMX := [3]float64{e.SX, e.IXX, e.IXY}
 	dMY := [3]float64{e.SY, e.IXY, e.IYY}
@@ -390,8 +392,20 @@ func (pr *Problem) AtHeel(heelRad float64, guess Plane) (Plane, float64, error) 
 // Solve finds where v floats under damage d: the free-floating equilibrium
 // at the actual heel and trim. It returns a *NoEquilibrium error when the
 // vessel sinks or capsizes.
+//
+// The position's upright GM (GMUprightM) is filled in.
 func Solve(v *Vessel, d Damage) (Position, error) {
-	return NewProblem(v, d).Equilibrium()
+	pr := NewProblem(v, d)
+	pos, err := pr.Equilibrium()
+	if err != nil {
+		return pos, err
+	}
+	if math.IsNaN(pos.GMUprightM) {
+		if pl, _, err := pr.AtHeel(0, Plane{A: pos.Plane.A, B: pos.Plane.B}); err == nil {
+			pos.GMUprightM = pr.uprightAt(pl)
+		}
+	}
+	return pos, nil
 }
 
 // Equilibrium finds the free-floating position.

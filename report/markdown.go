@@ -43,7 +43,7 @@ func Markdown(w io.Writer, r Report) error {
 	if len(r.Open) == 0 && len(held) == 0 {
 		e.line("No compartment is open to the sea: this is the intact loading condition.")
 	} else if len(r.Open) == 0 {
-		e.line("No compartment is open to the sea.")
+		e.line("No compartment is open to the sea; the compartments below are flooded to a level (a stage of flooding).")
 	} else {
 		e.line("Compartments open to the sea (lost buoyancy, each with its permeability μ):")
 		e.line()
@@ -55,7 +55,7 @@ func Markdown(w io.Writer, r Report) error {
 	}
 	if len(held) > 0 {
 		e.line()
-		e.line("Compartments partly flooded (water held, the added-weight method):")
+		e.line("Compartments flooded to a level (a stage of flooding: water held, the added-weight method):")
 		e.line()
 		e.line("| Compartment | Water held |")
 		e.line("|---|--:|")
@@ -86,14 +86,17 @@ func Markdown(w io.Writer, r Report) error {
 			{"Draft forward (FP)", num(p.DraftFwdM, 3, "m")},
 			{"Trim", TrimWords(p.TrimM)},
 			{"Heel", HeelWords(p.HeelDeg)},
-			{"GM (free-surface corrected)", gmWords(p, a.UprightGMM)},
-			{"KM", num(p.KMTM, 3, "m")},
+			{"GM upright (free-surface corrected)", GMUprightWords(p)},
+			{"GM where she lies", GMAtRestWords(p)},
+			{"KM upright", num(kmUpright(p), 3, "m")},
 			{"KG", num(p.KGM, 3, "m")},
 			{"Free-surface correction", num(p.FSCM, 3, "m")},
 			{"GM longitudinal", num(p.GMLM, 1, "m")},
-			{"Displacement", num(p.DisplacementT, 1, "t")},
-			{"Buoyant volume", num(p.VolumeM3, 1, "m³")},
 		}
+		for _, row := range displacementRows(p) {
+			rows = append(rows, [2]string{sentence(row[0]), row[1]})
+		}
+		rows = append(rows, [2]string{"Buoyant volume", num(p.VolumeM3, 1, "m³")})
 		for _, row := range rows {
 			e.line("| ", row[0], " | ", row[1], " |")
 		}
@@ -101,8 +104,9 @@ func Markdown(w io.Writer, r Report) error {
 
 		e.line("## Freeboard")
 		e.line()
-		e.line("- Least freeboard to the deck edge: ", clearanceWords(p.DeckEdge))
-		e.line("- Margin line: ", clearanceWords(p.MarginLine))
+		for _, row := range deckLineRows(p, r.Vessel) {
+			e.line("- Least clearance of the ", row[0], ": ", row[1])
+		}
 		if len(p.Freeboards) > 0 {
 			e.line()
 			e.line("| Station x | Deck at side | Port | Starboard |")
@@ -131,6 +135,9 @@ func Markdown(w io.Writer, r Report) error {
 				if o.Weathertight {
 					state += ", weathertight"
 				}
+				if o.IntoFlooded {
+					state += ", into " + md(o.LeadsTo) + " (flooded already)"
+				}
 				e.line("| ", md(o.Name), " | ", md(orDash(o.Kind)), " | ", num(o.X, 1, "m"), " | ", num(o.Y, 1, "m"), " | ", num(o.Z, 1, "m"), " | ", num(o.HeightM, 3, "m"), " | ", state, " |")
 			}
 		}
@@ -154,6 +161,7 @@ func Markdown(w io.Writer, r Report) error {
 		}
 	}
 	e.line()
+	markdownSpills(e, a.Spills)
 
 	if r.Remedies != nil {
 		markdownRemedies(e, r.Remedies)
@@ -242,7 +250,7 @@ func Markdown(w io.Writer, r Report) error {
 		e.line("| Draft forward | ", num(h.DraftFwdM, 3, "m"), " | ", dash(func() string { return num(p.DraftFwdM, 3, "m") }), " |")
 		e.line("| Trim | ", TrimWords(h.TrimM), " | ", dash(func() string { return TrimWords(p.TrimM) }), " |")
 		e.line("| Heel | ", HeelWords(h.HeelDeg), " | ", dash(func() string { return HeelWords(p.HeelDeg) }), " |")
-		e.line("| GM | ", num(h.GMM, 3, "m"), " | ", dash(func() string { return num(p.GMM, 3, "m") }), " |")
+		e.line("| GM upright | ", num(h.GMM, 3, "m"), " | ", dash(func() string { return num(p.GMUprightM, 3, "m") }), " |")
 	}
 	e.line()
 

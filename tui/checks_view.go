@@ -63,7 +63,7 @@ func (m model) handAnswers(w int) []string {
 	row("Draft fwd", hw.DraftFwdM, func(q *engine.Position) float64 { return q.DraftFwdM }, 2, "m")
 	row("Trim", hw.TrimM, func(q *engine.Position) float64 { return q.TrimM }, 2, "m")
 	row("Heel", hw.HeelDeg, func(q *engine.Position) float64 { return q.HeelDeg }, 1, "°")
-	row("GM", hw.GMM, func(q *engine.Position) float64 { return q.GMM }, 2, "m")
+	row("GM upright", hw.GMM, func(q *engine.Position) float64 { return q.GMUprightM }, 2, "m")
 	return lines
 }
 

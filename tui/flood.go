@@ -226,7 +226,7 @@ func (m model) applyStage() (tea.Model, tea.Cmd) {
 	ci := f.req.ci
 	d := cloneDamage(m.damage)
 	d[ci] = engine.SpaceState{Permeability: f.req.base[ci].Permeability, WaterM3: st.WaterM3}
-	what := fmt.Sprintf("%s partly flooded: %s stage of the flooding run, %s m³ held",
+	what := fmt.Sprintf("%s flooded to a level: %s stage of the flooding run, %s m³ held",
 		m.v.Compartments[ci].Name, stageName(st.Fraction), num(st.WaterM3, 1))
 	if st.Fraction >= 1 && f.rep.End == engine.FloodEqualised {
 		// Once the levels have met, the space is open to the sea: the water

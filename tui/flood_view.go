@@ -91,7 +91,7 @@ func (m model) floodText(w, h, want int) []string {
 	events := m.floodEvents(w)
 	stages := m.floodStages(w)
 	var clear []string
-	if c := clearLine(r); c != "" {
+	if c := clearLine(r, m.v.Passenger()); c != "" {
 		clear = []string{st.Dim.Render(clip(c, w))}
 	}
 	fixed := len(head) + len(stages)
@@ -205,14 +205,19 @@ func (m model) floodEvents(w int) []string {
 }
 
 // clearLine says which of the deck edge and the margin line stayed clear
-// of the water all through the run ("" if both went under).
-func clearLine(r *engine.FloodReport) string {
+// of the water all through the run ("" if both went under). A cargo ship
+// has no margin line (a passenger-ship notion): only the deck edge is said.
+func clearLine(r *engine.FloodReport, passenger bool) string {
 	var deck, margin bool
 	for _, e := range r.Events {
 		deck = deck || e.Kind == engine.DeckEdgeReached
 		margin = margin || e.Kind == engine.MarginLineReached
 	}
 	switch {
+	case !passenger && !deck:
+		return "  deck edge (bulkhead deck) stays clear"
+	case !passenger:
+		return ""
 	case !deck && !margin:
 		return "  deck edge and margin line stay clear"
 	case !deck:
@@ -248,7 +253,7 @@ func (m model) floodStages(w int) []string {
 		crit, bad := criteriaWord(s.Criteria)
 		style := st.Text
 		if p := s.Position; p != nil {
-			row += padLeft(heelShort(p.HeelDeg), 7) + " " + padLeft(num(p.GMM, 2), 5)
+			row += padLeft(heelShort(p.HeelDeg), 7) + " " + padLeft(num(p.GMUprightM, 2), 5)
 			if deck {
 				row += " " + padLeft(num(p.DeckEdge.HeightM, 2), 5)
 			}

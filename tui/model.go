@@ -78,11 +78,12 @@ type model struct {
 	editing  bool
 	inputErr string
 
-	form   floodForm   // the hole-and-pumps form of a flooding run
-	flood  floodState  // the flooding run and its panel
-	rem    remedyState // the righting options and their panel
-	girder girderPanel // the hull girder's shear force and bending moment (strength_view.go)
-	doors  doorsPanel  // the doors and valves, open or shut (doors.go)
+	form   floodForm    // the hole-and-pumps form of a flooding run
+	flood  floodState   // the flooding run and its panel
+	rem    remedyState  // the righting options and their panel
+	girder girderPanel  // the hull girder's shear force and bending moment (strength_view.go)
+	rd     readingPanel // draft marks, readings by hand and their diagnosis (reading_panel.go)
+	doors  doorsPanel   // the doors and valves, open or shut (doors.go)
 
 	rend    *lipgloss.Renderer
 	palette int
@@ -254,6 +255,9 @@ func (m model) Update(msg tea.Msg) (tea.Model, tea.Cmd) {
 
 // update handles one message.
 func (m model) update(msg tea.Msg) (tea.Model, tea.Cmd) {
+	if mm, cmd, ok := m.readingMsg(msg); ok {
+		return mm, cmd
+	}
 	switch msg := msg.(type) {
 	case tea.WindowSizeMsg:
 		m.width, m.height = msg.Width, msg.Height
@@ -317,6 +321,7 @@ func (m model) update(msg tea.Msg) (tea.Model, tea.Cmd) {
 		return m.takeNet(msg)
 
 	case tea.KeyMsg:
+		msg = plainKey(msg)
 		if m.lay.small {
 			return m.smallScreenKey(msg)
 		}

@@ -434,7 +434,7 @@ func TestHandWorkingShown(t *testing.T) {
 		}{
 			{"Draft aft", a.Hand.DraftAftM, a.Position.DraftAftM},
 			{"Draft fwd", a.Hand.DraftFwdM, a.Position.DraftFwdM},
-			{"GM", a.Hand.GMM, a.Position.GMM},
+			{"GM upright", a.Hand.GMM, a.Position.GMUprightM},
 		} {
 			// Only the hand table has three numbers in a row after the label.
 			re := regexp.MustCompile(f.label + `\s+(-?\d+\.\d+)\s+(-?\d+\.\d+)\s+(\d+\.\d+) m`)

@@ -230,7 +230,7 @@ func remedyColumns(w int) remedyCols {
 func (c remedyCols) header() string {
 	s := " # " + pad("action", c.actionW) + padLeft("mass t", 7) + padLeft("heel", 8) + padLeft("GM m", 6) + padLeft("deck m", 7)
 	if c.wide {
-		s += padLeft("GM₀ m", 7) + padLeft("opening", 8)
+		s += padLeft("rest m", 7) + padLeft("opening", 8)
 		return s + "  advisable"
 	}
 	return s + "  adv"
@@ -254,11 +254,11 @@ func (m model) remedyRow(c remedyCols, rank int, o engine.Remedy) []string {
 	var heel, gm, deck, gm0, open string
 	deckStyle, heelStyle := text, text
 	if p := o.Position; p != nil {
-		heel, gm, deck = heelShort(p.HeelDeg), num(p.GMM, 2), num(p.DeckEdge.HeightM, 2)
+		heel, gm, deck = heelShort(p.HeelDeg), num(o.UprightGMM, 2), num(p.DeckEdge.HeightM, 2)
 		if p.DeckEdge.HeightM < 0 {
 			deckStyle = st.Danger
 		}
-		gm0, open = num(o.UprightGMM, 2), num(o.LowestOpeningM, 2)
+		gm0, open = num(p.GMAtRestM, 2), num(o.LowestOpeningM, 2)
 	} else {
 		heel, heelStyle = "no pos.", st.Danger
 		if o.NoEq != nil && o.NoEq.Outcome != engine.NotConverged {

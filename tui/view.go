@@ -69,7 +69,7 @@ func (m model) headerView(w int) string {
 	}
 	if m.cur != nil && m.cur.Position != nil {
 		p := m.cur.Position
-		sum = append(sum, "heel "+heelShort(p.HeelDeg), "GM "+num(p.GMM, 2)+" m")
+		sum = append(sum, "heel "+heelShort(p.HeelDeg), "GM "+num(p.GMUprightM, 2)+" m")
 	} else if m.noPosition() {
 		sum = append(sum, "NO FLOATING POSITION")
 	}
@@ -95,6 +95,9 @@ func (m model) narrowBody() []string {
 	l := m.lay
 	sep := m.st.Dim.Render("│")
 	list := m.listView(l.listW, l.bodyH)
+	if m.rd.show {
+		return besides(sep, fit(list, l.listW, l.bodyH), fit(m.readingLines(l.rightW, l.bodyH), l.rightW, l.bodyH))
+	}
 	if m.girder.show {
 		return besides(sep, fit(list, l.listW, l.bodyH), fit(m.girderLines(l.rightW, l.bodyH), l.rightW, l.bodyH))
 	}
@@ -166,6 +169,8 @@ func (m model) wideBody() []string {
 	rule := m.st.Dim.Render(strings.Repeat("─", m.width))
 	var pics []string
 	switch {
+	case m.rd.show:
+		pics = m.readingLines(m.width, l.picH)
 	case m.girder.show:
 		pics = m.girderLines(m.width, l.picH)
 	case m.doors.show:

@@ -7,41 +7,18 @@ import (
 )
 
 // This file reads the [[connection]] tables (doors, hatches, ducts, pipes
-// and cross-flooding fittings between two compartments) and the keys of an
-// [[opening]] that say where it lets water in (leads_to, area).
+// and cross-flooding fittings between two compartments) and the area key
+// of an [[opening]] (its leads_to is read in openings.go).
 
 // touchTolM is how near two compartments' boxes must come to count as
 // touching, m.
 const touchTolM = 1e-3
 
-// openingFlow reads an opening's leads_to and area keys.
-func (r *reader) openingFlow(t *table, o *engine.Opening) {
-	if s, ok := t.str("leads_to", false, "the name of the compartment the opening lets water into"); ok {
-		if strings.TrimSpace(s) == "" {
-			r.addf(t.keyPath("leads_to"), "is empty: name the compartment it lets water into, or leave the key out for a space not modelled")
-		} else {
-			o.LeadsTo = s
-		}
-	}
+// openingArea reads an opening's area key (its leads_to is read in
+// openings.go).
+func (r *reader) openingArea(t *table, o *engine.Opening) {
 	if a, ok := t.positive("area", "m², the area water flows through", false); ok {
 		o.AreaM2 = a
-	}
-}
-
-// checkLeadsTo checks that each opening's leads_to names a compartment
-// (only when every compartment could be read, so that a compartment with
-// a mistake of its own is not reported twice).
-func (r *reader) checkLeadsTo(ts []*table, os []engine.Opening, names map[string]int) {
-	if len(r.probs) > 0 {
-		return
-	}
-	for i, o := range os {
-		if o.LeadsTo == "" || i >= len(ts) {
-			continue
-		}
-		if _, ok := names[strings.ToLower(strings.TrimSpace(o.LeadsTo))]; !ok {
-			r.addf(ts[i].keyPath("leads_to"), "%q is not the name of a compartment in this file", o.LeadsTo)
-		}
 	}
 }
 

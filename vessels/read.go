@@ -130,7 +130,7 @@ func (r *reader) vessel(root *table) (*engine.Vessel, *Info) {
 	comps, cinfo := r.compartments(root.entries("compartment", "one space of the ship"), hull)
 	openingTables := root.entries("opening", "a point where water would spread")
 	openings := r.openings(openingTables)
-	r.checkLeadsTo(openingTables, openings, compartmentNames(comps))
+	r.checkLeadsTo(openingTables, openings, comps)
 	conns, warns := r.connections(root.entries("connection", "a door, hatch, duct or pipe between two compartments"), comps, len(r.probs) == 0)
 	if hull != nil && (marginOK && margin < hull.DepthM || !root.has("margin_line_depth")) {
 		r.marginBelowKeel(hull, margin, marginOK)
@@ -446,10 +446,11 @@ func (r *reader) compartments(ts []*table, hull *engine.Hull) ([]*engine.Compart
 		}
 		c.Use = use
 		c.Permeability = mu
+		c.PumpM3h = ci.PumpM3h
 		if liquid != nil {
 			if liquid.volumeM3 >= 0 {
-				if vol := c.Volume(); liquid.volumeM3 > vol*(1+1e-9) {
-					r.addf(t.keyPath("fill_m3"), "%g m³ is more than the tank holds (%.1f m³ inside the hull)", liquid.volumeM3, vol)
+				if vol := c.CapacityM3(); liquid.volumeM3 > vol*(1+1e-9) {
+					r.addf(t.keyPath("fill_m3"), "%g m³ is more than the tank holds (%.1f m³: permeability %g × %.1f m³ inside the hull)", liquid.volumeM3, vol, c.Permeability, c.Volume())
 				} else {
 					liquid.Fill = math.Min(liquid.volumeM3/vol, 1)
 				}
@@ -642,7 +643,8 @@ func (r *reader) openings(ts []*table) []engine.Opening {
 			o.Kind = k
 		}
 		o.Weathertight, _ = t.boolean("closed_weathertight")
-		r.openingFlow(t, &o)
+		o.LeadsTo = r.leadsTo(t)
+		r.openingArea(t, &o)
 		t.finish()
 		out = append(out, o)
 	}

@@ -182,7 +182,7 @@ func runFlood(args []string, stdout, stderr io.Writer) int {
 	if err != nil {
 		return fail("%v", err)
 	}
-	fr := report.Flood{Run: rep, VesselFile: source(info), Open: inOrderGiven(open), HoleFrom: fc.HoleFrom, PumpsFrom: fc.PumpsFrom, Version: version}
+	fr := report.Flood{Run: rep, VesselFile: source(info), Open: inOrderGiven(open), HoleFrom: fc.HoleFrom, PumpsFrom: fc.PumpsFrom, Version: version, Passenger: v.Passenger()}
 	if fr.Network, err = floodNetwork(c, rep); err != nil {
 		return fail("%v", err)
 	}
