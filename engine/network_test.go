@@ -9,6 +9,7 @@ package engine
 
 import (
 	"math"
+	"math/rand"
 	"testing"
 )
 
@@ -185,5 +186,46 @@ func TestNetworkPumpsConserve(t *testing.T) {
 	in := sum(rep.Final.WaterM3) - sum(rep.Start.WaterM3)
 	if rep.PumpedM3 <= 0 || math.Abs(rep.SeaInM3-rep.PumpedM3-in) > 1e-6*rep.SeaInM3 {
 		t.Errorf("sea in %.4f, pumped %.4f, held %.4f m³", rep.SeaInM3, rep.PumpedM3, in)
+	}
+}
+
+// Random networks on the box barge: holes, ducts and doors of random size
+// and height, some with a tank holding ballast. Every run ends (no panic,
+// no step bound), every figure is finite, and the water is conserved.
+func TestNetworkRandom(t *testing.T) {
+	rng := rand.New(rand.NewSource(13))
+	for n := 0; n < 12; n++ {
+		b := flBox{L: 80, B: 16, D: 8, T: 3 + 2*rng.Float64(), KG: 4, comps: []flComp{
+			{"A", Box{20, 30, 0, 8, 0, 8}, 0.95},
+			{"B", Box{30, 40, 0, 8, 0, 8}, 0.95},
+			{"C", Box{30, 40, -8, 0, 0, 8}, 0.6 + 0.35*rng.Float64()},
+		}}
+		v := b.vessel(t)
+		for k, e := range [][2]int{{0, 1}, {1, 2}} {
+			v.Connections = append(v.Connections, Connection{Name: "path " + string(rune('1'+k)), Kind: "door", From: e[0], To: e[1],
+				AreaM2: 0.05 + 1.5*rng.Float64(), X: 30, Y: 0, Z: 6 * rng.Float64(), HeightM: 2 * rng.Float64(), Open: rng.Intn(4) > 0, K: 3 * rng.Float64()})
+		}
+		h := Hole{AreaM2: 0.01 + 0.3*rng.Float64(), XM: 25, YM: 8, ZM: 2.5 * rng.Float64(), Cd: 0.6}
+		c := NetworkCase{Vessel: v, Holes: []NetHole{{0, h}}, LimitS: 6 * 3600}
+		if rng.Intn(2) == 0 {
+			c.Pumps = []NetPump{{0, 300 * rng.Float64()}}
+		}
+		rep, err := RunNetwork(c, nil)
+		if err != nil {
+			t.Fatal(err)
+		}
+		if rep.End == FloodFailed {
+			t.Errorf("case %d: %s", n, rep.EndReason)
+			continue
+		}
+		in := sum(rep.Final.WaterM3) - sum(rep.Start.WaterM3)
+		for _, x := range append(append([]float64{in, rep.SeaInM3, rep.PumpedM3, rep.EndS}, rep.Final.WaterM3...), rep.Final.FlowM3h...) {
+			if math.IsNaN(x) || math.IsInf(x, 0) {
+				t.Fatalf("case %d: a figure is not finite: %+v", n, rep.Final)
+			}
+		}
+		if math.Abs(rep.SeaInM3-rep.PumpedM3-in) > 1e-5*math.Max(rep.SeaInM3, 1) {
+			t.Errorf("case %d: sea in %.4f, pumped %.4f, held %.4f m³", n, rep.SeaInM3, rep.PumpedM3, in)
+		}
 	}
 }
