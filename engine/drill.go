@@ -88,6 +88,10 @@ type Drill struct {
 	lost  bool
 
 	equalisedAny bool // set by equalise: the state changed, the slope must be taken anew
+
+	alarmAt float64
+	alarmOn map[int]bool // fitted → sounded
+	alarms  []DrillAlarm
 }
 
 // NewDrill starts a drill of v from the intact condition base (nil:
@@ -420,6 +424,7 @@ func (d *Drill) integrate(stop float64) {
 		p := e.pos
 		d.pos, d.noEq = &p, nil
 		d.equalise(e)
+		d.sound()
 		e0 = e
 		if d.equalisedAny {
 			d.equalisedAny = false

@@ -84,9 +84,9 @@ func (m model) takeNet(msg netDoneMsg) (tea.Model, tea.Cmd) {
 
 // netPlot draws the water in each compartment the run through the ship
 // reached against time, one letter per compartment, with the legend.
-func (m model) netPlot(w, h int) []string {
-	st := m.st
-	r := m.flood.net
+func (p floodState) netPlot(w, h int) []string {
+	st := p.st
+	r := p.net
 	var keep []int
 	for k, c := range r.Compartments {
 		if !math.IsNaN(c.FirstWaterS) {

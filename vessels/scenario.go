@@ -377,3 +377,18 @@ func (r *reader) scenarioEvent(t *table, sc *Scenario) (engine.DrillEvent, bool)
 	}
 	return e, ok
 }
+
+// Setup returns what the drill of sc is played from, with extra events
+// (the crew's and the instructor's) merged in time order after the
+// scenario's own at the same minute.
+func (sc *Scenario) Setup(extra ...engine.DrillEvent) engine.DrillSetup {
+	ev := append(append([]engine.DrillEvent(nil), sc.Events...), extra...)
+	sort.SliceStable(ev, func(i, j int) bool { return ev[i].Minutes < ev[j].Minutes })
+	pumps := make([]float64, len(sc.Vessel.Compartments))
+	for i := range pumps {
+		if sc.Info != nil && i < len(sc.Info.Compartments) {
+			pumps[i] = sc.Info.Compartments[i].PumpM3h
+		}
+	}
+	return engine.DrillSetup{Vessel: sc.Vessel, Events: ev, EndMin: sc.Minutes, Alarms: sc.Alarms, AlarmLevel: AlarmLevelM, PumpM3h: pumps}
+}

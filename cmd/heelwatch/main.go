@@ -56,6 +56,7 @@ Usage:
   heelwatch vessels [NAME]           list the bundled vessels, or print one's file
   heelwatch flood [flags]            flooding through a hole over time
   heelwatch diagnose --readings FILE what is flooding, from the crew's readings
+  heelwatch drill SCENARIO           a damage-control exercise (--run: headless)
   heelwatch help [COMMAND]           help on a command
 
 Flags:
@@ -118,6 +119,8 @@ func run(args []string, stdout, stderr io.Writer) int {
 		return runFlood(withVessel(rest), stdout, stderr)
 	case "diagnose":
 		return runDiagnose(withVessel(rest), stdout, stderr)
+	case "drill":
+		return runDrill(rest, stdout, stderr)
 	case "help":
 		if len(rest) == 0 {
 			fmt.Fprintf(stdout, mainHelp, vessels.Default)
@@ -126,10 +129,10 @@ func run(args []string, stdout, stderr io.Writer) int {
 		if len(rest) == 1 && rest[0] != "help" {
 			return run([]string{rest[0], "--help"}, stdout, stderr)
 		}
-		fmt.Fprintf(stderr, "heelwatch help: name one command: solve, check, vessels, flood or diagnose\n")
+		fmt.Fprintf(stderr, "heelwatch help: name one command: solve, check, vessels, flood, diagnose or drill\n")
 		return exitUsage
 	}
-	fmt.Fprintf(stderr, "heelwatch: no command %q; the commands are solve, check, vessels, flood, diagnose and help\n", cmd)
+	fmt.Fprintf(stderr, "heelwatch: no command %q; the commands are solve, check, vessels, flood, diagnose, drill and help\n", cmd)
 	return exitUsage
 }
 
