@@ -118,7 +118,7 @@ const (
 // NetStage is an intermediate stage: a fraction of the water in at the end.
 type NetStage struct {
 	Fraction float64
-	WaterM3  float64 // in all compartments together
+	WaterM3  float64 // sea water taken in by then, all compartments together
 	TimeS    float64
 	Reached  bool
 	Position *Position
@@ -950,7 +950,7 @@ func (r *NetworkRun) table() []NetSample {
 // fraction f of its rise over the run.
 func (r *NetworkRun) stage(f, start, final float64) NetStage {
 	target := start + f*(final-start)
-	st := NetStage{Fraction: f, WaterM3: target}
+	st := NetStage{Fraction: f, WaterM3: f * (final - start)}
 	n := len(r.nodes)
 	for _, rec := range r.recs {
 		s0, s1 := sum(rec.y0[:n]), sum(rec.y1[:n])

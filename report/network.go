@@ -41,10 +41,19 @@ type NetworkDoc struct {
 	StaticCrossFlooding []CrossDoc     `json:"static_cross_flooding"`
 	Events              []NetEventDoc  `json:"events"`
 	Trace               []NetSampleDoc `json:"trace"`
+	Stages              []NetStageDoc  `json:"stages"` // 25, 50, 75 and 100 % of the water the ship took in the run
 	SeaInM3             Num            `json:"sea_in_m3"`
 	PumpedM3            Num            `json:"pumped_m3"`
 	Steps               int            `json:"steps"`
 	Solves              int            `json:"solves"`
+}
+
+// NetStageDoc is an intermediate stage of the run through the ship.
+type NetStageDoc struct {
+	Fraction Num          `json:"fraction"`
+	WaterM3  Num          `json:"water_m3"` // sea water taken in by then, all compartments together
+	TimeS    *Num         `json:"time_s"`   // null if the run did not come to it
+	Position *Equilibrium `json:"position"` // null without a floating position
 }
 
 // NetPathDoc is one way the water moved.
@@ -130,6 +139,14 @@ func BuildNetwork(rep engine.NetworkReport) NetworkDoc {
 	}
 	for _, e := range rep.Events {
 		d.Events = append(d.Events, NetEventDoc{e.Kind.String(), e.Name, Num(e.TimeS), e.Message})
+	}
+	d.Stages = []NetStageDoc{}
+	for _, st := range rep.Stages {
+		sd := NetStageDoc{Fraction: Num(st.Fraction), WaterM3: Num(st.WaterM3), Position: EquilibriumOf(st.Position)}
+		if st.Reached {
+			sd.TimeS = optNum(st.TimeS)
+		}
+		d.Stages = append(d.Stages, sd)
 	}
 	keep := keptCompartments(rep)
 	for _, s := range rep.Trace {
@@ -217,6 +234,22 @@ func NetworkText(w io.Writer, rep engine.NetworkReport) error {
 			row = append(row, num(s.WaterM3[k], 1, ""))
 		}
 		if p := s.Position; p != nil {
+			row = append(row, num(p.HeelDeg, 2, ""), num(p.DraftAftM, 3, ""), num(p.DraftFwdM, 3, ""))
+		} else {
+			row = append(row, "—", "—", "—")
+		}
+		t.add(row...)
+	}
+	writeLines(e, t.lines("  "))
+	e.line("Stages (of the water the ship took in)")
+	t = table{right: []bool{true, true, true, true, true, true}}
+	t.add("stage", "taken in m³", "reached", "heel °", "T aft m", "T fwd m")
+	for _, sg := range rep.Stages {
+		row := []string{num(100*sg.Fraction, 0, "%"), num(sg.WaterM3, 1, ""), "—"}
+		if sg.Reached {
+			row[2] = Duration(sg.TimeS)
+		}
+		if p := sg.Position; p != nil {
 			row = append(row, num(p.HeelDeg, 2, ""), num(p.DraftAftM, 3, ""), num(p.DraftFwdM, 3, ""))
 		} else {
 			row = append(row, "—", "—", "—")
