@@ -229,3 +229,35 @@ func TestNetworkRandom(t *testing.T) {
 		}
 	}
 }
+
+// The sea reaches C only through its vent, once A and B have flooded and
+// the vent has gone under: C's first water comes after the vent's event,
+// and the run ends at the static spread (A, B, then C through the vent)
+// within 5 mm.
+func TestNetworkThroughVent(t *testing.T) {
+	v := spBarge(t, 0.5, true, []Opening{{Name: "Vent C", Kind: "vent", X: 55, Y: 4, Z: 4.8, LeadsTo: "Void C", AreaM2: 0.5}})
+	h := Hole{AreaM2: 0.2, XM: 35, YM: 8, ZM: 0.5, Cd: 0.6}
+	rep, err := RunNetwork(NetworkCase{Vessel: v, Holes: []NetHole{{0, h}}}, nil)
+	if err != nil {
+		t.Fatal(err)
+	}
+	var vent float64 = math.NaN()
+	for _, e := range rep.Events {
+		if e.Kind == NetOpening && e.Name == "Vent C" {
+			vent = e.TimeS
+		}
+	}
+	var c NetCompartment
+	for _, x := range rep.Compartments {
+		if x.Name == "Void C" {
+			c = x
+		}
+	}
+	if rep.End != FloodEqualised || math.IsNaN(vent) || !(c.FirstWaterS >= vent-1) {
+		t.Fatalf("end %v (%s), vent under at %v s, C's first water at %v s", rep.End, rep.EndReason, vent, c.FirstWaterS)
+	}
+	if len(rep.Static.Links) != 2 || rep.FinalDiffM > 0.005 {
+		t.Errorf("static links %d, %.4f m off", len(rep.Static.Links), rep.FinalDiffM)
+	}
+	t.Logf("vent under at %.0f s, C first water %.0f s, end %.0f s, %d steps", vent, c.FirstWaterS, rep.EndS, rep.Steps)
+}
