@@ -131,3 +131,26 @@ func writeSpread(e *errWriter, r Report) {
 		}
 	}
 }
+
+// markdownSpread writes how the water spread, for the Markdown report.
+func markdownSpread(e *errWriter, r Report) {
+	sp := r.Spread
+	if sp == nil || r.Vessel == nil || len(sp.Links) == 0 {
+		return
+	}
+	e.line()
+	e.line("Water spreads beyond the compartments opened (progressive flooding, to a fixed point):")
+	e.line()
+	for _, l := range sp.Links {
+		e.line("- ", md(sentence(l.Message)), ".")
+	}
+	for _, c := range engine.CrossFloodingTimes(r.Vessel, *sp) {
+		e.line("- Cross-flooding: ", md(CrossFloodingWords(c)), ".")
+	}
+	if sp.LostBy != nil {
+		e.line("- **She floats with the compartments opened but is lost through progressive flooding:** ", md(sp.LostBy.Message), ".")
+		for _, s := range sp.Savings {
+			e.line("- ", md(sentence(s.Message)), ".")
+		}
+	}
+}
