@@ -90,9 +90,10 @@ type drillModel struct {
 	asking   string // "" or what the input asks for: "breach", "note"
 	pickComp int
 
-	debrief   viewport.Model
-	debriefed bool
-	noTick    bool // tests drive the clock themselves
+	debrief     viewport.Model
+	debriefText string
+	debriefed   bool
+	noTick      bool // tests drive the clock themselves
 }
 
 // RunDrill shows the drill of scenario sc until the instructor quits.
@@ -145,6 +146,9 @@ func (m *drillModel) Update(msg tea.Msg) (tea.Model, tea.Cmd) {
 	case tea.WindowSizeMsg:
 		m.w, m.h = msg.Width, msg.Height
 		m.debrief.Width, m.debrief.Height = msg.Width, max(msg.Height-2, 3)
+		if m.debriefText != "" {
+			m.debrief.SetContent(lipgloss.NewStyle().Width(m.w).Render(m.debriefText))
+		}
 		return m, nil
 	case drillTick:
 		m.advance(drillTickEvery.Seconds())
@@ -159,7 +163,8 @@ func (m *drillModel) Update(msg tea.Msg) (tea.Model, tea.Cmd) {
 			m.status = "debrief: " + msg.err.Error()
 			return m, nil
 		}
-		m.debrief.SetContent(msg.text)
+		m.debriefText = msg.text
+		m.debrief.SetContent(lipgloss.NewStyle().Width(m.w).Render(msg.text))
 		m.mode = drillDebrief
 		return m, nil
 	case tea.KeyMsg:
@@ -425,7 +430,7 @@ func (m *drillModel) View() string {
 	default:
 		body = m.crewView(m.w, m.h-2)
 	}
-	body = lipgloss.NewStyle().MaxHeight(m.h - 2).Render(body)
+	body = lipgloss.NewStyle().Height(m.h - 2).MaxHeight(m.h - 2).Render(body)
 	return lipgloss.JoinVertical(lipgloss.Left, m.header(), body, m.footer())
 }
 
@@ -454,12 +459,12 @@ func (m *drillModel) footer() string {
 	case m.mode == drillDebrief:
 		s = "↑/↓ pgup/pgdn scroll · q quit"
 	case m.mode == drillInstructor:
-		s = "b breach · f pump fails · n note · D debrief · i crew view · space pause · +/- speed · q quit"
+		s = "b breach · f pump fails · n note · D debrief · i crew · space pause · +/- speed · q quit"
 	default:
-		s = "m mark flooded/dry · p start pump · s stop pump · space pause · +/- speed · i instructor · q quit"
+		s = "m mark · p pump on · s pump off · space pause · +/- speed · i instructor · q quit"
 	}
-	if m.status != "" && m.asking == "" {
-		s = m.status + "  |  " + s
+	if m.status != "" && m.asking == "" && m.pick == pickNone {
+		s = m.status + " · " + s
 	}
 	return lipgloss.NewStyle().Width(m.w).MaxWidth(m.w).Render(clipText(s, m.w))
 }

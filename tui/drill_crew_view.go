@@ -65,7 +65,7 @@ func (m *drillModel) crewView(w, h int) string {
 			a1, f1 := report.ReadAftFwd(v, rs[len(rs)-1])
 			dt := rs[len(rs)-1].Minutes - rs[0].Minutes
 			lines = append(lines, fmt.Sprintf("  over %s: heel %s, mean draft %s", report.Duration(dt*60),
-				report.Signed(rs[len(rs)-1].HeelDeg-rs[0].HeelDeg, 1, "°"), report.Signed(((a1+f1)-(a0+f0))/2*100, 0, " cm")))
+				report.Signed(rs[len(rs)-1].HeelDeg-rs[0].HeelDeg, 1, "°"), report.Signed(((a1+f1)-(a0+f0))/2*100, 0, "cm")))
 		}
 	}
 	lines = append(lines, "")
