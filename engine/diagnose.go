@@ -163,9 +163,10 @@ func Diagnose(v *Vessel, rs []Reading, o DiagnoseOptions) (Diagnosis, error) {
 		if len(kept) >= o.Keep {
 			break
 		}
-		// A group that ranks below one of its own parts says nothing
-		// more than that part (often a holed tank whose contents weigh
-		// what the sea water that replaced them does).
+		// A group that ranks below one of its own parts and explains the
+		// readings no better says nothing more than that part (often a
+		// holed tank whose contents weigh what the sea water that replaced
+		// them does).
 		if !c.meaningful() || containsPart(kept, c) {
 			continue
 		}
@@ -262,9 +263,14 @@ type diagCand struct {
 	score  float64
 }
 
-// containsPart reports whether c's set holds the whole set of one of kept.
+// containsPart reports whether c's set holds the whole set of one of kept
+// while its misfit is not lower by at least one unit of χ² (one reading's
+// worth of noise).
 func containsPart(kept []*diagCand, c *diagCand) bool {
 	for _, k := range kept {
+		if c.misfit < k.misfit-1 {
+			continue
+		}
 		all := true
 		for _, ci := range k.set {
 			found := false
@@ -417,7 +423,9 @@ func (f *diagFitter) fitToPlane(set []int) *diagCand {
 	for i := range set {
 		c.vol[i] = math.Max(0, need) * c.moul[i] / capSum
 	}
-	x, _, ok := boundedLeastSquares(c.vol, lo, hi, h, 8, func(x []float64) ([]float64, bool) {
+	// A start, not the answer: within a tenth of a reading's error of
+	// the observed plane is enough (the free solve judges).
+	x, _, ok := boundedLeastSquares(c.vol, lo, hi, h, 8, 0.01, func(x []float64) ([]float64, bool) {
 		return f.planeResiduals(set, x), true
 	})
 	if ok {
@@ -487,7 +495,7 @@ func (f *diagFitter) refine(c *diagCand) {
 		mu := f.v.Compartments[c.set[0]].Permeability
 		x0, lo, hi, h = append(x0, mu), append(lo, 0.5), append(hi, 1), append(h, 0.01)
 	}
-	x, _, ok := boundedLeastSquares(x0, lo, hi, h, 6, func(x []float64) ([]float64, bool) {
+	x, _, ok := boundedLeastSquares(x0, lo, hi, h, 6, 0, func(x []float64) ([]float64, bool) {
 		mu := 0.0
 		if len(x) > k {
 			mu = x[k]

@@ -246,7 +246,7 @@ func (f *diagFitter) refineFixed(c *diagCand) {
 	for i := range c.set {
 		h[i] = math.Max(0.5, 1e-3*c.moul[i])
 	}
-	x, _, ok := boundedLeastSquares(c.vol, lo, hi, h, 8, func(x []float64) ([]float64, bool) {
+	x, _, ok := boundedLeastSquares(c.vol, lo, hi, h, 8, 0, func(x []float64) ([]float64, bool) {
 		res, _, ok := f.readingResiduals(f.damage(c.set, x, c.mu))
 		return res, ok
 	})

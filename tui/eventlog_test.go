@@ -252,7 +252,7 @@ func TestTooSmallTakesOnlyQuit(t *testing.T) {
 	}
 	mm, _ := m.Update(tea.KeyMsg{Type: tea.KeyRunes, Runes: []rune("q"), Paste: true})
 	m = mm.(model)
-	if m.seq != seq || len(m.log) != logN || m.sel != sel || m.editing || m.form.on || !allZero(m.damage) {
+	if m.seq != seq || len(m.log) != logN || m.sel != sel || m.mode != modeBrowse || !allZero(m.damage) {
 		t.Errorf("the too-small screen let keys change the state: seq %d→%d, log %d→%d", seq, m.seq, logN, len(m.log))
 	}
 	if after := strings.Join(fileLines(t, path), "\n"); after != before {
@@ -268,14 +268,14 @@ func TestTooSmallTakesOnlyQuit(t *testing.T) {
 func TestNoClipboardProgram(t *testing.T) {
 	m := testModel(t, 100, 30)
 	m = press(t, m, "m") // type an exact permeability
-	if !m.editing {
+	if m.mode != modeMu {
 		t.Fatal("not editing")
 	}
 	if m.input.KeyMap.Paste.Enabled() {
 		t.Error("the permeability field has its clipboard key enabled")
 	}
 	form := press(t, testModel(t, 100, 30), "f") // the flooding run's form
-	if !form.form.on {
+	if form.mode != modeForm {
 		t.Fatal("no form")
 	}
 	for k := range form.form.fields {

@@ -66,10 +66,10 @@ func (m *model) resize() {
 	default:
 		l.logLines = 2
 	}
-	switch {
-	case m.form.on:
+	switch m.mode {
+	case modeForm:
 		l.helpH = formLines
-	case m.editing:
+	case modeMu:
 		l.helpH = 2
 	default:
 		l.helpH = len(m.helpLines())

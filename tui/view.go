@@ -120,8 +120,8 @@ func (m model) narrowBody() []string {
 // criteria (the picture key turns to the next), or the hand working while
 // it is shown.
 func (m model) sheetView(w, h int) []string {
-	if m.showHand {
-		return fit(m.handView(w, h, true), w, h)
+	if m.hand.show {
+		return fit(m.hand.with(m.cur, m.st).view(w, h, true), w, h)
 	}
 	return fit(m.pictureView(m.picture, w, h), w, h)
 }
@@ -129,11 +129,11 @@ func (m model) sheetView(w, h int) []string {
 func (m model) pictureView(which, w, h int) []string {
 	switch which {
 	case picSection:
-		return m.sectionView(w, h)
+		return m.cached(picSection, w, h, m.sectionView)
 	case picProfile:
-		return m.profileView(w, h)
+		return m.cached(picProfile, w, h, m.profileView)
 	case picGZ:
-		return m.gzView(w, h)
+		return m.cached(picGZ, w, h, m.gzView)
 	}
 	return m.criteriaView(w, h, true)
 }
@@ -147,14 +147,14 @@ func (m model) wideBody() []string {
 	sep := m.st.Dim.Render("│")
 	list := m.listView(l.listW, l.topH)
 	mid := m.figuresView(l.posW)
-	if m.showHand && m.cur != nil {
+	if m.hand.show && m.cur != nil {
 		// The hand method's answers right under the direct figures.
 		if m.cur.Hand != nil {
 			mid = append(mid, m.st.Heading.Render("HAND METHOD"))
-			mid = append(mid, m.handAnswers(l.posW)...)
+			mid = append(mid, m.hand.with(m.cur, m.st).answers(l.posW)...)
 		} else {
 			mid = append(mid, m.st.Heading.Render("HAND METHOD"))
-			for _, s := range wrap(m.handWhy(), l.posW) {
+			for _, s := range wrap(m.hand.with(m.cur, m.st).why(), l.posW) {
 				mid = append(mid, m.st.Dim.Render(s))
 			}
 		}
@@ -174,13 +174,13 @@ func (m model) wideBody() []string {
 		pics = m.floodRow(m.width, l.picH)
 	case m.noPosition():
 		pics = m.bannerView(m.width, l.picH)
-	case m.showHand && m.cur != nil && m.cur.Hand != nil:
-		pics = m.handView(m.width, l.picH, false)
+	case m.hand.with(m.cur, m.st).hasWorking():
+		pics = m.hand.with(m.cur, m.st).view(m.width, l.picH, false)
 	default:
 		pics = besides(sep,
-			fit(m.sectionView(l.picW[0], l.picH), l.picW[0], l.picH),
-			fit(m.profileView(l.picW[1], l.picH), l.picW[1], l.picH),
-			fit(m.gzView(l.picW[2], l.picH), l.picW[2], l.picH))
+			fit(m.cached(picSection, l.picW[0], l.picH, m.sectionView), l.picW[0], l.picH),
+			fit(m.cached(picProfile, l.picW[1], l.picH, m.profileView), l.picW[1], l.picH),
+			fit(m.cached(picGZ, l.picW[2], l.picH, m.gzView), l.picW[2], l.picH))
 	}
 	out := append(top, rule)
 	return append(out, pics...)
@@ -200,10 +200,10 @@ func (m model) logView(w, n int) []string {
 // footView is the help bar, or the permeability prompt while one is typed.
 func (m model) footView() []string {
 	st := m.st
-	if m.form.on {
-		return m.formView()
-	}
-	if m.editing {
+	switch m.mode {
+	case modeForm:
+		return m.form.view(m.width, formLines)
+	case modeMu:
 		name := ""
 		if len(m.v.Compartments) > 0 {
 			name = m.v.Compartments[m.sel].Name

@@ -16,7 +16,8 @@ import (
 const FormatVersion = 1
 
 // Info is what a vessel file says beyond the engine's values: text for the
-// screen and the flooding-over-time data the engine has no types for yet.
+// screen, and each compartment's hole (an engine.Hole) and pumps, which a
+// flooding run takes when it is not told otherwise (ResolveFlood).
 type Info struct {
 	File        string // the file name used in messages ("bundled/barge.toml" for a bundled one)
 	Bundled     string // the bundled name ("barge"), "" for a file of the user's
