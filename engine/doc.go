@@ -59,6 +59,13 @@
 //     diagnose.go and diagnose_fit.go (what is flooding, from what the crew
 //     reads), trend.go; drill.go, drill_event.go, drill_reading.go (an
 //     exercise's truth and what the crew would read of it).
+//   - Water spreading through the ship: connection.go (doors, ducts,
+//     pipes and cross-flooding fittings between compartments), spread.go
+//     (the final state of progressive flooding, to a fixed point),
+//     crossflood.go (the MSC.362(92) time to equalise), network.go (a run
+//     through the ship: the case and the flow law of each path),
+//     network_run.go (the run, its events and report) and
+//     network_stepper.go (its linearly implicit Rosenbrock integrator).
 //   - One root-finder for functions that cost a solve per value:
 //     illinois.go (the vanishing angle, flooding events, righting options).
 //
