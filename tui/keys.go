@@ -8,6 +8,8 @@ import "github.com/charmbracelet/bubbles/key"
 type keyMap struct {
 	Move                  key.Binding // for the help bar only: up and down in one
 	Up, Down, Top, Bottom key.Binding
+	PageUp, PageDown      key.Binding // a screenful of the list
+	Find                  key.Binding // type-to-find in the list
 	Flood                 key.Binding // open to the sea / close up (intact)
 	MuUp, MuDown, MuSet   key.Binding
 	Undo, Reset           key.Binding
@@ -29,8 +31,11 @@ func newKeyMap() keyMap {
 		Move:     key.NewBinding(key.WithKeys("up", "down"), key.WithHelp("↑↓/jk", "move")),
 		Up:       key.NewBinding(key.WithKeys("up", "k"), key.WithHelp("↑/k", "up")),
 		Down:     key.NewBinding(key.WithKeys("down", "j"), key.WithHelp("↓/j", "down")),
-		Top:      key.NewBinding(key.WithKeys("home", "g", "pgup"), key.WithHelp("home/pgup", "first")),
-		Bottom:   key.NewBinding(key.WithKeys("end", "G", "pgdown"), key.WithHelp("end/pgdn", "last")),
+		Top:      key.NewBinding(key.WithKeys("home", "g"), key.WithHelp("home", "first")),
+		Bottom:   key.NewBinding(key.WithKeys("end", "G"), key.WithHelp("end", "last")),
+		PageUp:   key.NewBinding(key.WithKeys("pgup"), key.WithHelp("pgup", "page up")),
+		PageDown: key.NewBinding(key.WithKeys("pgdown"), key.WithHelp("pgdn", "page down")),
+		Find:     key.NewBinding(key.WithKeys("/"), key.WithHelp("/", "find")),
 		Flood:    key.NewBinding(key.WithKeys(" ", "enter"), key.WithHelp("space", "open/close")),
 		MuUp:     key.NewBinding(key.WithKeys("+", "="), key.WithHelp("+/−", "μ")),
 		MuDown:   key.NewBinding(key.WithKeys("-", "_"), key.WithHelp("−", "μ −0.05")),
@@ -56,7 +61,7 @@ func newKeyMap() keyMap {
 func (k keyMap) ShortHelp() []key.Binding {
 	// ? and q before the rest, so that a narrow bar cuts the others first;
 	// then the righting options, the flooding run, then the pictures.
-	return []key.Binding{k.Move, k.Flood, k.MuUp, k.MuSet, k.Undo, k.Help, k.Quit, k.Remedies, k.HoleRun, k.RunPanel, k.RunStage, k.Picture, k.Hand}
+	return []key.Binding{k.Move, k.Flood, k.MuUp, k.MuSet, k.Undo, k.Help, k.Quit, k.Remedies, k.HoleRun, k.RunPanel, k.RunStage, k.Picture, k.Hand, k.Find}
 }
 
 // FullHelp is the help shown with `?`, in three columns that fit 80
@@ -71,7 +76,9 @@ func (k keyMap) FullHelp() [][]key.Binding {
 	stage := say(k.RunStage, "s", "a run's stage shown")
 	stage.SetEnabled(true)
 	return [][]key.Binding{
-		{k.Up, k.Down, say(k.Top, "home", "first"), say(k.Bottom, "end", "last"), say(k.Picture, "tab", "next picture"),
+		{k.Up, k.Down, say(k.Top, "home", "first"), say(k.Bottom, "end", "last"),
+			say(k.PageUp, "pgup pgdn", "a page of the list"), say(k.Find, "/", "find a compartment"),
+			say(k.Picture, "tab", "next picture"),
 			say(k.HoleRun, "f", "hole & pumps"), say(k.RunPanel, "t", "run panel")},
 		{say(k.Flood, "space", "open to sea / intact"), say(k.MuUp, "+ −", "permeability ±0.05"),
 			say(k.MuSet, "m", "type a permeability"), k.Undo, k.Reset, stage,

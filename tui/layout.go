@@ -71,6 +71,8 @@ func (m *model) resize() {
 		l.helpH = formLines
 	case m.editing:
 		l.helpH = 2
+	case m.find.on:
+		l.helpH = findLines
 	default:
 		l.helpH = len(m.helpLines())
 	}

@@ -84,6 +84,7 @@ type model struct {
 	form  floodForm   // the hole-and-pumps form of a flooding run
 	flood floodState  // the flooding run and its panel
 	rem   remedyState // the righting options and their panel
+	find  finder      // the type-to-find of the compartment list
 
 	rend    *lipgloss.Renderer
 	palette int
@@ -198,7 +199,7 @@ func newModel(v *engine.Vessel, info *vessels.Info, opts Options) model {
 	}
 	m.setStyles()
 	m.resize()
-	return m
+	return m.startWith(opts.Start)
 }
 
 // zoneOf places a compartment without a group by where it lies along the
@@ -232,14 +233,14 @@ func (m *model) setStyles() {
 // Init computes the intact condition, the reference for every change.
 func (m model) Init() tea.Cmd {
 	v := m.v
-	return func() (msg tea.Msg) {
+	return tea.Batch(func() (msg tea.Msg) {
 		defer func() {
 			if r := recover(); r != nil {
 				msg = resultMsg{seq: 0, failure: fmt.Sprint(r)}
 			}
 		}()
 		return baselineMsg{engine.Assess(v, v.Intact())}
-	}
+	}, m.startSpin())
 }
 
 // pending reports whether the figures shown are not yet those of the
@@ -273,7 +274,7 @@ func (m model) Update(msg tea.Msg) (tea.Model, tea.Cmd) {
 			file += ", " + m.condition
 		}
 		file += ", all intact"
-		return m, m.addLogPair(m.now(), what+" → "+m.outcome(&a, false), file+" → "+m.outcome(&a, true))
+		return m, tea.Batch(m.addLogPair(m.now(), what+" → "+m.outcome(&a, false), file+" → "+m.outcome(&a, true)), m.startCmd())
 
 	case resultMsg:
 		return m.takeResult(msg)
@@ -326,6 +327,8 @@ func (m model) Update(msg tea.Msg) (tea.Model, tea.Cmd) {
 			return m.formKey(msg)
 		case m.editing:
 			return m.editKey(msg)
+		case m.find.on:
+			return m.findKey(msg)
 		}
 		return m.key(msg)
 	}
@@ -349,6 +352,10 @@ func (m model) key(msg tea.KeyMsg) (tea.Model, tea.Cmd) {
 		m.move(-len(m.rows))
 	case key.Matches(msg, k.Bottom):
 		m.move(len(m.rows))
+	case key.Matches(msg, k.PageUp), key.Matches(msg, k.PageDown):
+		m.page(key.Matches(msg, k.PageDown))
+	case key.Matches(msg, k.Find):
+		return m.openFind()
 	case key.Matches(msg, k.Picture):
 		m.picture = (m.picture + 1) % numPictures
 	case key.Matches(msg, k.Hand):

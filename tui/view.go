@@ -192,6 +192,9 @@ func (m model) footView() []string {
 	if m.form.on {
 		return m.formView()
 	}
+	if m.find.on {
+		return strings.Split(m.find.view(m.width, findLines), "\n")
+	}
 	if m.editing {
 		name := ""
 		if len(m.v.Compartments) > 0 {

@@ -111,10 +111,7 @@ func runFlood(args []string, stdout, stderr io.Writer) int {
 	if status != exitOK {
 		return status
 	}
-	index := map[string]int{}
-	for i, c := range v.Compartments {
-		index[c.Name] = i
-	}
+	index := v.CompartmentIndex // names ignore case
 	fileHole := func(i int) *vessels.Hole {
 		if i < len(info.Compartments) {
 			return info.Compartments[i].Hole
@@ -133,7 +130,7 @@ func runFlood(args []string, stdout, stderr io.Writer) int {
 		if len(nums) != 1 {
 			return fail("--pump %q: write NAME:M3H, the capacity in m³/h, e.g. --pump %q", p, v.Compartments[0].Name+":120")
 		}
-		if _, ok := index[name]; !ok {
+		if _, ok := index(name); !ok {
 			return fail("%s", unknownName("--pump", name, v))
 		}
 		if !(nums[0] >= 0) || math.IsInf(nums[0], 0) {
@@ -147,7 +144,7 @@ func runFlood(args []string, stdout, stderr io.Writer) int {
 	var area, z float64 = math.NaN(), math.NaN()
 	if len(holes) == 1 {
 		name, nums := splitNumbers(holes[0], 2)
-		i, ok := index[name]
+		i, ok := index(name)
 		if !ok {
 			msg := unknownName("--hole", name, v)
 			if strings.Contains(holes[0], ":") {
@@ -165,7 +162,8 @@ func runFlood(args []string, stdout, stderr io.Writer) int {
 	} else {
 		named := map[int]bool{}
 		for _, p := range pumpList {
-			named[index[p.name]] = true
+			i, _ := index(p.name)
+			named[i] = true
 		}
 		var withHole []int
 		for i := range v.Compartments {
@@ -240,7 +238,7 @@ func runFlood(args []string, stdout, stderr io.Writer) int {
 		}
 	}
 	for _, p := range pumpList {
-		if index[p.name] != ci {
+		if i, _ := index(p.name); i != ci {
 			return fail("--pump %q: pumps work on the flooded compartment, %q", p.name, comp.Name)
 		}
 		enginePumps = append(enginePumps, engine.Pump{Name: fmt.Sprintf("pump %d", len(enginePumps)+1), CapacityM3h: p.m3h})
@@ -261,7 +259,7 @@ func runFlood(args []string, stdout, stderr io.Writer) int {
 	if err != nil {
 		return fail("%v", err)
 	}
-	fr := floodRun{rep: rep, v: v, source: source(info), open: inOrderGiven(open), holeFrom: from, pumpFrom: pumpFrom,
+	fr := floodRun{rep: rep, v: v, source: source(info), open: inOrderGiven(v, open), holeFrom: from, pumpFrom: pumpFrom,
 		mu: rep.CapacityM3 / comp.Volume()}
 	if *format == "json" {
 		err = writeFloodJSON(stdout, fr)

@@ -76,7 +76,7 @@ func runSolve(args []string, stdout, stderr io.Writer) int {
 	a := engine.Assess(v, d)
 	r := report.New(v, source(info), a, now(), version)
 	r.Condition = info.Condition
-	r.Open = inOrderGiven(open)
+	r.Open = inOrderGiven(v, open)
 	if *remedies {
 		rs := engine.FindRemedies(v, d)
 		r.Remedies = &rs
@@ -106,13 +106,10 @@ var writers = map[string]func(io.Writer, report.Report) error{
 // damageOf turns --open and --perm into a damage state of v. It returns a
 // message saying what is wrong when a name or a value cannot be used.
 func damageOf(v *engine.Vessel, open, perm []string) (engine.Damage, string) {
-	index := map[string]int{}
-	for i, c := range v.Compartments {
-		index[c.Name] = i
-	}
+	index := v.CompartmentIndex // names ignore case
 	d := v.Intact()
 	for _, name := range open {
-		i, ok := index[name]
+		i, ok := index(name)
 		if !ok {
 			return nil, unknownName("--open", name, v)
 		}
@@ -128,7 +125,7 @@ func damageOf(v *engine.Vessel, open, perm []string) (engine.Damage, string) {
 			return nil, fmt.Sprintf("--perm %q: write NAME=μ, e.g. --perm %q", item, example+"=0.85")
 		}
 		name, val := strings.TrimSpace(item[:eq]), strings.TrimSpace(item[eq+1:])
-		i, ok := index[name]
+		i, ok := index(name)
 		if !ok {
 			return nil, unknownName("--perm", name, v)
 		}
@@ -151,11 +148,16 @@ func damageOf(v *engine.Vessel, open, perm []string) (engine.Damage, string) {
 	return d, ""
 }
 
-// inOrderGiven returns the names in the order first given, once each.
-func inOrderGiven(names []string) []string {
+// inOrderGiven returns the names in the order first given, once each,
+// spelt as in the vessel file (names ignore case; one not in the file is
+// kept as given).
+func inOrderGiven(v *engine.Vessel, names []string) []string {
 	seen := map[string]bool{}
 	var out []string
 	for _, n := range names {
+		if i, ok := v.CompartmentIndex(n); ok {
+			n = v.Compartments[i].Name
+		}
 		if !seen[n] {
 			seen[n] = true
 			out = append(out, n)
@@ -167,13 +169,7 @@ func inOrderGiven(names []string) []string {
 // unknownName refuses a compartment name by name and lists the valid ones.
 func unknownName(flagName, name string, v *engine.Vessel) string {
 	var b strings.Builder
-	fmt.Fprintf(&b, "%s: %q is not a compartment of %s.", flagName, name, v.Name)
-	for _, c := range v.Compartments {
-		if strings.EqualFold(c.Name, name) {
-			fmt.Fprintf(&b, " Did you mean %q? Names must match exactly.", c.Name)
-			break
-		}
-	}
+	fmt.Fprintf(&b, "%s: %q is not a compartment of %s (names ignore case).", flagName, name, v.Name)
 	b.WriteString(" The compartments are:")
 	for _, c := range v.Compartments {
 		fmt.Fprintf(&b, "\n  %s", c.Name)
