@@ -20,11 +20,12 @@ func (m model) handView(w, h int, withAnswers bool) []string {
 		for _, l := range wrap(m.handWhy(), w) {
 			lines = append(lines, st.Dim.Render(l))
 		}
-		return fit(lines, w, h)
+		return fit(append(lines, m.handCaveatLines(w)...), w, h)
 	}
 	if withAnswers {
 		lines = append(lines, m.handAnswers(w)...)
 	}
+	lines = append(lines, m.handCaveatLines(w)...)
 	return fit(append(lines, m.handWorking(w, h-len(lines))...), w, h)
 }
 

@@ -42,7 +42,7 @@ type layout struct {
 }
 
 // maxFigWidth keeps each figure near its label on a wide column.
-const maxFigWidth = 52
+const maxFigWidth = 64
 
 // figLines is the height of the floating-position block: a heading and
 // nine figures.
@@ -204,4 +204,22 @@ func wrap(text string, w int) []string {
 		out = append(out, line)
 	}
 	return out
+}
+
+// flagRoom divides the narrow screen's room under the figures between the
+// flags and the sheet: the flags take what they need whole, down to the
+// sheet's least height (a picture still readable), and never less than
+// resize gave them.
+func (m model) flagRoom() (flagH, sheetH int) {
+	l := m.lay
+	if l.sheetH == 0 {
+		return l.flagH, 0
+	}
+	room := l.flagH + l.sheetH
+	least := 8
+	if l.bodyH < 22 {
+		least = 6
+	}
+	flagH = max(l.flagH, min(m.flagsNeed(l.rightW), room-least))
+	return flagH, room - flagH
 }

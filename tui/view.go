@@ -74,12 +74,23 @@ func (m model) headerView(w int) string {
 		sum = append(sum, "NO FLOATING POSITION")
 	}
 	right := st.Header.Render(strings.Join(sum, " · "))
+	if m.cur != nil || m.failure != "" {
+		// The worst of the flags in a word, first, so that it is the last
+		// thing a narrow screen cuts.
+		right = m.severityWord() + st.Header.Render(" · ") + right
+	}
 	if m.pending() {
 		right = st.Busy.Render(m.spin.View()+" computing") + "  " + right
 	}
-	right += st.Dim.Render("  " + m.st.Palette)
+	if palette := st.Dim.Render("  " + m.st.Palette); lipgloss.Width(left)+lipgloss.Width(right+palette)+1 <= w {
+		right += palette
+	}
 	if m.condition != "" && lipgloss.Width(left)+lipgloss.Width(right)+len([]rune(m.condition))+4 <= w {
 		left += st.Dim.Render(" · " + m.condition)
+	}
+	if lipgloss.Width(left)+lipgloss.Width(right)+1 > w {
+		// The vessel's name gives way to the figures.
+		left = fitLine(left, max(10, w-lipgloss.Width(right)-1))
 	}
 	gap := w - lipgloss.Width(left) - lipgloss.Width(right)
 	if gap < 1 {
@@ -101,9 +112,10 @@ func (m model) narrowBody() []string {
 	if m.noPosition() {
 		right = append(right, m.bannerView(l.rightW, l.flagH+l.sheetH)...)
 	} else {
-		right = append(right, m.flagsView(l.rightW, l.flagH)...)
-		if l.sheetH > 0 {
-			right = append(right, m.sheetView(l.rightW, l.sheetH)...)
+		flagH, sheetH := m.flagRoom()
+		right = append(right, m.flagsView(l.rightW, flagH)...)
+		if sheetH > 0 {
+			right = append(right, m.sheetView(l.rightW, sheetH)...)
 		}
 	}
 	return besides(sep, fit(list, l.listW, l.bodyH), fit(right, l.rightW, l.bodyH))
