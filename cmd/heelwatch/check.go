@@ -123,6 +123,7 @@ func summarise(w io.Writer, v *engine.Vessel, info *vessels.Info) int {
 	}
 	fmt.Fprintf(tw, "  criteria\t%s\n", crit)
 	tw.Flush()
+	practice(w, v, info)
 
 	fmt.Fprintf(w, "\n  %s\n", plural(len(v.Compartments), "compartment"))
 	tw = tabwriter.NewWriter(w, 0, 0, 2, ' ', 0)
