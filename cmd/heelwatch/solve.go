@@ -21,7 +21,8 @@ Usage:
 Flags:
   --vessel FILE|NAME  the vessel file, or a bundled vessel's name (default %q)
   --open A,B          compartments open to the sea (lost buoyancy), by the names
-                      in the vessel file; repeat the flag or separate with commas
+                      in the vessel file (case does not matter); repeat the flag
+                      or separate with commas
   --perm NAME=μ,...   permeability of an open compartment for this solve,
                       0 < μ ≤ 1, in place of the file's (e.g. --perm "Hold 2=0.85")
   --remedies          also work out the righting options: ballast into an intact
