@@ -209,7 +209,9 @@ func wrap(text string, w int) []string {
 // flagRoom divides the narrow screen's room under the figures between the
 // flags and the sheet: the flags take what they need whole, down to the
 // sheet's least height (a picture still readable), and never less than
-// resize gave them.
+// resize gave them. With a danger flag the words come before the picture:
+// the flags may take the whole room (unless the hand working was asked
+// for), and a sheet too small to read gives its lines to them.
 func (m model) flagRoom() (flagH, sheetH int) {
 	l := m.lay
 	if l.sheetH == 0 {
@@ -220,6 +222,12 @@ func (m model) flagRoom() (flagH, sheetH int) {
 	if l.bodyH < 22 {
 		least = 6
 	}
+	if m.danger() && !m.showHand {
+		least = 0
+	}
 	flagH = max(l.flagH, min(m.flagsNeed(l.rightW), room-least))
+	if room-flagH < 5 {
+		flagH = room
+	}
 	return flagH, room - flagH
 }

@@ -70,3 +70,13 @@ func (m model) handCaveatLines(w int) []string {
 	}
 	return out
 }
+
+// danger reports whether a flag about the ship is of danger.
+func (m model) danger() bool {
+	for _, f := range m.derived.flags {
+		if f.Severity == engine.Danger {
+			return true
+		}
+	}
+	return false
+}
