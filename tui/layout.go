@@ -17,7 +17,7 @@ const (
 const (
 	listWidthNarrow = 35
 	listWidthWide   = 37
-	posWidthWide    = 44
+	posWidthWide    = 50 // the figures with an opening's name whole (20 letters)
 )
 
 // layout is the division of the screen, worked out once per size change by

@@ -109,3 +109,26 @@ func TestDangerToldFromHeadingsWithoutColour(t *testing.T) {
 		}
 	}
 }
+
+// At 120×40 too the nearest opening's name and the upright GM are whole.
+func TestKeyFiguresWholeAt120x40(t *testing.T) {
+	m := startModel(t, 120, 40, "Wing tank 2 S", "DB 2 S")
+	flat := strings.Join(strings.Fields(m.View()), " ")
+	for _, want := range []string{"Accommodation door S -1.50", "upright 1.22 m", "goes under with 1.7° more heel", "! CAUTION"} {
+		if !strings.Contains(flat, want) {
+			t.Errorf("the screen lacks %q:\n%s", want, m.View())
+		}
+	}
+}
+
+// With a danger flag at 100×30 every danger flag is whole: the picture
+// gives way to the words.
+func TestDangerFlagsWholeAt100x30(t *testing.T) {
+	m := startModel(t, 100, 30, "Hold 2", "Wing tank 2 S")
+	flat := strings.Join(strings.Fields(m.View()), " ")
+	for _, want := range []string{"0.50 m deep", "by 0.57 m", "(openings-range)"} {
+		if !strings.Contains(flat, want) {
+			t.Errorf("the screen lacks %q:\n%s", want, m.View())
+		}
+	}
+}

@@ -162,6 +162,8 @@ func (m model) wideBody() []string {
 			for _, s := range wrap(m.handWhy(), l.posW) {
 				mid = append(mid, m.st.Dim.Render(s))
 			}
+			// Without a hand working below, its caveats go here.
+			mid = append(mid, m.handCaveatLines(l.posW)...)
 		}
 	} else {
 		mid = append(mid, m.flagsView(l.posW, l.topH-figLines)...)
