@@ -114,7 +114,7 @@ func TestDangerToldFromHeadingsWithoutColour(t *testing.T) {
 func TestKeyFiguresWholeAt120x40(t *testing.T) {
 	m := startModel(t, 120, 40, "Wing tank 2 S", "DB 2 S")
 	flat := strings.Join(strings.Fields(m.View()), " ")
-	for _, want := range []string{"Accommodation door S -1.50", "upright 1.22 m", "goes under with 1.7° more heel", "! CAUTION"} {
+	for _, want := range []string{"Accommodation door S -1.50", "upright 1.22 m", "0.22 m clear", "! CAUTION"} {
 		if !strings.Contains(flat, want) {
 			t.Errorf("the screen lacks %q:\n%s", want, m.View())
 		}
