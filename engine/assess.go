@@ -98,6 +98,8 @@ type GZCurve struct {
 
 	Note  string   // why the curve ends early, "" when it runs its full span
 	Other *GZCurve // upright ship only: the curve towards the other side (this one is the worse); nil otherwise
+
+	sp *cubicSpline // the spline through the samples, fitted once (see GZCurve.fit)
 }
 
 // CriterionResult is one stability criterion applied to a condition.

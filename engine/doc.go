@@ -28,6 +28,37 @@
 // integrand is then a polynomial of degree at most three in x and the result
 // is exact to round-off at any attitude, deck edge immersed or bilge out.
 //
+// # Where each piece lives
+//
+//   - Geometry: section.go (a section clipped by a plane), solid.go (slabs
+//     integrated along the length; the plane of the water), waterline_cut.go
+//     (the fast path of a slab's immersion), hull.go and compartment.go.
+//   - The loading condition: vessel.go (weights, tanks and their contents,
+//     damage states, permeability).
+//   - Where she floats: equilibrium.go (Newton with the exact Jacobian, the
+//     lost-buoyancy and added-weight methods, NoEquilibrium) and position.go
+//     (what a solved position reports: drafts, GM, freeboards, openings).
+//   - The righting-lever curve: gz.go (the curve and what is read off it),
+//     spline.go (the not-a-knot spline that joins its samples, fitted once per
+//     curve) and criteria.go (the stability criteria read off it).
+//   - The hand method: hand.go. The flags: flags.go. Righting options:
+//     remedy.go. All of one keystroke: assess.go (Assess and the result types).
+//   - Flooding over time: flood_case.go (what a run is given), flood.go (the
+//     run: Torricelli inflow, the re-solve at each evaluation, stopping),
+//     dormand_prince.go (the integrator), flood_events.go, flood_end.go,
+//     flood_report.go (table, trace, intermediate stages) and shell_hole.go.
+//   - One root-finder for functions that cost a solve per value:
+//     illinois.go (the vanishing angle, flooding events, righting options).
+//
+// The free-surface correction is spread over four files, each doing one
+// part of it: vessel.go computes the free-surface moment of each slack tank
+// (ρ·i of its waterplane about its own centreline, NewVessel) and sums the
+// moments of weights and tanks (Vessel.Loading, Load.FSMTm); equilibrium.go
+// applies ΣFSM/Δ as a virtual rise of G in every solve (Problem.eval);
+// position.go adds the moments of floodwater held as an added weight, in its
+// inclined surface, and reports FSC and the corrected GM (Problem.position);
+// hand.go uses the same ΣFSM/Δ in the hand method's GM and GML.
+//
 // # Failures
 //
 // A programmer's mistake panics with a message starting "engine: ". Anything

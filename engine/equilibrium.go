@@ -101,7 +101,7 @@ func NewProblem(v *Vessel, d Damage) *Problem {
 	pr.vmax = v.Hull.solid.Volume()
 	for i, c := range v.Compartments {
 		s := d.state(i)
-		mu := v.permeability(d, i)
+		mu := v.Permeability(d, i)
 		switch {
 		case s.Open:
 			pr.open = append(pr.open, openSpace{c.solid, mu})

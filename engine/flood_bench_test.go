@@ -27,7 +27,7 @@ func bundledWingCase(tb testing.TB) engine.FloodCase {
 		}
 		h := ci.Hole
 		return engine.FloodCase{Vessel: v, Compartment: i,
-			Hole: engine.Hole{AreaM2: h.AreaM2, XM: h.X, YM: h.Y, ZM: h.Z, Cd: h.Cd}}
+			Hole: *h}
 	}
 	tb.Skipf("the bundled vessel %q has no wing tank with a hole", vessels.Default)
 	return engine.FloodCase{}

@@ -459,7 +459,7 @@ func TestFloodEnds(t *testing.T) {
 			if n := len(rep.Events); n == 0 || rep.Events[n-1].Kind != RunEnds {
 				t.Errorf("events do not close with the end: %+v", rep.Events)
 			}
-			if len(rep.Stages) != len(StageFractions) || len(rep.Table) == 0 {
+			if len(rep.Stages) != len(stageFractions) || len(rep.Table) == 0 {
 				t.Errorf("%d stages, %d rows", len(rep.Stages), len(rep.Table))
 			}
 			if c.end == FloodCapsizes {

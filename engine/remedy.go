@@ -489,45 +489,26 @@ func remedyUpright(r *Remedy, d Damage, solves *int) {
 
 // remedyToUpright finds the smaller amount of candidate c that brings her
 // nearest upright, when the whole amount (full) overshoots to the other
-// side: regula falsi (Illinois) on the heel between no action (heel0) and
+// side: regula falsi (illinois) on the heel between no action (heel0) and
 // the whole, at most remedyUprightTries equilibrium solves and one upright
 // solve for the amount kept.
 func remedyToUpright(v *Vessel, d Damage, c remedyCandidate, heel0 float64, full Remedy, solves *int) (Remedy, bool) {
-	ma, ha := 0.0, heel0
-	mb, hb := full.MassT, full.Position.HeelDeg
 	var best Remedy
 	found := false
-	side := 0
-	for it := 0; it < remedyUprightTries && *solves+2 <= RemedyMaxSolves; it++ {
-		m := ma - ha*(mb-ma)/(hb-ha)
-		if !(m > 0 && m < full.MassT) {
-			break
+	illinois(0, full.MassT, heel0, full.Position.HeelDeg, math.NaN(), remedyUprightTries, 0, remedyUprightTolDeg, false, func(m float64) (float64, bool) {
+		if *solves+2 > RemedyMaxSolves {
+			return 0, false
 		}
 		r := remedySolve(v, d, c, m, false, solves)
 		if r.Position == nil {
-			break
+			return 0, false
 		}
 		h := r.Position.HeelDeg
 		if !found || math.Abs(h) < math.Abs(best.Position.HeelDeg) {
 			best, found = r, true
 		}
-		if math.Abs(h) <= remedyUprightTolDeg {
-			break
-		}
-		if h*ha > 0 {
-			ma, ha = m, h
-			if side == -1 {
-				hb /= 2
-			}
-			side = -1
-		} else {
-			mb, hb = m, h
-			if side == 1 {
-				ha /= 2
-			}
-			side = 1
-		}
-	}
+		return h, true
+	})
 	if !found {
 		return Remedy{}, false
 	}
@@ -584,15 +565,14 @@ func remedyMeasure(p *Position) remedyFigures {
 // remedyJudge decides whether option r is advisable (see FindRemedies) and
 // writes its note.
 func remedyJudge(r *Remedy, rs *RemedySet, now remedyFigures) {
-	var why []string
+	var why remedyWords
 	if r.Note != "" {
 		why = append(why, r.Note)
 	}
-	say := func(format string, a ...any) { why = append(why, fmt.Sprintf(format, a...)) }
 	defer func() { r.Note = strings.Join(why, " ") }()
 	if r.Position == nil {
 		r.Advisable = false
-		why = append([]string{fmt.Sprintf("Not advisable: she would not float so (%s: %s).", r.NoEq.Outcome, r.NoEq.Reason)}, why...)
+		why = append(remedyWords{fmt.Sprintf("Not advisable: she would not float so (%s: %s).", r.NoEq.Outcome, r.NoEq.Reason)}, why...)
 		return
 	}
 	p := r.Position
@@ -613,75 +593,104 @@ func remedyJudge(r *Remedy, rs *RemedySet, now remedyFigures) {
 	if newOpening || deeperOpening {
 		against = append(against, fmt.Sprintf("puts the unprotected opening %s under water (%.2f m)", after.opening, -after.openingM))
 	}
-	up := r.UprightGMM
 	if rs.Loll {
-		switch {
-		case math.IsNaN(up):
-			against = append(against, "its upright GM could not be worked out")
-		case !(up > rs.UprightGMM):
-			against = append(against, fmt.Sprintf("does not raise her upright GM (%.2f m, now %.2f m)", up, rs.UprightGMM))
-		}
-		r.Advisable = len(against) == 0
-		switch {
-		case r.Advisable && up > 0:
-			say("Lowers G: upright GM from %.2f to %.2f m, positive, so she would come to %s (now %s), a list and no longer a loll. Only then may the list that is left be taken out from the high side: solve the new condition first.", rs.UprightGMM, up, remedyHeel(p.HeelDeg), remedyHeel(rs.HeelDeg))
-		case r.Advisable:
-			say("Lowers G: upright GM from %.2f to %.2f m, but still negative: she would still loll (%s, now %s); more must be done to bring G down.", rs.UprightGMM, up, remedyHeel(p.HeelDeg), remedyHeel(rs.HeelDeg))
-		}
-		if r.Kind == RemedyFill {
-			say("Fill one tank at a time and watch the heel while it is slack.")
-		}
+		against = remedyJudgeLoll(r, rs, against, &why)
 	} else {
-		switch {
-		case math.IsNaN(up):
-			against = append(against, "its upright GM could not be worked out")
-		case !(up > 0):
-			against = append(against, fmt.Sprintf("leaves her with negative GM upright (%.2f m): she would loll", up))
-		case !(p.GMM > 0):
-			against = append(against, fmt.Sprintf("leaves her with no GM where she lies (%.2f m)", p.GMM))
-		}
-		if !(math.Abs(p.HeelDeg) < math.Abs(rs.HeelDeg)) {
-			against = append(against, fmt.Sprintf("does not reduce the heel (%s)", remedyHeel(p.HeelDeg)))
-		}
-		r.Advisable = len(against) == 0
-		if r.Advisable {
-			if p.HeelDeg*rs.HeelDeg < 0 && math.Abs(p.HeelDeg) >= RemedyUprightDeg {
-				say("Overshoots: she would lie %s instead.", remedyHeel(p.HeelDeg))
-			} else {
-				say("Brings her to %s.", remedyHeel(p.HeelDeg))
-			}
-			if up < rs.UprightGMM {
-				say("Raises G: upright GM from %.2f to %.2f m.", rs.UprightGMM, up)
-			}
-		}
-		if r.ToUpright && r.Kind != RemedyDischarge && len(r.FillAfter) > 0 && r.FillAfter[len(r.FillAfter)-1] < RemedyFillTo {
-			say("The tank filled stays slack: its free surface is counted.")
-		}
+		against = remedyJudgeList(r, rs, against, &why)
 	}
 	if len(against) > 0 {
-		why = append([]string{"Not advisable: it " + strings.Join(against, "; it ") + "."}, why...)
+		why = append(remedyWords{"Not advisable: it " + strings.Join(against, "; it ") + "."}, why...)
 	}
+	remedyCautions(r, after, loss, newDeck || deeperDeck, newOpening || deeperOpening, &why)
+}
+
+// remedyWords are the sentences of an option's note.
+type remedyWords []string
+
+func (w *remedyWords) say(format string, a ...any) { *w = append(*w, fmt.Sprintf(format, a...)) }
+
+// remedyJudgeLoll judges option r for a ship at an angle of loll: it must
+// raise her upright GM. It returns against with its own objections added
+// and sets r.Advisable.
+func remedyJudgeLoll(r *Remedy, rs *RemedySet, against []string, why *remedyWords) []string {
+	p, up := r.Position, r.UprightGMM
+	switch {
+	case math.IsNaN(up):
+		against = append(against, "its upright GM could not be worked out")
+	case !(up > rs.UprightGMM):
+		against = append(against, fmt.Sprintf("does not raise her upright GM (%.2f m, now %.2f m)", up, rs.UprightGMM))
+	}
+	r.Advisable = len(against) == 0
+	switch {
+	case r.Advisable && up > 0:
+		why.say("Lowers G: upright GM from %.2f to %.2f m, positive, so she would come to %s (now %s), a list and no longer a loll. Only then may the list that is left be taken out from the high side: solve the new condition first.", rs.UprightGMM, up, remedyHeel(p.HeelDeg), remedyHeel(rs.HeelDeg))
+	case r.Advisable:
+		why.say("Lowers G: upright GM from %.2f to %.2f m, but still negative: she would still loll (%s, now %s); more must be done to bring G down.", rs.UprightGMM, up, remedyHeel(p.HeelDeg), remedyHeel(rs.HeelDeg))
+	}
+	if r.Kind == RemedyFill {
+		why.say("Fill one tank at a time and watch the heel while it is slack.")
+	}
+	return against
+}
+
+// remedyJudgeList judges option r for a listed ship: it must keep GM
+// positive and reduce the heel. It returns against with its own objections
+// added and sets r.Advisable.
+func remedyJudgeList(r *Remedy, rs *RemedySet, against []string, why *remedyWords) []string {
+	p, up := r.Position, r.UprightGMM
+	switch {
+	case math.IsNaN(up):
+		against = append(against, "its upright GM could not be worked out")
+	case !(up > 0):
+		against = append(against, fmt.Sprintf("leaves her with negative GM upright (%.2f m): she would loll", up))
+	case !(p.GMM > 0):
+		against = append(against, fmt.Sprintf("leaves her with no GM where she lies (%.2f m)", p.GMM))
+	}
+	if !(math.Abs(p.HeelDeg) < math.Abs(rs.HeelDeg)) {
+		against = append(against, fmt.Sprintf("does not reduce the heel (%s)", remedyHeel(p.HeelDeg)))
+	}
+	r.Advisable = len(against) == 0
+	if r.Advisable {
+		if p.HeelDeg*rs.HeelDeg < 0 && math.Abs(p.HeelDeg) >= RemedyUprightDeg {
+			why.say("Overshoots: she would lie %s instead.", remedyHeel(p.HeelDeg))
+		} else {
+			why.say("Brings her to %s.", remedyHeel(p.HeelDeg))
+		}
+		if up < rs.UprightGMM {
+			why.say("Raises G: upright GM from %.2f to %.2f m.", rs.UprightGMM, up)
+		}
+	}
+	if r.ToUpright && r.Kind != RemedyDischarge && len(r.FillAfter) > 0 && r.FillAfter[len(r.FillAfter)-1] < RemedyFillTo {
+		why.say("The tank filled stays slack: its free surface is counted.")
+	}
+	return against
+}
+
+// remedyCautions adds what goes with option r whether or not it is
+// advisable: the freeboard it costs, what stays under water, what it needs.
+// deckWorse and openingWorse: the option itself puts them (deeper) under.
+func remedyCautions(r *Remedy, after remedyFigures, loss float64, deckWorse, openingWorse bool, why *remedyWords) {
 	if loss > RemedyFreeboardLossM {
-		say("It lowers the least freeboard by %.2f m.", loss)
+		why.say("It lowers the least freeboard by %.2f m.", loss)
 	}
-	if r.DeckEdgeImmersed && !(newDeck || deeperDeck) {
-		say("The deck edge stays under water (%.2f m).", -after.deck)
+	if r.DeckEdgeImmersed && !deckWorse {
+		why.say("The deck edge stays under water (%.2f m).", -after.deck)
 	}
-	if r.OpeningImmersed && !(newOpening || deeperOpening) {
-		say("The opening %s stays under water (%.2f m).", after.opening, -after.openingM)
+	if r.OpeningImmersed && !openingWorse {
+		why.say("The opening %s stays under water (%.2f m).", after.opening, -after.openingM)
 	}
-	for _, o := range p.Openings {
+	for _, o := range r.Position.Openings {
 		if o.Weathertight && o.Immersed() {
-			say("The weathertight %s would be under water: check it is secured.", o.Name)
+			why.say("The weathertight %s would be under water: check it is secured.", o.Name)
 			break
 		}
 	}
 	switch r.Kind {
 	case RemedyTransfer:
-		say("Needs a transfer line between the two tanks.")
+		why.say("Needs a transfer line between the two tanks.")
 	case RemedyDischarge:
 		if !strings.Contains(strings.ToLower(r.liquid), "ballast") {
-			say("The %s pumped out is lost to the ship's use.", r.liquid)
+			why.say("The %s pumped out is lost to the ship's use.", r.liquid)
 		}
 	}
 }

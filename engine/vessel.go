@@ -46,9 +46,10 @@ type Vessel struct {
 	Weights      []Weight
 	Compartments []*Compartment
 	Openings     []Opening
-	MarginLineM  float64  // margin line's depth below the deck at side, m
-	CriteriaSets []string // the criteria sets she is held to (see criteria.go)
-	ShipType     string   // "cargo" or "passenger" (SOLAS s's heel limits); "" is cargo
+	MarginLineM  float64     // margin line's depth below the deck at side, m
+	CriteriaSets []string    // the criteria sets she is held to (see criteria.go)
+	ShipType     string      // "cargo" or "passenger" (SOLAS s's heel limits); "" is cargo
+	DraftMarks   []DraftMark // the marks the crew reads (draftmark.go)
 
 	tanks []tankLoad // contents of each compartment at its fill, upright
 }
@@ -78,6 +79,10 @@ func NewVessel(v Vessel) (*Vessel, error) {
 	v.Compartments = append([]*Compartment(nil), v.Compartments...)
 	v.Openings = append([]Opening(nil), v.Openings...)
 	v.CriteriaSets = append([]string(nil), v.CriteriaSets...)
+	if err := checkMarks(v.Hull, v.DraftMarks); err != nil {
+		return nil, err
+	}
+	v.DraftMarks = append([]DraftMark(nil), v.DraftMarks...)
 	for i, w := range v.Weights {
 		for _, f := range []float64{w.MassT, w.LCGM, w.TCGM, w.VCGM, w.FSMTm} {
 			if math.IsNaN(f) || math.IsInf(f, 0) {
@@ -155,12 +160,43 @@ func (d Damage) state(i int) SpaceState {
 	return SpaceState{}
 }
 
-// permeability returns μ of compartment i under d.
-func (v *Vessel) permeability(d Damage, i int) float64 {
-	if mu := d.state(i).Permeability; mu > 0 && mu <= 1 {
+// Permeability returns μ of compartment i under d: the override
+// d[i].Permeability when one is set (non-zero), else the compartment's own
+// (the vessel file's). This is the one place that rule is written.
+//
+// An override must lie in 0 < μ ≤ 1: whoever builds the damage state checks
+// it there (CheckDamage; the front ends read μ with
+// vessels.ParsePermeability), so an override out of range here is a
+// programmer's mistake and panics.
+func (v *Vessel) Permeability(d Damage, i int) float64 {
+	mu := d.state(i).Permeability
+	switch {
+	case mu == 0:
+		return v.Compartments[i].Permeability
+	case mu > 0 && mu <= 1:
 		return mu
 	}
-	return v.Compartments[i].Permeability
+	panic(fmt.Sprintf("engine: permeability override %v of compartment %d is outside 0 < μ ≤ 1 (check the damage state with CheckDamage)", mu, i))
+}
+
+// CheckDamage returns an error naming the first compartment of d whose
+// state cannot be used with v: a permeability override outside 0 < μ ≤ 1
+// (0 means the compartment's own), or held water that is negative or not
+// finite. A state longer than v's compartments is an error too.
+func CheckDamage(v *Vessel, d Damage) error {
+	if len(d) > len(v.Compartments) {
+		return fmt.Errorf("damage state of %d compartments for a vessel of %d", len(d), len(v.Compartments))
+	}
+	for i, s := range d {
+		name := v.Compartments[i].Name
+		if mu := s.Permeability; mu != 0 && !(mu > 0 && mu <= 1) {
+			return fmt.Errorf("%s: permeability %v is outside 0 < μ ≤ 1", name, mu)
+		}
+		if !(s.WaterM3 >= 0) || math.IsInf(s.WaterM3, 0) {
+			return fmt.Errorf("%s: water held %v m³ must be a finite number, zero or more", name, s.WaterM3)
+		}
+	}
+	return nil
 }
 
 // Load is the loading condition's totals under a damage state: the fixed

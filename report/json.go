@@ -37,6 +37,9 @@ type Document struct {
 	GZ          GZ           `json:"gz"`
 	Hand        *Hand        `json:"hand"`
 	Flags       []FlagDoc    `json:"flags"`
+	DraftMarks  []MarkDoc    `json:"draft_marks"`
+	// MarksSurvey: the marks carried to the perpendiculars (draftmarks.go).
+	MarksSurvey *SurveyDoc `json:"marks_to_perpendiculars"`
 
 	Outcome          string         `json:"outcome"`           // floats | sinks | capsizes | not converged
 	Reason           string         `json:"reason"`            // why there is no equilibrium, "" when she floats
@@ -226,6 +229,11 @@ func Build(r Report) Document {
 		Condition:        r.Condition,
 		Version:          r.Version,
 		GZ:               buildGZ(a.GZ),
+	}
+	if md := MarkDrafts(r.Vessel, a.Position); md != nil {
+		d.DraftMarks, d.MarksSurvey = MarkDocs(md), Survey(r.Vessel.Hull.LengthM, a.Position.Plane.C, md)
+	} else {
+		d.DraftMarks = []MarkDoc{}
 	}
 	if !r.Made.IsZero() {
 		d.Made = r.Made.UTC().Format(time.RFC3339)

@@ -50,7 +50,7 @@ func Markdown(w io.Writer, r Report) error {
 		e.line("| Compartment | Use | μ | Volume |")
 		e.line("|---|---|--:|--:|")
 		for _, o := range doc.OpenCompartments {
-			e.line("| ", md(o.Name), " | ", md(orDash(o.Use)), " | ", num(float64(o.Permeability), 2, ""), " | ", num(float64(o.VolumeM3), 1, "m³"), " |")
+			e.line("| ", md(o.Name), " | ", md(orDash(o.Use)), " | ", Permeability(float64(o.Permeability)), " | ", num(float64(o.VolumeM3), 1, "m³"), " |")
 		}
 	}
 	if len(held) > 0 {
@@ -112,6 +112,7 @@ func Markdown(w io.Writer, r Report) error {
 			}
 		}
 		e.line()
+		markdownMarks(e, r)
 
 		e.line("## Openings")
 		e.line()

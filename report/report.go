@@ -57,16 +57,9 @@ func New(v *engine.Vessel, file string, a engine.Assessment, made time.Time, ver
 			continue
 		}
 		r.Open = append(r.Open, c.Name)
-		r.Permeabilities[c.Name] = permeabilityOf(c, a.Damage[i])
+		r.Permeabilities[c.Name] = v.Permeability(a.Damage, i)
 	}
 	return r
-}
-
-func permeabilityOf(c *engine.Compartment, s engine.SpaceState) float64 {
-	if s.Permeability > 0 && s.Permeability <= 1 {
-		return s.Permeability
-	}
-	return c.Permeability
 }
 
 // Cautions are the words that go with every report: what heelwatch is for

@@ -28,7 +28,7 @@ func Text(w io.Writer, r Report) error {
 		e.line("Open to the sea: ", plural(len(r.Open), "compartment"))
 		t := table{right: []bool{false, false, true, true}}
 		for _, o := range Build(r).OpenCompartments {
-			t.add(o.Name, orDash(o.Use), "μ "+num(float64(o.Permeability), 2, ""), num(float64(o.VolumeM3), 1, "m³"))
+			t.add(o.Name, orDash(o.Use), "μ "+Permeability(float64(o.Permeability)), num(float64(o.VolumeM3), 1, "m³"))
 		}
 		writeLines(e, t.lines("  "))
 	}
@@ -66,6 +66,10 @@ func Text(w io.Writer, r Report) error {
 		t.add("deck edge", clearanceWords(p.DeckEdge))
 		t.add("margin line", clearanceWords(p.MarginLine))
 		writeLines(e, t.lines("  "))
+		if ml := markLines(r); len(ml) > 0 {
+			e.line()
+			writeLines(e, ml)
+		}
 		if len(p.Openings) > 0 {
 			e.line()
 			e.line("Openings, nearest the water first (height above water)")

@@ -9,7 +9,6 @@ import (
 	tea "github.com/charmbracelet/bubbletea"
 
 	"heelwatch/engine"
-	"heelwatch/vessels"
 )
 
 // This file runs a flooding run (engine.FloodRun) for the dashboard: one
@@ -34,7 +33,7 @@ type floodRequest struct {
 	// file is the vessel file's hole, used for its position when the
 	// height asked is the file's own; otherwise the hole goes in the shell
 	// (engine.ShellHole).
-	file *vessels.Hole
+	file *engine.Hole
 	// base is the dashboard's damage state when the run was asked for,
 	// with the flooded compartment not open (its permeability and any water
 	// already held kept: that water is in at time zero).
@@ -44,13 +43,15 @@ type floodRequest struct {
 
 // useFile reports whether the hole is the vessel file's, at its position.
 func (q floodRequest) useFile() bool {
-	return q.file != nil && math.Abs(q.zM-q.file.Z) < 0.005
+	return q.file != nil && math.Abs(q.zM-q.file.ZM) < 0.005
 }
 
 // hole returns the engine's hole for the request.
 func (q floodRequest) hole(v *engine.Vessel) (engine.Hole, error) {
 	if q.useFile() {
-		return engine.Hole{AreaM2: q.areaM2, XM: q.file.X, YM: q.file.Y, ZM: q.file.Z, Cd: q.cd}, nil
+		h := *q.file
+		h.AreaM2, h.Cd = q.areaM2, q.cd
+		return h, nil
 	}
 	return engine.ShellHole(v, q.ci, q.areaM2, q.zM, q.cd)
 }

@@ -55,7 +55,7 @@ func (m model) openForm() (tea.Model, tea.Cmd) {
 	sp := m.spaces[i]
 	area, z, cd := defaultHoleM2, sp.shellZ, engine.DefaultDischargeCoefficient
 	if h := sp.hole; h != nil {
-		area, z = h.AreaM2, h.Z
+		area, z = h.AreaM2, h.ZM
 		if h.Cd > 0 {
 			cd = h.Cd
 		}
@@ -223,10 +223,10 @@ func (m model) formHint() string {
 	var where string
 	z, err := parseNumber(f.fields[fieldZ].Value())
 	switch {
-	case sp.hole != nil && err == nil && math.Abs(z-sp.hole.Z) < 0.005:
-		where = fmt.Sprintf("the vessel file's hole, at x %s y %s m", num(sp.hole.X, 1), num(sp.hole.Y, 2))
+	case sp.hole != nil && err == nil && math.Abs(z-sp.hole.ZM) < 0.005:
+		where = fmt.Sprintf("the vessel file's hole, at x %s y %s m", num(sp.hole.XM, 1), num(sp.hole.YM, 2))
 	case sp.hole != nil:
-		where = "in the shell at mid-length (the file's hole is at z " + short(sp.hole.Z, 2) + " m)"
+		where = "in the shell at mid-length (the file's hole is at z " + short(sp.hole.ZM, 2) + " m)"
 	default:
 		where = "in the shell at mid-length, outboard; lowest point z " + short(sp.shellZ, 2) + " m"
 	}

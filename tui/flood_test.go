@@ -149,7 +149,7 @@ func TestFloodTimesAreTheEngines(t *testing.T) {
 	}
 	fh := m.spaces[ci].hole
 	want, err := engine.RunFlood(engine.FloodCase{Vessel: m.v, Base: d, Compartment: ci,
-		Hole:     engine.Hole{AreaM2: fh.AreaM2, XM: fh.X, YM: fh.Y, ZM: fh.Z, Cd: fh.Cd},
+		Hole:     *fh,
 		Criteria: engine.FloodCriteria(vesselShipType(t))}, nil)
 	if err != nil {
 		t.Fatal(err)

@@ -4,6 +4,8 @@ import (
 	"math"
 	"strconv"
 	"strings"
+
+	"heelwatch/report"
 )
 
 // blank is what the screen prints in place of a figure that does not exist
@@ -106,8 +108,8 @@ func trimText(m float64) string {
 
 // sideWord names a side in lower case.
 
-// muText prints a permeability as a fraction with two decimals.
-func muText(mu float64) string { return num(mu, 2) }
+// muText prints a permeability as every front end does (report.Permeability).
+func muText(mu float64) string { return report.Permeability(mu) }
 
 // clip cuts s to at most w display columns, marking the cut with "…".
 func clip(s string, w int) string {

@@ -3,8 +3,6 @@ package tui
 import (
 	"fmt"
 	"math"
-	"strconv"
-	"strings"
 	"sync/atomic"
 	"time"
 
@@ -25,8 +23,8 @@ import (
 type space struct {
 	group string
 	use   string
-	pump  float64       // m³/h, 0 if none
-	hole  *vessels.Hole // the vessel file's hole into it, nil if none
+	pump  float64      // m³/h, 0 if none
+	hole  *engine.Hole // the vessel file's hole into it, nil if none
 	// shellZ is the height of the compartment's lowest point in the shell
 	// at the middle of its length (engine.ShellHole): where a hole the
 	// vessel file does not give goes by default.
@@ -510,28 +508,9 @@ func (m model) editKey(msg tea.KeyMsg) (tea.Model, tea.Cmd) {
 	return m, cmd
 }
 
-// parseMu reads a typed permeability: a fraction ("0.85", ",85" or "0,85")
-// or a percentage ("85%"), 0 < μ ≤ 1, rounded to 0.001.
-func parseMu(s string) (float64, error) {
-	t := strings.TrimSpace(strings.ReplaceAll(s, ",", "."))
-	pct := strings.HasSuffix(t, "%")
-	t = strings.TrimSpace(strings.TrimSuffix(t, "%"))
-	if t == "" {
-		return 0, fmt.Errorf("type a permeability between 0.01 and 1, e.g. 0.85 or 85%%")
-	}
-	v, err := strconv.ParseFloat(t, 64)
-	if err != nil || !finite(v) {
-		return 0, fmt.Errorf("%q is not a number: type e.g. 0.85 or 85%%", s)
-	}
-	if pct {
-		v /= 100
-	}
-	v = math.Round(v*1000) / 1000
-	if !(v > 0 && v <= 1) {
-		return 0, fmt.Errorf("%s is outside 0 < μ ≤ 1 (the fraction of the space that water can fill)", strings.TrimSpace(s))
-	}
-	return v, nil
-}
+// parseMu reads a typed permeability as the command line does (see
+// vessels.ParsePermeability).
+func parseMu(s string) (float64, error) { return vessels.ParsePermeability(s) }
 
 // setMu sets the selected compartment's permeability.
 func (m model) setMu(mu float64) (tea.Model, tea.Cmd) {
@@ -547,14 +526,7 @@ func (m model) setMu(mu float64) (tea.Model, tea.Cmd) {
 }
 
 // mu returns the permeability compartment i has under d.
-func (m model) mu(d engine.Damage, i int) float64 {
-	if i < len(d) {
-		if p := d[i].Permeability; p > 0 && p <= 1 {
-			return p
-		}
-	}
-	return m.v.Compartments[i].Permeability
-}
+func (m model) mu(d engine.Damage, i int) float64 { return m.v.Permeability(d, i) }
 
 // apply makes d the damage state, keeping the old one for undo.
 func (m model) apply(d engine.Damage, what string) (tea.Model, tea.Cmd) {

@@ -22,10 +22,10 @@ func TestBundledShipsAreSoundModels(t *testing.T) {
 				continue
 			}
 			b := v.Compartments[i].Box
-			if h.X < b.X0 || h.X > b.X1 || h.Y < b.Y0 || h.Y > b.Y1 || h.Z < b.Z0 || h.Z > b.Z1 {
+			if h.XM < b.X0 || h.XM > b.X1 || h.YM < b.Y0 || h.YM > b.Y1 || h.ZM < b.Z0 || h.ZM > b.Z1 {
 				t.Errorf("%s: the hole into %q is outside it", e.Name, v.Compartments[i].Name)
 			}
-			if d := v.Hull.ShellDistance(h.X, h.Y, h.Z); !(d <= 0.05) {
+			if d := v.Hull.ShellDistance(h.XM, h.YM, h.ZM); !(d <= 0.05) {
 				t.Errorf("%s: the hole into %q is %.2f m from the shell", e.Name, v.Compartments[i].Name, d)
 			}
 		}

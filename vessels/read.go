@@ -31,22 +31,14 @@ type Info struct {
 
 // CompartmentInfo is the file's extra data on one compartment.
 type CompartmentInfo struct {
-	Use   string // as in the file; also set on engine.Compartment.Use
-	Group string // the group key, or the use's default group (see FORMAT.md)
-	Hole  *Hole  // a hole in the shell into this compartment, nil if none
+	Use   string       // as in the file; also set on engine.Compartment.Use
+	Group string       // the group key, or the use's default group (see FORMAT.md)
+	Hole  *engine.Hole // a hole in the shell into this compartment (C_d filled in), nil if none
 	// PumpM3h is the pumping capacity that can be put on the compartment, m³/h.
 	PumpM3h float64
 	// DefaultPermeabilityFromUse is true when the file gave no permeability
 	// and the compartment's μ is the default of its use.
 	DefaultPermeabilityFromUse bool
-}
-
-// Hole is an opening in the shell through which the sea enters a
-// compartment: flow Q = Cd·A·√(2 g h), h the head across it (Torricelli).
-type Hole struct {
-	AreaM2  float64 // m²
-	X, Y, Z float64 // m, ship frame: its centre
-	Cd      float64 // discharge coefficient, 0 < Cd ≤ 1 (default 0.6)
 }
 
 // Parse reads a vessel file. file is the name used in messages. Any problem
@@ -92,6 +84,8 @@ func (r *reader) vessel(root *table) (*engine.Vessel, *Info) {
 	name, ok := root.str("name", true, "the vessel's name in quotes")
 	if ok && strings.TrimSpace(name) == "" {
 		r.addf("name", "is empty: give the vessel's name")
+	} else if ok {
+		r.checkName("name", name, "vessel's name")
 	}
 	rho := engine.SeaWaterDensity
 	if d, ok := root.num("water_density", "t/m³", false); ok {
@@ -102,12 +96,14 @@ func (r *reader) vessel(root *table) (*engine.Vessel, *Info) {
 		}
 	}
 	info.Description, _ = root.str("about", false, "a description of the vessel")
+	r.checkText("about", info.Description, "the description")
 	info.Condition, _ = root.str("condition", false, "the loading condition's name")
+	r.checkName("condition", info.Condition, "condition's name")
 	info.ShipType = "cargo"
 	if s, ok := root.choice("ship_type", false, shipTypes); ok {
 		info.ShipType = s
 	}
-	criteria := append([]string(nil), DefaultCriteria...)
+	criteria := DefaultCriteria()
 	if v, ok := root.get("criteria"); ok {
 		criteria = r.criteria(v)
 	}
@@ -121,6 +117,7 @@ func (r *reader) vessel(root *table) (*engine.Vessel, *Info) {
 	weights := r.weights(root.entries("weight", "one item of the loading condition"))
 	comps, cinfo := r.compartments(root.entries("compartment", "one space of the ship"), hull)
 	openings := r.openings(root.entries("opening", "a point where water would spread"))
+	marks := r.draftMarks(root.entries("draft_mark", "a draft mark on the shell"), hull)
 	root.finish()
 
 	if len(r.probs) > 0 || hull == nil {
@@ -129,6 +126,7 @@ func (r *reader) vessel(root *table) (*engine.Vessel, *Info) {
 	v, err := engine.NewVessel(engine.Vessel{
 		Name: name, WaterDensity: rho, Hull: hull, Weights: weights,
 		Compartments: comps, Openings: openings, MarginLineM: margin, CriteriaSets: criteria, ShipType: info.ShipType,
+		DraftMarks: marks,
 	})
 	if err != nil {
 		r.addf("weight", "%v", err)
@@ -345,6 +343,9 @@ func (r *reader) name(t *table, seen map[string]string, what string) (string, bo
 		r.addf(p, "is empty: every %s needs a name", what)
 		return n, false
 	}
+	if !r.checkName(p, n, what+"'s name") {
+		return n, false
+	}
 	if what != "weight" && strings.Contains(n, ",") {
 		r.addf(p, "%q holds a comma: %s names may not (the command line separates names with commas)", n, what)
 	}
@@ -390,7 +391,7 @@ func (r *reader) compartments(ts []*table, hull *engine.Hull) ([]*engine.Compart
 		if g, ok := t.str("group", false, "the compartment's group, e.g. \"double bottom\""); ok {
 			if strings.TrimSpace(g) == "" {
 				r.addf(t.keyPath("group"), "is empty: give a group name or leave the key out")
-			} else {
+			} else if r.checkName(t.keyPath("group"), g, "group's name") {
 				ci.Group = g
 			}
 		}
@@ -491,6 +492,7 @@ type tankLiquid struct {
 // liquid reads a tank's liquid, liquid_density and fill or fill_m3.
 func (r *reader) liquid(t *table, use string, useOK bool) *tankLiquid {
 	name, nameOK := t.str("liquid", false, "what the tank holds, e.g. \"fuel oil\"")
+	nameOK = nameOK && r.checkName(t.keyPath("liquid"), name, "liquid's name")
 	dens, densOK := t.positive("liquid_density", "t/m³", false)
 	fill, fillOK := t.num("fill", "fraction of the tank, 0 to 1", false)
 	vol, volOK := t.num("fill_m3", "m³", false)
@@ -543,7 +545,7 @@ func (r *reader) liquid(t *table, use string, useOK bool) *tankLiquid {
 }
 
 // hole reads a compartment's hole table.
-func (r *reader) hole(t *table, b engine.Box, boxOK bool) *Hole {
+func (r *reader) hole(t *table, b engine.Box, boxOK bool) *engine.Hole {
 	h, ok := t.sub("hole", false, "area, z and optionally x, y, cd")
 	if !ok {
 		return nil
@@ -589,7 +591,7 @@ func (r *reader) hole(t *table, b engine.Box, boxOK bool) *Hole {
 			return nil
 		}
 	}
-	return &Hole{AreaM2: area, X: x, Y: y, Z: z, Cd: cd}
+	return &engine.Hole{AreaM2: area, XM: x, YM: y, ZM: z, Cd: cd}
 }
 
 // openings reads the [[opening]] tables.

@@ -258,10 +258,10 @@ hole = { area = 0.05, x = 12.0, y = -5.0, z = 0.5, cd = 0.7 }
 		t.Fatalf("%d infos", len(info.Compartments))
 	}
 	s, p := info.Compartments[0], info.Compartments[1]
-	if s.Group != "wing voids" || s.PumpM3h != 90 || s.Hole == nil || *s.Hole != (Hole{AreaM2: 0.2, X: 15, Y: 4, Z: 1, Cd: DefaultCd}) {
+	if s.Group != "wing voids" || s.PumpM3h != 90 || s.Hole == nil || *s.Hole != (engine.Hole{AreaM2: 0.2, XM: 15, YM: 4, ZM: 1, Cd: DefaultCd}) {
 		t.Errorf("Wing S: %+v hole %+v", s, s.Hole)
 	}
-	if p.Group != "voids" || p.PumpM3h != 0 || p.Hole == nil || *p.Hole != (Hole{AreaM2: 0.05, X: 12, Y: -5, Z: 0.5, Cd: 0.7}) {
+	if p.Group != "voids" || p.PumpM3h != 0 || p.Hole == nil || *p.Hole != (engine.Hole{AreaM2: 0.05, XM: 12, YM: -5, ZM: 0.5, Cd: 0.7}) {
 		t.Errorf("Wing P: %+v hole %+v", p, p.Hole)
 	}
 }

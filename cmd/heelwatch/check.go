@@ -137,7 +137,7 @@ func summarise(w io.Writer, v *engine.Vessel, info *vessels.Info) int {
 	for i, c := range v.Compartments {
 		vol := c.Volume()
 		total += vol
-		mu := fmt.Sprintf("%.2f", c.Permeability)
+		mu := report.Permeability(c.Permeability)
 		if i < len(info.Compartments) && info.Compartments[i].DefaultPermeabilityFromUse {
 			mu += "*"
 		}

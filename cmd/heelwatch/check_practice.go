@@ -83,17 +83,17 @@ func practice(w io.Writer, v *engine.Vessel, info *vessels.Info) {
 		holes++
 		c := v.Compartments[i]
 		b := c.Box
-		outside := h.X < b.X0-shellTolM || h.X > b.X1+shellTolM || h.Y < b.Y0-shellTolM ||
-			h.Y > b.Y1+shellTolM || h.Z < b.Z0-shellTolM || h.Z > b.Z1+shellTolM
-		d := v.Hull.ShellDistance(h.X, h.Y, h.Z)
+		outside := h.XM < b.X0-shellTolM || h.XM > b.X1+shellTolM || h.YM < b.Y0-shellTolM ||
+			h.YM > b.Y1+shellTolM || h.ZM < b.Z0-shellTolM || h.ZM > b.Z1+shellTolM
+		d := v.Hull.ShellDistance(h.XM, h.YM, h.ZM)
 		switch {
 		case outside:
 			off++
-			fmt.Fprintf(tw, "  WARNING\tthe hole into %q at x %.2f, y %.2f, z %.2f m is outside that compartment\n", c.Name, h.X, h.Y, h.Z)
+			fmt.Fprintf(tw, "  WARNING\tthe hole into %q at x %.2f, y %.2f, z %.2f m is outside that compartment\n", c.Name, h.XM, h.YM, h.ZM)
 		case !(d <= shellTolM):
 			off++
 			fmt.Fprintf(tw, "  WARNING\tthe hole into %q at x %.2f, y %.2f, z %.2f m is %s from the shell: on an inner bulkhead or tank top, which the sea reaches only through another space; put it on the shell\n",
-				c.Name, h.X, h.Y, h.Z, metres(d))
+				c.Name, h.XM, h.YM, h.ZM, metres(d))
 		}
 	}
 	switch {

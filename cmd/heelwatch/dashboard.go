@@ -24,6 +24,9 @@ type dashboardOptions struct {
 // interactive reports whether the dashboard can run: standard input and
 // output are both terminals. Tests and pipes get the printed condition.
 var interactive = func(stdout io.Writer) bool {
+	if g, ok := stdout.(*outputGuard); ok {
+		stdout = g.file()
+	}
 	f, ok := stdout.(*os.File)
 	return ok && term.IsTerminal(f.Fd()) && term.IsTerminal(os.Stdin.Fd())
 }

@@ -112,7 +112,7 @@ func runFlood(args []string, stdout, stderr io.Writer) int {
 		return status
 	}
 	index := v.CompartmentIndex // names ignore case
-	fileHole := func(i int) *vessels.Hole {
+	fileHole := func(i int) *engine.Hole {
 		if i < len(info.Compartments) {
 			return info.Compartments[i].Hole
 		}
@@ -128,7 +128,7 @@ func runFlood(args []string, stdout, stderr io.Writer) int {
 	for _, p := range pumps {
 		name, nums := splitNumbers(p, 1)
 		if len(nums) != 1 {
-			return fail("--pump %q: write NAME:M3H, the capacity in m³/h, e.g. --pump %q", p, v.Compartments[0].Name+":120")
+			return fail("--pump %q: write NAME:M3H, the capacity in m³/h, e.g. --pump %q", p, exampleName(v)+":120")
 		}
 		if _, ok := index(name); !ok {
 			return fail("%s", unknownName("--pump", name, v))
@@ -144,6 +144,9 @@ func runFlood(args []string, stdout, stderr io.Writer) int {
 	var area, z float64 = math.NaN(), math.NaN()
 	if len(holes) == 1 {
 		name, nums := splitNumbers(holes[0], 2)
+		if msg := finiteNumbers("--hole", holes[0], nums); msg != "" {
+			return fail("%s", msg)
+		}
 		i, ok := index(name)
 		if !ok {
 			msg := unknownName("--hole", name, v)
@@ -204,7 +207,7 @@ func runFlood(args []string, stdout, stderr io.Writer) int {
 		}
 		hole = h
 	case fh != nil:
-		hole = engine.Hole{AreaM2: fh.AreaM2, XM: fh.X, YM: fh.Y, ZM: fh.Z, Cd: fh.Cd}
+		hole = *fh
 		from = "vessel file"
 		if !math.IsNaN(area) {
 			hole.AreaM2 = area
@@ -259,8 +262,7 @@ func runFlood(args []string, stdout, stderr io.Writer) int {
 	if err != nil {
 		return fail("%v", err)
 	}
-	fr := floodRun{rep: rep, v: v, source: source(info), open: inOrderGiven(v, open), holeFrom: from, pumpFrom: pumpFrom,
-		mu: rep.CapacityM3 / comp.Volume()}
+	fr := floodRun{rep: rep, v: v, source: source(info), open: inOrderGiven(v, open), holeFrom: from, pumpFrom: pumpFrom}
 	if *format == "json" {
 		err = writeFloodJSON(stdout, fr)
 	} else {
@@ -308,7 +310,6 @@ type floodRun struct {
 	open     []string
 	holeFrom string
 	pumpFrom string
-	mu       float64
 }
 
 // fnum formats x with prec decimals, "—" when not finite.
@@ -352,7 +353,7 @@ func writeFloodText(w io.Writer, fr floodRun) error {
 	var b strings.Builder
 	fmt.Fprintf(&b, "Flooding through a hole — %s (%s)\n\n", r.Vessel, fr.source)
 	tw := tabwriter.NewWriter(&b, 0, 0, 2, ' ', 0)
-	fmt.Fprintf(tw, "  compartment\t%s: μ %s, capacity %s m³\n", r.Compartment, fnum(fr.mu, 2), fnum(r.CapacityM3, 1))
+	fmt.Fprintf(tw, "  compartment\t%s: μ %s, capacity %s m³\n", r.Compartment, report.Permeability(r.Permeability), fnum(r.CapacityM3, 1))
 	fmt.Fprintf(tw, "  hole\t%s m² at x %s, y %s, z %s m, Cd %s (%s)\n", fnum(r.Hole.AreaM2, 3), fnum(r.Hole.XM, 2), fnum(r.Hole.YM, 2), fnum(r.Hole.ZM, 2), fnum(r.Hole.Cd, 2), fr.holeFrom)
 	pumps := "none"
 	if r.PumpM3h > 0 {
@@ -712,7 +713,7 @@ func numPtr(x float64) *report.Num {
 func writeFloodJSON(w io.Writer, fr floodRun) error {
 	r := fr.rep
 	doc := floodDoc{
-		Vessel: r.Vessel, VesselFile: fr.source, Compartment: r.Compartment, Permeability: report.Num(fr.mu),
+		Vessel: r.Vessel, VesselFile: fr.source, Compartment: r.Compartment, Permeability: report.Num(r.Permeability),
 		CapacityM3: report.Num(r.CapacityM3),
 		Hole: floodHoleDoc{AreaM2: report.Num(r.Hole.AreaM2), XM: report.Num(r.Hole.XM), YM: report.Num(r.Hole.YM),
 			ZM: report.Num(r.Hole.ZM), Cd: report.Num(r.Hole.Cd), From: fr.holeFrom},

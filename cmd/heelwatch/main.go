@@ -43,7 +43,7 @@ const (
 )
 
 func main() {
-	os.Exit(run(os.Args[1:], os.Stdout, os.Stderr))
+	os.Exit(guarded(os.Args[1:], os.Stdout, os.Stderr))
 }
 
 const mainHelp = `heelwatch: how the ship will lie when compartments flood.

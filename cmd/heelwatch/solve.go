@@ -4,8 +4,6 @@ import (
 	"flag"
 	"fmt"
 	"io"
-	"math"
-	"strconv"
 	"strings"
 
 	"heelwatch/engine"
@@ -130,16 +128,11 @@ func damageOf(v *engine.Vessel, open, perm []string) (engine.Damage, string) {
 		if !ok {
 			return nil, unknownName("--perm", name, v)
 		}
-		// A percentage is taken too ("85%"), as the dashboard takes it; the
+		// Read as the dashboard reads it (vessels.ParsePermeability); the
 		// comma separates items here, so it cannot be a decimal mark.
-		num, scale := val, 1.0
-		if strings.HasSuffix(num, "%") {
-			num, scale = strings.TrimSpace(strings.TrimSuffix(num, "%")), 100
-		}
-		mu, err := strconv.ParseFloat(num, 64)
-		mu /= scale
-		if err != nil || math.IsNaN(mu) || !(mu > 0 && mu <= 1) {
-			return nil, fmt.Sprintf("--perm %q: permeability %q must be a number with 0 < μ ≤ 1, or a percentage such as 85%%", name, val)
+		mu, err := vessels.ParsePermeability(val)
+		if err != nil {
+			return nil, fmt.Sprintf("--perm %q: permeability %v", name, err)
 		}
 		if !d[i].Open {
 			return nil, fmt.Sprintf("--perm %q: that compartment is not open to the sea; add it to --open", name)
@@ -171,6 +164,10 @@ func inOrderGiven(v *engine.Vessel, names []string) []string {
 func unknownName(flagName, name string, v *engine.Vessel) string {
 	var b strings.Builder
 	fmt.Fprintf(&b, "%s: %q is not a compartment of %s (names ignore case).", flagName, name, v.Name)
+	if len(v.Compartments) == 0 {
+		b.WriteString(" It has no compartments.")
+		return b.String()
+	}
 	b.WriteString(" The compartments are:")
 	for _, c := range v.Compartments {
 		fmt.Fprintf(&b, "\n  %s", c.Name)
