@@ -18,7 +18,7 @@ type dashboardOptions struct {
 	palette   string
 	reportDir string
 	open      listFlag // compartments open to the sea at start
-	perm      listFlag // their permeabilities
+	perm      permFlag // their permeabilities
 }
 
 // interactive reports whether the dashboard can run: standard input and

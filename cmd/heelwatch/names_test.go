@@ -56,3 +56,30 @@ func TestDashboardOpenWithoutTerminal(t *testing.T) {
 		t.Errorf("--open before a command: exit %d, want 2", code)
 	}
 }
+
+// --perm takes a decimal comma as the dashboard does, in one item or among
+// several; what cannot be read is refused, never replaced.
+func TestPermDecimalComma(t *testing.T) {
+	for _, perm := range []string{"Hold 2=0,85", "hold 2=0,85,DB 2 S=0,9", "Hold 2=85%,DB 2 S=90"} {
+		code, m := solveJSON(t, "--open", "Hold 2,DB 2 S", "--perm", perm)
+		if code != 0 {
+			t.Fatalf("--perm %q: exit %d", perm, code)
+		}
+		got := map[string]float64{}
+		for _, o := range m["open_compartments"].([]any) {
+			om := o.(map[string]any)
+			got[om["name"].(string)] = om["permeability"].(float64)
+		}
+		if got["Hold 2"] != 0.85 {
+			t.Errorf("--perm %q: Hold 2 μ %v, want 0.85", perm, got["Hold 2"])
+		}
+		if strings.Contains(perm, "DB") && got["DB 2 S"] != 0.9 {
+			t.Errorf("--perm %q: DB 2 S μ %v, want 0.9", perm, got["DB 2 S"])
+		}
+	}
+	for _, bad := range []string{"Hold 2=0,8,5", "Hold 2=1,5", "Hold 2=0,0"} {
+		if code, _, _ := heelwatch(t, "solve", "--open", "Hold 2", "--perm", bad); code != 2 {
+			t.Errorf("--perm %q: exit %d, want 2 (refused)", bad, code)
+		}
+	}
+}

@@ -22,7 +22,8 @@ Flags:
                       in the vessel file (case does not matter); repeat the flag
                       or separate with commas
   --perm NAME=μ,...   permeability of an open compartment for this solve,
-                      0 < μ ≤ 1, in place of the file's (e.g. --perm "Hold 2=0.85")
+                      0 < μ ≤ 1, in place of the file's (e.g. --perm "Hold 2=0.85",
+                      "Hold 2=0,85" or "Hold 2=85%%")
   --remedies          also work out the righting options: ballast into an intact
                       tank on the high side, a low-side tank pumped out, liquid
                       moved to the mirror tank; with negative upright GM (a loll)
@@ -43,7 +44,8 @@ func runSolve(args []string, stdout, stderr io.Writer) int {
 	fs.SetOutput(stderr)
 	fs.Usage = func() {}
 	vessel := fs.String("vessel", vessels.Default, "")
-	var open, perm listFlag
+	var open listFlag
+	var perm permFlag
 	fs.Var(&open, "open", "")
 	fs.Var(&perm, "perm", "")
 	format := fs.String("format", "text", "")
@@ -128,8 +130,8 @@ func damageOf(v *engine.Vessel, open, perm []string) (engine.Damage, string) {
 		if !ok {
 			return nil, unknownName("--perm", name, v)
 		}
-		// Read as the dashboard reads it (vessels.ParsePermeability); the
-		// comma separates items here, so it cannot be a decimal mark.
+		// Read as the dashboard reads it (vessels.ParsePermeability),
+		// decimal comma included (permFlag keeps it in the item).
 		mu, err := vessels.ParsePermeability(val)
 		if err != nil {
 			return nil, fmt.Sprintf("--perm %q: permeability %v", name, err)
