@@ -77,13 +77,13 @@ func (k keyMap) FullHelp() [][]key.Binding {
 	stage.SetEnabled(true)
 	return [][]key.Binding{
 		{k.Up, k.Down, say(k.Top, "home", "first"), say(k.Bottom, "end", "last"),
-			say(k.PageUp, "pgup pgdn", "a page of the list"), say(k.Find, "/", "find a compartment"),
-			say(k.Picture, "tab", "next picture"),
-			say(k.HoleRun, "f", "hole & pumps"), say(k.RunPanel, "t", "run panel")},
+			say(k.PageUp, "pgup", "page up"), say(k.PageDown, "pgdn", "page down"),
+			say(k.Find, "/", "find by name"), say(k.Picture, "tab", "next picture")},
 		{say(k.Flood, "space", "open to sea / intact"), say(k.MuUp, "+ −", "permeability ±0.05"),
 			say(k.MuSet, "m", "type a permeability"), k.Undo, k.Reset, stage,
-			say(k.Remedies, "o", "righting options")},
-		{say(k.Hand, "h", "hand working on/off"), say(k.WorkUp, "[ ]", "scroll working/criteria"), k.Report,
+			say(k.Remedies, "o", "righting options"), say(k.HoleRun, "f", "hole & pumps")},
+		{say(k.RunPanel, "t", "run panel"), say(k.Hand, "h", "hand working on/off"),
+			say(k.WorkUp, "[ ]", "scroll working/criteria"), k.Report,
 			say(k.Palette, "c", "day / night / mono"), say(k.Help, "?", "close this help"),
 			say(k.Quit, "q", "quit (also ctrl+c)")},
 	}
