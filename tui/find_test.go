@@ -100,3 +100,15 @@ func TestPageKeysPageTheList(t *testing.T) {
 		t.Errorf("pgup from one page down selects %q, want the first again", selName(m))
 	}
 }
+
+// The full help shows the find and page keys and still every column at 80
+// columns.
+func TestFullHelpShowsFindAndPage(t *testing.T) {
+	m := press(t, testModel(t, 80, 24), "?")
+	screen := m.View()
+	for _, want := range []string{"find by name", "page down", "page up", "quit (also ctrl+c)", "write report"} {
+		if !strings.Contains(screen, want) {
+			t.Errorf("the full help lacks %q:\n%s", want, screen)
+		}
+	}
+}
