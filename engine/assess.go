@@ -134,6 +134,10 @@ type Assessment struct {
 	// unknown): beside Position.GMM, the GM where she lies, it tells a list
 	// from a loll.
 	UprightGMM *float64
+	// Strength is the hull girder's still-water shear force and bending
+	// moment (strength.go); nil with StrengthWhy saying why.
+	Strength    *Strength
+	StrengthWhy string
 }
 
 // Assess computes everything shown for damage state d of v: the floating
@@ -188,8 +192,9 @@ func Assess(v *Vessel, d Damage) Assessment {
 			}
 		}
 	}
+	a.Strength, a.StrengthWhy = GirderStrength(v, d, a.Position)
 	a.Flags = flags(v, d, a.Position, a.NoEq, a.Hand, up)
-	if more := StabilityFlags(v, a.Position, a.GZ, a.Criteria); len(more) > 0 {
+	if more := append(StabilityFlags(v, a.Position, a.GZ, a.Criteria), StrengthFlags(a.Strength)...); len(more) > 0 {
 		a.Flags = append(a.Flags, more...)
 		sort.SliceStable(a.Flags, func(i, j int) bool { return a.Flags[i].Severity > a.Flags[j].Severity })
 	}

@@ -67,6 +67,7 @@ func (e *NoEquilibrium) Error() string {
 type openSpace struct {
 	solid *Solid
 	mu    float64
+	hints []arc // guesses of its slabs' arcs under the water, from the last evaluation
 }
 
 // heldWater is floodwater held in a compartment not open to the sea (added
@@ -92,6 +93,7 @@ type Problem struct {
 	massT  float64 // total, floodwater held included
 	vmax   float64 // largest volume of buoyancy left
 	scale  [3]float64
+	hints  []arc // the hull's slabs' arcs under the water at the last evaluation (convex_cut.go)
 }
 
 // NewProblem prepares v under d.
@@ -99,12 +101,13 @@ func NewProblem(v *Vessel, d Damage) *Problem {
 	pr := &Problem{v: v, d: d, load: v.Loading(d), rho: v.WaterDensity}
 	pr.massT = pr.load.MassT
 	pr.vmax = v.Hull.solid.Volume()
+	pr.hints = v.Hull.solid.newArcHints()
 	for i, c := range v.Compartments {
 		s := d.state(i)
 		mu := v.Permeability(d, i)
 		switch {
 		case s.Open:
-			pr.open = append(pr.open, openSpace{c.solid, mu})
+			pr.open = append(pr.open, openSpace{c.solid, mu, c.solid.newArcHints()})
 			pr.openIx = append(pr.openIx, i)
 			pr.vmax -= mu * c.solid.Volume()
 		case s.WaterM3 > 0:
@@ -155,9 +158,9 @@ type state struct {
 func (pr *Problem) eval(p Plane, withJac bool) state {
 	var s state
 	s.p = p
-	s.e = pr.v.Hull.solid.Below(p)
+	s.e = pr.v.Hull.solid.belowHinted(p, pr.hints)
 	for _, o := range pr.open {
-		s.e.add(o.solid.Below(p), -o.mu)
+		s.e.add(o.solid.belowHinted(p, o.hints), -o.mu)
 	}
 	W := pr.massT
 	l := pr.load

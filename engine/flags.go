@@ -233,14 +233,14 @@ func flags(v *Vessel, d Damage, pos *Position, noEq *NoEquilibrium, hand *HandWo
 			// The angles are small; what parts them is the coupling of heel
 			// and trim through the waterplane's product of inertia.
 			add(FlagPastSmallAngles, Caution, "The hand method and the direct solution part: heel %s against %s (%.2f° apart), drafts up to %.1f %% apart. The damage is off the centreline and off midships together, so heel and trim work on each other, which the plain hand method leaves out; kept in, the hand working gives %s and %.2f m trim, as the direct solution does. Work from the direct solution.",
-				flagHeel(hand.HeelDeg), flagHeel(pos.HeelDeg), dh, 100*dd, flagHeel(hand.CoupledHeelDeg), hand.CoupledTrimM)
+				heelWords(hand.HeelDeg), heelWords(pos.HeelDeg), dh, 100*dd, heelWords(hand.CoupledHeelDeg), hand.CoupledTrimM)
 		default:
 			add(FlagPastSmallAngles, Caution, "The hand method and the direct solution part: heel %s against %s (%.2f° apart), drafts up to %.1f %% apart. She is beyond the small angles the hand method assumes: work from the direct solution.",
-				flagHeel(hand.HeelDeg), flagHeel(pos.HeelDeg), dh, 100*dd)
+				heelWords(hand.HeelDeg), heelWords(pos.HeelDeg), dh, 100*dd)
 		}
 	} else if math.Abs(pos.HeelDeg) > FlagLargeHeelDeg {
 		add(FlagPastSmallAngles, Caution, "She lies at %s, beyond the %.0f° where small-angle hand methods hold: work from the direct solution and expect the righting lever to change quickly with more heel.",
-			flagHeel(pos.HeelDeg), FlagLargeHeelDeg)
+			heelWords(pos.HeelDeg), FlagLargeHeelDeg)
 	}
 
 	// Deck edge and margin line.
@@ -315,7 +315,7 @@ func flags(v *Vessel, d Damage, pos *Position, noEq *NoEquilibrium, hand *HandWo
 	// Negative GM upright: loll.
 	if gm := uprightGM; gm < 0 {
 		add(FlagGMNegative, Danger, "Upright, in this state, her GM is %.2f m: she is unstable upright and lolls to whichever side she falls (now %s). Do not counter-ballast the high side: she would flop over to the other side, perhaps further. The remedy is to lower G: take off or lower weights high up; fill a low tank on the low side only with care, one at a time, as a slack tank adds free surface before it helps.",
-			gm, flagHeel(pos.HeelDeg))
+			gm, heelWords(pos.HeelDeg))
 	}
 
 	// Trim.
@@ -330,17 +330,6 @@ func flags(v *Vessel, d Damage, pos *Position, noEq *NoEquilibrium, hand *HandWo
 
 	sort.SliceStable(out, func(i, j int) bool { return out[i].Severity > out[j].Severity })
 	return out
-}
-
-// flagHeel writes a heel in words: "3.21° to starboard".
-func flagHeel(deg float64) string {
-	switch {
-	case deg > 0:
-		return fmt.Sprintf("%.2f° to starboard", deg)
-	case deg < 0:
-		return fmt.Sprintf("%.2f° to port", -deg)
-	}
-	return "upright"
 }
 
 // flagWhere places x along the ship: "at the aft perpendicular (x = 0.0 m)".
@@ -382,17 +371,7 @@ func flagWhereOnFace(y float64, p Plane, low bool) string {
 		}
 		return "at its forward end"
 	}
-	return "on the " + flagSideOf(y) + " side"
-}
-
-func flagSideOf(y float64) string {
-	switch {
-	case y > 0:
-		return "starboard"
-	case y < 0:
-		return "port"
-	}
-	return "centreline"
+	return "on the " + sideWords(y) + " side"
 }
 
 // flagBottomOut returns the highest point of the bottom above the water,

@@ -360,7 +360,7 @@ func (r *FloodRun) Step() bool {
 		r.settled(e, rec.t1)
 	}
 	if r.end == FloodRunning && rec.t1 >= r.limit*(1-1e-12) {
-		r.finish(FloodTimeLimit, rec.t1, fmt.Sprintf("the time limit (%s) came first: %.1f m³ in, head %.3f m", FormatDuration(r.limit), e.water, e.head), nil)
+		r.finish(FloodTimeLimit, rec.t1, fmt.Sprintf("the time limit came first: %.1f m³ in, head %.3f m", e.water, e.head), nil)
 	}
 	return r.end == FloodRunning
 }
@@ -383,7 +383,7 @@ func (r *FloodRun) settled(e floodEval, t float64) {
 				r.eqS = rec.t0 + (rec.t1-rec.t0)*s0/(s0-s1)
 			}
 		}
-		r.finish(FloodEqualised, t, fmt.Sprintf("the level inside has risen to the sea's: %.1f m³ in after %s", e.water, FormatDuration(r.eqS)), nil)
+		r.finish(FloodEqualised, t, fmt.Sprintf("the level inside has risen to the sea's: %.1f m³ in", e.water), nil)
 	case e.inflow == 0 && e.rate == 0:
 		r.finish(FloodNoInflow, t, "nothing flows: the hole is clear of the water on both sides", nil)
 	}

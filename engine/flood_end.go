@@ -45,30 +45,6 @@ func (e FloodEnd) String() string {
 	return "unknown"
 }
 
-// Headline says how the run ended in a few words, for a table or a panel
-// title: "levels equal", "SHE SINKS", …
-func (e FloodEnd) Headline() string {
-	switch e {
-	case FloodEqualised:
-		return "levels equal"
-	case FloodPumpsHold:
-		return "pumps hold the level"
-	case FloodKeptDry:
-		return "pumps keep it dry"
-	case FloodNoInflow:
-		return "nothing comes in"
-	case FloodFull:
-		return "compartment full"
-	case FloodSinks:
-		return "SHE SINKS"
-	case FloodCapsizes:
-		return "SHE CAPSIZES"
-	case FloodTimeLimit:
-		return "time limit, still filling"
-	}
-	return "no answer"
-}
-
 func outcomeEnd(o Outcome) FloodEnd {
 	switch o {
 	case Sinks:

@@ -1,7 +1,6 @@
 package engine
 
 import (
-	"fmt"
 	"math"
 	"sort"
 )
@@ -38,6 +37,7 @@ type FloodStage struct {
 	Position *Position
 	NoEq     *NoEquilibrium
 	Criteria []CriterionResult
+	Strength *Strength // the hull girder at this stage (strength.go); nil without weight extents
 }
 
 // FloodProgress is what a run can show while it computes.
@@ -300,6 +300,7 @@ func (r *FloodRun) stage(f, of float64) FloodStage {
 		if r.c.Criteria != nil {
 			st.Criteria = r.c.Criteria(r.v, r.damageAt(e.water), p)
 		}
+		st.Strength, _ = GirderStrength(r.v, r.damageAt(e.water), &p)
 	} else {
 		st.NoEq = e.noEq
 	}
@@ -345,20 +346,4 @@ func roundInterval(end float64) float64 {
 		}
 	}
 	return 86400
-}
-
-// FormatDuration writes s seconds as "1 h 05 min", "12 min 30 s" or "45 s".
-func FormatDuration(s float64) string {
-	if math.IsNaN(s) || s < 0 {
-		return "—"
-	}
-	n := int64(math.Round(s))
-	h, m, sec := n/3600, n%3600/60, n%60
-	switch {
-	case h > 0:
-		return fmt.Sprintf("%d h %02d min", h, m)
-	case m > 0:
-		return fmt.Sprintf("%d min %02d s", m, sec)
-	}
-	return fmt.Sprintf("%d s", sec)
 }

@@ -207,8 +207,8 @@ func HandMethod(v *Vessel, d Damage) (*HandWorking, error) {
 		step("lost waterplane at T₁", "Σ μ·l·b of the spaces cut at T₁", aL, "m²")
 		step("intact waterplane at T₁", fmt.Sprintf("L·B − a = %s − %s", n(LB), n(aL)), A1, "m²")
 	}
-	step("transverse shift of the centre of flotation", fmt.Sprintf("(0 − Σ μ·l·b·yc)/A = %s/%s (%s)", n(-myL), n(A1), handSideWord(yF)), yF, "m")
-	step("longitudinal shift of the centre of flotation", fmt.Sprintf("(L·B·L/2 − Σ μ·l·b·xc)/A − L/2 = (%s − %s)/%s − %s (%s)", n(LB*L/2), n(mxL), n(A1), n(L/2), handEndWord(xF-L/2)), xF-L/2, "m")
+	step("transverse shift of the centre of flotation", fmt.Sprintf("(0 − Σ μ·l·b·yc)/A = %s/%s (%s)", n(-myL), n(A1), signWords(yF, "starboard", "port", "on the centreline")), yF, "m")
+	step("longitudinal shift of the centre of flotation", fmt.Sprintf("(L·B·L/2 − Σ μ·l·b·xc)/A − L/2 = (%s − %s)/%s − %s (%s)", n(LB*L/2), n(mxL), n(A1), n(L/2), signWords(xF-L/2, "forward", "aft", "none")), xF-L/2, "m")
 
 	iT := L*B*B*B/12 + LB*yF*yF
 	iL := B*L*L*L/12 + LB*(L/2-xF)*(L/2-xF)
@@ -277,16 +277,16 @@ func HandMethod(v *Vessel, d Damage) (*HandWorking, error) {
 	// The list.
 	step("TCB of the remaining buoyant body", fmt.Sprintf("−Σ μ·l·b·d·yc/V = %s/%s", n(my), n(V)), w.TCBM, "m")
 	lever := ld.TCGM - w.TCBM
-	step("list lever", fmt.Sprintf("TCG − TCB = %s − %s (%s)", n(ld.TCGM), n(w.TCBM), handLeverWord(lever)), lever, "m")
+	step("list lever", fmt.Sprintf("TCG − TCB = %s − %s (%s)", n(ld.TCGM), n(w.TCBM), signWords(lever, "G to starboard of B", "G to port of B", "G over B")), lever, "m")
 	tanT := w.handHeelTan(lever)
 	w.HeelDeg = math.Atan(tanT) * 180 / math.Pi
-	step("heel θ", fmt.Sprintf("atan(%s), %s", strings.TrimSuffix(strings.TrimPrefix(n(tanT), "("), ")"), handHeelWord(tanT)), w.HeelDeg, "°")
+	step("heel θ", fmt.Sprintf("atan(%s), %s", strings.TrimSuffix(strings.TrimPrefix(n(tanT), "("), ")"), signWords(tanT, "starboard side down", "port side down", "upright")), w.HeelDeg, "°")
 
 	// Trim.
 	step("LCB of the remaining buoyant body", fmt.Sprintf("(L·B·T₁·L/2 − Σ μ·l·b·d·xc)/V = %s/%s", n(mx), n(V)), w.LCBM, "m")
 	tlever := w.LCBM - ld.LCGM
 	w.TrimM = tlever * L / w.GMLM
-	step("trim", fmt.Sprintf("(LCB − LCG)·L/GML = (%s − %s)×%s/%s (%s)", n(w.LCBM), n(ld.LCGM), n(L), n(w.GMLM), handTrimWord(w.TrimM)), w.TrimM, "m")
+	step("trim", fmt.Sprintf("(LCB − LCG)·L/GML = (%s − %s)×%s/%s (%s)", n(w.LCBM), n(ld.LCGM), n(L), n(w.GMLM), signWords(w.TrimM, "by the stern", "by the head", "even keel")), w.TrimM, "m")
 
 	// Drafts on the centreline, the waterline turning about F.
 	w.DraftAftM = T1 + w.TrimM*xF/L - tanT*yF
@@ -494,7 +494,7 @@ func handNum(x float64) string {
 		return "0"
 	}
 	if math.IsNaN(x) || math.IsInf(x, 0) {
-		return strconv.FormatFloat(x, 'f', -1, 64)
+		return "—"
 	}
 	a := math.Abs(x)
 	dec := 6
@@ -515,54 +515,4 @@ func handNum(x float64) string {
 		return "(−" + s + ")"
 	}
 	return s
-}
-
-func handSideWord(y float64) string {
-	switch {
-	case y > 0:
-		return "starboard"
-	case y < 0:
-		return "port"
-	}
-	return "on the centreline"
-}
-
-func handLeverWord(lever float64) string {
-	switch {
-	case lever > 0:
-		return "G to starboard of B"
-	case lever < 0:
-		return "G to port of B"
-	}
-	return "G over B"
-}
-
-func handHeelWord(tanT float64) string {
-	switch {
-	case tanT > 0:
-		return "starboard side down"
-	case tanT < 0:
-		return "port side down"
-	}
-	return "upright"
-}
-
-func handEndWord(dx float64) string {
-	switch {
-	case dx > 0:
-		return "forward"
-	case dx < 0:
-		return "aft"
-	}
-	return "none"
-}
-
-func handTrimWord(trim float64) string {
-	switch {
-	case trim > 0:
-		return "by the stern"
-	case trim < 0:
-		return "by the head"
-	}
-	return "even keel"
 }

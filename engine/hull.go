@@ -129,8 +129,17 @@ func NewSectionHull(length float64, stations []Station) (*Hull, error) {
 	}
 	var slabs []slab
 	for i := 1; i < len(h.stations); i++ {
-		a, b := matchStations(h.stations[i-1].Offsets, h.stations[i].Offsets)
-		slabs = append(slabs, newSlab(h.stations[i-1].X, h.stations[i].X, fullSection(a), fullSection(b)))
+		// A run of stations with the same offsets (a parallel middle
+		// body) is one prismatic slab: the same body, integrated in one
+		// piece instead of one per station.
+		j := i
+		for j+1 < len(h.stations) && sameOffsets(h.stations[i-1].Offsets, h.stations[j].Offsets) &&
+			sameOffsets(h.stations[j].Offsets, h.stations[j+1].Offsets) {
+			j++
+		}
+		a, b := matchStations(h.stations[i-1].Offsets, h.stations[j].Offsets)
+		slabs = append(slabs, newSlab(h.stations[i-1].X, h.stations[j].X, fullSection(a), fullSection(b)))
+		i = j
 	}
 	h.solid = newSolid(slabs)
 	if !(h.solid.Volume() > 0) {
@@ -144,6 +153,19 @@ func NewSectionHull(length float64, stations []Station) (*Hull, error) {
 		h.levelV = append(h.levelV, h.solid.Below(Plane{A: a}).V)
 	}
 	return h, nil
+}
+
+// sameOffsets reports whether two stations have the same offsets.
+func sameOffsets(a, b []Point) bool {
+	if len(a) != len(b) {
+		return false
+	}
+	for k := range a {
+		if a[k] != b[k] {
+			return false
+		}
+	}
+	return true
 }
 
 func maxHalfBreadth(off []Point) float64 {
@@ -187,9 +209,10 @@ func matchStations(a, b []Point) ([]Point, []Point) {
 		}
 	}
 	var ra, rb []Point
+	ca, cb := newOutlineCursor(a), newOutlineCursor(b)
 	for _, z := range levels {
-		a0, a1 := outlineAt(a, z)
-		b0, b1 := outlineAt(b, z)
+		a0, a1 := ca.at(z)
+		b0, b1 := cb.at(z)
 		ra, rb = append(ra, a0), append(rb, b0)
 		if a0 != a1 || b0 != b1 {
 			ra, rb = append(ra, a1), append(rb, b1)

@@ -189,9 +189,9 @@ func FindRemedies(v *Vessel, d Damage) RemedySet {
 	case rs.UprightGMM < 0:
 		rs.Needed, rs.Loll = true, true
 		rs.Summary = fmt.Sprintf("Upright her GM is %.2f m: she lolls, now %s. Do not counter-ballast the high (%s) side: she would flop over to %s, perhaps further. Lower G first: ballast a low empty tank on the %s side or across the centreline, one tank at a time, minding its free surface while it is slack; or pump out tanks high in the ship. Only such options are worked out below.",
-			rs.UprightGMM, remedyHeel(pos.HeelDeg), high, high, low)
+			rs.UprightGMM, heelWords(pos.HeelDeg), high, high, low)
 	case math.Abs(pos.HeelDeg) < RemedyUprightDeg:
-		where := fmt.Sprintf("within %.1f° of upright (%s)", RemedyUprightDeg, remedyHeel(pos.HeelDeg))
+		where := fmt.Sprintf("within %.1f° of upright (%s)", RemedyUprightDeg, heelWords(pos.HeelDeg))
 		if math.Abs(pos.HeelDeg) < 0.005 {
 			where = "upright"
 		}
@@ -200,7 +200,7 @@ func FindRemedies(v *Vessel, d Damage) RemedySet {
 	default:
 		rs.Needed = true
 		rs.Summary = fmt.Sprintf("Upright her GM is %.2f m: she lies %s with a list (weight or water off the centreline), not a loll. Weight taken on or moved to the %s side brings her back.",
-			rs.UprightGMM, remedyHeel(pos.HeelDeg), high)
+			rs.UprightGMM, heelWords(pos.HeelDeg), high)
 	}
 
 	now := remedyMeasure(&pos)
@@ -246,14 +246,6 @@ func FindRemedies(v *Vessel, d Damage) RemedySet {
 	}
 	rs.Summary += " They are options to weigh against the ship's approved stability information and the damage found, not orders."
 	return rs
-}
-
-// remedyHeel writes a heel in words, "upright" within 0.005°.
-func remedyHeel(deg float64) string {
-	if math.Abs(deg) < 0.005 {
-		return "upright"
-	}
-	return flagHeel(deg)
 }
 
 func anyAdvisable(rs []Remedy) bool {
@@ -623,9 +615,9 @@ func remedyJudgeLoll(r *Remedy, rs *RemedySet, against []string, why *remedyWord
 	r.Advisable = len(against) == 0
 	switch {
 	case r.Advisable && up > 0:
-		why.say("Lowers G: upright GM from %.2f to %.2f m, positive, so she would come to %s (now %s), a list and no longer a loll. Only then may the list that is left be taken out from the high side: solve the new condition first.", rs.UprightGMM, up, remedyHeel(p.HeelDeg), remedyHeel(rs.HeelDeg))
+		why.say("Lowers G: upright GM from %.2f to %.2f m, positive, so she would come to %s (now %s), a list and no longer a loll. Only then may the list that is left be taken out from the high side: solve the new condition first.", rs.UprightGMM, up, heelWords(p.HeelDeg), heelWords(rs.HeelDeg))
 	case r.Advisable:
-		why.say("Lowers G: upright GM from %.2f to %.2f m, but still negative: she would still loll (%s, now %s); more must be done to bring G down.", rs.UprightGMM, up, remedyHeel(p.HeelDeg), remedyHeel(rs.HeelDeg))
+		why.say("Lowers G: upright GM from %.2f to %.2f m, but still negative: she would still loll (%s, now %s); more must be done to bring G down.", rs.UprightGMM, up, heelWords(p.HeelDeg), heelWords(rs.HeelDeg))
 	}
 	if r.Kind == RemedyFill {
 		why.say("Fill one tank at a time and watch the heel while it is slack.")
@@ -647,14 +639,14 @@ func remedyJudgeList(r *Remedy, rs *RemedySet, against []string, why *remedyWord
 		against = append(against, fmt.Sprintf("leaves her with no GM where she lies (%.2f m)", p.GMM))
 	}
 	if !(math.Abs(p.HeelDeg) < math.Abs(rs.HeelDeg)) {
-		against = append(against, fmt.Sprintf("does not reduce the heel (%s)", remedyHeel(p.HeelDeg)))
+		against = append(against, fmt.Sprintf("does not reduce the heel (%s)", heelWords(p.HeelDeg)))
 	}
 	r.Advisable = len(against) == 0
 	if r.Advisable {
 		if p.HeelDeg*rs.HeelDeg < 0 && math.Abs(p.HeelDeg) >= RemedyUprightDeg {
-			why.say("Overshoots: she would lie %s instead.", remedyHeel(p.HeelDeg))
+			why.say("Overshoots: she would lie %s instead.", heelWords(p.HeelDeg))
 		} else {
-			why.say("Brings her to %s.", remedyHeel(p.HeelDeg))
+			why.say("Brings her to %s.", heelWords(p.HeelDeg))
 		}
 		if up < rs.UprightGMM {
 			why.say("Raises G: upright GM from %.2f to %.2f m.", rs.UprightGMM, up)

@@ -35,6 +35,8 @@ type slab struct {
 	zmin   float64
 	zmax   float64
 	ymax   float64 // largest |y| of any vertex
+	convex bool    // the vertices below a plane are one arc (convex_cut.go)…
+	dents  []dent  // …unless the plane runs in one of these directions
 }
 
 func newSlab(x0, x1 float64, a, b []Point) slab {
@@ -58,6 +60,7 @@ func newSlab(x0, x1 float64, a, b []Point) slab {
 	s.pre = edgePrefix(s.p0, s.dp)
 	s.p1 = s.section(x1)
 	s.blocks = vertexBlocks(s.p0, s.p1)
+	s.convex, s.dents = arcSection(s.p0, s.p1)
 	return s
 }
 
@@ -220,12 +223,33 @@ func newSolid(slabs []slab) *Solid {
 }
 
 // Below returns the integrals of the part of the solid below the plane p.
-func (s *Solid) Below(p Plane) Immersion {
+func (s *Solid) Below(p Plane) Immersion { return s.belowHinted(p, nil) }
+
+// newArcHints returns a guess of the arc under the water (convex_cut.go)
+// for each of the solid's slabs, none known yet: what a caller that
+// immerses the solid again and again at nearby planes keeps between calls.
+func (s *Solid) newArcHints() []arc {
+	if s == nil {
+		return nil
+	}
+	h := make([]arc, len(s.slabs))
+	for i := range h {
+		h[i].cnt = -1
+	}
+	return h
+}
+
+// belowHinted is Below, with hints (one per slab, or nil) the guesses of
+// the convex slabs' arcs under the water, updated to the arcs found. The
+// guesses only speed the search: any guess gives the same answer.
+func (s *Solid) belowHinted(p Plane, hints []arc) Immersion {
 	var im Immersion
 	var sc cutScratch
 	if s == nil {
 		return im
 	}
+	guess := arc{cnt: -1}
+	phi := math.Atan(p.C)
 	for i := range s.slabs {
 		sl := &s.slabs[i]
 		// Whole-slab bounds test: the plane's lowest and highest z over the
@@ -237,9 +261,22 @@ func (s *Solid) Below(p Plane) Immersion {
 			continue
 		case sl.zmax <= zlo:
 			im.add(sl.full, 1)
-		default:
-			im.add(sl.belowWith(p, &sc), 1)
+			continue
 		}
+		if sl.convex && (len(sl.dents) == 0 || !dentsHit(sl.dents, phi)) {
+			g := guess
+			if hints != nil && hints[i].cnt >= 0 {
+				g = hints[i]
+			}
+			if a0, a1, ok := sl.belowConvex(p, &im, g, sc.roots[:0]); ok {
+				if hints != nil {
+					hints[i] = a0
+				}
+				guess = a1
+				continue
+			}
+		}
+		im.add(sl.belowWith(p, &sc), 1)
 	}
 	return im
 }

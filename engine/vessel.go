@@ -27,7 +27,14 @@ type Weight struct {
 	TCGM  float64 // m, positive to starboard
 	VCGM  float64 // m above the baseline
 	FSMTm float64 // free-surface moment, t·m (≥ 0)
+	// ExtentM is the stretch [aft, fwd] of the ship the mass is spread
+	// over, m, for the hull girder's strength (strength.go); zero when not
+	// given.
+	ExtentM [2]float64
 }
+
+// HasExtent reports whether the weight's extent is given.
+func (w Weight) HasExtent() bool { return w.ExtentM[1] > w.ExtentM[0] }
 
 // Opening is a point through which water would spread further into the
 // ship once immersed: a vent, an air pipe, a door.
@@ -46,10 +53,11 @@ type Vessel struct {
 	Weights      []Weight
 	Compartments []*Compartment
 	Openings     []Opening
-	MarginLineM  float64     // margin line's depth below the deck at side, m
-	CriteriaSets []string    // the criteria sets she is held to (see criteria.go)
-	ShipType     string      // "cargo" or "passenger" (SOLAS s's heel limits); "" is cargo
-	DraftMarks   []DraftMark // the marks the crew reads (draftmark.go)
+	MarginLineM  float64      // margin line's depth below the deck at side, m
+	CriteriaSets []string     // the criteria sets she is held to (see criteria.go)
+	ShipType     string       // "cargo" or "passenger" (SOLAS s's heel limits); "" is cargo
+	DraftMarks   []DraftMark  // the marks the crew reads (draftmark.go)
+	Girder       GirderLimits // read-out points and permissible values (strength.go)
 
 	tanks []tankLoad // contents of each compartment at its fill, upright
 }
@@ -57,6 +65,7 @@ type Vessel struct {
 // tankLoad is a tank's contents as loaded, upright and level.
 type tankLoad struct {
 	massT, x, y, z, fsm float64
+	level               Plane // the contents' surface
 }
 
 // NewVessel checks v and returns a copy ready to solve: tank contents and
@@ -93,6 +102,10 @@ func NewVessel(v Vessel) (*Vessel, error) {
 			return nil, fmt.Errorf("weight %d (%q): mass %v t and free-surface moment %v t·m must not be negative", i+1, w.Name, w.MassT, w.FSMTm)
 		}
 	}
+	v.Girder.Points = append([]ReadOutPoint(nil), v.Girder.Points...)
+	if err := checkGirderData(&v); err != nil {
+		return nil, err
+	}
 	v.tanks = make([]tankLoad, len(v.Compartments))
 	for i, c := range v.Compartments {
 		if c == nil || c.solid == nil {
@@ -110,9 +123,8 @@ func NewVessel(v Vessel) (*Vessel, error) {
 		}
 		vol := l.Fill * c.solid.Volume()
 		p, im := levelForVolume(c.solid, vol, 0, 0)
-		_ = p
 		x, y, z := im.Centroid()
-		t := tankLoad{massT: vol * l.Density, x: x, y: y, z: z}
+		t := tankLoad{massT: vol * l.Density, x: x, y: y, z: z, level: p}
 		if l.Fill < PressedFullFill && im.AW > 0 {
 			t.fsm = l.Density * (im.IYY - im.SY*im.SY/im.AW)
 		}

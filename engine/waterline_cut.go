@@ -76,6 +76,7 @@ const maxChains = 16
 // as the plane passes them. It holds no pointers, so it stays on the stack.
 type cutState struct {
 	below [maxVertices]bool
+	big   []bool // below, for sections of more than maxVertices vertices
 	nin   int
 	cut   [2 * maxChains]int // edges k (v_k → v_k+1) with one end below and one above
 	ncut  int
@@ -87,8 +88,20 @@ type cutState struct {
 	chainBuf  [maxChains]chain
 }
 
-// maxVertices bounds the section vertices handled by the chain method.
+// maxVertices is the number of section vertices whose sides are kept in
+// cutState's own array; larger sections use a slice grown once per scratch.
 const maxVertices = 256
+
+// sides returns the working array of the vertices' sides for n vertices.
+func (c *cutState) sides(n int) []bool {
+	if n <= maxVertices {
+		return c.below[:n]
+	}
+	if cap(c.big) < n {
+		c.big = make([]bool, n)
+	}
+	return c.big[:n]
+}
 
 func (c *cutState) toggle(e int) {
 	i := 0
@@ -110,9 +123,9 @@ func (c *cutState) toggle(e int) {
 }
 
 // flip moves vertex k to the other side of the plane.
-func (c *cutState) flip(k, n int) {
-	c.below[k] = !c.below[k]
-	if c.below[k] {
+func (c *cutState) flip(below []bool, k, n int) {
+	below[k] = !below[k]
+	if below[k] {
 		c.nin++
 	} else {
 		c.nin--
@@ -123,7 +136,8 @@ func (c *cutState) flip(k, n int) {
 
 // chains pairs each edge where the section enters the water with the next
 // edge where it leaves, in the polygon's order.
-func (c *cutState) chains(n int, out *[maxChains]chain) (int, bool) {
+func (c *cutState) chains(below []bool, out *[maxChains]chain) (int, bool) {
+	n := len(below)
 	ins, outs := &c.ins, &c.outs
 	ni, no := 0, 0
 	for _, k := range c.cut[:c.ncut] {
@@ -131,7 +145,7 @@ func (c *cutState) chains(n int, out *[maxChains]chain) (int, bool) {
 		if j == n {
 			j = 0
 		}
-		if c.below[j] {
+		if below[j] {
 			if ni == maxChains {
 				return 0, false
 			}
@@ -202,7 +216,7 @@ type cutScratch struct {
 // not cleared for each one.
 func (s *slab) belowChains(p Plane, im *Immersion, sc *cutScratch) bool {
 	n := len(s.p0)
-	if n > maxVertices || n < 3 {
+	if n < 3 {
 		return false
 	}
 	dx := s.x1 - s.x0
@@ -211,7 +225,7 @@ func (s *slab) belowChains(p Plane, im *Immersion, sc *cutScratch) bool {
 	roots := sc.roots[:0]
 	h0, h1 := p.A+p.B*s.x0, p.A+p.B*s.x1
 	p0, p1 := s.p0[:n], s.p1[:n]
-	below := st.below[:n]
+	below := st.sides(n)
 	st.ncut, st.ok = 0, true
 	prev := false
 	hlo, hhi := min(h0, h1), max(h0, h1)
@@ -301,29 +315,44 @@ func (s *slab) belowChains(p Plane, im *Immersion, sc *cutScratch) bool {
 			xb = roots[i].x
 		}
 		if xb-xa > 1e-12*(1+math.Abs(xb)) {
-			if !st.ok || !s.pieceChains(p, xa, xb, st, &part) {
+			if !st.ok || !s.pieceCut(p, xa, xb, st, below, &part) {
 				part.add(s.integrate(p, xa, xb), 1)
 			}
 			xa = xb
 		}
 		if i < len(roots) {
-			st.flip(roots[i].k, n)
+			st.flip(below, roots[i].k, n)
 		}
 	}
 	im.add(part, 1)
 	return true
 }
 
-// pieceChains integrates [xa, xb], along which st holds, adding to im;
+// pieceCut integrates [xa, xb], along which st holds, adding to im;
 // false (nothing added) when there are too many chains.
-func (s *slab) pieceChains(p Plane, xa, xb float64, st *cutState, im *Immersion) bool {
-	n := len(s.p0)
-	dx := xb - xa
-	if st.nin == 0 {
+func (s *slab) pieceCut(p Plane, xa, xb float64, st *cutState, below []bool, im *Immersion) bool {
+	if st.nin == 0 || st.nin == len(s.p0) {
+		s.pieceChains(p, xa, xb, st.nin, nil, im)
 		return true
 	}
+	nc, ok := st.chains(below, &st.chainBuf)
+	if !ok {
+		return false
+	}
+	s.pieceChains(p, xa, xb, st.nin, st.chainBuf[:nc], im)
+	return true
+}
+
+// pieceChains integrates [xa, xb], along which nin vertices are below the
+// plane and the clipped section is made of chains, adding to im.
+func (s *slab) pieceChains(p Plane, xa, xb float64, nin int, chains []chain, im *Immersion) {
+	n := len(s.p0)
+	dx := xb - xa
+	if nin == 0 {
+		return
+	}
 	pre := s.pre
-	if st.nin == n {
+	if nin == n {
 		// The whole section is under water along the piece.
 		for g := range gaussNode {
 			x := xa + gaussNode[g]*dx
@@ -334,13 +363,9 @@ func (s *slab) pieceChains(p Plane, xa, xb float64, st *cutState, im *Immersion)
 			im.MY += w * sy / 6
 			im.MZ += w * sz / 6
 		}
-		return true
+		return
 	}
-	chains := &st.chainBuf
-	nc, ok := st.chains(n, chains)
-	if !ok {
-		return false
-	}
+	nc := len(chains)
 	for g := range gaussNode {
 		x := xa + gaussNode[g]*dx
 		w := gaussWeight[g] * dx
@@ -434,5 +459,4 @@ func (s *slab) pieceChains(p Plane, xa, xb float64, st *cutState, im *Immersion)
 		im.IXY += w * x * WY
 		im.IYY += w * WYY
 	}
-	return true
 }

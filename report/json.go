@@ -39,7 +39,8 @@ type Document struct {
 	Flags       []FlagDoc    `json:"flags"`
 	DraftMarks  []MarkDoc    `json:"draft_marks"`
 	// MarksSurvey: the marks carried to the perpendiculars (draftmarks.go).
-	MarksSurvey *SurveyDoc `json:"marks_to_perpendiculars"`
+	MarksSurvey *SurveyDoc   `json:"marks_to_perpendiculars"`
+	Strength    *StrengthDoc `json:"strength"` // null: not worked out (strength_note says why)
 
 	Outcome          string         `json:"outcome"`           // floats | sinks | capsizes | not converged
 	Reason           string         `json:"reason"`            // why there is no equilibrium, "" when she floats
@@ -48,7 +49,8 @@ type Document struct {
 	HeldWater        []HeldDoc      `json:"partly_flooded"`    // compartments holding floodwater, not open to the sea
 	Freeboards       []Freeboard    `json:"freeboards"`
 	Openings         []OpeningDoc   `json:"openings"`
-	HandNote         string         `json:"hand_note"` // why the hand method is not applied, "" when it is
+	HandNote         string         `json:"hand_note"`     // why the hand method is not applied, "" when it is
+	StrengthNote     string         `json:"strength_note"` // why strength is null, "" when it is worked out
 	Criteria         []CriterionDoc `json:"criteria"`
 	Notes            []string       `json:"notes"` // what could not be computed, and why
 	VesselFile       string         `json:"vessel_file"`
@@ -223,12 +225,14 @@ func Build(r Report) Document {
 		Freeboards:       []Freeboard{},
 		Openings:         []OpeningDoc{},
 		HandNote:         a.HandWhy,
+		StrengthNote:     a.StrengthWhy,
 		Criteria:         []CriterionDoc{},
 		Notes:            append([]string{}, a.Notes...),
 		VesselFile:       r.VesselFile,
 		Condition:        r.Condition,
 		Version:          r.Version,
 		GZ:               buildGZ(a.GZ),
+		Strength:         StrengthJSON(a.Strength, r.IntactStrength),
 	}
 	if md := MarkDrafts(r.Vessel, a.Position); md != nil {
 		d.DraftMarks, d.MarksSurvey = MarkDocs(md), Survey(r.Vessel.Hull.LengthM, a.Position.Plane.C, md)

@@ -209,6 +209,8 @@ func Markdown(w io.Writer, r Report) error {
 	}
 	e.line()
 
+	markdownStrength(e, r)
+
 	e.line("## Hand method")
 	e.line()
 	if h := a.Hand; h == nil {
@@ -255,7 +257,7 @@ func Markdown(w io.Writer, r Report) error {
 
 	e.line("## Cautions")
 	e.line()
-	for _, c := range Cautions {
+	for _, c := range Cautions() {
 		e.line("- ", c)
 	}
 	e.line()

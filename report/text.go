@@ -127,6 +127,8 @@ func Text(w io.Writer, r Report) error {
 		writeLines(e, t.lines("  "))
 	}
 
+	textStrength(e, r)
+
 	e.line()
 	if h := a.Hand; h != nil {
 		e.line("Hand method (lost buoyancy, small angles)")
@@ -182,7 +184,7 @@ func Text(w io.Writer, r Report) error {
 		}
 	}
 	e.line()
-	for _, c := range Cautions {
+	for _, c := range Cautions() {
 		e.line(c)
 	}
 	return e.err
@@ -206,15 +208,6 @@ func plural(n int, word string) string {
 		return "1 " + word
 	}
 	return num(float64(n), 0, "") + " " + word + "s"
-}
-
-// signed formats x with an explicit sign.
-func signed(x float64, prec int, unit string) string {
-	s := num(x, prec, unit)
-	if finite(x) && !strings.HasPrefix(s, "-") && s != num(0, prec, unit) {
-		return "+" + s
-	}
-	return s
 }
 
 // precision is the number of decimals shown for a value in unit.

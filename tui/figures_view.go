@@ -8,6 +8,7 @@ import (
 	"github.com/charmbracelet/lipgloss"
 
 	"heelwatch/engine"
+	"heelwatch/report"
 )
 
 // figure is one line of the floating position: what, the figure now, a few
@@ -106,31 +107,11 @@ func withUnit(s, unit string) string {
 	return s + " " + unit
 }
 
-func heelSide(deg float64) string {
-	t := heelText(deg)
-	if i := strings.Index(t, "° "); i >= 0 {
-		return t[i+len("° "):]
-	}
-	return t
-}
+func heelSide(deg float64) string { return report.HeelSide(deg, 1) }
 
-func trimSense(m float64) string {
-	t := trimText(m)
-	if i := strings.Index(t, " m "); i >= 0 {
-		return t[i+len(" m "):]
-	}
-	return t
-}
+func trimSense(m float64) string { return report.TrimSense(m, 2) }
 
-func sideShort(s engine.Side) string {
-	switch s {
-	case engine.Port:
-		return "port"
-	case engine.Both:
-		return "P+S"
-	}
-	return "stbd"
-}
+func sideShort(s engine.Side) string { return report.SideShort(s) }
 
 // figuresView draws the floating position in w columns, figLines lines.
 func (m model) figuresView(w int) []string {

@@ -2,13 +2,14 @@ package tui
 
 import (
 	"fmt"
-	"math"
 	"strings"
 	"sync/atomic"
 
 	tea "github.com/charmbracelet/bubbletea"
 
 	"heelwatch/engine"
+	"heelwatch/report"
+	"heelwatch/vessels"
 )
 
 // This file runs a flooding run (engine.FloodRun) for the dashboard: one
@@ -23,47 +24,21 @@ import (
 // hiding the panel, stops an older run at its next step.
 
 // floodRequest is what the form asked for: the compartment, its hole and
-// pumps, and the base damage state.
+// pumps, and the base damage state, resolved into the run's case by
+// vessels.ResolveFlood (the same rules as the command line's).
 type floodRequest struct {
 	ci      int
 	areaM2  float64
 	zM      float64
 	cd      float64
 	pumpM3h float64
-	// file is the vessel file's hole, used for its position when the
-	// height asked is the file's own; otherwise the hole goes in the shell
-	// (engine.ShellHole).
-	file *engine.Hole
 	// base is the dashboard's damage state when the run was asked for,
 	// with the flooded compartment not open (its permeability and any water
 	// already held kept: that water is in at time zero).
 	base    engine.Damage
 	wasOpen bool // it was open to the sea on the dashboard (the run starts it dry)
-}
-
-// useFile reports whether the hole is the vessel file's, at its position.
-func (q floodRequest) useFile() bool {
-	return q.file != nil && math.Abs(q.zM-q.file.ZM) < 0.005
-}
-
-// hole returns the engine's hole for the request.
-func (q floodRequest) hole(v *engine.Vessel) (engine.Hole, error) {
-	if q.useFile() {
-		h := *q.file
-		h.AreaM2, h.Cd = q.areaM2, q.cd
-		return h, nil
-	}
-	return engine.ShellHole(v, q.ci, q.areaM2, q.zM, q.cd)
-}
-
-// floodCase is the engine's case for the request.
-func (m model) floodCase(q floodRequest) engine.FloodCase {
-	c := engine.FloodCase{Vessel: m.v, Base: cloneDamage(q.base), Compartment: q.ci,
-		Criteria: engine.FloodCriteria(m.shipType)}
-	if q.pumpM3h > 0 {
-		c.Pumps = []engine.Pump{{Name: "pumps", CapacityM3h: q.pumpM3h}}
-	}
-	return c
+	// flood is the case to run and where its values came from.
+	flood vessels.FloodResolved
 }
 
 // floodPoint is one moment of a run in progress, for the plot.
@@ -109,60 +84,42 @@ type (
 
 // floodStartCmd places the hole and sets the run up (the start and the
 // lost-buoyancy solution are solved here).
-func floodStartCmd(v *engine.Vessel, c engine.FloodCase, q floodRequest, seq int, latest *atomic.Int64) tea.Cmd {
-	return func() (msg tea.Msg) {
-		if latest.Load() != int64(seq) {
-			return floodStepMsg{seq: seq, stale: true}
-		}
-		defer func() {
-			if r := recover(); r != nil {
-				msg = floodStepMsg{seq: seq, err: "engine failure: " + fmt.Sprint(r)}
-			}
-		}()
-		h, err := q.hole(v)
-		if err != nil {
-			return floodStepMsg{seq: seq, err: err.Error()}
-		}
-		c.Hole = h
+func floodStartCmd(c engine.FloodCase, seq int, latest *atomic.Int64) tea.Cmd {
+	return newest(seq, latest, floodStale(seq), floodFailed(seq), func() tea.Msg {
 		r, err := engine.NewFloodRun(c)
 		if err != nil {
 			return floodStepMsg{seq: seq, err: err.Error()}
 		}
 		p := r.Progress()
-		return floodStepMsg{seq: seq, run: r, prog: p, hole: h, started: true, more: !p.Done}
-	}
+		return floodStepMsg{seq: seq, run: r, prog: p, hole: c.Hole, started: true, more: !p.Done}
+	})
 }
 
 // floodStepCmd takes one step of run r.
 func floodStepCmd(r *engine.FloodRun, seq int, latest *atomic.Int64) tea.Cmd {
-	return func() (msg tea.Msg) {
-		if latest.Load() != int64(seq) {
-			return floodStepMsg{seq: seq, stale: true}
-		}
-		defer func() {
-			if x := recover(); x != nil {
-				msg = floodStepMsg{seq: seq, err: "engine failure: " + fmt.Sprint(x)}
-			}
-		}()
+	return newest(seq, latest, floodStale(seq), floodFailed(seq), func() tea.Msg {
 		more := r.Step()
 		return floodStepMsg{seq: seq, run: r, prog: r.Progress(), more: more}
-	}
+	})
 }
 
 // floodReportCmd works out the report of an ended run: its table and its
 // stages (some tens of solves, with their criteria).
 func floodReportCmd(r *engine.FloodRun, seq int, latest *atomic.Int64) tea.Cmd {
-	return func() (msg tea.Msg) {
-		if latest.Load() != int64(seq) {
-			return floodDoneMsg{seq: seq, stale: true}
-		}
-		defer func() {
-			if x := recover(); x != nil {
-				msg = floodDoneMsg{seq: seq, err: "engine failure: " + fmt.Sprint(x)}
-			}
-		}()
-		return floodDoneMsg{seq: seq, rep: r.Report()}
-	}
+	return newest(seq, latest,
+		func() tea.Msg { return floodDoneMsg{seq: seq, stale: true} },
+		func(why string) tea.Msg { return floodDoneMsg{seq: seq, err: "engine failure: " + why} },
+		func() tea.Msg { return floodDoneMsg{seq: seq, rep: r.Report()} })
+}
+
+// floodStale and floodFailed are a step's messages when a newer request
+// came first and when the engine failed.
+func floodStale(seq int) func() tea.Msg {
+	return func() tea.Msg { return floodStepMsg{seq: seq, stale: true} }
+}
+
+func floodFailed(seq int) func(string) tea.Msg {
+	return func(why string) tea.Msg { return floodStepMsg{seq: seq, err: "engine failure: " + why} }
 }
 
 // startFlood starts a run for q, cancelling any older one.
@@ -183,7 +140,7 @@ func (m model) startFlood(q floodRequest) (tea.Model, tea.Cmd) {
 		what += fmt.Sprintf(" (%s m³ in at the start)", num(w, 1))
 	}
 	log := m.addLog(m.now(), what)
-	return m, tea.Batch(floodStartCmd(m.v, m.floodCase(q), q, f.seq, f.latest), log)
+	return m, tea.Batch(floodStartCmd(q.flood.Case, f.seq, f.latest), log)
 }
 
 // stopFlood abandons a run in progress; a finished run's report stays.
@@ -311,28 +268,8 @@ func (f floodState) baseChanged(d engine.Damage) bool {
 }
 
 // outcomeText is a run's end in a sentence, its first words in capitals,
-// for the panel and the log.
+// for the panel and the log (report.FloodOutcome).
 func outcomeText(r engine.FloodReport) string {
-	at := engine.FormatDuration(r.EndS)
-	in := num(r.FinalWaterM3, 0) + " m³ in"
-	switch r.End {
-	case engine.FloodEqualised:
-		return fmt.Sprintf("LEVELS EQUAL after %s, %s", engine.FormatDuration(r.EqualiseS), in)
-	case engine.FloodPumpsHold:
-		return fmt.Sprintf("PUMPS HOLD the level %s m below the sea from %s: sounding %s m, %s",
-			num(r.SteadyHeadM, 3), at, num(r.Final.SoundingM, 2), in)
-	case engine.FloodKeptDry:
-		return "PUMPS KEEP IT DRY: they take all that the hole lets in"
-	case engine.FloodNoInflow:
-		return "NOTHING COMES IN: the hole is clear of the water"
-	case engine.FloodFull:
-		return fmt.Sprintf("COMPARTMENT FULL after %s, %s, its top below the sea", at, in)
-	case engine.FloodSinks:
-		return fmt.Sprintf("SHE SINKS after %s, with %s: %s", at, in, strings.TrimPrefix(r.EndReason, r.End.String()+": "))
-	case engine.FloodCapsizes:
-		return fmt.Sprintf("SHE CAPSIZES after %s, with %s: %s", at, in, strings.TrimPrefix(r.EndReason, r.End.String()+": "))
-	case engine.FloodTimeLimit:
-		return fmt.Sprintf("STILL FILLING at the time limit (%s), %s", at, in)
-	}
-	return "NO ANSWER: " + r.EndReason
+	head, rest := report.FloodOutcome(r)
+	return strings.ToUpper(head) + rest
 }

@@ -2,7 +2,6 @@ package tui
 
 import (
 	"fmt"
-	"math"
 	"strconv"
 	"strings"
 
@@ -11,6 +10,7 @@ import (
 	tea "github.com/charmbracelet/bubbletea"
 
 	"heelwatch/engine"
+	"heelwatch/vessels"
 )
 
 // defaultHoleM2 is the area of a hole the vessel file does not give: 0.05
@@ -63,7 +63,7 @@ func (m model) openForm() (tea.Model, tea.Cmd) {
 	f := floodForm{on: true, ci: i}
 	vals := [numFields]string{short(area, 4), short(z, 2), short(cd, 2), short(sp.pump, 0)}
 	for k := range f.fields {
-		in := textinput.New()
+		in := newTextField()
 		in.Prompt = ""
 		in.CharLimit = 9
 		in.SetValue(vals[k])
@@ -75,7 +75,6 @@ func (m model) openForm() (tea.Model, tea.Cmd) {
 		f.fields[k] = in
 	}
 	m.form = f
-	m.resize()
 	return m, m.focusField(0)
 }
 
@@ -102,7 +101,6 @@ func (m model) formKey(msg tea.KeyMsg) (tea.Model, tea.Cmd) {
 	switch msg.Type {
 	case tea.KeyEsc:
 		m.form.on = false
-		m.resize()
 		return m, nil
 	case tea.KeyCtrlC:
 		return m, tea.Quit
@@ -119,7 +117,6 @@ func (m model) formKey(msg tea.KeyMsg) (tea.Model, tea.Cmd) {
 		m.form.on = false
 		mm, cmd := m.startFlood(q)
 		m = mm.(model)
-		m.resize()
 		return m, cmd
 	}
 	var cmd tea.Cmd
@@ -134,8 +131,6 @@ func (m model) formKey(msg tea.KeyMsg) (tea.Model, tea.Cmd) {
 func (m model) readForm() (floodRequest, int, error) {
 	f := m.form
 	ci := f.ci
-	c := m.v.Compartments[ci]
-	b := c.Box
 	var v [numFields]float64
 	for k := range f.fields {
 		x, err := parseNumber(f.fields[k].Value())
@@ -144,24 +139,24 @@ func (m model) readForm() (floodRequest, int, error) {
 		}
 		v[k] = x
 	}
-	switch {
-	case !(v[fieldArea] > 0 && v[fieldArea] <= 100):
-		return floodRequest{}, fieldArea, fmt.Errorf("hole area %s m²: give the breach's area, more than 0 and at most 100 m²", short(v[fieldArea], 4))
-	case v[fieldZ] < b.Z0-0.005 || v[fieldZ] > b.Z1+0.005:
-		return floodRequest{}, fieldZ, fmt.Errorf("height %s m is outside %s, which runs from z %s to %s m", short(v[fieldZ], 2), c.Name, num(b.Z0, 2), num(b.Z1, 2))
-	case !(v[fieldCd] > 0 && v[fieldCd] <= 1):
-		return floodRequest{}, fieldCd, fmt.Errorf("Cd %s: a discharge coefficient is more than 0 and at most 1 (0.6 sharp-edged, about 0.7 ragged)", short(v[fieldCd], 2))
-	case !(v[fieldPump] >= 0 && v[fieldPump] <= 1e5):
-		return floodRequest{}, fieldPump, fmt.Errorf("pumps %s m³/h: give the capacity on this space, 0 for none", short(v[fieldPump], 0))
-	}
 	base := cloneDamage(m.damage)
 	wasOpen := base[ci].Open
 	base[ci].Open = false
 	if wasOpen {
 		base[ci].WaterM3 = 0
 	}
+	ask := vessels.FloodAsk{Compartment: ci, AreaM2: v[fieldArea], ZM: v[fieldZ], Cd: v[fieldCd],
+		Pumps: []vessels.FloodPump{{Compartment: ci, M3h: v[fieldPump]}}, Base: base, Criteria: true, By: "dashboard"}
+	fc, err := vessels.ResolveFlood(m.v, m.info, ask)
+	if err != nil {
+		field := fieldArea
+		if e := vessels.AsFloodAskError(err); e != nil {
+			field = map[vessels.FloodField]int{vessels.FieldZ: fieldZ, vessels.FieldCd: fieldCd, vessels.FieldPumps: fieldPump}[e.Field]
+		}
+		return floodRequest{}, field, err
+	}
 	return floodRequest{ci: ci, areaM2: v[fieldArea], zM: v[fieldZ], cd: v[fieldCd], pumpM3h: v[fieldPump],
-		file: m.spaces[ci].hole, base: base, wasOpen: wasOpen}, 0, nil
+		base: base, wasOpen: wasOpen, flood: fc}, 0, nil
 }
 
 // parseNumber reads a typed number, with a comma or a point for the
@@ -223,7 +218,7 @@ func (m model) formHint() string {
 	var where string
 	z, err := parseNumber(f.fields[fieldZ].Value())
 	switch {
-	case sp.hole != nil && err == nil && math.Abs(z-sp.hole.ZM) < 0.005:
+	case err == nil && vessels.FileHoleAt(sp.hole, z):
 		where = fmt.Sprintf("the vessel file's hole, at x %s y %s m", num(sp.hole.XM, 1), num(sp.hole.YM, 2))
 	case sp.hole != nil:
 		where = "in the shell at mid-length (the file's hole is at z " + short(sp.hole.ZM, 2) + " m)"

@@ -10,6 +10,7 @@ import (
 	"github.com/charmbracelet/lipgloss"
 
 	"heelwatch/engine"
+	"heelwatch/report"
 	"heelwatch/vessels"
 )
 
@@ -111,7 +112,7 @@ func TestFloodPanelGolden(t *testing.T) {
 		t.Fatalf("not running after five steps: running %v, steps %d", m.flood.running, m.flood.prog.Steps)
 	}
 	view := m.View()
-	if !strings.Contains(view, "flooding time "+engine.FormatDuration(m.flood.prog.TimeS)) || !strings.Contains(view, "█") {
+	if !strings.Contains(view, "flooding time "+report.Duration(m.flood.prog.TimeS)) || !strings.Contains(view, "█") {
 		t.Errorf("no progress bar and flooding time on screen:\n%s", view)
 	}
 	check(t, "flood_running_80x24", m, 80, 24)
@@ -172,8 +173,8 @@ func TestFloodTimesAreTheEngines(t *testing.T) {
 			ts = want.EqualiseS
 		}
 		line := lineWith(view, eventWords(e, &want))
-		if line == "" || !strings.Contains(line, engine.FormatDuration(ts)) || !strings.Contains(line, num(e.WaterM3, 0)+" m³") {
-			t.Errorf("event %v %q: screen line %q, want %s and %s m³", e.Kind, e.Name, line, engine.FormatDuration(ts), num(e.WaterM3, 0))
+		if line == "" || !strings.Contains(line, report.Duration(ts)) || !strings.Contains(line, num(e.WaterM3, 0)+" m³") {
+			t.Errorf("event %v %q: screen line %q, want %s and %s m³", e.Kind, e.Name, line, report.Duration(ts), num(e.WaterM3, 0))
 		}
 	}
 	if len(got.Stages) != len(want.Stages) {
@@ -186,13 +187,13 @@ func TestFloodTimesAreTheEngines(t *testing.T) {
 			t.Errorf("stage %v: panel %v m³ at %v s, engine %v m³ at %v s", s.Fraction, g.WaterM3, g.TimeS, s.WaterM3, s.TimeS)
 		}
 		line := lineWith(view, padLeft(stageName(s.Fraction), 4)+" "+padLeft(num(s.WaterM3, 0), 4)+" ")
-		if line == "" || !strings.Contains(line, engine.FormatDuration(s.TimeS)) ||
+		if line == "" || !strings.Contains(line, report.Duration(s.TimeS)) ||
 			(s.Position != nil && !strings.Contains(line, heelShort(s.Position.HeelDeg))) {
-			t.Errorf("stage %v: screen line %q, want %s and heel %s", s.Fraction, line, engine.FormatDuration(s.TimeS), heelShort(s.Position.HeelDeg))
+			t.Errorf("stage %v: screen line %q, want %s and heel %s", s.Fraction, line, report.Duration(s.TimeS), heelShort(s.Position.HeelDeg))
 		}
 	}
-	if !strings.Contains(view, "LEVELS EQUAL after "+engine.FormatDuration(want.EqualiseS)) {
-		t.Errorf("the time to equalise (%s) is not on screen", engine.FormatDuration(want.EqualiseS))
+	if !strings.Contains(view, "LEVELS EQUAL after "+report.Duration(want.EqualiseS)) {
+		t.Errorf("the time to equalise (%s) is not on screen", report.Duration(want.EqualiseS))
 	}
 }
 
@@ -500,11 +501,11 @@ func TestFloodCapsizes(t *testing.T) {
 		t.Fatalf("end: panel %v at %v s, engine %v at %v s (want capsizes)", got.End, got.EndS, want.End, want.EndS)
 	}
 	view := m.View()
-	if !strings.Contains(view, "SHE CAPSIZES after "+engine.FormatDuration(want.EndS)) {
-		t.Errorf("no capsize verdict with the engine's time %s:\n%s", engine.FormatDuration(want.EndS), view)
+	if !strings.Contains(view, "SHE CAPSIZES after "+report.Duration(want.EndS)) {
+		t.Errorf("no capsize verdict with the engine's time %s:\n%s", report.Duration(want.EndS), view)
 	}
 	for _, e := range want.Events {
-		at := eventMark(e.Kind) + " " + padLeft(engine.FormatDuration(e.TimeS), 11)
+		at := eventMark(e.Kind) + " " + padLeft(report.Duration(e.TimeS), 11)
 		if line := lineWith(view, at); !strings.Contains(line, num(e.WaterM3, 0)+" m³") {
 			t.Errorf("event %v %q: no line %q with %s m³ on screen (%q)", e.Kind, e.Name, at, num(e.WaterM3, 0), line)
 		}

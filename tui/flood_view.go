@@ -6,6 +6,7 @@ import (
 	"strings"
 
 	"heelwatch/engine"
+	"heelwatch/report"
 )
 
 // floodPanel is the flooding run on a narrow screen, in w × h: the times
@@ -120,7 +121,7 @@ func (m model) floodProgress(w int) []string {
 		target = " of " + num(p.TargetM3, 0)
 	}
 	lines = append(lines,
-		st.Text.Render(clip("flooding time "+engine.FormatDuration(p.TimeS), w)),
+		st.Text.Render(clip("flooding time "+report.Duration(p.TimeS), w)),
 		st.Text.Render(clip(fmt.Sprintf("water %s%s m³ · head %s m · step %d", num(p.WaterM3, 1), target, num(p.HeadM, 2), p.Steps), w)))
 	if m.flood.finishing {
 		lines = append(lines, st.Dim.Render(clip("working out the table and the stages…", w)))
@@ -174,7 +175,7 @@ func eventWords(e engine.FloodEvent, r *engine.FloodReport) string {
 	case engine.CriterionFails:
 		return e.Name + " fails"
 	}
-	return r.End.Headline()
+	return report.FloodHeadline(r.End)
 }
 
 // floodEvents lists the run's events in time order, the end last: mark,
@@ -197,7 +198,7 @@ func (m model) floodEvents(w int) []string {
 		case e.Kind == engine.RunEnds:
 			s = st.Value
 		}
-		text := eventMark(e.Kind) + " " + padLeft(engine.FormatDuration(t), 11) + " " + padLeft(num(e.WaterM3, 0), 4) + " m³ " + eventWords(e, r)
+		text := eventMark(e.Kind) + " " + padLeft(report.Duration(t), 11) + " " + padLeft(num(e.WaterM3, 0), 4) + " m³ " + eventWords(e, r)
 		lines = append(lines, s.Render(clip(text, w)))
 	}
 	return lines
@@ -241,7 +242,7 @@ func (m model) floodStages(w int) []string {
 	for _, s := range r.Stages {
 		reached := "not reached"
 		if s.Reached {
-			reached = engine.FormatDuration(s.TimeS)
+			reached = report.Duration(s.TimeS)
 		}
 		row := padLeft(stageName(s.Fraction), 4) + " " + padLeft(num(s.WaterM3, 0), 4) + " " + padLeft(reached, 11) + " "
 		crit, bad := criteriaWord(s.Criteria)

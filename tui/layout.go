@@ -20,7 +20,7 @@ const (
 	posWidthWide    = 50 // the figures with an opening's name whole (20 letters)
 )
 
-// layout is the division of the screen, worked out once per size change by
+// layout is the division of the screen, worked out at the end of every Update by
 // resize (the one place sizes are decided) and read by View.
 type layout struct {
 	small bool // below the minimum

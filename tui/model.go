@@ -51,7 +51,6 @@ type (
 	// baselineMsg carries the intact assessment, the reference for every
 	// "since intact" figure.
 	baselineMsg struct{ a engine.Assessment }
-	logErrMsg   struct{ err error }
 	reportMsg   struct {
 		path string
 		err  error
@@ -65,8 +64,8 @@ type model struct {
 	spaces    []space
 	into      []int // the compartment each opening leads into (leadsInto)
 	opts      Options
-	condition string // the loading condition's name from the file
-	shipType  string // "cargo" or "passenger", for the criteria of a flooding run
+	condition string        // the loading condition's name from the file
+	info      *vessels.Info // the vessel file's holes, pumps and ship type for a flooding run; may be nil
 	now       func() time.Time
 
 	keys     keyMap
@@ -79,10 +78,11 @@ type model struct {
 	editing  bool
 	inputErr string
 
-	form  floodForm   // the hole-and-pumps form of a flooding run
-	flood floodState  // the flooding run and its panel
-	rem   remedyState // the righting options and their panel
-	find  finder      // the type-to-find of the compartment list
+	form   floodForm   // the hole-and-pumps form of a flooding run
+	flood  floodState  // the flooding run and its panel
+	rem    remedyState // the righting options and their panel
+	girder girderPanel // the hull girder's shear force and bending moment (strength_view.go)
+	find   finder      // the type-to-find of the compartment list
 
 	rend    *lipgloss.Renderer
 	palette int
@@ -135,6 +135,7 @@ const (
 
 // newModel builds the dashboard for v. info may be nil.
 func newModel(v *engine.Vessel, info *vessels.Info, opts Options) model {
+	v, info, opts = plainNames(v), plainInfo(info), plainOptions(opts)
 	m := model{
 		v:       v,
 		opts:    opts,
@@ -143,7 +144,7 @@ func newModel(v *engine.Vessel, info *vessels.Info, opts Options) model {
 		help:    help.New(),
 		spin:    spinner.New(spinner.WithSpinner(spinner.MiniDot)),
 		animate: true,
-		input:   textinput.New(),
+		input:   newTextField(),
 		rend:    lipgloss.DefaultRenderer(),
 		damage:  v.Intact(),
 		latest:  new(atomic.Int64),
@@ -155,9 +156,9 @@ func newModel(v *engine.Vessel, info *vessels.Info, opts Options) model {
 		width:   80,
 		height:  24,
 	}
+	m.info = info
 	if info != nil {
 		m.condition = info.Condition
-		m.shipType = info.ShipType
 	}
 	m.into = leadsInto(v)
 	m.derived = derive(v, m.into, nil)
@@ -231,14 +232,9 @@ func (m *model) setStyles() {
 // Init computes the intact condition, the reference for every change.
 func (m model) Init() tea.Cmd {
 	v := m.v
-	return tea.Batch(func() (msg tea.Msg) {
-		defer func() {
-			if r := recover(); r != nil {
-				msg = resultMsg{seq: 0, failure: fmt.Sprint(r)}
-			}
-		}()
-		return baselineMsg{engine.Assess(v, v.Intact())}
-	}, m.startSpin())
+	return tea.Batch(newest(0, nil, nil,
+		func(why string) tea.Msg { return resultMsg{seq: 0, failure: why} },
+		func() tea.Msg { return baselineMsg{engine.Assess(v, v.Intact())} }), m.startSpin())
 }
 
 // pending reports whether the figures shown are not yet those of the
@@ -247,12 +243,20 @@ func (m model) pending() bool {
 	return m.shown != m.seq || (m.base == nil && m.failure == "")
 }
 
-// Update handles one message.
+// Update handles one message, then divides the screen for what it left:
+// the one place sizes are decided (resize), once per message.
 func (m model) Update(msg tea.Msg) (tea.Model, tea.Cmd) {
+	next, cmd := m.update(msg)
+	mm := next.(model)
+	mm.resize()
+	return mm, cmd
+}
+
+// update handles one message.
+func (m model) update(msg tea.Msg) (tea.Model, tea.Cmd) {
 	switch msg := msg.(type) {
 	case tea.WindowSizeMsg:
 		m.width, m.height = msg.Width, msg.Height
-		m.resize()
 		return m, nil
 
 	case baselineMsg:
@@ -277,9 +281,10 @@ func (m model) Update(msg tea.Msg) (tea.Model, tea.Cmd) {
 	case resultMsg:
 		return m.takeResult(msg)
 
-	case logErrMsg:
-		m.log = append(m.log, m.now().Format("15:04:05")+" event log file: "+msg.err.Error())
-		return m, nil
+	case logStatusMsg:
+		return m.takeLogStatus()
+	case logRetryMsg:
+		return m.retryLog()
 
 	case reportMsg:
 		line := "report written to " + msg.path
@@ -307,6 +312,9 @@ func (m model) Update(msg tea.Msg) (tea.Model, tea.Cmd) {
 		return m.takeRemedies(msg)
 
 	case tea.KeyMsg:
+		if m.lay.small {
+			return m.smallScreenKey(msg)
+		}
 		if msg.Type == tea.KeyRunes && len(msg.Runes) > 1 && !msg.Paste {
 			// Keys pressed faster than the terminal is read arrive as one
 			// message ("jj"): take them one at a time, each in the mode the
@@ -341,7 +349,6 @@ func (m model) key(msg tea.KeyMsg) (tea.Model, tea.Cmd) {
 		return m, tea.Quit
 	case key.Matches(msg, k.Help):
 		m.help.ShowAll = !m.help.ShowAll
-		m.resize()
 	case key.Matches(msg, k.Up):
 		m.move(-1)
 	case key.Matches(msg, k.Down):
@@ -386,6 +393,12 @@ func (m model) key(msg tea.KeyMsg) (tea.Model, tea.Cmd) {
 		return m, m.writeReport()
 	case key.Matches(msg, k.Remedies):
 		return m.remedyKey()
+	case key.Matches(msg, k.Girder):
+		return m.girderKey()
+	case m.girder.handles(msg):
+		var cmd tea.Cmd
+		m.girder, cmd = m.girder.update(msg)
+		return m, cmd
 	case key.Matches(msg, k.RunPanel):
 		if m.rem.show {
 			// The righting options give way to the run's panel.
@@ -433,7 +446,6 @@ func (m model) key(msg tea.KeyMsg) (tea.Model, tea.Cmd) {
 		m.inputErr = ""
 		m.input.SetValue("")
 		m.input.Placeholder = muText(m.mu(m.damage, m.sel))
-		m.resize()
 		cmd := m.input.Focus()
 		if !m.animate {
 			// Tests: a still cursor, so that no blink timer runs.
@@ -484,7 +496,6 @@ func (m model) editKey(msg tea.KeyMsg) (tea.Model, tea.Cmd) {
 	case tea.KeyEsc:
 		m.editing = false
 		m.input.Blur()
-		m.resize()
 		return m, nil
 	case tea.KeyCtrlC:
 		return m, tea.Quit
@@ -496,7 +507,6 @@ func (m model) editKey(msg tea.KeyMsg) (tea.Model, tea.Cmd) {
 		}
 		m.editing = false
 		m.input.Blur()
-		m.resize()
 		if mu == m.mu(m.damage, m.sel) {
 			return m, nil
 		}
@@ -545,8 +555,9 @@ func (m model) commit(d engine.Damage, what string) (tea.Model, tea.Cmd) {
 	m.seq++
 	m.latest.Store(int64(m.seq))
 	m.changes[m.seq] = change{at: m.now(), what: what}
-	spin := m.startSpinner() // before m is copied out: the order is not Go's to promise
-	return m, tea.Batch(recompute(m.v, cloneDamage(d), m.seq, m.latest), spin)
+	logged := m.logChange(m.seq, m.changes[m.seq]) // in the file before it is computed or shown
+	spin := m.startSpinner()                       // before m is copied out: the order is not Go's to promise
+	return m, tea.Batch(logged, recompute(m.v, cloneDamage(d), m.seq, m.latest), spin)
 }
 
 // recompute returns the Cmd that assesses damage state d, change number seq.
@@ -554,17 +565,10 @@ func (m model) commit(d engine.Damage, what string) (tea.Model, tea.Cmd) {
 // result could never be shown), and it turns an engine failure into a
 // message instead of taking the screen down.
 func recompute(v *engine.Vessel, d engine.Damage, seq int, latest *atomic.Int64) tea.Cmd {
-	return func() (msg tea.Msg) {
-		if latest != nil && latest.Load() != int64(seq) {
-			return resultMsg{seq: seq, skipped: true}
-		}
-		defer func() {
-			if r := recover(); r != nil {
-				msg = resultMsg{seq: seq, failure: fmt.Sprint(r)}
-			}
-		}()
-		return resultMsg{seq: seq, a: engine.Assess(v, d)}
-	}
+	return newest(seq, latest,
+		func() tea.Msg { return resultMsg{seq: seq, skipped: true} },
+		func(why string) tea.Msg { return resultMsg{seq: seq, failure: why} },
+		func() tea.Msg { return resultMsg{seq: seq, a: engine.Assess(v, d)} })
 }
 
 // takeResult shows a result if it is the newest and logs every change in
@@ -605,8 +609,8 @@ func (m model) takeResult(r resultMsg) (tea.Model, tea.Cmd) {
 		ch := m.changes[m.logNext]
 		delete(m.results, m.logNext)
 		delete(m.changes, m.logNext)
+		cmds = append(cmds, m.addLogResult(m.logNext, ch, res))
 		m.logNext++
-		cmds = append(cmds, m.addLogPair(ch.at, ch.what+" → "+res[0], ch.what+" → "+res[1]))
 	}
 	return m, tea.Batch(cmds...)
 }
@@ -636,21 +640,8 @@ func (m *model) addLog(at time.Time, line string) tea.Cmd { return m.addLogPair(
 
 // addLogPair is addLog with a fuller line for the file than for the screen.
 func (m *model) addLogPair(at time.Time, line, fileLine string) tea.Cmd {
-	m.log = append(m.log, at.Format("15:04:05")+" "+line)
-	if len(m.log) > 200 {
-		m.log = m.log[len(m.log)-200:]
-	}
-	if m.file == nil {
-		return nil
-	}
-	m.file.add(at.Format(time.RFC3339) + "  " + fileLine)
-	f := m.file
-	return func() tea.Msg {
-		if err := f.flush(); err != nil {
-			return logErrMsg{err}
-		}
-		return nil
-	}
+	m.screenLog(at, line)
+	return m.fileLine(at, fileLine)
 }
 
 func (m *model) startSpinner() tea.Cmd {

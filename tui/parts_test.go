@@ -294,7 +294,7 @@ func TestEventLogFile(t *testing.T) {
 	lines := strings.Split(strings.TrimSpace(string(data)), "\n")
 	var opened []string
 	for _, l := range lines {
-		if strings.Contains(l, "opened to sea") {
+		if strings.Contains(l, "opened to sea") && strings.Contains(l, "→") { // the results' lines
 			opened = append(opened, l)
 		}
 	}

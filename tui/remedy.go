@@ -47,17 +47,10 @@ type remedyMsg struct {
 // damage state d (a copy the Cmd owns), request number seq. The vessel is
 // never edited by the dashboard, so FindRemedies may read it here.
 func remediesCmd(v *engine.Vessel, d engine.Damage, seq int, latest *atomic.Int64) tea.Cmd {
-	return func() (msg tea.Msg) {
-		if latest.Load() != int64(seq) {
-			return remedyMsg{seq: seq, stale: true}
-		}
-		defer func() {
-			if r := recover(); r != nil {
-				msg = remedyMsg{seq: seq, err: fmt.Sprint(r)}
-			}
-		}()
-		return remedyMsg{seq: seq, set: engine.FindRemedies(v, d)}
-	}
+	return newest(seq, latest,
+		func() tea.Msg { return remedyMsg{seq: seq, stale: true} },
+		func(why string) tea.Msg { return remedyMsg{seq: seq, err: why} },
+		func() tea.Msg { return remedyMsg{seq: seq, set: engine.FindRemedies(v, d)} })
 }
 
 // current reports whether the options held were worked out for damage

@@ -79,6 +79,7 @@ func (m model) headerView(w int) string {
 		// thing a narrow screen cuts.
 		right = m.severityWord() + st.Header.Render(" · ") + right
 	}
+	right = m.logWarning() + right
 	if m.pending() {
 		right = st.Busy.Render(m.spin.View()+" computing") + "  " + right
 	}
@@ -105,6 +106,9 @@ func (m model) narrowBody() []string {
 	l := m.lay
 	sep := m.st.Dim.Render("│")
 	list := m.listView(l.listW, l.bodyH)
+	if m.girder.show {
+		return besides(sep, fit(list, l.listW, l.bodyH), fit(m.girderLines(l.rightW, l.bodyH), l.rightW, l.bodyH))
+	}
 	if m.flood.show {
 		return besides(sep, fit(list, l.listW, l.bodyH), m.floodPanel(l.rightW, l.bodyH))
 	}
@@ -173,6 +177,8 @@ func (m model) wideBody() []string {
 	rule := m.st.Dim.Render(strings.Repeat("─", m.width))
 	var pics []string
 	switch {
+	case m.girder.show:
+		pics = m.girderLines(m.width, l.picH)
 	case m.flood.show:
 		pics = m.floodRow(m.width, l.picH)
 	case m.noPosition():

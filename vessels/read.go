@@ -44,11 +44,20 @@ type CompartmentInfo struct {
 // Parse reads a vessel file. file is the name used in messages. Any problem
 // in the file is returned as Problems, all of them at once.
 func Parse(file string, data []byte) (*engine.Vessel, *Info, error) {
+	if len(data) > MaxFileBytes {
+		return nil, nil, Problems{{File: file, Line: 1, Key: "syntax", Msg: errTooLarge.Error()}}
+	}
+	if p := tooDeep(file, data); p != nil {
+		return nil, nil, Problems{*p}
+	}
 	var doc map[string]any
 	if _, err := toml.Decode(string(data), &doc); err != nil {
 		return nil, nil, syntaxProblem(file, err)
 	}
 	r := &reader{file: file, lines: indexLines(string(data))}
+	if r.tooMany("", doc) {
+		return nil, nil, r.probs.sorted()
+	}
 	v, info := r.vessel(r.table("", doc))
 	if len(r.probs) > 0 {
 		return nil, nil, r.probs.sorted()
@@ -114,10 +123,17 @@ func (r *reader) vessel(root *table) (*engine.Vessel, *Info) {
 		r.addf("margin_line_depth", "%g m is not less than the depth %g m: the margin line lies just below the deck (SOLAS: 0.076 m)", margin, hull.DepthM)
 	}
 
-	weights := r.weights(root.entries("weight", "one item of the loading condition"))
+	weights := r.weights(root.entries("weight", "one item of the loading condition"), hull)
 	comps, cinfo := r.compartments(root.entries("compartment", "one space of the ship"), hull)
 	openings := r.openings(root.entries("opening", "a point where water would spread"))
+	if hull != nil && (marginOK && margin < hull.DepthM || !root.has("margin_line_depth")) {
+		r.marginBelowKeel(hull, margin, marginOK)
+	}
+	if hull != nil {
+		r.openingsNearHull(hull, openings)
+	}
 	marks := r.draftMarks(root.entries("draft_mark", "a draft mark on the shell"), hull)
+	girder := r.girder(root, hull)
 	root.finish()
 
 	if len(r.probs) > 0 || hull == nil {
@@ -127,6 +143,7 @@ func (r *reader) vessel(root *table) (*engine.Vessel, *Info) {
 		Name: name, WaterDensity: rho, Hull: hull, Weights: weights,
 		Compartments: comps, Openings: openings, MarginLineM: margin, CriteriaSets: criteria, ShipType: info.ShipType,
 		DraftMarks: marks,
+		Girder:     girder,
 	})
 	if err != nil {
 		r.addf("weight", "%v", err)
@@ -243,7 +260,7 @@ func (r *reader) stations(t *table, sections []*table) ([]engine.Station, bool) 
 		ok = ok && offOK
 		out = append(out, engine.Station{X: x, Offsets: off})
 	}
-	return out, ok
+	return out, ok && !r.spanTooLong(out)
 }
 
 func (r *reader) offsets(s *table) ([]engine.Point, bool) {
@@ -284,6 +301,9 @@ func (r *reader) offsets(s *table) ([]engine.Point, bool) {
 			ok = false
 			continue
 		}
+		if r.pointTooFar(ep, y, z) {
+			ok = false
+		}
 		if y < 0 {
 			r.addf(ep, "half-breadth %g m is negative: give the starboard half, 0 or more", y)
 			ok = false
@@ -306,7 +326,7 @@ func (r *reader) offsets(s *table) ([]engine.Point, bool) {
 }
 
 // weights reads the [[weight]] tables.
-func (r *reader) weights(ts []*table) []engine.Weight {
+func (r *reader) weights(ts []*table, hull *engine.Hull) []engine.Weight {
 	if len(ts) == 0 {
 		r.addf("weight", "missing: the loading condition needs at least one [[weight]] (lightship at least) with name, mass, lcg, vcg")
 	}
@@ -316,7 +336,8 @@ func (r *reader) weights(ts []*table) []engine.Weight {
 		var w engine.Weight
 		w.Name, _ = r.name(t, names, "weight")
 		w.MassT, _ = t.positive("mass", "t", true)
-		w.LCGM, _ = t.num("lcg", "m from the aft perpendicular", true)
+		var lcgOK bool
+		w.LCGM, lcgOK = t.num("lcg", "m from the aft perpendicular", true)
 		w.TCGM, _ = t.num("tcg", "m from the centreline, + to starboard", false)
 		w.VCGM, _ = t.num("vcg", "m above the baseline", true)
 		if f, ok := t.num("fsm", "t·m", false); ok {
@@ -325,6 +346,7 @@ func (r *reader) weights(ts []*table) []engine.Weight {
 			}
 			w.FSMTm = f
 		}
+		w.ExtentM = r.weightExtent(t, w.LCGM, lcgOK, hull)
 		t.finish()
 		out = append(out, w)
 	}

@@ -40,6 +40,13 @@ func runDashboard(vessel string, o dashboardOptions, stdout, stderr io.Writer) i
 		fmt.Fprintf(stderr, "heelwatch: --palette %q: use day, night or mono\n", o.palette)
 		return exitUsage
 	}
+	if o.logFile != "" {
+		// Refused here, terminal or not, before anything is shown.
+		if err := tui.CheckLogFile(o.logFile); err != nil {
+			fmt.Fprintf(stderr, "heelwatch: --log %s: %v\n", o.logFile, err)
+			return exitFailed
+		}
+	}
 	v, info, status := openVessel(vessel, stderr)
 	if status != exitOK {
 		return status
