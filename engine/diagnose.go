@@ -46,6 +46,10 @@ type Explanation struct {
 	HeelErrDeg float64     // read − predicted heel; NaN with no heel read
 	LevelRMSM  float64     // root mean square of read − predicted soundings; NaN with none read
 	Misfit     float64
+	// FitPermeability is the one permeability fitted to the group's spaces
+	// (singles and pairs); 0 where each keeps its own. The readings know it
+	// only roughly: it moves where the water stands, and so the heel.
+	FitPermeability float64
 	// Score ranks explanations: the misfit plus GroupPenalty for each
 	// compartment, so that a larger group must explain clearly more than a
 	// smaller one to rank above it.
@@ -154,19 +158,19 @@ func Diagnose(v *Vessel, rs []Reading, o DiagnoseOptions) (Diagnosis, error) {
 		o.Progress(total, total)
 	}
 	sort.SliceStable(cands, func(i, j int) bool { return cands[i].score < cands[j].score })
-	seen := map[string]bool{}
+	var kept []*diagCand
 	for _, c := range cands {
-		if len(dg.Explanations) >= o.Keep {
+		if len(kept) >= o.Keep {
 			break
 		}
-		if !c.meaningful() {
+		// A group that ranks below one of its own parts and explains the
+		// readings no better says nothing more than that part (often a
+		// holed tank whose contents weigh what the sea water that replaced
+		// them does).
+		if !c.meaningful() || containsPart(kept, c) {
 			continue
 		}
-		key := fmt.Sprint(c.set)
-		if seen[key] {
-			continue
-		}
-		seen[key] = true
+		kept = append(kept, c)
 		dg.Explanations = append(dg.Explanations, f.explain(c))
 	}
 	nRead := len(r.Drafts) + len(r.Levels)
@@ -259,12 +263,35 @@ type diagCand struct {
 	score  float64
 }
 
+// containsPart reports whether c's set holds the whole set of one of kept
+// while its misfit is not lower by at least one unit of χ² (one reading's
+// worth of noise).
+func containsPart(kept []*diagCand, c *diagCand) bool {
+	for _, k := range kept {
+		if c.misfit < k.misfit-1 {
+			continue
+		}
+		all := true
+		for _, ci := range k.set {
+			found := false
+			for _, cj := range c.set {
+				found = found || ci == cj
+			}
+			all = all && found
+		}
+		if all {
+			return true
+		}
+	}
+	return false
+}
+
 // meaningful reports whether every compartment of the set holds water
 // worth the name: a member left nearly dry makes the set a copy of a
 // smaller one, which is listed on its own.
 func (c *diagCand) meaningful() bool {
 	for i, w := range c.vol {
-		if w < math.Max(1, 0.005*c.moul[i]) {
+		if w < math.Max(2, 0.01*c.moul[i]) {
 			return false
 		}
 	}
@@ -396,7 +423,9 @@ func (f *diagFitter) fitToPlane(set []int) *diagCand {
 	for i := range set {
 		c.vol[i] = math.Max(0, need) * c.moul[i] / capSum
 	}
-	x, _, ok := boundedLeastSquares(c.vol, lo, hi, h, 8, func(x []float64) ([]float64, bool) {
+	// A start, not the answer: within a tenth of a reading's error of
+	// the observed plane is enough (the free solve judges).
+	x, _, ok := boundedLeastSquares(c.vol, lo, hi, h, 8, 0.01, func(x []float64) ([]float64, bool) {
 		return f.planeResiduals(set, x), true
 	})
 	if ok {
@@ -466,7 +495,7 @@ func (f *diagFitter) refine(c *diagCand) {
 		mu := f.v.Compartments[c.set[0]].Permeability
 		x0, lo, hi, h = append(x0, mu), append(lo, 0.5), append(hi, 1), append(h, 0.01)
 	}
-	x, _, ok := boundedLeastSquares(x0, lo, hi, h, 6, func(x []float64) ([]float64, bool) {
+	x, _, ok := boundedLeastSquares(x0, lo, hi, h, 6, 0, func(x []float64) ([]float64, bool) {
 		mu := 0.0
 		if len(x) > k {
 			mu = x[k]
@@ -493,7 +522,7 @@ func sounding(c *Compartment, p Plane) float64 {
 
 // explain turns a fitted candidate into an Explanation.
 func (f *diagFitter) explain(c *diagCand) Explanation {
-	e := Explanation{Position: c.pos, Misfit: c.misfit, Score: c.score,
+	e := Explanation{Position: c.pos, Misfit: c.misfit, Score: c.score, FitPermeability: c.mu,
 		DraftRMSM: math.NaN(), HeelErrDeg: math.NaN(), LevelRMSM: math.NaN()}
 	p := c.pos
 	for _, ms := range f.shells {
@@ -562,7 +591,7 @@ func cmWords(m float64) string {
 	if math.IsNaN(m) {
 		return "no marks read,"
 	}
-	return fmt.Sprintf("%.0f cm RMS", 100*m)
+	return fmt.Sprintf("%.1f cm RMS", 100*m)
 }
 
 // tellers says, for the runners-up, which sounding would tell them from the
@@ -579,11 +608,19 @@ func tellers(v *Vessel, es []Explanation) []string {
 		}
 		return 0
 	}
-	words := func(l float64) string {
+	words := func(e Explanation, ci int) string {
+		l := level(e, ci)
+		flooded := false
+		for _, s := range e.Spaces {
+			flooded = flooded || s.Compartment == ci
+		}
+		if liq := v.Compartments[ci].Liquid; !flooded && liq != nil && liq.Fill > 0 {
+			return "its " + liq.Name + " as loaded"
+		}
 		if l < 0.05 {
 			return "dry"
 		}
-		return fmt.Sprintf("about %.2f m of water", l)
+		return fmt.Sprintf("sea water about %.2f m deep", l)
 	}
 	var out []string
 	for _, o := range es[1:min(len(es), 3)] {
@@ -600,7 +637,7 @@ func tellers(v *Vessel, es []Explanation) []string {
 			continue
 		}
 		out = append(out, fmt.Sprintf("Sound %s: %s if it is %s; %s if it is %s.", v.Compartments[best].Name,
-			words(level(es[0], best)), es[0].Names(v), words(level(o, best)), o.Names(v)))
+			words(es[0], best), es[0].Names(v), words(o, best), o.Names(v)))
 	}
 	return out
 }

@@ -11,7 +11,9 @@ import "math"
 //
 // The method is the textbook one (Levenberg 1944, Marquardt 1963); the
 // damping is scaled by the diagonal of JᵀJ.
-func boundedLeastSquares(x0, lo, hi, h []float64, maxIt int, res func(x []float64) ([]float64, bool)) ([]float64, []float64, bool) {
+//
+// It stops early once Σ r² falls to enough (0: only at convergence).
+func boundedLeastSquares(x0, lo, hi, h []float64, maxIt int, enough float64, res func(x []float64) ([]float64, bool)) ([]float64, []float64, bool) {
 	k := len(x0)
 	x := append([]float64(nil), x0...)
 	clipTo(x, lo, hi)
@@ -21,7 +23,7 @@ func boundedLeastSquares(x0, lo, hi, h []float64, maxIt int, res func(x []float6
 	}
 	cost := sumSq(r)
 	lambda := 1e-3
-	for it := 0; it < maxIt && cost > 0; it++ {
+	for it := 0; it < maxIt && cost > enough; it++ {
 		// Jacobian by forward differences, stepping inward at a bound.
 		J := make([][]float64, len(r))
 		for i := range J {

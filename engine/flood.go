@@ -383,7 +383,7 @@ func (r *FloodRun) settled(e floodEval, t float64) {
 				r.eqS = rec.t0 + (rec.t1-rec.t0)*s0/(s0-s1)
 			}
 		}
-		r.finish(FloodEqualised, t, fmt.Sprintf("the level inside has risen to the sea's: %.1f m³ in", e.water), nil)
+		r.finish(FloodEqualised, t, fmt.Sprintf("the level inside has %s the sea's: %.1f m³ in", r.levelWent(e.water), e.water), nil)
 	case e.inflow == 0 && e.rate == 0:
 		r.finish(FloodNoInflow, t, "nothing flows: the hole is clear of the water on both sides", nil)
 	}
@@ -410,11 +410,13 @@ func FloodCriteria(shipType string) func(v *Vessel, d Damage, pos Position) []Cr
 		if len(v.CriteriaSets) == 0 {
 			return nil
 		}
-		curve, err := RightingLevers(NewProblem(v, d), pos)
+		pr := NewProblem(v, d)
+		curve, err := RightingLevers(pr, pos)
 		if err != nil {
 			return nil
 		}
-		res, err := EvaluateCriteria(v.CriteriaSets, CriteriaCase{Curve: curve, Eq: pos, Damaged: IsDamaged(d), ShipType: shipType})
+		curve = pr.withOtherSide(curve, pos)
+		res, err := JudgeCriteria(v.CriteriaSets, CriteriaCase{Curve: curve, Eq: pos, Damaged: IsDamaged(d), ShipType: shipType})
 		if err != nil {
 			return nil
 		}

@@ -8,7 +8,7 @@ type FloodEnd int
 
 const (
 	FloodRunning   FloodEnd = iota // not ended yet
-	FloodEqualised                 // the level inside has risen to the sea's: head zero
+	FloodEqualised                 // the level inside has come to the sea's (risen, or fallen for a tank whose contents stood above it): head zero
 	FloodPumpsHold                 // the pumps hold the level where the inflow equals their capacity
 	FloodKeptDry                   // the pumps take all that comes in: no water stays
 	FloodNoInflow                  // the hole is clear of the water: nothing comes in

@@ -56,11 +56,11 @@ func (r *FloodRun) startEvents(e floodEval) {
 	if p.DeckEdge.HeightM <= 0 {
 		r.addEvent(DeckEdgeReached, "", 0, e, fmt.Sprintf("the deck edge is under water from the start (%s side, x %.1f m)", p.DeckEdge.Side, p.DeckEdge.XM))
 	}
-	if p.MarginLine.HeightM <= 0 {
+	if p.MarginLine.HeightM <= 0 && r.v.Passenger() {
 		r.addEvent(MarginLineReached, "", 0, e, "the margin line is under water from the start")
 	}
 	for _, o := range p.Openings {
-		if !o.Weathertight && o.HeightM <= 0 {
+		if o.Progressive() && o.HeightM <= 0 {
 			r.addEvent(OpeningReached, o.Name, 0, e, fmt.Sprintf("%s is under water from the start", o.Name))
 		}
 	}
@@ -95,19 +95,21 @@ func (r *FloodRun) crossings(rec stepRec, e0, e1 floodEval) {
 			func(p *Position) string {
 				return fmt.Sprintf("the deck edge goes under (%s side, x %.1f m)", p.DeckEdge.Side, p.DeckEdge.XM)
 			}},
-		{MarginLineReached, "", func(p *Position) float64 { return p.MarginLine.HeightM },
+	}
+	if r.v.Passenger() { // a cargo ship has no margin line: the deck edge is the line
+		probes = append(probes, probe{MarginLineReached, "", func(p *Position) float64 { return p.MarginLine.HeightM },
 			func(p *Position) string {
 				return fmt.Sprintf("the margin line goes under (%s side, x %.1f m)", p.MarginLine.Side, p.MarginLine.XM)
-			}},
+			}})
 	}
 	for i, o := range r.v.Openings {
-		if o.Weathertight {
-			continue
+		if o.Weathertight || r.v.LeadsToIndex(o) == r.ci {
+			continue // closed, or into the compartment flooding already
 		}
 		i, name := i, o.Name
 		probes = append(probes, probe{OpeningReached, name,
 			func(p *Position) float64 {
-				if i < len(p.Openings) {
+				if i < len(p.Openings) && !p.Openings[i].IntoFlooded {
 					return p.Openings[i].HeightM
 				}
 				return math.Inf(1)

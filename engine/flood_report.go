@@ -97,6 +97,9 @@ type FloodReport struct {
 	Permeability   float64 // μ of the flooded compartment, as used (Vessel.Permeability of the base state)
 	CapacityM3     float64 // μ × the compartment's volume
 	ContentsM3     float64 // a tank's contents at the start, as sea water of the same mass; 0 for a dry space
+	// Spills is the holed tank's contents when they are not water (oil,
+	// cargo liquid): what may escape to the sea (see spill.go); nil else.
+	Spills []Spill
 
 	Start FloodSample // at time zero
 	// Final is the last state solved: at EndS, or, when she sinks or
@@ -118,7 +121,7 @@ type FloodReport struct {
 	Events []FloodEvent  // in time order; the last is RunEnds
 	Table  []FloodSample // rows at round times and at events
 	Trace  []FloodSample // every accepted step, for a plot
-	Stages []FloodStage  // 25, 50, 75 and 100 % of StagesOfM3
+	Stages []FloodStage  // 25, 50, 75 and 100 % of StagesOfM3; only those the water goes through (and the end)
 	// StagesOfM3 is the volume the stages are fractions of: the water at
 	// the end when the run settled (equalised, pumps hold, full) or when she
 	// sank or capsized (the last floating state: the stages lead up to the
@@ -157,7 +160,7 @@ func (r *FloodRun) Report() FloodReport {
 		Vessel: r.v.Name, Compartment: r.comp.Name, Hole: r.c.Hole, PumpM3h: r.pumpM3s * 3600, LimitS: r.limit,
 		End: r.end, EndS: r.endS, EndReason: r.endWhy, EndNoEq: r.endNoEq, SteadyHeadM: r.hs,
 		PumpsHoldLevel: r.end == FloodPumpsHold || r.end == FloodKeptDry,
-		Permeability:   r.mu, CapacityM3: r.capacity, ContentsM3: r.contentsM3, LostBuoyancy: r.lb, LostBuoyancyNoEq: r.lbNoEq, LostBuoyancyWaterM3: r.lbWater,
+		Permeability:   r.mu, CapacityM3: r.capacity, ContentsM3: r.contentsM3, Spills: r.spills(), LostBuoyancy: r.lb, LostBuoyancyNoEq: r.lbNoEq, LostBuoyancyWaterM3: r.lbWater,
 		Events: append([]FloodEvent(nil), r.events...),
 		Steps:  len(r.recs), Rejected: r.st.tries - len(r.recs),
 	}
@@ -172,7 +175,10 @@ func (r *FloodRun) Report() FloodReport {
 		rep.Trace = append(rep.Trace, r.sample(t, e, false))
 	}
 	rep.Start = rep.Trace[0]
-	rep.Final = rep.Trace[len(rep.Trace)-1]
+	rep.Final = r.sample(rep.Trace[len(rep.Trace)-1].TimeS, r.evals[len(r.evals)-1], false)
+	if p := rep.Final.Position; p != nil {
+		FillUpright(r.v, r.damageAt(rep.Final.WaterM3), p)
+	}
 	rep.FinalWaterM3 = rep.Final.WaterM3
 	if rep.Final.Position != nil && r.lb != nil {
 		f, l := rep.Final.Position, r.lb
@@ -189,6 +195,9 @@ func (r *FloodRun) Report() FloodReport {
 		rep.StagesOfM3 = r.lbWater
 	}
 	for _, f := range stageFractions {
+		if f < 1 && !r.stagePassed(f*rep.StagesOfM3, rep.FinalWaterM3) {
+			continue // a stage of a filling that never happens
+		}
 		rep.Stages = append(rep.Stages, r.stage(f, rep.StagesOfM3))
 	}
 	rep.Solves = r.solves
@@ -201,6 +210,9 @@ func (r *FloodRun) sample(t float64, e floodEval, judge bool) FloodSample {
 	if e.ok() {
 		p := e.pos
 		s.Position = &p
+		if judge {
+			FillUpright(r.v, r.damageAt(e.water), &p)
+		}
 		if judge && r.c.Criteria != nil {
 			s.Criteria = r.c.Criteria(r.v, r.damageAt(e.water), p)
 		}
@@ -297,6 +309,7 @@ func (r *FloodRun) stage(f, of float64) FloodStage {
 	if e.ok() {
 		p := e.pos
 		st.Position = &p
+		FillUpright(r.v, r.damageAt(e.water), &p)
 		if r.c.Criteria != nil {
 			st.Criteria = r.c.Criteria(r.v, r.damageAt(e.water), p)
 		}

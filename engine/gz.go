@@ -171,6 +171,9 @@ func (pr *Problem) leverCurve(side Side, eq Position) (*GZCurve, []solvedHeel, e
 			}
 		}
 		push(deg, gz, sh)
+		if k == 0 {
+			c.upright, c.hasUpright = sh.p, true
+		}
 		if deg >= gzEndDeg || (found && deg >= gzMinEndDeg) {
 			break
 		}
@@ -199,7 +202,7 @@ func (pr *Problem) leverCurve(side Side, eq Position) (*GZCurve, []solvedHeel, e
 func (pr *Problem) downflooding(c *GZCurve, sol []solvedHeel) {
 	var open []immersionPoint
 	for _, o := range pr.v.Openings {
-		if !o.Weathertight {
+		if !o.Weathertight && !pr.v.intoFlooded(o, pr.d) {
 			open = append(open, immersionPoint{o.X, o.Y, o.Z, o.Name})
 		}
 	}

@@ -32,7 +32,7 @@ const (
 	RemedyFreeboardLossM = 0.10
 	// RemedyMaxSolves bounds the work of one call: equilibrium solves and
 	// upright-GM solves together, the present state's included.
-	RemedyMaxSolves = 48
+	RemedyMaxSolves = 240
 
 	remedyMaxCandidates = 8    // candidate actions solved, the most promising first
 	remedyEmptyFill     = 5e-3 // a fill below this counts as empty; within it of RemedyFillTo as full
@@ -73,7 +73,7 @@ type Remedy struct {
 	Tanks     []int
 	TankNames []string
 	// FillBefore and FillAfter are each tank's fill, as a fraction of its
-	// volume, now and after the option.
+	// capacity, now and after the option.
 	FillBefore, FillAfter []float64
 	Action                string  // in words, e.g. "fill Wing tank 2 P from the sea to 98 %"
 	MassT                 float64 // mass taken on, pumped out or moved, t (> 0)
@@ -94,11 +94,23 @@ type Remedy struct {
 	// it raises them).
 	FreeboardLossM float64
 
+	// StagesChecked is how many of the RemedyStages equal steps of the
+	// amount were solved and passed (the option itself counts as the
+	// last); StageFail is the first step that failed and why, "" if none.
+	StagesChecked int
+	StageFail     string
+	// DurationS is how long it takes at PumpM3h, the rate the file gives
+	// PumpName, the tank that does the work; NaN when no rate is given.
+	DurationS float64
+	PumpM3h   float64
+	PumpName  string
+
 	Advisable bool   // see FindRemedies for the rule
 	Note      string // why, in plain words, with what to watch
 
-	liquid string  // what the tank emptied holds, "" for a fill
-	vessel *Vessel // the changed loading, for a later upright solve
+	liquid string          // what the tank emptied holds, "" for a fill
+	vessel *Vessel         // the changed loading, for a later upright solve
+	cand   remedyCandidate // the action, for the staged check
 }
 
 // RemedySet is the answer of FindRemedies for one damage state.
@@ -118,7 +130,7 @@ type RemedySet struct {
 // FindRemedies lists and solves the righting options for damage state d of
 // v. It is on demand, not per keystroke: it spends at most RemedyMaxSolves
 // solves (each a full free-floating equilibrium or an upright-GM solve);
-// on the bundled ship holed in a wing tank it takes 16, about 2 ms. It
+// each option is solved at RemedyStages steps of its amount (see below). It
 // does not change v, so it may run in a goroutine (a tea.Cmd) while v is
 // not being edited; d is copied first. It never fails: a state with no
 // floating position gives no options and says why.
@@ -154,6 +166,13 @@ type RemedySet struct {
 //     not go deeper). Advisable options come first, those that lower the
 //     least freeboard by more than RemedyFreeboardLossM after the others;
 //     within each, the least remaining heel first.
+//
+// Whatever the sign, an option is advisable only if it is safe while it is
+// carried out: it is solved at each of RemedyStages equal steps of its
+// amount (remedyStageCheck), and at every one she must float, with no deck
+// edge and no unprotected opening going under that was clear (nor deeper),
+// and after it her upright GM must be positive. The time it takes at the
+// pump rate the file gives (Compartment.PumpM3h) is said in the note.
 //
 // With positive upright GM and a heel under RemedyUprightDeg no action is
 // needed and there are no options.
@@ -231,8 +250,11 @@ func FindRemedies(v *Vessel, d Damage) RemedySet {
 		}
 	}
 	for i := range rs.Options {
-		remedyJudge(&rs.Options[i], &rs, now)
-		rs.Options[i].vessel = nil
+		o := &rs.Options[i]
+		remedyStageCheck(v, d, o.cand, o, now, &rs.Solves)
+		remedyDuration(v, o.cand, o)
+		remedyJudge(o, &rs, now)
+		o.vessel = nil
 	}
 	remedyRank(rs.Options, rs.Loll)
 	switch {
@@ -269,7 +291,7 @@ type remedyCandidate struct {
 // remedyTank is what the candidate search needs of an intact tank.
 type remedyTank struct {
 	i          int
-	vol        float64 // moulded volume, m³
+	vol        float64 // capacity (μ × moulded volume), m³
 	yFull      float64 // centroid of the whole tank
 	zFull      float64
 	side       Side // 0: across the centreline
@@ -291,7 +313,7 @@ func remedyTanks(v *Vessel, d Damage) []remedyTank {
 			continue
 		}
 		_, yc, zc := c.solid.whole.Centroid()
-		t := remedyTank{i: i, vol: c.solid.Volume(), yFull: yc, zFull: zc, fill: c.Liquid.Fill}
+		t := remedyTank{i: i, vol: c.CapacityM3(), yFull: yc, zFull: zc, fill: c.Liquid.Fill}
 		switch {
 		case yc > tolY:
 			t.side = Starboard
@@ -300,10 +322,8 @@ func remedyTanks(v *Vessel, d Damage) []remedyTank {
 		}
 		t.massT, _, t.y, t.z, _ = v.TankContents(i)
 		name := strings.ToLower(c.Liquid.Name)
-		oily := strings.Contains(name, "oil") || strings.Contains(name, "sludge") ||
-			strings.Contains(name, "bilge") || strings.Contains(name, "sewage")
-		t.ballast = !oily && (strings.Contains(name, "ballast") || strings.Contains(name, "sea water"))
-		t.discharged = !oily && (strings.Contains(name, "ballast") || strings.Contains(name, "water"))
+		t.discharged = IsWater(name)
+		t.ballast = t.discharged && (strings.Contains(name, "ballast") || strings.Contains(name, "sea water"))
 		out = append(out, t)
 	}
 	return out
@@ -381,7 +401,7 @@ func remedyLoading(v *Vessel, c remedyCandidate, m float64) (map[int]Liquid, []i
 	if c.from >= 0 {
 		comp := v.Compartments[c.from]
 		l := *comp.Liquid
-		vol := comp.solid.Volume()
+		vol := comp.CapacityM3()
 		before = append(before, l.Fill)
 		if m >= c.mass && c.kind == RemedyDischarge || c.kind == RemedyTransfer && m >= c.mass && m >= l.Fill*vol*l.Density*(1-1e-12) {
 			l.Fill = 0
@@ -395,7 +415,7 @@ func remedyLoading(v *Vessel, c remedyCandidate, m float64) (map[int]Liquid, []i
 	if c.to >= 0 {
 		comp := v.Compartments[c.to]
 		l := *comp.Liquid
-		vol := comp.solid.Volume()
+		vol := comp.CapacityM3()
 		before = append(before, l.Fill)
 		rho := v.WaterDensity
 		if c.kind == RemedyTransfer {
@@ -437,7 +457,7 @@ func remedyVessel(v *Vessel, changes map[int]Liquid) (*Vessel, error) {
 func remedySolve(v *Vessel, d Damage, c remedyCandidate, m float64, upright bool, solves *int) Remedy {
 	changes, tanks, before, after := remedyLoading(v, c, m)
 	r := Remedy{Kind: c.kind, Tanks: tanks, FillBefore: before, FillAfter: after, MassT: m,
-		UprightGMM: math.NaN(), LowestOpeningM: math.Inf(1)}
+		UprightGMM: math.NaN(), LowestOpeningM: math.Inf(1), DurationS: math.NaN(), cand: c}
 	for _, i := range tanks {
 		r.TankNames = append(r.TankNames, v.Compartments[i].Name)
 	}
@@ -547,7 +567,7 @@ type remedyFigures struct {
 func remedyMeasure(p *Position) remedyFigures {
 	f := remedyFigures{deck: p.DeckEdge.HeightM, openingM: math.Inf(1)}
 	for _, o := range p.Openings {
-		if !o.Weathertight && o.HeightM < f.openingM {
+		if o.Progressive() && o.HeightM < f.openingM {
 			f.opening, f.openingM = o.Name, o.HeightM
 		}
 	}
@@ -585,6 +605,13 @@ func remedyJudge(r *Remedy, rs *RemedySet, now remedyFigures) {
 	if newOpening || deeperOpening {
 		against = append(against, fmt.Sprintf("puts the unprotected opening %s under water (%.2f m)", after.opening, -after.openingM))
 	}
+	// Safe while it is carried out (remedy_stages.go), not only once done.
+	switch {
+	case r.StageFail != "":
+		against = append(against, "is not safe while it is carried out: "+r.StageFail)
+	case r.StagesChecked < RemedyStages:
+		against = append(against, fmt.Sprintf("was solved at only %d of the %d steps of carrying it out (the bound on the work), so it is not known to be safe on the way", r.StagesChecked, RemedyStages))
+	}
 	if rs.Loll {
 		against = remedyJudgeLoll(r, rs, against, &why)
 	} else {
@@ -611,13 +638,12 @@ func remedyJudgeLoll(r *Remedy, rs *RemedySet, against []string, why *remedyWord
 		against = append(against, "its upright GM could not be worked out")
 	case !(up > rs.UprightGMM):
 		against = append(against, fmt.Sprintf("does not raise her upright GM (%.2f m, now %.2f m)", up, rs.UprightGMM))
+	case !(up > 0):
+		against = append(against, fmt.Sprintf("lowers G but leaves her upright GM negative (%.2f m, now %.2f m): she would still loll (%s, now %s), and more must be done to bring G down", up, rs.UprightGMM, heelWords(p.HeelDeg), heelWords(rs.HeelDeg)))
 	}
 	r.Advisable = len(against) == 0
-	switch {
-	case r.Advisable && up > 0:
+	if r.Advisable {
 		why.say("Lowers G: upright GM from %.2f to %.2f m, positive, so she would come to %s (now %s), a list and no longer a loll. Only then may the list that is left be taken out from the high side: solve the new condition first.", rs.UprightGMM, up, heelWords(p.HeelDeg), heelWords(rs.HeelDeg))
-	case r.Advisable:
-		why.say("Lowers G: upright GM from %.2f to %.2f m, but still negative: she would still loll (%s, now %s); more must be done to bring G down.", rs.UprightGMM, up, heelWords(p.HeelDeg), heelWords(rs.HeelDeg))
 	}
 	if r.Kind == RemedyFill {
 		why.say("Fill one tank at a time and watch the heel while it is slack.")
@@ -635,8 +661,8 @@ func remedyJudgeList(r *Remedy, rs *RemedySet, against []string, why *remedyWord
 		against = append(against, "its upright GM could not be worked out")
 	case !(up > 0):
 		against = append(against, fmt.Sprintf("leaves her with negative GM upright (%.2f m): she would loll", up))
-	case !(p.GMM > 0):
-		against = append(against, fmt.Sprintf("leaves her with no GM where she lies (%.2f m)", p.GMM))
+	case !(p.GMAtRestM > 0):
+		against = append(against, fmt.Sprintf("leaves her with no GM where she lies (%.2f m)", p.GMAtRestM))
 	}
 	if !(math.Abs(p.HeelDeg) < math.Abs(rs.HeelDeg)) {
 		against = append(against, fmt.Sprintf("does not reduce the heel (%s)", heelWords(p.HeelDeg)))
@@ -676,6 +702,12 @@ func remedyCautions(r *Remedy, after remedyFigures, loss float64, deckWorse, ope
 			why.say("The weathertight %s would be under water: check it is secured.", o.Name)
 			break
 		}
+	}
+	if r.StagesChecked == RemedyStages && r.StageFail == "" {
+		why.say("Safe at each tenth of the way.")
+	}
+	if tw := remedyTimeWords(r); tw != "" {
+		why.say("%s", tw)
 	}
 	switch r.Kind {
 	case RemedyTransfer:

@@ -171,7 +171,8 @@ func (s *slab) belowClip(p Plane) Immersion {
 // the xy plane: AW = ∬ dA, (SX, SY) = ∬ (x, y) dA and the second moments
 // IXX = ∬ x² dA, IXY = ∬ xy dA, IYY = ∬ y² dA, all about the origin of the
 // ship frame. They are the derivatives of V and the first moments with
-// respect to the plane's A, B and C (see jacobian in equilibrium.go).
+// respect to the plane's A, B and C (see momentRates and Problem.eval in
+// equilibrium.go, which build the solve's Jacobian from them).
 type Immersion struct {
 	V, MX, MY, MZ             float64
 	AW, SX, SY, IXX, IXY, IYY float64

@@ -43,6 +43,11 @@ type Opening struct {
 	Kind         string // free text: "vent", "air pipe", "door", …
 	X, Y, Z      float64
 	Weathertight bool // closed weathertight: does not count as a downflooding point
+	// LeadsTo names the compartment water runs into through it (matched
+	// ignoring case); "" for a space not modelled, a point of downflooding.
+	// Into a compartment already flooded it is no point of progressive
+	// flooding (see leads.go).
+	LeadsTo string
 }
 
 // Vessel is one ship with one loading condition. Build it with NewVessel.
@@ -121,14 +126,21 @@ func NewVessel(v Vessel) (*Vessel, error) {
 		if !(l.Density > 0) || math.IsInf(l.Density, 0) || !(l.Fill <= 1) {
 			return nil, fmt.Errorf("compartment %q: liquid density %v or fill %v out of range", c.Name, l.Density, l.Fill)
 		}
-		vol := l.Fill * c.solid.Volume()
-		p, im := levelForVolume(c.solid, vol, 0, 0)
+		// The contents fill μ of the space below their level (the
+		// structure takes the rest), as the sea would: their level is where
+		// μ × the space below it holds them, and their free surface is μ of
+		// the space's plan there.
+		vol := l.Fill * c.CapacityM3()
+		p, im := levelForVolume(c.solid, vol/c.Permeability, 0, 0)
 		x, y, z := im.Centroid()
 		t := tankLoad{massT: vol * l.Density, x: x, y: y, z: z, level: p}
 		if l.Fill < PressedFullFill && im.AW > 0 {
-			t.fsm = l.Density * (im.IYY - im.SY*im.SY/im.AW)
+			t.fsm = l.Density * c.Permeability * (im.IYY - im.SY*im.SY/im.AW)
 		}
 		v.tanks[i] = t
+	}
+	if err := v.checkLeadsTo(); err != nil {
+		return nil, err
 	}
 	var m float64
 	for _, w := range v.Weights {

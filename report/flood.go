@@ -23,13 +23,16 @@ type Flood struct {
 	HoleFrom   string   // where the hole came from: "command line", "vessel file", …
 	PumpsFrom  string   // where the pumps came from: "command line", "vessel file" or "none"
 	Version    string   // heelwatch's version
+	// Passenger: the vessel is a passenger ship, whose margin line is
+	// watched; on a cargo ship the line is the deck edge alone.
+	Passenger bool
 }
 
 func lowestOpening(p *engine.Position) (engine.OpeningClearance, bool) {
 	var best engine.OpeningClearance
 	found := false
 	for _, o := range p.Openings {
-		if o.Weathertight {
+		if !o.Progressive() {
 			continue
 		}
 		if !found || o.HeightM < best.HeightM {
@@ -80,6 +83,10 @@ func FloodText(w io.Writer, f Flood) error {
 	default:
 		fmt.Fprintf(&b, "  %s\n", sentenceCase(r.EndReason))
 	}
+	for _, s := range r.Spills {
+		fmt.Fprintf(&b, "  %s held %s of %s, which may escape to the sea: report the pollution. Counted so: %s.\n",
+			s.Compartment, num(s.MassT, 1, "t"), s.Liquid, engine.SpillRule)
+	}
 	if r.End == engine.FloodEqualised {
 		fmt.Fprintf(&b, "  Time to equalise: %s (%s s), %s m³ in. The run stops at 1 mm of head (%s);\n  the last millimetre follows the √h law.\n",
 			Duration(r.EqualiseS), num(r.EqualiseS, 0, ""), num(r.FinalWaterM3, 1, ""), Duration(r.EndS))
@@ -96,6 +103,9 @@ func FloodText(w io.Writer, f Flood) error {
 		kind engine.FloodEventKind
 		what string
 	}{{engine.DeckEdgeReached, "deck edge"}, {engine.MarginLineReached, "margin line"}} {
+		if k.kind == engine.MarginLineReached && !f.Passenger {
+			continue // a cargo ship has no margin line: the deck edge is the line
+		}
 		seen := false
 		for _, e := range r.Events {
 			seen = seen || e.Kind == k.kind
@@ -111,7 +121,7 @@ func FloodText(w io.Writer, f Flood) error {
 	for _, s := range r.Table {
 		row := []string{Duration(s.TimeS), num(s.WaterM3, 1, ""), num(s.InflowM3h, 0, ""), num(s.PumpedM3h, 0, ""), num(s.HeadM, 3, ""), num(s.SoundingM, 2, "")}
 		if p := s.Position; p != nil {
-			row = append(row, num(p.HeelDeg, 2, ""), num(p.DraftAftM, 3, ""), num(p.DraftMidM, 3, ""), num(p.DraftFwdM, 3, ""), num(p.DeckEdge.HeightM, 3, ""), num(p.GMM, 3, ""))
+			row = append(row, num(p.HeelDeg, 2, ""), num(p.DraftAftM, 3, ""), num(p.DraftMidM, 3, ""), num(p.DraftFwdM, 3, ""), num(p.DeckEdge.HeightM, 3, ""), num(p.GMUprightM, 3, ""))
 		} else {
 			// No floating position: the flows and levels are not known either.
 			row = append(row[:2], "—", "—", "—", "—", "—", "—", "—", "—", "—", "—")
@@ -119,7 +129,7 @@ func FloodText(w io.Writer, f Flood) error {
 		fmt.Fprintf(tw, "  %s\t%s\n", strings.Join(row, "\t"), tableEvent(s))
 	}
 	tw.Flush()
-	b.WriteString("  (heel + starboard down; deck edge: least height of the deck at side above the water)\n")
+	b.WriteString("  (heel + starboard down; deck edge: least height of the deck at side above the water;\n   GM: upright, per the ship's own weight, the floodwater's Δ·GM kept: one basis with the lost-buoyancy solution)\n")
 
 	fmt.Fprintf(&b, "\nIntermediate stages (of %s m³", num(r.StagesOfM3, 1, ""))
 	switch r.End {
@@ -152,7 +162,7 @@ func FloodText(w io.Writer, f Flood) error {
 			if o, ok := lowestOpening(p); ok {
 				low = num(o.HeightM, 2, "")
 			}
-			row = append(row, num(p.HeelDeg, 2, ""), num(p.DraftAftM, 3, ""), num(p.DraftMidM, 3, ""), num(p.DraftFwdM, 3, ""), num(p.GMM, 3, ""), num(p.DeckEdge.HeightM, 3, ""), low)
+			row = append(row, num(p.HeelDeg, 2, ""), num(p.DraftAftM, 3, ""), num(p.DraftMidM, 3, ""), num(p.DraftFwdM, 3, ""), num(p.GMUprightM, 3, ""), num(p.DeckEdge.HeightM, 3, ""), low)
 		} else {
 			why := "no equilibrium"
 			if s.NoEq != nil {
@@ -187,6 +197,7 @@ func FloodText(w io.Writer, f Flood) error {
 			{"draft mid m", f.DraftMidM, l.DraftMidM, 3, "mm"},
 			{"draft fwd m", f.DraftFwdM, l.DraftFwdM, 3, "mm"},
 			{"heel °", f.HeelDeg, l.HeelDeg, 2, "°"},
+			{"GM upright m", f.GMUprightM, l.GMUprightM, 3, "m"},
 			{"water m³", r.FinalWaterM3, r.LostBuoyancyWaterM3, 1, "m³"},
 		} {
 			d := q.a - q.b
@@ -202,7 +213,7 @@ func FloodText(w io.Writer, f Flood) error {
 			if r.FinalDiffM > 0.005 {
 				verdict = "NOT within"
 			}
-			fmt.Fprintf(&b, "  Largest draft difference %s mm: %s 5 mm. (GM differs between the two methods; Δ·GM agrees.)\n", num(1000*r.FinalDiffM, 2, ""), verdict)
+			fmt.Fprintf(&b, "  Largest draft difference %s mm: %s 5 mm. (GM on one basis: per the ship's own weight, Δ·GM kept.)\n", num(1000*r.FinalDiffM, 2, ""), verdict)
 		} else {
 			b.WriteString("  The run did not equalise: the two differ by the water not let in.\n")
 		}

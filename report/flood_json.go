@@ -28,6 +28,7 @@ type floodDoc struct {
 	SteadyHeadM  Num           `json:"steady_head_m"`
 	PumpsHold    bool          `json:"pumps_hold"`
 	FinalWaterM3 Num           `json:"final_water_m3"`
+	Spills       []SpillDoc    `json:"spills"` // the holed tank's oil or cargo liquid that may escape
 	Events       []floodEvDoc  `json:"events"`
 	Table        []floodRowDoc `json:"table"`
 	Stages       []floodStDoc  `json:"stages"`
@@ -147,7 +148,7 @@ func FloodJSON(w io.Writer, f Flood) error {
 		Hole: floodHoleDoc{AreaM2: Num(r.Hole.AreaM2), XM: Num(r.Hole.XM), YM: Num(r.Hole.YM),
 			ZM: Num(r.Hole.ZM), Cd: Num(r.Hole.Cd), From: f.HoleFrom},
 		PumpM3h: Num(r.PumpM3h), PumpsFrom: f.PumpsFrom, Open: append([]string{}, f.Open...), LimitS: Num(r.LimitS),
-		End: r.End.String(), EndS: Num(r.EndS), EndReason: r.EndReason,
+		End: r.End.String(), EndS: Num(r.EndS), EndReason: r.EndReason, Spills: buildSpills(r.Spills),
 		SteadyHeadM: Num(r.SteadyHeadM), PumpsHold: r.PumpsHoldLevel, FinalWaterM3: Num(r.FinalWaterM3),
 		Events: []floodEvDoc{}, Table: []floodRowDoc{}, Stages: []floodStDoc{}, Trace: []floodRowDoc{},
 		StagesOfM3: Num(r.StagesOfM3), Final: rowDoc(r.Final), LostBuoyancy: posDoc(r.LostBuoyancy),

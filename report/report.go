@@ -261,17 +261,3 @@ func requirementWords(c engine.CriterionResult) string {
 	}
 	return c.Requirement + " (" + c.Note + ")"
 }
-
-// gmWords gives GM where she lies and, when she is heeled, the upright GM
-// beside it: "1.077 m at 11.9° heel (upright 1.000 m)".
-func gmWords(p *engine.Position, upright *float64) string {
-	s := num(p.GMM, 3, "m")
-	if math.Abs(p.HeelDeg) < 0.05 {
-		return s
-	}
-	s += " at " + num(math.Abs(p.HeelDeg), 1, "°") + " heel"
-	if upright != nil {
-		s += " (upright " + num(*upright, 3, "m") + ")"
-	}
-	return s
-}

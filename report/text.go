@@ -22,8 +22,11 @@ func Text(w io.Writer, r Report) error {
 	}
 	e.line()
 
-	if len(r.Open) == 0 {
+	held := r.heldWater()
+	if len(r.Open) == 0 && len(held) == 0 {
 		e.line("Open to the sea: none (intact)")
+	} else if len(r.Open) == 0 {
+		e.line("Open to the sea: none")
 	} else {
 		e.line("Open to the sea: ", plural(len(r.Open), "compartment"))
 		t := table{right: []bool{false, false, true, true}}
@@ -32,8 +35,8 @@ func Text(w io.Writer, r Report) error {
 		}
 		writeLines(e, t.lines("  "))
 	}
-	if held := r.heldWater(); len(held) > 0 {
-		e.line("Partly flooded (water held): ", plural(len(held), "compartment"))
+	if len(held) > 0 {
+		e.line("Flooded to a level (a stage of flooding, water held as added weight): ", plural(len(held), "compartment"))
 		t := table{right: []bool{false, true}}
 		for _, h := range held {
 			t.add(h.Name, num(float64(h.WaterM3), 1, "m³"))
@@ -58,13 +61,17 @@ func Text(w io.Writer, r Report) error {
 		t.add("draft forward", num(p.DraftFwdM, 3, "m"))
 		t.add("trim", TrimWords(p.TrimM))
 		t.add("heel", HeelWords(p.HeelDeg))
-		t.add("GM", gmWords(p, a.UprightGMM))
-		t.add("KM", num(p.KMTM, 3, "m"))
+		t.add(LabelGMUpright, GMUprightWords(p))
+		t.add(LabelGMAtRest, GMAtRestWords(p))
+		t.add("KM upright", num(kmUpright(p), 3, "m"))
 		t.add("KG", num(p.KGM, 3, "m"))
 		t.add("free-surface corr.", num(p.FSCM, 3, "m"))
-		t.add("displacement", num(p.DisplacementT, 1, "t"))
-		t.add("deck edge", clearanceWords(p.DeckEdge))
-		t.add("margin line", clearanceWords(p.MarginLine))
+		for _, row := range displacementRows(p) {
+			t.add(row[0], row[1])
+		}
+		for _, row := range deckLineRows(p, r.Vessel) {
+			t.add(row[0], row[1])
+		}
 		writeLines(e, t.lines("  "))
 		if ml := markLines(r); len(ml) > 0 {
 			e.line()
@@ -81,6 +88,9 @@ func Text(w io.Writer, r Report) error {
 				}
 				if o.Weathertight {
 					note = strings.TrimSpace(note + " weathertight")
+				}
+				if o.IntoFlooded {
+					note = strings.TrimSpace(note + " into " + o.LeadsTo + ", flooded already")
 				}
 				t.add(o.Name, orDash(o.Kind), num(o.HeightM, 3, "m"), note)
 			}
@@ -150,7 +160,7 @@ func Text(w io.Writer, r Report) error {
 		c.add("draft forward", num(h.DraftFwdM, 3, "m"), direct(func() string { return num(p.DraftFwdM, 3, "m") }))
 		c.add("trim", TrimWords(h.TrimM), direct(func() string { return TrimWords(p.TrimM) }))
 		c.add("heel", HeelWords(h.HeelDeg), direct(func() string { return HeelWords(p.HeelDeg) }))
-		c.add("GM", num(h.GMM, 3, "m"), direct(func() string { return num(p.GMM, 3, "m") }))
+		c.add("GM upright", num(h.GMM, 3, "m"), direct(func() string { return num(p.GMUprightM, 3, "m") }))
 		writeLines(e, c.lines("  "))
 	} else {
 		why := a.HandWhy
@@ -172,6 +182,7 @@ func Text(w io.Writer, r Report) error {
 		}
 		writeLines(e, t.lines("  "))
 	}
+	textSpills(e, a.Spills)
 	if r.Remedies != nil {
 		e.line()
 		textRemedies(e, r.Remedies)

@@ -100,8 +100,27 @@ func (l *eventLog) reopen() error {
 	if l.f != nil {
 		l.f.Close()
 	}
-	l.f, l.id, l.torn = f, id, false
+	l.f, l.id, l.torn = f, id, !endsInNewline(l.path, id.Size())
 	return nil
+}
+
+// endsInNewline reports whether the file at path, size bytes long, is
+// empty or ends with a whole line (a session cut off by a power failure
+// may have left a torn one; the first line written then starts afresh).
+func endsInNewline(path string, size int64) bool {
+	if size == 0 {
+		return true
+	}
+	f, err := os.Open(path)
+	if err != nil {
+		return true
+	}
+	defer f.Close()
+	var b [1]byte
+	if _, err := f.ReadAt(b[:], size-1); err != nil {
+		return true
+	}
+	return b[0] == '\n'
 }
 
 // add queues line (a whole line, without its newline) and writes every

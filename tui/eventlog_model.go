@@ -98,7 +98,8 @@ func (m model) retryLog() (tea.Model, tea.Cmd) {
 }
 
 // logWarning is the header's lasting warning while the log file cannot be
-// written ("" while it can), followed by a gap.
+// written ("" while it can), followed by a gap; on a narrow screen it is
+// shorter, so that the heel and GM beside it still fit.
 func (m model) logWarning() string {
 	if m.file == nil {
 		return ""
@@ -107,7 +108,11 @@ func (m model) logWarning() string {
 	if err == nil {
 		return ""
 	}
-	return m.st.Danger.Render("LOG FILE NOT WRITTEN since "+since.Format("15:04")) + "  "
+	text := "LOG FAILING"
+	if m.width >= 100 {
+		text = "LOG NOT WRITTEN since " + since.Format("15:04")
+	}
+	return m.st.Danger.Render(text) + "  "
 }
 
 // smallScreenKey handles a key while the screen is too small for the

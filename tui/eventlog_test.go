@@ -122,7 +122,7 @@ func TestDiskFullKeepsEveryLineWhole(t *testing.T) {
 		if err, _ := lg.failing(); err == nil {
 			t.Fatal("the log does not know it is failing")
 		}
-		if v := m.View(); !strings.Contains(v, "LOG FILE NOT WRITTEN") {
+		if v := m.View(); !strings.Contains(v, "LOG NOT WRITTEN since ") {
 			t.Errorf("no lasting warning in the header while failing:\n%s", v)
 		}
 		if !strings.Contains(strings.Join(m.log, "\n"), "event log file not written") {
@@ -131,7 +131,7 @@ func TestDiskFullKeepsEveryLineWhole(t *testing.T) {
 		m = press(t, m, "u") // undo: one more line while full
 		disk.full = false
 		m = drive(t, m, nil, m.syncLog()) // the retry
-		if v := m.View(); strings.Contains(v, "LOG FILE NOT WRITTEN") {
+		if v := m.View(); strings.Contains(v, "LOG NOT WRITTEN since ") {
 			t.Error("the warning stays after the file recovered")
 		}
 		if !strings.Contains(strings.Join(m.log, "\n"), "event log file written again") {
@@ -216,11 +216,7 @@ func TestLogFileMovedOrDeleted(t *testing.T) {
 // and a FIFO (without blocking) are refused before the dashboard starts.
 func TestLogFileRefusedAtStart(t *testing.T) {
 	dir := t.TempDir()
-	fifo := filepath.Join(dir, "fifo")
-	if err := syscall.Mkfifo(fifo, 0o600); err != nil {
-		t.Fatal(err)
-	}
-	for _, p := range []string{"/proc/heelwatch-cannot/log", dir, fifo, filepath.Join(dir, "no", "such", "dir.log")} {
+	for _, p := range append(specialFiles(t, dir), dir, filepath.Join(dir, "no", "such", "dir.log")) {
 		if err := CheckLogFile(p); err == nil {
 			t.Errorf("CheckLogFile(%s) accepted it", p)
 		}
@@ -256,7 +252,7 @@ func TestTooSmallTakesOnlyQuit(t *testing.T) {
 	}
 	mm, _ := m.Update(tea.KeyMsg{Type: tea.KeyRunes, Runes: []rune("q"), Paste: true})
 	m = mm.(model)
-	if m.seq != seq || len(m.log) != logN || m.sel != sel || m.editing || m.form.on || !allZero(m.damage) {
+	if m.seq != seq || len(m.log) != logN || m.sel != sel || m.mode != modeBrowse || !allZero(m.damage) {
 		t.Errorf("the too-small screen let keys change the state: seq %d→%d, log %d→%d", seq, m.seq, logN, len(m.log))
 	}
 	if after := strings.Join(fileLines(t, path), "\n"); after != before {
@@ -272,14 +268,14 @@ func TestTooSmallTakesOnlyQuit(t *testing.T) {
 func TestNoClipboardProgram(t *testing.T) {
 	m := testModel(t, 100, 30)
 	m = press(t, m, "m") // type an exact permeability
-	if !m.editing {
+	if m.mode != modeMu {
 		t.Fatal("not editing")
 	}
 	if m.input.KeyMap.Paste.Enabled() {
 		t.Error("the permeability field has its clipboard key enabled")
 	}
 	form := press(t, testModel(t, 100, 30), "f") // the flooding run's form
-	if !form.form.on {
+	if form.mode != modeForm {
 		t.Fatal("no form")
 	}
 	for k := range form.form.fields {
@@ -296,5 +292,24 @@ func TestNoClipboardProgram(t *testing.T) {
 	m = mm.(model)
 	if v := m.input.Value(); !strings.HasPrefix(v, "0.6") || strings.ContainsRune(v, 0x1b) {
 		t.Errorf("pasted %q into the field", v)
+	}
+}
+
+// TestLogAfterATornLine: a file left with a torn last line (a power cut in
+// an earlier session) gets the next line on a fresh line.
+func TestLogAfterATornLine(t *testing.T) {
+	path := filepath.Join(t.TempDir(), "watch.log")
+	if err := os.WriteFile(path, []byte("2025-03-14T02:00:00Z  whole\n2025-03-14T02:00:01Z  tor"), 0o644); err != nil {
+		t.Fatal(err)
+	}
+	lg, err := openEventLog(path)
+	if err != nil {
+		t.Fatal(err)
+	}
+	lg.add("2025-03-14T02:30:00Z  next")
+	lg.close()
+	lines := fileLines(t, path)
+	if len(lines) != 3 || lines[2] != "2025-03-14T02:30:00Z  next" {
+		t.Errorf("lines %q", lines)
 	}
 }

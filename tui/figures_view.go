@@ -54,16 +54,28 @@ func (m model) figures() []figure {
 	}
 	trim := figure{label: "Trim", value: metres(math.Abs(p.TrimM)), note: trimSense(p.TrimM),
 		delta: dif(func(q *engine.Position) float64 { return q.TrimM }, 2)}
+	// GM is the upright GM of the condition; where she lies heeled the GZ
+	// slope there is said beside it, and a negative upright GM with a heel
+	// is a loll, in the danger style.
 	gmNote := "KM " + num(p.KMTM, 2) + " m"
-	if up := m.cur.UprightGMM; up != nil && math.Abs(p.HeelDeg) >= 0.05 {
-		// Heeled, GM is that of the heeled waterline; upright tells a list
-		// from a loll.
-		gmNote = "upright " + num(*up, 2) + " m"
+	if math.Abs(p.HeelDeg) >= 0.05 {
+		gmNote = "at rest " + num(p.GMAtRestM, 2) + " m"
 	}
-	gm := figure{label: "GM", value: metres(p.GMM), note: gmNote,
-		delta: dif(func(q *engine.Position) float64 { return q.GMM }, 2), alarm: !(p.GMM > 0)}
+	if p.IsLoll() {
+		gmNote = "LOLL, not a list"
+	}
+	gm := figure{label: "GM upright", value: metres(p.GMUprightM), note: gmNote,
+		delta: dif(func(q *engine.Position) float64 { return q.GMUprightM }, 2), alarm: !(p.GMUprightM > 0)}
+	// On the lost-buoyancy basis the displacement is the ship's weight
+	// without the sea water in flooded spaces: labelled so, and the water
+	// (open spaces and water held) said beside it.
 	disp := figure{label: "Displacement", value: withUnit(num(p.DisplacementT, 0), "t"),
-		delta: dif(func(q *engine.Position) float64 { return q.DisplacementT }, 0)}
+		delta: dif(func(q *engine.Position) float64 { return q.DisplacementT - q.HeldWaterT }, 0)}
+	if w := p.OpenWaterT + p.HeldWaterT; w > 0 {
+		disp.label = "Ship weight"
+		disp.value = withUnit(num(p.DisplacementT-p.HeldWaterT, 0), "t")
+		disp.note = "+" + num(w, 0) + " t water"
+	}
 	out = append(out, heel, trim, gm, disp)
 
 	de := p.DeckEdge

@@ -155,6 +155,7 @@ func (m model) openFind() (tea.Model, tea.Cmd) {
 	}
 	var cmd tea.Cmd
 	m.find, cmd = newFinder(names, order, m.sel, m.st, !m.animate)
+	m.mode = modeFind
 	m.resize()
 	return m, cmd
 }
@@ -170,6 +171,7 @@ func (m model) findKey(msg tea.KeyMsg) (tea.Model, tea.Cmd) {
 	m.sel = m.find.sel
 	if m.find.done {
 		m.find = finder{}
+		m.mode = modeBrowse
 		m.resize()
 	}
 	m.ensureVisible()

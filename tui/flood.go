@@ -5,7 +5,9 @@ import (
 	"strings"
 	"sync/atomic"
 
+	"github.com/charmbracelet/bubbles/progress"
 	tea "github.com/charmbracelet/bubbletea"
+	"github.com/charmbracelet/lipgloss"
 
 	"heelwatch/engine"
 	"heelwatch/report"
@@ -44,7 +46,8 @@ type floodRequest struct {
 // floodPoint is one moment of a run in progress, for the plot.
 type floodPoint struct{ timeS, waterM3 float64 }
 
-// floodState is the flooding run and its panel.
+// floodState is the flooding run and its panel: a child of the dashboard
+// whose view (flood_view.go) draws with what with gives it.
 type floodState struct {
 	show      bool // the panel is on screen
 	seq       int  // the newest request's number
@@ -57,7 +60,16 @@ type floodState struct {
 	track     []floodPoint // the progress so far
 	rep       *engine.FloodReport
 	err       string
-	stage     int // the stage the stage key shows next
+	stage     int // the stage the stage key shows nex
+
+	// What the panel draws with, given by with before each use.
+	v          *engine.Vessel
+	sel        int
+	damage     engine.Damage
+	st         Styles
+	inks       map[ink]lipgloss.Style
+	bar        progress.Model
+	cachedPlot func(w, h int) []string // the plot, drawn again only when it changed
 }
 
 // Messages of a flooding run.
@@ -120,6 +132,15 @@ func floodStale(seq int) func() tea.Msg {
 
 func floodFailed(seq int) func(string) tea.Msg {
 	return func(why string) tea.Msg { return floodStepMsg{seq: seq, err: "engine failure: " + why} }
+}
+
+// with returns the panel drawing for m's vessel, selection, damage state
+// and styles.
+func (f floodState) with(m model) floodState {
+	f.v, f.sel, f.damage, f.st, f.inks, f.bar = m.v, m.sel, m.damage, m.st, m.inks, m.bar
+	g := f
+	f.cachedPlot = func(w, h int) []string { return m.cached(picFloodPlot, w, h, g.plot) }
+	return f
 }
 
 // startFlood starts a run for q, cancelling any older one.
@@ -225,7 +246,7 @@ func (m model) applyStage() (tea.Model, tea.Cmd) {
 	ci := f.req.ci
 	d := cloneDamage(m.damage)
 	d[ci] = engine.SpaceState{Permeability: f.req.base[ci].Permeability, WaterM3: st.WaterM3}
-	what := fmt.Sprintf("%s partly flooded: %s stage of the flooding run, %s m³ held",
+	what := fmt.Sprintf("%s flooded to a level: %s stage of the flooding run, %s m³ held",
 		m.v.Compartments[ci].Name, stageName(st.Fraction), num(st.WaterM3, 1))
 	if st.Fraction >= 1 && f.rep.End == engine.FloodEqualised {
 		// Once the levels have met, the space is open to the sea: the water

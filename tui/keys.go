@@ -22,6 +22,7 @@ type keyMap struct {
 	RunStage              key.Binding // the run's next stage onto the dashboard
 	Remedies              key.Binding // the righting options worked out and shown, or hidden
 	Girder                key.Binding // the hull girder's panel shown or hidden
+	Readings              key.Binding // the draft marks and readings panel shown or hidden
 	Palette               key.Binding
 	Help                  key.Binding
 	Quit                  key.Binding
@@ -53,6 +54,7 @@ func newKeyMap() keyMap {
 		RunStage: key.NewBinding(key.WithKeys("s"), key.WithHelp("s", "stage shown"), key.WithDisabled()),
 		Remedies: key.NewBinding(key.WithKeys("o"), key.WithHelp("o", "righting options")),
 		Girder:   key.NewBinding(key.WithKeys("b"), key.WithHelp("b", "hull girder")),
+		Readings: key.NewBinding(key.WithKeys("r"), key.WithHelp("r", "marks & readings")),
 		Palette:  key.NewBinding(key.WithKeys("c"), key.WithHelp("c", "day/night/mono")),
 		Help:     key.NewBinding(key.WithKeys("?"), key.WithHelp("?", "keys")),
 		Quit:     key.NewBinding(key.WithKeys("q", "ctrl+c"), key.WithHelp("q", "quit")),
@@ -63,7 +65,7 @@ func newKeyMap() keyMap {
 func (k keyMap) ShortHelp() []key.Binding {
 	// ? and q before the rest, so that a narrow bar cuts the others first;
 	// then the righting options, the flooding run, then the pictures.
-	return []key.Binding{k.Move, k.Flood, k.MuUp, k.MuSet, k.Undo, k.Help, k.Quit, k.Remedies, k.HoleRun, k.RunPanel, k.RunStage, k.Picture, k.Hand, k.Girder, k.Find}
+	return []key.Binding{k.Move, k.Flood, k.MuUp, k.MuSet, k.Undo, k.Help, k.Quit, k.Remedies, k.HoleRun, k.RunPanel, k.RunStage, k.Picture, k.Hand, k.Girder, k.Readings, k.Find}
 }
 
 // FullHelp is the help shown with `?`, in three columns that fit 80
@@ -83,7 +85,8 @@ func (k keyMap) FullHelp() [][]key.Binding {
 			say(k.Find, "/", "find by name"), say(k.Picture, "tab", "next picture")},
 		{say(k.Flood, "space", "open to sea / intact"), say(k.MuUp, "+ −", "permeability ±0.05"),
 			say(k.MuSet, "m", "type a permeability"), k.Undo, k.Reset, stage,
-			say(k.Remedies, "o", "righting options"), say(k.Girder, "b", "hull girder, l limits")},
+			say(k.Remedies, "o", "righting options"), say(k.Girder, "b", "hull girder, l limits"),
+			say(k.Readings, "r", "draft readings, n new")},
 		{say(k.HoleRun, "f", "hole & pumps"), say(k.RunPanel, "t", "run panel"), say(k.Hand, "h", "hand working on/off"),
 			say(k.WorkUp, "[ ]", "scroll working/criteria"), k.Report,
 			say(k.Palette, "c", "day / night / mono"), say(k.Help, "?", "close this help"),

@@ -66,12 +66,12 @@ func (m *model) resize() {
 	default:
 		l.logLines = 2
 	}
-	switch {
-	case m.form.on:
+	switch m.mode {
+	case modeForm:
 		l.helpH = formLines
-	case m.editing:
+	case modeMu:
 		l.helpH = 2
-	case m.find.on:
+	case modeFind:
 		l.helpH = findLines
 	default:
 		l.helpH = len(m.helpLines())
@@ -222,7 +222,7 @@ func (m model) flagRoom() (flagH, sheetH int) {
 	if l.bodyH < 22 {
 		least = 6
 	}
-	if m.danger() && !m.showHand {
+	if m.danger() && !m.hand.show {
 		least = 0
 	}
 	flagH = max(l.flagH, min(m.flagsNeed(l.rightW), room-least))

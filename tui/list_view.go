@@ -195,7 +195,7 @@ func (m model) detailView(w int) []string {
 	case "OPEN":
 		l2 = st.Open.Render("open to the sea") + st.Text.Render(", μ "+muText(mu)+": "+num(mu*vol, 0)+" m³ of sea")
 	case "part":
-		l2 = st.Open.Render("partly flooded") + st.Text.Render(": "+num(m.damage[i].WaterM3, 0)+" m³ of water held")
+		l2 = st.Open.Render("flooded to a level") + st.Text.Render(": "+num(m.damage[i].WaterM3, 0)+" m³ held")
 	default:
 		l2 = st.Text.Render("intact, μ " + muText(mu) + " if opened")
 		if c.Liquid != nil && c.Liquid.Fill > 0 {

@@ -75,14 +75,15 @@ type model struct {
 	animate  bool // false in tests: no spinner ticks
 	input    textinput.Model
 	bar      progress.Model // a flooding run's progress, drawn with ViewAs
-	editing  bool
 	inputErr string
+	mode     mode // what the keys work on
 
-	form   floodForm   // the hole-and-pumps form of a flooding run
-	flood  floodState  // the flooding run and its panel
-	rem    remedyState // the righting options and their panel
-	girder girderPanel // the hull girder's shear force and bending moment (strength_view.go)
-	find   finder      // the type-to-find of the compartment list
+	form   floodForm    // the hole-and-pumps form of a flooding run
+	flood  floodState   // the flooding run and its panel
+	rem    remedyState  // the righting options and their panel
+	girder girderPanel  // the hull girder's shear force and bending moment (strength_view.go)
+	rd     readingPanel // draft marks, readings by hand and their diagnosis (reading_panel.go)
+	find   finder       // the type-to-find of the compartment list (find.go)
 
 	rend    *lipgloss.Renderer
 	palette int
@@ -111,13 +112,23 @@ type model struct {
 	sel        int
 	offset     int
 	picture    int
-	showHand   bool
-	handScroll int // the first step of the hand working shown
-	textScroll int // the first line of the flags and criteria shown
+	hand       handPanel // the hand method's panel
+	textScroll int       // the first line of the flags and criteria shown
 	width      int
 	height     int
 	lay        layout
+	pics       *pictureCache // the pictures as last drawn (View's only state)
 }
+
+// mode is what the keys work on: one value routes every key.
+type mode int
+
+const (
+	modeBrowse mode = iota // the list, the panels and their keys
+	modeForm               // the flooding run's form (floodForm.update)
+	modeMu                 // a permeability being typed (editKey)
+	modeFind               // a compartment's name being typed (finder.update)
+)
 
 type undoEntry struct {
 	damage engine.Damage
@@ -137,6 +148,7 @@ const (
 func newModel(v *engine.Vessel, info *vessels.Info, opts Options) model {
 	v, info, opts = plainNames(v), plainInfo(info), plainOptions(opts)
 	m := model{
+		pics:    &pictureCache{},
 		v:       v,
 		opts:    opts,
 		now:     time.Now,
@@ -224,6 +236,7 @@ func (m *model) setStyles() {
 	m.input.TextStyle = m.st.Value
 	m.bar = progress.New(progress.WithSolidFill(m.st.BarColor), progress.WithColorProfile(m.rend.ColorProfile()))
 	m.bar.EmptyColor = ""
+	m.form.st = m.st
 	for k := range m.form.fields {
 		m.form.fields[k].PromptStyle, m.form.fields[k].TextStyle = m.st.Prompt, m.st.Value
 	}
@@ -232,9 +245,9 @@ func (m *model) setStyles() {
 // Init computes the intact condition, the reference for every change.
 func (m model) Init() tea.Cmd {
 	v := m.v
-	return tea.Batch(newest(0, nil, nil,
+	return newest(0, nil, nil,
 		func(why string) tea.Msg { return resultMsg{seq: 0, failure: why} },
-		func() tea.Msg { return baselineMsg{engine.Assess(v, v.Intact())} }), m.startSpin())
+		func() tea.Msg { return baselineMsg{engine.Assess(v, v.Intact())} })
 }
 
 // pending reports whether the figures shown are not yet those of the
@@ -254,6 +267,9 @@ func (m model) Update(msg tea.Msg) (tea.Model, tea.Cmd) {
 
 // update handles one message.
 func (m model) update(msg tea.Msg) (tea.Model, tea.Cmd) {
+	if mm, cmd, ok := m.readingMsg(msg); ok {
+		return mm, cmd
+	}
 	switch msg := msg.(type) {
 	case tea.WindowSizeMsg:
 		m.width, m.height = msg.Width, msg.Height
@@ -276,7 +292,10 @@ func (m model) update(msg tea.Msg) (tea.Model, tea.Cmd) {
 			file += ", " + m.condition
 		}
 		file += ", all intact"
-		return m, tea.Batch(m.addLogPair(m.now(), what+" → "+m.outcome(&a, false), file+" → "+m.outcome(&a, true)), m.startCmd())
+		logged := m.addLogPair(m.now(), what+" → "+m.outcome(&a, false), file+" → "+m.outcome(&a, true))
+		var start tea.Cmd
+		m, start = m.startCase() // the case given on the command line, if any
+		return m, tea.Batch(logged, start)
 
 	case resultMsg:
 		return m.takeResult(msg)
@@ -312,6 +331,7 @@ func (m model) update(msg tea.Msg) (tea.Model, tea.Cmd) {
 		return m.takeRemedies(msg)
 
 	case tea.KeyMsg:
+		msg = plainKey(msg)
 		if m.lay.small {
 			return m.smallScreenKey(msg)
 		}
@@ -328,12 +348,12 @@ func (m model) update(msg tea.Msg) (tea.Model, tea.Cmd) {
 			}
 			return cur, tea.Batch(cmds...)
 		}
-		switch {
-		case m.form.on:
+		switch m.mode {
+		case modeForm:
 			return m.formKey(msg)
-		case m.editing:
+		case modeMu:
 			return m.editKey(msg)
-		case m.find.on:
+		case modeFind:
 			return m.findKey(msg)
 		}
 		return m.key(msg)
@@ -343,6 +363,14 @@ func (m model) update(msg tea.Msg) (tea.Model, tea.Cmd) {
 
 func (m model) key(msg tea.KeyMsg) (tea.Model, tea.Cmd) {
 	k := m.keys
+	if !m.rem.show || key.Matches(msg, k.Hand) {
+		// The hand panel's own keys (the righting options' panel, when
+		// shown, takes the scroll keys first).
+		var took bool
+		if m.hand, took = m.hand.with(m.cur, m.st).update(msg, k); took {
+			return m, nil
+		}
+	}
 	n := len(m.v.Compartments)
 	switch {
 	case key.Matches(msg, k.Quit):
@@ -363,22 +391,12 @@ func (m model) key(msg tea.KeyMsg) (tea.Model, tea.Cmd) {
 		return m.openFind()
 	case key.Matches(msg, k.Picture):
 		m.picture = (m.picture + 1) % numPictures
-	case key.Matches(msg, k.Hand):
-		m.showHand = !m.showHand
 	case key.Matches(msg, k.WorkUp), key.Matches(msg, k.WorkDown):
-		step := 3
+		step := scrollStep
 		if key.Matches(msg, k.WorkUp) {
-			step = -3
+			step = -scrollStep
 		}
-		// The righting options while their panel is shown, else the hand
-		// working while it is shown, else the flags and criteria.
-		if m.rem.show {
-			m.rem.scroll = min(max(0, m.rem.scroll+step), m.remedyScrollMax())
-		} else if m.showHand && m.cur != nil && m.cur.Hand != nil {
-			m.handScroll = min(max(0, m.handScroll+step), max(0, len(m.cur.Hand.Steps)-1))
-		} else {
-			m.textScroll = min(max(0, m.textScroll+step), 200)
-		}
+		m.scroll(step)
 	case key.Matches(msg, k.Palette):
 		m.palette = (m.palette + 1) % len(paletteNames)
 		m.setStyles()
@@ -442,7 +460,7 @@ func (m model) key(msg tea.KeyMsg) (tea.Model, tea.Cmd) {
 		}
 		return m.setMu(mu)
 	case key.Matches(msg, k.MuSet):
-		m.editing = true
+		m.mode = modeMu
 		m.inputErr = ""
 		m.input.SetValue("")
 		m.input.Placeholder = muText(m.mu(m.damage, m.sel))
@@ -467,6 +485,30 @@ func (m model) key(msg tea.KeyMsg) (tea.Model, tea.Cmd) {
 		return m.apply(m.v.Intact(), "all compartments intact (reset)")
 	}
 	return m, nil
+}
+
+// scroll moves by step lines (up when negative) the text the scroll keys
+// work on: the righting options while their panel is shown, else the hand
+// working while it is shown (a step at a time), else the flags and
+// criteria where they are on screen.
+func (m *model) scroll(step int) {
+	switch {
+	case m.rem.show:
+		head, body, foot := m.rem.with(*m).parts(m.width, m.lay.bodyH)
+		m.rem.scroll = scrolled(m.rem.scroll, body, m.lay.bodyH-len(head)-len(foot), step)
+	case m.cur != nil:
+		w, h := m.criteriaBox()
+		m.textScroll = scrolled(m.textScroll, m.criteriaLines(w, true), h-1, step)
+	}
+}
+
+// criteriaBox is the size the flags and criteria are drawn in: the wide
+// screen's third column, else the narrow screen's sheet.
+func (m model) criteriaBox() (w, h int) {
+	if m.lay.wide {
+		return m.lay.thirdW, m.lay.topH
+	}
+	return m.lay.rightW, m.lay.sheetH
 }
 
 // move selects the compartment steps rows down the list (up when
@@ -494,7 +536,7 @@ func (m *model) move(steps int) {
 func (m model) editKey(msg tea.KeyMsg) (tea.Model, tea.Cmd) {
 	switch msg.Type {
 	case tea.KeyEsc:
-		m.editing = false
+		m.mode = modeBrowse
 		m.input.Blur()
 		return m, nil
 	case tea.KeyCtrlC:
@@ -505,7 +547,7 @@ func (m model) editKey(msg tea.KeyMsg) (tea.Model, tea.Cmd) {
 			m.inputErr = err.Error()
 			return m, nil
 		}
-		m.editing = false
+		m.mode = modeBrowse
 		m.input.Blur()
 		if mu == m.mu(m.damage, m.sel) {
 			return m, nil

@@ -2,7 +2,7 @@ package tui
 
 import (
 	"heelwatch/engine"
-	"heelwatch/plaintext"
+	"heelwatch/report/plaintext"
 	"heelwatch/vessels"
 )
 

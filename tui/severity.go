@@ -55,20 +55,28 @@ func (m model) severityWord() string {
 	return st.Dim.Render("no flags")
 }
 
-// handCaveatLines are the hand method's caveats, wrapped to w, each with
-// the mark of its severity.
-func (m model) handCaveatLines(w int) []string {
+// caveatLines are the hand method's caveats, wrapped to w, each with the
+// mark of its severity: shown only where the hand working is.
+func (hp handPanel) caveatLines(w int) []string {
 	var out []string
-	for _, f := range m.derived.hand {
+	for _, f := range hp.caveats {
 		for k, l := range wrap(f.Message, w-2) {
 			if k == 0 {
-				out = append(out, flagMark(m.st, f)+m.st.Text.Render(l))
+				out = append(out, flagMark(hp.st, f)+hp.st.Text.Render(l))
 			} else {
-				out = append(out, "  "+m.st.Text.Render(l))
+				out = append(out, "  "+hp.st.Text.Render(l))
 			}
 		}
 	}
 	return out
+}
+
+// handShown is the hand method's panel with the figures shown and the
+// hand method's caveats among their flags.
+func (m model) handShown() handPanel {
+	hp := m.hand.with(m.cur, m.st)
+	hp.caveats = m.derived.hand
+	return hp
 }
 
 // danger reports whether a flag about the ship is of danger.

@@ -5,7 +5,7 @@ import (
 	"strings"
 	"unicode"
 
-	"heelwatch/plaintext"
+	"heelwatch/report/plaintext"
 )
 
 // checkName reports a name that a terminal or a command line could not

@@ -16,7 +16,8 @@ import (
 const FormatVersion = 1
 
 // Info is what a vessel file says beyond the engine's values: text for the
-// screen and the flooding-over-time data the engine has no types for yet.
+// screen, and each compartment's hole (an engine.Hole) and pumps, which a
+// flooding run takes when it is not told otherwise (ResolveFlood).
 type Info struct {
 	File        string // the file name used in messages ("bundled/barge.toml" for a bundled one)
 	Bundled     string // the bundled name ("barge"), "" for a file of the user's
@@ -125,7 +126,9 @@ func (r *reader) vessel(root *table) (*engine.Vessel, *Info) {
 
 	weights := r.weights(root.entries("weight", "one item of the loading condition"), hull)
 	comps, cinfo := r.compartments(root.entries("compartment", "one space of the ship"), hull)
-	openings := r.openings(root.entries("opening", "a point where water would spread"))
+	openingTables := root.entries("opening", "a point where water would spread")
+	openings := r.openings(openingTables)
+	r.checkLeadsTo(openingTables, openings, comps)
 	if hull != nil && (marginOK && margin < hull.DepthM || !root.has("margin_line_depth")) {
 		r.marginBelowKeel(hull, margin, marginOK)
 	}
@@ -439,10 +442,11 @@ func (r *reader) compartments(ts []*table, hull *engine.Hull) ([]*engine.Compart
 		}
 		c.Use = use
 		c.Permeability = mu
+		c.PumpM3h = ci.PumpM3h
 		if liquid != nil {
 			if liquid.volumeM3 >= 0 {
-				if vol := c.Volume(); liquid.volumeM3 > vol*(1+1e-9) {
-					r.addf(t.keyPath("fill_m3"), "%g m³ is more than the tank holds (%.1f m³ inside the hull)", liquid.volumeM3, vol)
+				if vol := c.CapacityM3(); liquid.volumeM3 > vol*(1+1e-9) {
+					r.addf(t.keyPath("fill_m3"), "%g m³ is more than the tank holds (%.1f m³: permeability %g × %.1f m³ inside the hull)", liquid.volumeM3, vol, c.Permeability, c.Volume())
 				} else {
 					liquid.Fill = math.Min(liquid.volumeM3/vol, 1)
 				}
@@ -635,6 +639,7 @@ func (r *reader) openings(ts []*table) []engine.Opening {
 			o.Kind = k
 		}
 		o.Weathertight, _ = t.boolean("closed_weathertight")
+		o.LeadsTo = r.leadsTo(t)
 		t.finish()
 		out = append(out, o)
 	}

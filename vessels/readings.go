@@ -146,6 +146,8 @@ func (r *reader) markReadings(t *table, v *engine.Vessel) []engine.MarkReading {
 		}
 		out = append(out, engine.MarkReading{Mark: idx, DraftM: d})
 	}
+	// In the vessel's order of marks, as the crew goes round them.
+	sort.Slice(out, func(i, j int) bool { return out[i].Mark < out[j].Mark })
 	return out
 }
 
@@ -189,4 +191,22 @@ func (r *reader) levelReadings(t *table, v *engine.Vessel) []engine.LevelReading
 		out = append(out, engine.LevelReading{Compartment: idx, LevelM: l})
 	}
 	return out
+}
+
+// TrendOptions returns what the file says of holes and pumps, for the
+// trend of a diagnosis (engine.EstimateTrend).
+func (info *Info) TrendOptions() engine.TrendOptions {
+	o := engine.TrendOptions{Holes: map[int]engine.Hole{}, PumpsM3h: map[int]float64{}}
+	if info == nil {
+		return o
+	}
+	for i, c := range info.Compartments {
+		if c.Hole != nil {
+			o.Holes[i] = *c.Hole
+		}
+		if c.PumpM3h > 0 {
+			o.PumpsM3h[i] = c.PumpM3h
+		}
+	}
+	return o
 }

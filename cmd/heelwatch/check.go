@@ -100,7 +100,7 @@ func summarise(w io.Writer, v *engine.Vessel, info *vessels.Info) int {
 		status = exitNoEq
 	} else {
 		fmt.Fprintf(tw, "  intact\tdisplacement %.1f t; drafts aft %.3f m, amidships %.3f m, forward %.3f m\n", pos.DisplacementT, pos.DraftAftM, pos.DraftMidM, pos.DraftFwdM)
-		fmt.Fprintf(tw, "  \ttrim %s; heel %s; GM %.3f m (KM %.3f m, KG %.3f m, FSC %.3f m)\n", report.TrimWords(pos.TrimM), report.HeelWords(pos.HeelDeg), pos.GMM, pos.KMTM, pos.KGM, pos.FSCM)
+		fmt.Fprintf(tw, "  \ttrim %s; heel %s; GM upright %.3f m, where she lies %.3f m (KG %.3f m, FSC %.3f m)\n", report.TrimWords(pos.TrimM), report.HeelWords(pos.HeelDeg), pos.GMUprightM, pos.GMAtRestM, pos.KGM, pos.FSCM)
 		fmt.Fprintf(tw, "  freeboard\tleast to deck edge %.3f m at x %.1f m, %s\n", pos.DeckEdge.HeightM, pos.DeckEdge.XM, pos.DeckEdge.Side)
 		// Not a fault of the file's form, but worth a second look: an
 		// opening under water with the ship intact is most often a typing

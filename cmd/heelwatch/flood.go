@@ -174,7 +174,7 @@ func runFlood(args []string, stdout, stderr io.Writer) int {
 	if err != nil {
 		return fail("%v", err)
 	}
-	fr := report.Flood{Run: rep, VesselFile: source(info), Open: inOrderGiven(v, open), HoleFrom: fc.HoleFrom, PumpsFrom: fc.PumpsFrom, Version: version}
+	fr := report.Flood{Run: rep, VesselFile: source(info), Open: inOrderGiven(v, open), HoleFrom: fc.HoleFrom, PumpsFrom: fc.PumpsFrom, Version: version, Passenger: v.Passenger()}
 	if *format == "json" {
 		err = report.FloodJSON(stdout, fr)
 	} else {

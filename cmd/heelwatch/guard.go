@@ -6,7 +6,7 @@ import (
 	"runtime/debug"
 	"unicode/utf8"
 
-	"heelwatch/plaintext"
+	"heelwatch/report/plaintext"
 )
 
 // guarded runs the program with its output through outputGuards and turns

@@ -96,3 +96,23 @@ func TestFloodArgumentsThatCrashedOrPassed(t *testing.T) {
 		}
 	}
 }
+
+// TestHalfPercentOnTheCommandLine: --perm "X=0.5%" is 0.005 in the text,
+// in the hand working and in the JSON (it was shown as 0.01).
+func TestHalfPercentOnTheCommandLine(t *testing.T) {
+	args := []string{"solve", "--vessel", "barge", "--open", "Hold aft", "--perm", "Hold aft=0.5%"}
+	var out, errOut bytes.Buffer
+	if code := guarded(args, &out, &errOut); code != exitOK {
+		t.Fatalf("exit %d: %s", code, errOut.String())
+	}
+	if s := out.String(); !strings.Contains(s, "μ 0.005") || !strings.Contains(s, "0.0050×") || strings.Contains(s, "μ 0.01") {
+		t.Errorf("text:\n%s", s)
+	}
+	out.Reset()
+	if code := guarded(append(args, "--format", "json"), &out, &errOut); code != exitOK {
+		t.Fatalf("exit %d: %s", code, errOut.String())
+	}
+	if s := out.String(); !strings.Contains(s, `"permeability": 0.005`) {
+		t.Errorf("JSON:\n%s", s)
+	}
+}

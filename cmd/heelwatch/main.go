@@ -7,6 +7,7 @@
 //	heelwatch check FILE            validate a vessel file and summarise it
 //	heelwatch vessels               the bundled vessels
 //	heelwatch flood …               flooding through a hole over time
+//	heelwatch diagnose --readings R what is flooding, from the crew's readings
 //
 // Run any command with --help for its flags. Exit status: 0 done, 1 bad
 // input (a vessel file that cannot be used), 2 bad usage, 3 no equilibrium
@@ -54,6 +55,8 @@ Usage:
   heelwatch check [FILE|NAME ...]    validate vessel files and summarise them
   heelwatch vessels [NAME]           list the bundled vessels, or print one's file
   heelwatch flood [flags]            flooding through a hole over time
+  heelwatch diagnose --readings FILE what is flooding, from the crew's readings
+  heelwatch drill SCENARIO           a damage-control exercise (--run: headless)
   heelwatch help [COMMAND]           help on a command
 
 Flags:
@@ -123,6 +126,10 @@ func run(args []string, stdout, stderr io.Writer) int {
 		return runVessels(rest, stdout, stderr)
 	case "flood":
 		return runFlood(withVessel(rest), stdout, stderr)
+	case "diagnose":
+		return runDiagnose(withVessel(rest), stdout, stderr)
+	case "drill":
+		return runDrill(rest, stdout, stderr)
 	case "help":
 		if len(rest) == 0 {
 			fmt.Fprintf(stdout, mainHelp, vessels.Default)
@@ -131,10 +138,10 @@ func run(args []string, stdout, stderr io.Writer) int {
 		if len(rest) == 1 && rest[0] != "help" {
 			return run([]string{rest[0], "--help"}, stdout, stderr)
 		}
-		fmt.Fprintf(stderr, "heelwatch help: name one command: solve, check, vessels or flood\n")
+		fmt.Fprintf(stderr, "heelwatch help: name one command: solve, check, vessels, flood, diagnose or drill\n")
 		return exitUsage
 	}
-	fmt.Fprintf(stderr, "heelwatch: no command %q; the commands are solve, check, vessels, flood and help\n", cmd)
+	fmt.Fprintf(stderr, "heelwatch: no command %q; the commands are solve, check, vessels, flood, diagnose, drill and help\n", cmd)
 	return exitUsage
 }
 

@@ -28,12 +28,25 @@ Flags:
                       tank on the high side, a low-side tank pumped out, liquid
                       moved to the mirror tank; with negative upright GM (a loll)
                       only options that lower G. Each is solved from the hull
-                      geometry; they are options to weigh, not orders.
+                      geometry at every tenth of its amount and is advisable
+                      only if she is safe at each step and ends with positive
+                      upright GM; the note says how long it takes at the
+                      file's pump rates. Options to weigh, not orders.
   --format F          text (default), json or markdown
 
 The answer is the direct solution from the hull geometry at the actual heel
 and trim, with the hand method (lost buoyancy, small angles) beside it where
 it applies, the flags, and the criteria the vessel is held to.
+
+GM is the upright GM (she brought upright, same displacement, free trim,
+free-surface corrected); the GM where she lies, the GZ slope at her heel, is
+shown second. A negative upright GM with a heel is a loll. GM and
+displacement are per the ship's own weight; the water in flooded spaces is
+shown beside it. A tank's capacity is μ × its volume and its fill a fraction
+of that; a holed tank loses its contents, and oil lost is listed as spills.
+An opening into a space flooded already (leads_to) is no point of
+progressive flooding. Within 5° of upright each criterion is judged on the
+worse side of the GZ curve. The margin line is shown on passenger ships only.
 
 Exit status: 0 solved; 1 bad vessel file; 2 bad usage (an unknown compartment,
 a permeability out of range); 3 no equilibrium (she sinks or capsizes).
