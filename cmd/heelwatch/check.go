@@ -25,7 +25,7 @@ second look at the model, with WARNING where it finds something to mend:
 the intact criteria (pass or FAIL, figure and margin), the hull volume
 below the deck that no compartment holds (a warning above 1 %%), and holes
 that are not on the shell (more than 0.05 m from it) or not in their
-compartment.
+compartment; and the openings that lead to no compartment (no leads_to).
 
 Exit status: 0 every file is good and floats intact; 1 a file has problems;
 2 bad usage; 3 a good file whose loading condition does not float intact.

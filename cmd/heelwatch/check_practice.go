@@ -27,7 +27,9 @@ const (
 // she is held to (a ship that fails them opens the dashboard in danger);
 // the hull volume below the deck that no compartment holds (buoyancy that
 // nothing can flood); holes that are not on the shell (the sea reaches an
-// inner bulkhead only through another space).
+// inner bulkhead only through another space); openings that name no
+// compartment they lead to (each counts as a point of downflooding, even
+// into a space that is flooded already).
 func practice(w io.Writer, v *engine.Vessel, info *vessels.Info) {
 	tw := tabwriter.NewWriter(w, 0, 0, 2, ' ', 0)
 	defer tw.Flush()
@@ -99,8 +101,26 @@ func practice(w io.Writer, v *engine.Vessel, info *vessels.Info) {
 	switch {
 	case holes == 0:
 		fmt.Fprintf(tw, "  holes\tnone in the file\n")
+	case off == 0 && holes == 1:
+		fmt.Fprintf(tw, "  holes\t1 hole, on the shell\n")
 	case off == 0:
-		fmt.Fprintf(tw, "  holes\t%s, all on the shell\n", plural(holes, "hole"))
+		fmt.Fprintf(tw, "  holes\t%d holes, all on the shell\n", holes)
+	}
+
+	var nowhere []string
+	for _, o := range v.Openings {
+		if strings.TrimSpace(o.LeadsTo) == "" {
+			nowhere = append(nowhere, o.Name)
+		}
+	}
+	switch {
+	case len(v.Openings) == 0:
+		fmt.Fprintf(tw, "  leads to\tno openings in the file\n")
+	case len(nowhere) == 0:
+		fmt.Fprintf(tw, "  leads to\tevery opening names the compartment it lets water into\n")
+	default:
+		fmt.Fprintf(tw, "  leads to\t%d of %d openings lead to no compartment (no leads_to: a space not modelled, a point of downflooding): %s\n",
+			len(nowhere), len(v.Openings), strings.Join(nowhere, ", "))
 	}
 }
 

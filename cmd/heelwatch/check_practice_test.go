@@ -30,13 +30,22 @@ func TestCheckReportsPractice(t *testing.T) {
 		"intact criteria  ", "pass  area under GZ from 0° to 30°",
 		"0.0 m³ (0.00 %) held by no compartment",
 		`the hole into "2 wing void S" at x 40.00, y 6.00, z 3.00 m is 2.00 m from the shell`,
+		"every opening names the compartment it lets water into",
 	} {
 		if !strings.Contains(out, want) {
 			t.Errorf("check lacks %q:\n%s", want, out)
 		}
 	}
+	// The barge's vent without its leads_to leads nowhere.
+	nowhere := strings.Replace(moved, "leads_to = \"2 wing void S\"\n", "", 1)
+	if err := os.WriteFile(path, []byte(nowhere), 0o644); err != nil {
+		t.Fatal(err)
+	}
+	if _, out, _ := heelwatch(t, "check", path); !strings.Contains(out, "1 of 5 openings lead to no compartment") || !strings.Contains(out, "2 wing void vent S") {
+		t.Errorf("check does not say the vent leads nowhere:\n%s", out)
+	}
 	_, out, _ = heelwatch(t, "check", "barge", "ferry", "freighter")
-	if strings.Contains(out, "WARNING") || strings.Count(out, "all on the shell") != 3 {
+	if strings.Contains(out, "WARNING") || strings.Count(out, "on the shell") != 3 {
 		t.Errorf("the bundled ships are not all sound models:\n%s", out)
 	}
 }
