@@ -9,15 +9,3 @@ import "strings"
 func SameName(a, b string) bool {
 	return strings.EqualFold(strings.TrimSpace(a), strings.TrimSpace(b))
 }
-
-// CompartmentIndex returns the index of v's compartment called name,
-// matched as SameName matches, and whether there is one. The vessel file
-// allows no two names that differ only in case, so the match is unique.
-func (v *Vessel) CompartmentIndex(name string) (int, bool) {
-	for i, c := range v.Compartments {
-		if SameName(c.Name, name) {
-			return i, true
-		}
-	}
-	return -1, false
-}

@@ -18,7 +18,8 @@ func startModel(t testing.TB, w, h int, open ...string) model {
 	v, info := ship(t)
 	d := v.Intact()
 	for _, n := range open {
-		i, ok := v.CompartmentIndex(n)
+		i := v.CompartmentIndex(n)
+		ok := i >= 0
 		if !ok {
 			t.Fatalf("no compartment %q", n)
 		}

@@ -13,8 +13,8 @@ import (
 func TestDashboardStartsWithTheCaseGiven(t *testing.T) {
 	v, info := ship(t)
 	d := v.Intact()
-	w2s, _ := v.CompartmentIndex("wing tank 2 s")
-	db2s, _ := v.CompartmentIndex("DB 2 S")
+	w2s := v.CompartmentIndex("wing tank 2 s")
+	db2s := v.CompartmentIndex("DB 2 S")
 	d[w2s].Open, d[db2s].Open = true, true
 	d[db2s].Permeability = 0.9
 	m := newModel(v, info, Options{Palette: "day", Start: d})

@@ -70,8 +70,9 @@ func runFlood(args []string, stdout, stderr io.Writer) int {
 	var holes, pumps pumpFlag
 	fs.Var(&holes, "hole", "")
 	fs.Var(&pumps, "pump", "")
-	var open listFlag
+	var open, conns listFlag
 	fs.Var(&open, "open", "")
+	fs.Var(&conns, "connection", "")
 	cdText := fs.String("cd", "", "")
 	limit := fs.Duration("limit", 24*time.Hour, "")
 	criteria := fs.Bool("criteria", true, "")
@@ -110,7 +111,11 @@ func runFlood(args []string, stdout, stderr io.Writer) int {
 	if status != exitOK {
 		return status
 	}
-	index := v.CompartmentIndex // names ignore case
+	v, msg := applyConnections(v, conns)
+	if msg != "" {
+		return fail("%s", msg)
+	}
+	index := func(name string) (int, bool) { return compartmentNamed(v, name) } // names ignore case
 	ask := vessels.FloodAsk{Compartment: -1, AreaM2: math.NaN(), ZM: math.NaN(), Cd: cd,
 		LimitS: limit.Seconds(), Criteria: *criteria, By: "command line"}
 	for _, p := range pumps {
@@ -175,6 +180,9 @@ func runFlood(args []string, stdout, stderr io.Writer) int {
 		return fail("%v", err)
 	}
 	fr := report.Flood{Run: rep, VesselFile: source(info), Open: inOrderGiven(v, open), HoleFrom: fc.HoleFrom, PumpsFrom: fc.PumpsFrom, Version: version, Passenger: v.Passenger()}
+	if fr.Network, err = floodNetwork(c, rep); err != nil {
+		return fail("%v", err)
+	}
 	if *format == "json" {
 		err = report.FloodJSON(stdout, fr)
 	} else {
@@ -183,6 +191,10 @@ func runFlood(args []string, stdout, stderr io.Writer) int {
 	if err != nil {
 		fmt.Fprintln(stderr, "heelwatch flood: writing the report:", err)
 		return exitFailed
+	}
+	if n := fr.Network; n != nil && (n.End == engine.FloodSinks || n.End == engine.FloodCapsizes) {
+		fmt.Fprintf(stderr, "heelwatch flood: through the ship: %s\n", n.EndReason)
+		return exitNoEq
 	}
 	switch rep.End {
 	case engine.FloodSinks, engine.FloodCapsizes:

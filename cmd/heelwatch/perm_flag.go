@@ -1,6 +1,10 @@
 package main
 
-import "strings"
+import (
+	"strings"
+
+	"heelwatch/engine"
+)
 
 // permFlag is --perm: NAME=μ items, the flag repeated or the items
 // separated by commas. A comma is also a decimal mark ("Hold 2=0,85", as
@@ -27,4 +31,11 @@ func (p *permFlag) Set(s string) error {
 		}
 	}
 	return nil
+}
+
+// compartmentNamed is the index of v's compartment called name, matched
+// ignoring case (conventions, "Names"), and whether there is one.
+func compartmentNamed(v *engine.Vessel, name string) (int, bool) {
+	i := v.CompartmentIndex(strings.TrimSpace(name))
+	return i, i >= 0
 }
