@@ -430,17 +430,7 @@ func (m model) key(msg tea.KeyMsg) (tea.Model, tea.Cmd) {
 		m.girder, cmd = m.girder.update(msg)
 		return m, cmd
 	case key.Matches(msg, k.RunPanel):
-		if m.rem.show {
-			// The righting options give way to the run's panel.
-			m.rem.show = false
-			m.flood.show = true
-			return m, nil
-		}
-		if m.flood.show {
-			m.flood.show = false
-			return m, m.stopFlood()
-		}
-		m.flood.show = true
+		return m.runPanelKey()
 	case n == 0:
 		return m, nil
 	case key.Matches(msg, k.HoleRun):
@@ -448,29 +438,11 @@ func (m model) key(msg tea.KeyMsg) (tea.Model, tea.Cmd) {
 	case key.Matches(msg, k.RunStage):
 		return m.applyStage()
 	case key.Matches(msg, k.Flood):
-		d := cloneDamage(m.damage)
-		c := m.v.Compartments[m.sel]
-		var what string
-		if d[m.sel].Open || d[m.sel].WaterM3 > 0 {
-			d[m.sel].Open, d[m.sel].WaterM3 = false, 0
-			what = c.Name + " closed up (intact)"
-		} else {
-			d[m.sel].Open = true
-			what = c.Name + " opened to sea (μ " + muText(m.mu(d, m.sel)) + ")"
-		}
-		return m.apply(d, what)
-	case key.Matches(msg, k.MuUp), key.Matches(msg, k.MuDown):
-		step := 0.05
-		if key.Matches(msg, k.MuDown) {
-			step = -0.05
-		}
-		old := m.mu(m.damage, m.sel)
-		mu := math.Round((old+step)*100) / 100
-		mu = math.Min(1, math.Max(0.05, mu))
-		if mu == old {
-			return m, nil
-		}
-		return m.setMu(mu)
+		return m.toggleFlooded()
+	case key.Matches(msg, k.MuUp):
+		return m.stepMu(0.05)
+	case key.Matches(msg, k.MuDown):
+		return m.stepMu(-0.05)
 	case key.Matches(msg, k.MuSet):
 		m.mode = modeMu
 		m.inputErr = ""
@@ -497,6 +469,48 @@ func (m model) key(msg tea.KeyMsg) (tea.Model, tea.Cmd) {
 		return m.apply(m.v.Intact(), "all compartments intact (reset)")
 	}
 	return m, nil
+}
+
+// runPanelKey shows the flooding run's panel in place of the righting
+// options', or hides it (stopping a run in progress).
+func (m model) runPanelKey() (tea.Model, tea.Cmd) {
+	switch {
+	case m.rem.show:
+		// The righting options give way to the run's panel.
+		m.rem.show = false
+		m.flood.show = true
+	case m.flood.show:
+		m.flood.show = false
+		return m, m.stopFlood()
+	default:
+		m.flood.show = true
+	}
+	return m, nil
+}
+
+// toggleFlooded opens the selected compartment to the sea, or closes it up
+// (intact) when it is open or holds water.
+func (m model) toggleFlooded() (tea.Model, tea.Cmd) {
+	d := cloneDamage(m.damage)
+	c := m.v.Compartments[m.sel]
+	if d[m.sel].Open || d[m.sel].WaterM3 > 0 {
+		d[m.sel].Open, d[m.sel].WaterM3 = false, 0
+		return m.apply(d, c.Name+" closed up (intact)")
+	}
+	d[m.sel].Open = true
+	return m.apply(d, c.Name+" opened to sea (μ "+muText(m.mu(d, m.sel))+")")
+}
+
+// stepMu moves the selected compartment's permeability by step, to the
+// nearest hundredth, between 0.05 and 1.
+func (m model) stepMu(step float64) (tea.Model, tea.Cmd) {
+	old := m.mu(m.damage, m.sel)
+	mu := math.Round((old+step)*100) / 100
+	mu = math.Min(1, math.Max(0.05, mu))
+	if mu == old {
+		return m, nil
+	}
+	return m.setMu(mu)
 }
 
 // scroll moves by step lines (up when negative) the text the scroll keys
