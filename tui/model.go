@@ -84,6 +84,7 @@ type model struct {
 	girder girderPanel  // the hull girder's shear force and bending moment (strength_view.go)
 	rd     readingPanel // draft marks, readings by hand and their diagnosis (reading_panel.go)
 	doors  doorsPanel   // the doors and valves, open or shut (doors.go)
+	find   finder       // the type-to-find of the compartment list (find.go)
 
 	rend    *lipgloss.Renderer
 	palette int
@@ -127,6 +128,7 @@ const (
 	modeBrowse mode = iota // the list, the panels and their keys
 	modeForm               // the flooding run's form (floodForm.update)
 	modeMu                 // a permeability being typed (editKey)
+	modeFind               // a compartment's name being typed (finder.update)
 )
 
 type undoEntry struct {
@@ -209,7 +211,7 @@ func newModel(v *engine.Vessel, info *vessels.Info, opts Options) model {
 	}
 	m.setStyles()
 	m.resize()
-	return m
+	return m.startWith(opts.Start)
 }
 
 // zoneOf places a compartment without a group by where it lies along the
@@ -291,7 +293,10 @@ func (m model) update(msg tea.Msg) (tea.Model, tea.Cmd) {
 			file += ", " + m.condition
 		}
 		file += ", all intact"
-		return m, m.addLogPair(m.now(), what+" → "+m.outcome(&a, false), file+" → "+m.outcome(&a, true))
+		logged := m.addLogPair(m.now(), what+" → "+m.outcome(&a, false), file+" → "+m.outcome(&a, true))
+		var start tea.Cmd
+		m, start = m.startCase() // the case given on the command line, if any
+		return m, tea.Batch(logged, start)
 
 	case resultMsg:
 		return m.takeResult(msg)
@@ -354,6 +359,8 @@ func (m model) update(msg tea.Msg) (tea.Model, tea.Cmd) {
 			return m.formKey(msg)
 		case modeMu:
 			return m.editKey(msg)
+		case modeFind:
+			return m.findKey(msg)
 		}
 		return m.key(msg)
 	}
@@ -390,6 +397,10 @@ func (m model) key(msg tea.KeyMsg) (tea.Model, tea.Cmd) {
 		m.move(-len(m.rows))
 	case key.Matches(msg, k.Bottom):
 		m.move(len(m.rows))
+	case key.Matches(msg, k.PageUp), key.Matches(msg, k.PageDown):
+		m.page(key.Matches(msg, k.PageDown))
+	case key.Matches(msg, k.Find):
+		return m.openFind()
 	case key.Matches(msg, k.Picture):
 		m.picture = (m.picture + 1) % numPictures
 	case key.Matches(msg, k.WorkUp), key.Matches(msg, k.WorkDown):

@@ -115,10 +115,7 @@ func runFlood(args []string, stdout, stderr io.Writer) int {
 	if msg != "" {
 		return fail("%s", msg)
 	}
-	index := map[string]int{}
-	for i, c := range v.Compartments {
-		index[c.Name] = i
-	}
+	index := func(name string) (int, bool) { return compartmentNamed(v, name) } // names ignore case
 	ask := vessels.FloodAsk{Compartment: -1, AreaM2: math.NaN(), ZM: math.NaN(), Cd: cd,
 		LimitS: limit.Seconds(), Criteria: *criteria, By: "command line"}
 	for _, p := range pumps {
@@ -126,7 +123,7 @@ func runFlood(args []string, stdout, stderr io.Writer) int {
 		if len(nums) != 1 {
 			return fail("--pump %q: write NAME:M3H, the capacity in m³/h, e.g. --pump %q", p, exampleName(v)+":120")
 		}
-		i, ok := index[name]
+		i, ok := index(name)
 		if !ok {
 			return fail("%s", unknownName("--pump", name, v))
 		}
@@ -138,7 +135,7 @@ func runFlood(args []string, stdout, stderr io.Writer) int {
 		if msg := finiteNumbers("--hole", holes[0], nums); msg != "" {
 			return fail("%s", msg)
 		}
-		i, ok := index[name]
+		i, ok := index(name)
 		if !ok {
 			msg := unknownName("--hole", name, v)
 			if strings.Contains(holes[0], ":") {
@@ -168,7 +165,7 @@ func runFlood(args []string, stdout, stderr io.Writer) int {
 	if err != nil {
 		return fail("%v", err)
 	}
-	fr := report.Flood{Run: rep, VesselFile: source(info), Open: inOrderGiven(open), HoleFrom: fc.HoleFrom, PumpsFrom: fc.PumpsFrom, Version: version, Passenger: v.Passenger()}
+	fr := report.Flood{Run: rep, VesselFile: source(info), Open: inOrderGiven(v, open), HoleFrom: fc.HoleFrom, PumpsFrom: fc.PumpsFrom, Version: version, Passenger: v.Passenger()}
 	if fr.Network, err = floodNetwork(c, rep); err != nil {
 		return fail("%v", err)
 	}
