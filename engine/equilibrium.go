@@ -180,13 +180,7 @@ func (pr *Problem) eval(p Plane, withJac bool) state {
 		if withJac && im.AW > 0 {
 			// The inner level moves to keep the volume: dA_in = −(SX dB + SY dC)/AW.
 			dab, dac := -im.SX/im.AW, -im.SY/im.AW
-			dMX := [3]float64{im.SX, im.IXX, im.IXY}
-			dMY := [3]float64{im.SY, im.IXY, im.IYY}
-			dMZ := [3]float64{
-				pin.A*im.AW + pin.B*im.SX + pin.C*im.SY,
-				pin.A*im.SX + pin.B*im.IXX + pin.C*im.IXY,
-				pin.A*im.SY + pin.B*im.IXY + pin.C*im.IYY,
-			}
+			dMX, dMY, dMZ := momentRates(im, pin)
 			for r, d := range [3][3]float64{dMX, dMY, dMZ} {
 				dg[r][1] += m * (d[1] + d[0]*dab)
 				dg[r][2] += m * (d[2] + d[0]*dac)
@@ -205,13 +199,7 @@ func (pr *Problem) eval(p Plane, withJac bool) state {
 	}
 	s.jac = true
 	dV := [3]float64{e.AW, e.SX, e.SY}
-	dMX := [3]float64{e.SX, e.IXX, e.IXY}
-	dMY := [3]float64{e.SY, e.IXY, e.IYY}
-	dMZ := [3]float64{
-		p.A*e.AW + p.B*e.SX + p.C*e.SY,
-		p.A*e.SX + p.B*e.IXX + p.C*e.IXY,
-		p.A*e.SY + p.B*e.IXY + p.C*e.IYY,
-	}
+	dMX, dMY, dMZ := momentRates(e, p)
 	for q := 0; q < 3; q++ {
 		dxg, dyg, dzg := dg[0][q]/W, dg[1][q]/W, dg[2][q]/W
 		s.j[0][q] = dV[q]
@@ -221,6 +209,22 @@ func (pr *Problem) eval(p Plane, withJac bool) state {
 	s.j[1][1] += e.MZ - zg*e.V
 	s.j[2][2] += e.MZ - zg*e.V
 	return s
+}
+
+// momentRates returns the rates of change of the moments MX, MY and MZ of
+// the part of a solid below plane p with p's A, B and C: the waterplane's
+// first and second moments (a plane z = A + B·x + C·y moves the water by
+// dA + x·dB + y·dC at (x, y)), and for MZ the same weighted by the
+// plane's height there.
+func momentRates(im Immersion, p Plane) (dMX, dMY, dMZ [3]float64) {
+	dMX = [3]float64{im.SX, im.IXX, im.IXY}
+	dMY = [3]float64{im.SY, im.IXY, im.IYY}
+	dMZ = [3]float64{
+		p.A*im.AW + p.B*im.SX + p.C*im.SY,
+		p.A*im.SX + p.B*im.IXX + p.C*im.IXY,
+		p.A*im.SY + p.B*im.IXY + p.C*im.IYY,
+	}
+	return dMX, dMY, dMZ
 }
 
 // merit is the scaled squared residual norm.

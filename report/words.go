@@ -69,48 +69,66 @@ func Signed(x float64, prec int, unit string) string {
 // signed is Signed, the report package's own short name for it.
 func signed(x float64, prec int, unit string) string { return Signed(x, prec, unit) }
 
-// heelSide returns the heel's size at prec decimals in degrees and its
-// side: +1 starboard, -1 port, 0 upright (the figure rounds to zero).
-func heelSide(deg float64, prec int) (string, int) {
-	s := Fixed(math.Abs(deg), prec, "°")
+// sized returns the size of x at prec decimals with its unit and its
+// sign: +1, -1, or 0 when it rounds to zero (it then has no side).
+func sized(x float64, prec int, unit string) (string, int) {
+	s := Fixed(math.Abs(x), prec, unit)
 	switch {
-	case s == Fixed(0, prec, "°"):
+	case s == Fixed(0, prec, unit):
 		return s, 0
-	case deg > 0:
+	case x > 0:
 		return s, 1
 	}
 	return s, -1
+}
+
+// phrase writes x's size with the word of its side ("3.2° to starboard"),
+// or the word of zero alone when it rounds to zero ("upright"); words are
+// the negative side's, zero's and the positive side's.
+func phrase(x float64, prec int, unit string, words [3]string) string {
+	if !finite(x) {
+		return Blank
+	}
+	s, side := sized(x, prec, unit)
+	if side == 0 {
+		return words[1]
+	}
+	return s + " " + words[side+1]
+}
+
+// sideWord is the word of x's side alone (phrase without the figure).
+func sideWord(x float64, prec int, unit string, words [3]string) string {
+	if !finite(x) {
+		return Blank
+	}
+	_, side := sized(x, prec, unit)
+	return words[side+1]
+}
+
+// figure writes x's size and the word of its side, the figure kept at zero
+// ("0.00° upright") so that a column reads as a column.
+func figure(x float64, prec int, unit string, words [3]string) string {
+	if !finite(x) {
+		return Blank
+	}
+	s, side := sized(x, prec, unit)
+	return s + " " + words[side+1]
 }
 
 // Heel says a heel in a sentence: "3.2° to starboard", "0.5° to port",
 // "upright" (when it rounds to zero at prec decimals).
 //
 // Special cases: NaN and ±Inf are Blank.
-func Heel(deg float64, prec int) string {
-	if !finite(deg) {
-		return Blank
-	}
-	s, side := heelSide(deg, prec)
-	if side == 0 {
-		return heelSideWords[1]
-	}
-	return s + " " + heelSideWords[side+1]
-}
+func Heel(deg float64, prec int) string { return phrase(deg, prec, "°", heelSideWords) }
 
 // heelSideWords are the sides of a heel, by side+1.
-var heelSideWords = [3]string{"to port", "upright", "to starboard"}
+var heelSideWords = [...]string{"to port", "upright", "to starboard"}
 
 // HeelSide is the side of a heel alone: "to starboard", "to port",
 // "upright" (when the heel rounds to zero at prec decimals).
 //
 // Special cases: NaN and ±Inf are Blank.
-func HeelSide(deg float64, prec int) string {
-	if !finite(deg) {
-		return Blank
-	}
-	_, side := heelSide(deg, prec)
-	return heelSideWords[side+1]
-}
+func HeelSide(deg float64, prec int) string { return sideWord(deg, prec, "°", heelSideWords) }
 
 // HeelShort says a heel for a narrow column: "3.2° S", "3.2° P", and the
 // bare figure "0.0°" when it rounds to zero at prec decimals.
@@ -120,7 +138,7 @@ func HeelShort(deg float64, prec int) string {
 	if !finite(deg) {
 		return Blank
 	}
-	s, side := heelSide(deg, prec)
+	s, side := sized(deg, prec, "°")
 	return s + [3]string{" P", "", " S"}[side+1]
 }
 
@@ -129,68 +147,28 @@ func HeelShort(deg float64, prec int) string {
 // (the figure is kept so that the column reads as a column).
 //
 // Special cases: NaN and ±Inf are Blank.
-func HeelWords(deg float64) string {
-	if !finite(deg) {
-		return Blank
-	}
-	s, _ := heelSide(deg, 2)
-	return s + " " + HeelSide(deg, 2)
-}
-
-// trimSide returns the trim's size at prec decimals in metres and its
-// sense: +1 by the stern, -1 by the head, 0 even keel.
-func trimSide(m float64, prec int) (string, int) {
-	s := Fixed(math.Abs(m), prec, "m")
-	switch {
-	case s == Fixed(0, prec, "m"):
-		return s, 0
-	case m > 0:
-		return s, 1
-	}
-	return s, -1
-}
+func HeelWords(deg float64) string { return figure(deg, 2, "°", heelSideWords) }
 
 // trimSenseWords are the senses of a trim, by sense+1.
-var trimSenseWords = [3]string{"by the head", "even keel", "by the stern"}
+var trimSenseWords = [...]string{"by the head", "even keel", "by the stern"}
 
 // Trim says a trim in a sentence: "0.41 m by the stern", "0.12 m by the
 // head", "even keel" (when it rounds to zero at prec decimals).
 //
 // Special cases: NaN and ±Inf are Blank.
-func Trim(m float64, prec int) string {
-	if !finite(m) {
-		return Blank
-	}
-	s, sense := trimSide(m, prec)
-	if sense == 0 {
-		return trimSenseWords[1]
-	}
-	return s + " " + trimSenseWords[sense+1]
-}
+func Trim(m float64, prec int) string { return phrase(m, prec, "m", trimSenseWords) }
 
 // TrimSense is the sense of a trim alone: "by the stern", "by the head",
 // "even keel" (when it rounds to zero at prec decimals).
 //
 // Special cases: NaN and ±Inf are Blank.
-func TrimSense(m float64, prec int) string {
-	if !finite(m) {
-		return Blank
-	}
-	_, sense := trimSide(m, prec)
-	return trimSenseWords[sense+1]
-}
+func TrimSense(m float64, prec int) string { return sideWord(m, prec, "m", trimSenseWords) }
 
 // TrimWords says a trim in a report's table, at three decimals: "0.410 m by
 // the stern", and "0.000 m even keel" when it rounds to zero.
 //
 // Special cases: NaN and ±Inf are Blank.
-func TrimWords(m float64) string {
-	if !finite(m) {
-		return Blank
-	}
-	s, sense := trimSide(m, 3)
-	return s + " " + trimSenseWords[sense+1]
-}
+func TrimWords(m float64) string { return figure(m, 3, "m", trimSenseWords) }
 
 // SideShort names a side for a narrow column: "port", "stbd", "P+S".
 func SideShort(s engine.Side) string {

@@ -47,7 +47,7 @@ func FuzzFieldReadings(f *testing.F) {
 					t.Fatalf("after pasting %q into field %q the screen holds %q", s, open, line)
 				}
 			}
-			if m.editing {
+			if m.mode == modeMu {
 				m = press(t, m, "esc")
 			}
 		}

@@ -5,7 +5,9 @@ import (
 	"strings"
 	"sync/atomic"
 
+	"github.com/charmbracelet/bubbles/progress"
 	tea "github.com/charmbracelet/bubbletea"
+	"github.com/charmbracelet/lipgloss"
 
 	"heelwatch/engine"
 	"heelwatch/report"
@@ -44,7 +46,8 @@ type floodRequest struct {
 // floodPoint is one moment of a run in progress, for the plot.
 type floodPoint struct{ timeS, waterM3 float64 }
 
-// floodState is the flooding run and its panel.
+// floodState is the flooding run and its panel: a child of the dashboard
+// whose view (flood_view.go) draws with what with gives it.
 type floodState struct {
 	show      bool // the panel is on screen
 	seq       int  // the newest request's number
@@ -57,7 +60,17 @@ type floodState struct {
 	track     []floodPoint // the progress so far
 	rep       *engine.FloodReport
 	err       string
-	stage     int // the stage the stage key shows next
+	stage     int                   // the stage the stage key shows nex
+	net       *engine.NetworkReport // the run through the ship, once it has ended (flood_network.go); nil if none
+
+	// What the panel draws with, given by with before each use.
+	v          *engine.Vessel
+	sel        int
+	damage     engine.Damage
+	st         Styles
+	inks       map[ink]lipgloss.Style
+	bar        progress.Model
+	cachedPlot func(w, h int) []string // the plot, drawn again only when it changed
 }
 
 // Messages of a flooding run.
@@ -122,6 +135,15 @@ func floodFailed(seq int) func(string) tea.Msg {
 	return func(why string) tea.Msg { return floodStepMsg{seq: seq, err: "engine failure: " + why} }
 }
 
+// with returns the panel drawing for m's vessel, selection, damage state
+// and styles.
+func (f floodState) with(m model) floodState {
+	f.v, f.sel, f.damage, f.st, f.inks, f.bar = m.v, m.sel, m.damage, m.st, m.inks, m.bar
+	g := f
+	f.cachedPlot = func(w, h int) []string { return m.cached(picFloodPlot, w, h, g.plot) }
+	return f
+}
+
 // startFlood starts a run for q, cancelling any older one.
 func (m model) startFlood(q floodRequest) (tea.Model, tea.Cmd) {
 	f := &m.flood
@@ -129,7 +151,7 @@ func (m model) startFlood(q floodRequest) (tea.Model, tea.Cmd) {
 	f.latest.Store(int64(f.seq))
 	f.show, f.running, f.finishing = true, true, false
 	m.rem.show = false // the run's panel in its place
-	f.req, f.hole, f.prog, f.track, f.rep, f.err, f.stage = q, engine.Hole{}, engine.FloodProgress{}, nil, nil, "", 0
+	f.req, f.hole, f.prog, f.track, f.rep, f.err, f.stage, f.net = q, engine.Hole{}, engine.FloodProgress{}, nil, nil, "", 0, nil
 	m.keys.RunStage.SetEnabled(false)
 	name := m.v.Compartments[q.ci].Name
 	what := fmt.Sprintf("flooding run: %s through %s m² at z %s m, C_d %s, pumps %s m³/h",
@@ -196,7 +218,7 @@ func (m model) takeFloodReport(msg floodDoneMsg) (tea.Model, tea.Cmd) {
 	f.rep = &rep
 	f.hole = rep.Hole
 	m.keys.RunStage.SetEnabled(len(rep.Stages) > 0)
-	return m, m.addLog(m.now(), "flooding run of "+name+" → "+outcomeText(rep))
+	return m, tea.Batch(m.addLog(m.now(), "flooding run of "+name+" → "+outcomeText(rep)), netCmd(f.req.flood.Case, rep, f.seq, f.latest))
 }
 
 // applyStage puts the run's next stage on the dashboard: the flooded

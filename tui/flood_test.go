@@ -75,15 +75,7 @@ func TestFloodPanelGolden(t *testing.T) {
 	check := func(t *testing.T, name string, m model, w, h int) {
 		t.Helper()
 		view := m.View()
-		lines := strings.Split(view, "\n")
-		if len(lines) != h {
-			t.Errorf("view has %d lines, want %d", len(lines), h)
-		}
-		for i, l := range lines {
-			if lw := lipgloss.Width(l); lw != w {
-				t.Errorf("line %d is %d wide, want %d: %q", i+1, lw, w, l)
-			}
-		}
+		checkScreen(t, view, w, h)
 		checkGolden(t, name, view)
 	}
 	for _, sz := range [][2]int{{80, 24}, {120, 40}} {
@@ -306,7 +298,7 @@ func TestFloodForm(t *testing.T) {
 	m := testModel(t, 100, 30)
 	m = selectSpace(t, m, "Wing tank 2 S")
 	m = press(t, m, "f")
-	if !m.form.on {
+	if m.mode != modeForm {
 		t.Fatal("f did not open the form")
 	}
 	vals := func(m model) []string {
@@ -337,8 +329,8 @@ func TestFloodForm(t *testing.T) {
 	} {
 		mm := typeField(t, m, tc.field, tc.text)
 		mm = press(t, mm, "enter")
-		if !mm.form.on || mm.flood.seq != 0 || !strings.Contains(mm.form.err, tc.say) {
-			t.Errorf("field %d %q: form on %v, run %d, error %q (want it to say %q)", tc.field, tc.text, mm.form.on, mm.flood.seq, mm.form.err, tc.say)
+		if mm.mode != modeForm || mm.flood.seq != 0 || !strings.Contains(mm.form.err, tc.say) {
+			t.Errorf("field %d %q: form on %v, run %d, error %q (want it to say %q)", tc.field, tc.text, mm.mode == modeForm, mm.flood.seq, mm.form.err, tc.say)
 		}
 		if mm.form.focus != tc.field {
 			t.Errorf("field %d %q: the cursor is on field %d, not on the bad one", tc.field, tc.text, mm.form.focus)
@@ -348,7 +340,7 @@ func TestFloodForm(t *testing.T) {
 		}
 	}
 	m = press(t, m, "esc")
-	if m.form.on || m.flood.seq != 0 {
+	if m.mode == modeForm || m.flood.seq != 0 {
 		t.Error("esc did not cancel the form")
 	}
 	// A compartment the file gives no hole: a shell hole of defaultHoleM2

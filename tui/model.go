@@ -75,14 +75,16 @@ type model struct {
 	animate  bool // false in tests: no spinner ticks
 	input    textinput.Model
 	bar      progress.Model // a flooding run's progress, drawn with ViewAs
-	editing  bool
 	inputErr string
+	mode     mode // what the keys work on
 
 	form   floodForm    // the hole-and-pumps form of a flooding run
 	flood  floodState   // the flooding run and its panel
 	rem    remedyState  // the righting options and their panel
 	girder girderPanel  // the hull girder's shear force and bending moment (strength_view.go)
 	rd     readingPanel // draft marks, readings by hand and their diagnosis (reading_panel.go)
+	doors  doorsPanel   // the doors and valves, open or shut (doors.go)
+	find   finder       // the type-to-find of the compartment list (find.go)
 
 	rend    *lipgloss.Renderer
 	palette int
@@ -111,13 +113,23 @@ type model struct {
 	sel        int
 	offset     int
 	picture    int
-	showHand   bool
-	handScroll int // the first step of the hand working shown
-	textScroll int // the first line of the flags and criteria shown
+	hand       handPanel // the hand method's panel
+	textScroll int       // the first line of the flags and criteria shown
 	width      int
 	height     int
 	lay        layout
+	pics       *pictureCache // the pictures as last drawn (View's only state)
 }
+
+// mode is what the keys work on: one value routes every key.
+type mode int
+
+const (
+	modeBrowse mode = iota // the list, the panels and their keys
+	modeForm               // the flooding run's form (floodForm.update)
+	modeMu                 // a permeability being typed (editKey)
+	modeFind               // a compartment's name being typed (finder.update)
+)
 
 type undoEntry struct {
 	damage engine.Damage
@@ -137,6 +149,7 @@ const (
 func newModel(v *engine.Vessel, info *vessels.Info, opts Options) model {
 	v, info, opts = plainNames(v), plainInfo(info), plainOptions(opts)
 	m := model{
+		pics:    &pictureCache{},
 		v:       v,
 		opts:    opts,
 		now:     time.Now,
@@ -198,7 +211,7 @@ func newModel(v *engine.Vessel, info *vessels.Info, opts Options) model {
 	}
 	m.setStyles()
 	m.resize()
-	return m
+	return m.startWith(opts.Start)
 }
 
 // zoneOf places a compartment without a group by where it lies along the
@@ -224,6 +237,7 @@ func (m *model) setStyles() {
 	m.input.TextStyle = m.st.Value
 	m.bar = progress.New(progress.WithSolidFill(m.st.BarColor), progress.WithColorProfile(m.rend.ColorProfile()))
 	m.bar.EmptyColor = ""
+	m.form.st = m.st
 	for k := range m.form.fields {
 		m.form.fields[k].PromptStyle, m.form.fields[k].TextStyle = m.st.Prompt, m.st.Value
 	}
@@ -279,7 +293,10 @@ func (m model) update(msg tea.Msg) (tea.Model, tea.Cmd) {
 			file += ", " + m.condition
 		}
 		file += ", all intact"
-		return m, m.addLogPair(m.now(), what+" → "+m.outcome(&a, false), file+" → "+m.outcome(&a, true))
+		logged := m.addLogPair(m.now(), what+" → "+m.outcome(&a, false), file+" → "+m.outcome(&a, true))
+		var start tea.Cmd
+		m, start = m.startCase() // the case given on the command line, if any
+		return m, tea.Batch(logged, start)
 
 	case resultMsg:
 		return m.takeResult(msg)
@@ -314,6 +331,11 @@ func (m model) update(msg tea.Msg) (tea.Model, tea.Cmd) {
 	case remedyMsg:
 		return m.takeRemedies(msg)
 
+	case doorMsg:
+		return m.takeDoor(msg)
+	case netDoneMsg:
+		return m.takeNet(msg)
+
 	case tea.KeyMsg:
 		msg = plainKey(msg)
 		if m.lay.small {
@@ -332,11 +354,13 @@ func (m model) update(msg tea.Msg) (tea.Model, tea.Cmd) {
 			}
 			return cur, tea.Batch(cmds...)
 		}
-		switch {
-		case m.form.on:
+		switch m.mode {
+		case modeForm:
 			return m.formKey(msg)
-		case m.editing:
+		case modeMu:
 			return m.editKey(msg)
+		case modeFind:
+			return m.findKey(msg)
 		}
 		return m.key(msg)
 	}
@@ -345,12 +369,26 @@ func (m model) update(msg tea.Msg) (tea.Model, tea.Cmd) {
 
 func (m model) key(msg tea.KeyMsg) (tea.Model, tea.Cmd) {
 	k := m.keys
+	if !m.rem.show || key.Matches(msg, k.Hand) {
+		// The hand panel's own keys (the righting options' panel, when
+		// shown, takes the scroll keys first).
+		var took bool
+		if m.hand, took = m.hand.with(m.cur, m.st).update(msg, k); took {
+			return m, nil
+		}
+	}
 	n := len(m.v.Compartments)
 	switch {
 	case key.Matches(msg, k.Quit):
 		return m, tea.Quit
 	case key.Matches(msg, k.Help):
 		m.help.ShowAll = !m.help.ShowAll
+	case key.Matches(msg, doorsKey):
+		return m.doorsToggle()
+	case m.doors.handles(msg):
+		var cmd tea.Cmd
+		m.doors, cmd = m.doors.update(msg, m.v.Connections)
+		return m, cmd
 	case key.Matches(msg, k.Up):
 		m.move(-1)
 	case key.Matches(msg, k.Down):
@@ -359,24 +397,18 @@ func (m model) key(msg tea.KeyMsg) (tea.Model, tea.Cmd) {
 		m.move(-len(m.rows))
 	case key.Matches(msg, k.Bottom):
 		m.move(len(m.rows))
+	case key.Matches(msg, k.PageUp), key.Matches(msg, k.PageDown):
+		m.page(key.Matches(msg, k.PageDown))
+	case key.Matches(msg, k.Find):
+		return m.openFind()
 	case key.Matches(msg, k.Picture):
 		m.picture = (m.picture + 1) % numPictures
-	case key.Matches(msg, k.Hand):
-		m.showHand = !m.showHand
 	case key.Matches(msg, k.WorkUp), key.Matches(msg, k.WorkDown):
-		step := 3
+		step := scrollStep
 		if key.Matches(msg, k.WorkUp) {
-			step = -3
+			step = -scrollStep
 		}
-		// The righting options while their panel is shown, else the hand
-		// working while it is shown, else the flags and criteria.
-		if m.rem.show {
-			m.rem.scroll = min(max(0, m.rem.scroll+step), m.remedyScrollMax())
-		} else if m.showHand && m.cur != nil && m.cur.Hand != nil {
-			m.handScroll = min(max(0, m.handScroll+step), max(0, len(m.cur.Hand.Steps)-1))
-		} else {
-			m.textScroll = min(max(0, m.textScroll+step), 200)
-		}
+		m.scroll(step)
 	case key.Matches(msg, k.Palette):
 		m.palette = (m.palette + 1) % len(paletteNames)
 		m.setStyles()
@@ -398,17 +430,7 @@ func (m model) key(msg tea.KeyMsg) (tea.Model, tea.Cmd) {
 		m.girder, cmd = m.girder.update(msg)
 		return m, cmd
 	case key.Matches(msg, k.RunPanel):
-		if m.rem.show {
-			// The righting options give way to the run's panel.
-			m.rem.show = false
-			m.flood.show = true
-			return m, nil
-		}
-		if m.flood.show {
-			m.flood.show = false
-			return m, m.stopFlood()
-		}
-		m.flood.show = true
+		return m.runPanelKey()
 	case n == 0:
 		return m, nil
 	case key.Matches(msg, k.HoleRun):
@@ -416,31 +438,13 @@ func (m model) key(msg tea.KeyMsg) (tea.Model, tea.Cmd) {
 	case key.Matches(msg, k.RunStage):
 		return m.applyStage()
 	case key.Matches(msg, k.Flood):
-		d := cloneDamage(m.damage)
-		c := m.v.Compartments[m.sel]
-		var what string
-		if d[m.sel].Open || d[m.sel].WaterM3 > 0 {
-			d[m.sel].Open, d[m.sel].WaterM3 = false, 0
-			what = c.Name + " closed up (intact)"
-		} else {
-			d[m.sel].Open = true
-			what = c.Name + " opened to sea (μ " + muText(m.mu(d, m.sel)) + ")"
-		}
-		return m.apply(d, what)
-	case key.Matches(msg, k.MuUp), key.Matches(msg, k.MuDown):
-		step := 0.05
-		if key.Matches(msg, k.MuDown) {
-			step = -0.05
-		}
-		old := m.mu(m.damage, m.sel)
-		mu := math.Round((old+step)*100) / 100
-		mu = math.Min(1, math.Max(0.05, mu))
-		if mu == old {
-			return m, nil
-		}
-		return m.setMu(mu)
+		return m.toggleFlooded()
+	case key.Matches(msg, k.MuUp):
+		return m.stepMu(0.05)
+	case key.Matches(msg, k.MuDown):
+		return m.stepMu(-0.05)
 	case key.Matches(msg, k.MuSet):
-		m.editing = true
+		m.mode = modeMu
 		m.inputErr = ""
 		m.input.SetValue("")
 		m.input.Placeholder = muText(m.mu(m.damage, m.sel))
@@ -465,6 +469,72 @@ func (m model) key(msg tea.KeyMsg) (tea.Model, tea.Cmd) {
 		return m.apply(m.v.Intact(), "all compartments intact (reset)")
 	}
 	return m, nil
+}
+
+// runPanelKey shows the flooding run's panel in place of the righting
+// options', or hides it (stopping a run in progress).
+func (m model) runPanelKey() (tea.Model, tea.Cmd) {
+	switch {
+	case m.rem.show:
+		// The righting options give way to the run's panel.
+		m.rem.show = false
+		m.flood.show = true
+	case m.flood.show:
+		m.flood.show = false
+		return m, m.stopFlood()
+	default:
+		m.flood.show = true
+	}
+	return m, nil
+}
+
+// toggleFlooded opens the selected compartment to the sea, or closes it up
+// (intact) when it is open or holds water.
+func (m model) toggleFlooded() (tea.Model, tea.Cmd) {
+	d := cloneDamage(m.damage)
+	c := m.v.Compartments[m.sel]
+	if d[m.sel].Open || d[m.sel].WaterM3 > 0 {
+		d[m.sel].Open, d[m.sel].WaterM3 = false, 0
+		return m.apply(d, c.Name+" closed up (intact)")
+	}
+	d[m.sel].Open = true
+	return m.apply(d, c.Name+" opened to sea (μ "+muText(m.mu(d, m.sel))+")")
+}
+
+// stepMu moves the selected compartment's permeability by step, to the
+// nearest hundredth, between 0.05 and 1.
+func (m model) stepMu(step float64) (tea.Model, tea.Cmd) {
+	old := m.mu(m.damage, m.sel)
+	mu := math.Round((old+step)*100) / 100
+	mu = math.Min(1, math.Max(0.05, mu))
+	if mu == old {
+		return m, nil
+	}
+	return m.setMu(mu)
+}
+
+// scroll moves by step lines (up when negative) the text the scroll keys
+// work on: the righting options while their panel is shown, else the hand
+// working while it is shown (a step at a time), else the flags and
+// criteria where they are on screen.
+func (m *model) scroll(step int) {
+	switch {
+	case m.rem.show:
+		head, body, foot := m.rem.with(*m).parts(m.width, m.lay.bodyH)
+		m.rem.scroll = scrolled(m.rem.scroll, body, m.lay.bodyH-len(head)-len(foot), step)
+	case m.cur != nil:
+		w, h := m.criteriaBox()
+		m.textScroll = scrolled(m.textScroll, m.criteriaLines(w, true), h-1, step)
+	}
+}
+
+// criteriaBox is the size the flags and criteria are drawn in: the wide
+// screen's third column, else the narrow screen's sheet.
+func (m model) criteriaBox() (w, h int) {
+	if m.lay.wide {
+		return m.lay.thirdW, m.lay.topH
+	}
+	return m.lay.rightW, m.lay.sheetH
 }
 
 // move selects the compartment steps rows down the list (up when
@@ -492,7 +562,7 @@ func (m *model) move(steps int) {
 func (m model) editKey(msg tea.KeyMsg) (tea.Model, tea.Cmd) {
 	switch msg.Type {
 	case tea.KeyEsc:
-		m.editing = false
+		m.mode = modeBrowse
 		m.input.Blur()
 		return m, nil
 	case tea.KeyCtrlC:
@@ -503,7 +573,7 @@ func (m model) editKey(msg tea.KeyMsg) (tea.Model, tea.Cmd) {
 			m.inputErr = err.Error()
 			return m, nil
 		}
-		m.editing = false
+		m.mode = modeBrowse
 		m.input.Blur()
 		if mu == m.mu(m.damage, m.sel) {
 			return m, nil
@@ -566,7 +636,7 @@ func recompute(v *engine.Vessel, d engine.Damage, seq int, latest *atomic.Int64)
 	return newest(seq, latest,
 		func() tea.Msg { return resultMsg{seq: seq, skipped: true} },
 		func(why string) tea.Msg { return resultMsg{seq: seq, failure: why} },
-		func() tea.Msg { return resultMsg{seq: seq, a: engine.Assess(v, d)} })
+		func() tea.Msg { return resultMsg{seq: seq, a: assessSpread(v, d)} })
 }
 
 // takeResult shows a result if it is the newest and logs every change in

@@ -97,7 +97,7 @@ func (m model) readingMsg(msg tea.Msg) (tea.Model, tea.Cmd, bool) {
 		m.rd.result, m.rd.trend, m.rd.trendNote, m.rd.failure = msg.res, msg.trend, msg.trendNote, msg.failure
 		return m, m.addLog(m.now(), m.diagnosisLine()), true
 	case tea.KeyMsg:
-		if m.lay.small || m.form.on || m.editing || (msg.Type == tea.KeyRunes && len(msg.Runes) > 1 && !msg.Paste) {
+		if m.lay.small || m.mode != modeBrowse || (msg.Type == tea.KeyRunes && len(msg.Runes) > 1 && !msg.Paste) {
 			return m, nil, false
 		}
 		if m.rd.form.on {

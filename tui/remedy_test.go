@@ -122,7 +122,7 @@ func TestRemedyLollDangerStyle(t *testing.T) {
 	m.rend = r
 	m.setStyles()
 	found := 0
-	for _, l := range m.remedyLead(m.rem.set, 80) {
+	for _, l := range m.rem.with(m).lead(m.rem.set, 80) {
 		plain := ansi.Strip(l)
 		if l != m.st.Danger.Render(plain) || l == plain {
 			t.Errorf("not in the danger style: %q", l)
