@@ -12,8 +12,8 @@ import (
 type DiagnoseOptions struct {
 	MaxGroup int // most compartments in one explanation, 1 to 3; 0 means 3
 	Keep     int // explanations returned; 0 means 5
-	// Joined lists compartments that water can pass between (connections
-	// through doors, ducts, pipes): searched together like neighbours.
+	// Joined lists more compartments that water can pass between, searched
+	// together like neighbours; the vessel's own Connections always are.
 	Joined [][2]int
 	// Progress, when set, is told how many candidate sets are done of how
 	// many (the last call has done == total).
@@ -97,7 +97,7 @@ type Diagnosis struct {
 //
 // Method: the water surface the marks and inclinometer imply is fitted
 // first (ObservedPlane). Every single compartment, every pair of
-// neighbours (or joined compartments) and every connected triple is a
+// neighbours (or compartments joined by a connection) and every connected triple is a
 // candidate; in each the volume of sea water (0 to the space's moulded
 // volume) is chosen so that the ship, with that water as added weight,
 // would float at the observed plane (mass and the two moments, with the
@@ -267,7 +267,13 @@ func candidateSets(v *Vessel, pool []int, o DiagnoseOptions) [][]int {
 			adj[i][j] = true
 		}
 	}
-	for _, p := range o.Joined {
+	// The ship's own connections (doors, ducts, pipes, cross-flooding
+	// fittings, open or shut: a shut door may leak) join their ends too.
+	joined := append([][2]int(nil), o.Joined...)
+	for _, c := range v.Connections {
+		joined = append(joined, [2]int{c.From, c.To})
+	}
+	for _, p := range joined {
 		if p[0] >= 0 && p[1] >= 0 && p[0] < len(adj) && p[1] < len(adj) && p[0] != p[1] {
 			adj[p[0]][p[1]], adj[p[1]][p[0]] = true, true
 		}
