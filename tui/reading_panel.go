@@ -213,7 +213,7 @@ func startDiagnosis(v *engine.Vessel, rs []engine.Reading, opts engine.TrendOpti
 		out := diagDoneMsg{seq: seq, res: &res}
 		switch {
 		case len(rs) < 2:
-			out.trendNote = "the trend needs readings at two or more times"
+			out.trendNote = "trend: needs two readings or more"
 		case len(res.Explanations) == 0 || len(res.Explanations[0].Spaces) == 0:
 			out.trendNote = "no trend: the best explanation floods nothing"
 		default:
