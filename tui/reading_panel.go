@@ -216,6 +216,8 @@ func startDiagnosis(v *engine.Vessel, rs []engine.Reading, opts engine.TrendOpti
 			out.trendNote = "trend: needs two readings or more"
 		case len(res.Explanations) == 0 || len(res.Explanations[0].Spaces) == 0:
 			out.trendNote = "no trend: the best explanation floods nothing"
+		case !res.Fits:
+			out.trendNote = "no trend: nothing fits the latest reading"
 		default:
 			opts.LimitS = 6 * 3600
 			if t, err := engine.EstimateTrend(v, rs, res.Explanations[0], opts); err != nil {
