@@ -20,7 +20,8 @@ Usage:
 With no argument it checks --vessel, or the bundled %q. Every problem in a
 file is listed with its line and key. For a good file it prints the hull's
 dimensions, the loading condition, the intact floating position and the
-compartments with their volume, use, permeability and contents.
+compartments with their volume, use, permeability and contents. With
+--condition FILE each ship is checked loaded to that condition file.
 
 Exit status: 0 every file is good and floats intact; 1 a file has problems;
 2 bad usage; 3 a good file whose loading condition does not float intact.
@@ -31,6 +32,7 @@ func runCheck(args []string, stdout, stderr io.Writer) int {
 	fs.SetOutput(stderr)
 	fs.Usage = func() {}
 	vessel := fs.String("vessel", "", "")
+	condition := fs.String("condition", "", "")
 	help := func(w io.Writer) { fmt.Fprintf(w, checkHelp, vessels.Default) }
 	files, err := parseInterleaved(fs, args)
 	if err != nil {
@@ -45,6 +47,9 @@ func runCheck(args []string, stdout, stderr io.Writer) int {
 			fmt.Fprintln(stdout)
 		}
 		v, info, status := openVessel(f, stderr)
+		if status == exitOK {
+			v, _, status = withCondition(v, info, *condition, stderr)
+		}
 		if status == exitOK {
 			status = summarise(stdout, v, info)
 		}

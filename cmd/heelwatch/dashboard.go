@@ -17,6 +17,7 @@ type dashboardOptions struct {
 	logFile   string
 	palette   string
 	reportDir string
+	condition string // --condition FILE
 }
 
 // interactive reports whether the dashboard can run: standard input and
@@ -47,6 +48,9 @@ func runDashboard(vessel string, o dashboardOptions, stdout, stderr io.Writer) i
 	}
 	v, info, status := openVessel(vessel, stderr)
 	if status != exitOK {
+		return status
+	}
+	if v, _, status = withCondition(v, info, o.condition, stderr); status != exitOK {
 		return status
 	}
 	if interactive(stdout) {

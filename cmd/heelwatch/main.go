@@ -62,6 +62,9 @@ Usage:
 Flags:
   --vessel FILE|NAME   the vessel: a TOML vessel file, or a bundled vessel's
                        name (default %q; see 'heelwatch vessels')
+  --condition FILE     a condition file (weights; tanks by fill, m³, tonnes or
+                       sounding) in place of the vessel file's loading condition,
+                       for the dashboard and every command that reads a ship
   --log FILE           dashboard: append every change (time, heel, drafts) to
                        FILE as it happens, synced, so nothing is lost
   --palette NAME       dashboard: day (default), night (dim red, keeps night
@@ -90,6 +93,7 @@ func run(args []string, stdout, stderr io.Writer) int {
 	fs.StringVar(&dash.logFile, "log", "", "")
 	fs.StringVar(&dash.palette, "palette", "day", "")
 	fs.StringVar(&dash.reportDir, "reports", "", "")
+	fs.StringVar(&dash.condition, "condition", "", "")
 	if err := fs.Parse(args); err != nil {
 		return usageError(err, stdout, stderr, "", func(w io.Writer) { fmt.Fprintf(w, mainHelp, vessels.Default) })
 	}
@@ -102,11 +106,17 @@ func run(args []string, stdout, stderr io.Writer) int {
 		return runDashboard(*vessel, dash, stdout, stderr)
 	}
 	cmd, rest := rest[0], rest[1:]
-	withVessel := func(a []string) []string {
-		if *vessel == "" {
+	withCondition := func(a []string) []string {
+		if dash.condition == "" {
 			return a
 		}
-		return append([]string{"--vessel", *vessel}, a...)
+		return append([]string{"--condition", dash.condition}, a...)
+	}
+	withVessel := func(a []string) []string {
+		if *vessel == "" {
+			return withCondition(a)
+		}
+		return append([]string{"--vessel", *vessel}, withCondition(a)...)
 	}
 	switch cmd {
 	case "solve":

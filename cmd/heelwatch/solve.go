@@ -18,6 +18,8 @@ Usage:
 
 Flags:
   --vessel FILE|NAME  the vessel file, or a bundled vessel's name (default %q)
+  --condition FILE    a condition file in place of the vessel file's loading
+                      condition (weights; tanks by fill, m³, tonnes or sounding)
   --open A,B          compartments open to the sea (lost buoyancy), by the names
                       in the vessel file; repeat the flag or separate with commas
   --perm NAME=μ,...   permeability of an open compartment for this solve,
@@ -55,6 +57,7 @@ func runSolve(args []string, stdout, stderr io.Writer) int {
 	fs.SetOutput(stderr)
 	fs.Usage = func() {}
 	vessel := fs.String("vessel", vessels.Default, "")
+	condition := fs.String("condition", "", "")
 	var open, perm listFlag
 	fs.Var(&open, "open", "")
 	fs.Var(&perm, "perm", "")
@@ -77,6 +80,9 @@ func runSolve(args []string, stdout, stderr io.Writer) int {
 
 	v, info, status := openVessel(*vessel, stderr)
 	if status != exitOK {
+		return status
+	}
+	if v, _, status = withCondition(v, info, *condition, stderr); status != exitOK {
 		return status
 	}
 	d, msg := damageOf(v, open, perm)
