@@ -40,7 +40,7 @@ func (d *Drill) sound() {
 		if !fitted || sounded || !(d.inPlay[i] || d.open[i]) {
 			continue
 		}
-		if d.Sounding(i) >= d.alarmAt {
+		if d.LowSideDepth(i) >= d.alarmAt {
 			d.alarmOn[i] = true
 			d.alarms = append(d.alarms, DrillAlarm{Minutes: d.t / 60, Compartment: i})
 			d.record("alarm " + d.v.Compartments[i].Name)
@@ -50,6 +50,10 @@ func (d *Drill) sound() {
 
 // Sounding returns the height of the water in compartment i above its
 // lowest point, at its middle, along z (0 when dry).
+//
+// An alarm's float switch sits in the bilge well at the low side, so an
+// alarm reads the deepest water at any of the four bottom corners of the
+// compartment's box (LowSideDepth) rather than this.
 func (d *Drill) Sounding(i int) float64 {
 	if d.pos == nil {
 		return 0
@@ -67,4 +71,33 @@ func (d *Drill) Sounding(i int) float64 {
 	wm := math.Min(d.water[i]/d.mu(i), c.solid.Volume()*(1-1e-9))
 	pin, _ := levelForVolume(c.solid, wm, p.B, p.C)
 	return math.Max(0, pin.Z(xc, yc)-zmin)
+}
+
+// LowSideDepth returns the depth of the water in compartment i at the
+// lowest of the four bottom corners of its box, along z (0 when dry): where
+// the water gathers when she heels and trims, and where a bilge well's
+// float switch would feel it first.
+func (d *Drill) LowSideDepth(i int) float64 {
+	if d.pos == nil || !(d.inPlay[i] || d.open[i]) {
+		return 0
+	}
+	c := d.v.Compartments[i]
+	p := d.pos.Plane
+	surf := p
+	if !d.open[i] {
+		if d.water[i] <= 0 {
+			return 0
+		}
+		wm := math.Min(d.water[i]/d.mu(i), c.solid.Volume()*(1-1e-9))
+		surf, _ = levelForVolume(c.solid, wm, p.B, p.C)
+	}
+	_, _, zmin, _ := c.solid.Extent()
+	b := c.Box
+	deep := 0.0
+	for _, x := range []float64{b.X0, b.X1} {
+		for _, y := range []float64{b.Y0, b.Y1} {
+			deep = math.Max(deep, surf.Z(x, y)-math.Max(zmin, b.Z0))
+		}
+	}
+	return deep
 }

@@ -64,12 +64,12 @@ func DrillDebrief(w io.Writer, dr Drill, a engine.DrillAnalysis) error {
 	if len(a.Decisions) == 0 {
 		b.WriteString("The crew took no action that changes the ship (pumps, doors).\n\n")
 	} else {
-		b.WriteString("Each decision's effect is this drill against the same drill played without that one decision, at the end.\n\n")
+		b.WriteString("Each decision's effect is this drill against the same drill played without that one decision, at the end (the size of the heel; negative: less heel, less water).\n\n")
 		b.WriteString("| min | by | decision | heel | deck edge above water | sea water in her |\n|---|---|---|---|---|---|\n")
 		for _, de := range a.Decisions {
 			fmt.Fprintf(&b, "| %s | %s | %s | %s | %s | %s |\n", Fixed(de.Event.Minutes, 1, ""), de.Event.By, mdCell(de.Event.Label(v)),
-				change(a.Actual.HeelDeg, de.Without.HeelDeg, "°"), change(a.Actual.FreeboardM, de.Without.FreeboardM, " m"),
-				change(a.Actual.WaterM3, de.Without.WaterM3, " m³"))
+				change(math.Abs(a.Actual.HeelDeg), math.Abs(de.Without.HeelDeg), "°"), change(a.Actual.FreeboardM, de.Without.FreeboardM, "m"),
+				change(a.Actual.WaterM3, de.Without.WaterM3, "m³"))
 		}
 		b.WriteString("\n")
 	}
@@ -125,7 +125,7 @@ func outcomeRow(b *strings.Builder, what string, o engine.DrillOutcome) {
 	if !math.IsNaN(o.DeckEdgeMin) {
 		under = "min " + Fixed(o.DeckEdgeMin, 1, "")
 	}
-	fmt.Fprintf(b, "| %s | %s | %s | %s | %s |\n", what, HeelSide(o.HeelDeg, 1), Fixed(o.FreeboardM, 2, " m"), Fixed(o.WaterM3, 0, " m³"), under)
+	fmt.Fprintf(b, "| %s | %s | %s | %s | %s |\n", what, Heel(o.HeelDeg, 1), Fixed(o.FreeboardM, 2, "m"), Fixed(o.WaterM3, 0, "m³"), under)
 }
 
 // saved says what the best response would have given beside this drill.
@@ -140,8 +140,8 @@ func saved(actual, best engine.DrillOutcome) string {
 	if math.Abs(dw) < 0.5 {
 		return "This drill's response did as well as the best response."
 	}
-	return fmt.Sprintf("The best response would have kept %s less sea water out, %s of heel and %s of freeboard to the deck edge at the end.",
-		Fixed(dw, 0, " m³"), change(best.HeelDeg, actual.HeelDeg, "°"), change(best.FreeboardM, actual.FreeboardM, " m"))
+	return fmt.Sprintf("Beside this drill the best response would have kept %s of sea water out, with %s of heel and %s of freeboard to the deck edge at the end.",
+		Fixed(dw, 0, "m³"), change(math.Abs(best.HeelDeg), math.Abs(actual.HeelDeg), "°"), change(best.FreeboardM, actual.FreeboardM, "m"))
 }
 
 // change writes a − b signed, or "—".

@@ -48,6 +48,13 @@ type drillDebriefMsg struct {
 	err  error
 }
 
+// drillDiagnosisMsg carries the crew's diagnosis from their readings.
+type drillDiagnosisMsg struct {
+	minutes float64
+	lines   []string
+	err     error
+}
+
 // drillMode is what the screen shows.
 type drillMode int
 
@@ -90,9 +97,12 @@ type drillModel struct {
 	asking   string // "" or what the input asks for: "breach", "note"
 	pickComp int
 
-	debrief   viewport.Model
-	debriefed bool
-	noTick    bool // tests drive the clock themselves
+	diagnosis   []string // the crew's last diagnosis from their readings
+	diagnosing  bool
+	debrief     viewport.Model
+	debriefText string
+	debriefed   bool
+	noTick      bool // tests drive the clock themselves
 }
 
 // RunDrill shows the drill of scenario sc until the instructor quits.
@@ -145,6 +155,9 @@ func (m *drillModel) Update(msg tea.Msg) (tea.Model, tea.Cmd) {
 	case tea.WindowSizeMsg:
 		m.w, m.h = msg.Width, msg.Height
 		m.debrief.Width, m.debrief.Height = msg.Width, max(msg.Height-2, 3)
+		if m.debriefText != "" {
+			m.debrief.SetContent(lipgloss.NewStyle().Width(m.w).Render(m.debriefText))
+		}
 		return m, nil
 	case drillTick:
 		m.advance(drillTickEvery.Seconds())
@@ -154,12 +167,22 @@ func (m *drillModel) Update(msg tea.Msg) (tea.Model, tea.Cmd) {
 			return m, tea.Batch(m.makeDebrief(), m.tick())
 		}
 		return m, m.tick()
+	case drillDiagnosisMsg:
+		m.diagnosing = false
+		if msg.err != nil {
+			m.status = "diagnosis: " + msg.err.Error()
+			return m, nil
+		}
+		m.status = ""
+		m.diagnosis = append([]string{fmt.Sprintf("Our diagnosis from the readings at %s:", clock(msg.minutes))}, msg.lines...)
+		return m, nil
 	case drillDebriefMsg:
 		if msg.err != nil {
 			m.status = "debrief: " + msg.err.Error()
 			return m, nil
 		}
-		m.debrief.SetContent(msg.text)
+		m.debriefText = msg.text
+		m.debrief.SetContent(lipgloss.NewStyle().Width(m.w).Render(msg.text))
 		m.mode = drillDebrief
 		return m, nil
 	case tea.KeyMsg:
@@ -219,6 +242,10 @@ func (m *drillModel) key(k tea.KeyMsg) (tea.Model, tea.Cmd) {
 		m.startPick(pickMark, all)
 	case s == "p" && m.mode == drillCrew:
 		m.startPick(pickPump, all)
+	case s == "g" && m.mode == drillCrew && !m.diagnosing:
+		m.diagnosing = true
+		m.status = "Diagnosing from our readings…"
+		return m, m.diagnose()
 	case s == "s" && m.mode == drillCrew:
 		var on []int
 		for i := range m.ordered {
@@ -374,6 +401,31 @@ func (m *drillModel) answered(what, text string) {
 	}
 }
 
+// diagnose runs the diagnosis on the crew's readings (never the truth):
+// what the onboard computer would tell them from the marks and the
+// inclinometer as read.
+func (m *drillModel) diagnose() tea.Cmd {
+	rs := m.crewReadings(10)
+	v := m.d.Vessel()
+	return func() tea.Msg {
+		if len(rs) == 0 {
+			return drillDiagnosisMsg{err: fmt.Errorf("no readings yet")}
+		}
+		dg, err := engine.Diagnose(v, rs, engine.DiagnoseOptions{Keep: 3})
+		if err != nil {
+			return drillDiagnosisMsg{err: err}
+		}
+		var lines []string
+		for k, e := range dg.Explanations {
+			lines = append(lines, fmt.Sprintf("  %d. %s (marks off by %s rms)", k+1, e.Names(v), report.Fixed(e.DraftRMSM*100, 1, "cm")))
+		}
+		if !dg.Fits {
+			lines = append(lines, "  none explains the readings within their errors")
+		}
+		return drillDiagnosisMsg{minutes: rs[len(rs)-1].Minutes, lines: lines}
+	}
+}
+
 // reportDrill is the drill as the report package writes it.
 func (m *drillModel) reportDrill() report.Drill {
 	return report.Drill{Scenario: m.sc.Name, File: m.sc.File, VesselRef: m.sc.VesselRef, About: m.sc.About, Seed: m.sc.Seed,
@@ -425,7 +477,7 @@ func (m *drillModel) View() string {
 	default:
 		body = m.crewView(m.w, m.h-2)
 	}
-	body = lipgloss.NewStyle().MaxHeight(m.h - 2).Render(body)
+	body = lipgloss.NewStyle().Height(m.h - 2).MaxHeight(m.h - 2).Render(body)
 	return lipgloss.JoinVertical(lipgloss.Left, m.header(), body, m.footer())
 }
 
@@ -454,12 +506,12 @@ func (m *drillModel) footer() string {
 	case m.mode == drillDebrief:
 		s = "↑/↓ pgup/pgdn scroll · q quit"
 	case m.mode == drillInstructor:
-		s = "b breach · f pump fails · n note · D debrief · i crew view · space pause · +/- speed · q quit"
+		s = "b breach · f pump fails · n note · D debrief · i crew · space pause · +/- speed · q quit"
 	default:
-		s = "m mark flooded/dry · p start pump · s stop pump · space pause · +/- speed · i instructor · q quit"
+		s = "m mark · p pump · s stop pump · g diagnose · space pause · +/- speed · i instructor"
 	}
-	if m.status != "" && m.asking == "" {
-		s = m.status + "  |  " + s
+	if m.status != "" && m.asking == "" && m.pick == pickNone {
+		s = m.status + " · " + s
 	}
 	return lipgloss.NewStyle().Width(m.w).MaxWidth(m.w).Render(clipText(s, m.w))
 }

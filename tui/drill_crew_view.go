@@ -65,7 +65,7 @@ func (m *drillModel) crewView(w, h int) string {
 			a1, f1 := report.ReadAftFwd(v, rs[len(rs)-1])
 			dt := rs[len(rs)-1].Minutes - rs[0].Minutes
 			lines = append(lines, fmt.Sprintf("  over %s: heel %s, mean draft %s", report.Duration(dt*60),
-				report.Signed(rs[len(rs)-1].HeelDeg-rs[0].HeelDeg, 1, "°"), report.Signed(((a1+f1)-(a0+f0))/2*100, 0, " cm")))
+				report.Signed(rs[len(rs)-1].HeelDeg-rs[0].HeelDeg, 1, "°"), report.Signed(((a1+f1)-(a0+f0))/2*100, 0, "cm")))
 		}
 	}
 	lines = append(lines, "")
@@ -73,6 +73,9 @@ func (m *drillModel) crewView(w, h int) string {
 		return strings.Join(append(lines, m.pickerView(w, h-len(lines))...), "\n")
 	}
 	picture := m.crewPicture(w)
+	for _, l := range m.diagnosis {
+		picture = append(picture, clipText(l, w))
+	}
 	room := h - len(lines) - len(picture) - 1
 	feed := report.CrewFeed(m.d)
 	lines = append(lines, bold.Render("Told"))
@@ -104,8 +107,18 @@ func (m *drillModel) crewPicture(w int) []string {
 		on = append(on, i)
 	}
 	sort.Ints(on)
+	told := map[int]bool{} // a pump the crew has been told has stopped
+	for _, e := range m.d.Log() {
+		if e.Kind == engine.DrillPump {
+			told[e.Compartment] = e.PumpM3h == 0 && e.Text != ""
+		}
+	}
 	for _, i := range on {
-		pumps = append(pumps, fmt.Sprintf("%s %.0f m³/h", v.Compartments[i].Name, m.ordered[i]))
+		p := fmt.Sprintf("%s %.0f m³/h", v.Compartments[i].Name, m.ordered[i])
+		if told[i] {
+			p += " (reported stopped)"
+		}
+		pumps = append(pumps, p)
 	}
 	out := []string{"", bold.Render("Our picture")}
 	if len(marked) == 0 {

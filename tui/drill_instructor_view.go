@@ -21,9 +21,9 @@ func (m *drillModel) instructorView(w, h int) string {
 	lines = append(lines, bold.Render("The truth (hidden from the crew)"))
 	if p := now.Position; p != nil {
 		lines = append(lines, fmt.Sprintf("  heel %s   draft aft %s  fwd %s   trim %s   deck edge %s above water",
-			report.HeelSide(p.HeelDeg, 1), report.Fixed(p.DraftAftM, 2, " m"), report.Fixed(p.DraftFwdM, 2, " m"),
-			report.Trim(p.TrimM, 2), report.Fixed(p.DeckEdge.HeightM, 2, " m")))
-		lines = append(lines, fmt.Sprintf("  GM %s", report.Fixed(p.GMM, 2, " m")))
+			report.Heel(p.HeelDeg, 1), report.Fixed(p.DraftAftM, 2, "m"), report.Fixed(p.DraftFwdM, 2, "m"),
+			report.Trim(p.TrimM, 2), report.Fixed(p.DeckEdge.HeightM, 2, "m")))
+		lines = append(lines, fmt.Sprintf("  GM %s", report.Fixed(p.GMM, 2, "m")))
 	} else {
 		why := "no floating position"
 		if now.NoEq != nil {
@@ -41,7 +41,7 @@ func (m *drillModel) instructorView(w, h int) string {
 			continue
 		}
 		wet = true
-		lines = append(lines, clipText(fmt.Sprintf("  %-24s %8s   sounding %s", c.Name, report.Fixed(now.WaterM3[i], 1, " m³"), report.Fixed(m.d.Sounding(i), 2, " m")), w))
+		lines = append(lines, clipText(fmt.Sprintf("  %-24s %8s   sounding %s", c.Name, report.Fixed(now.WaterM3[i], 1, "m³"), report.Fixed(m.d.Sounding(i), 2, "m")), w))
 	}
 	if !wet {
 		lines = append(lines, "  none")
