@@ -113,3 +113,17 @@ func Fills(v *engine.Vessel) []float64 {
 	}
 	return out
 }
+
+// ConditionOf returns the loading condition the ship v holds now, as a
+// Condition (every weight its own, every tank holding liquid at its fill):
+// the start of the dashboard's condition when no condition file is given.
+// Applied to v it gives v again.
+func ConditionOf(v *engine.Vessel, name string) *Condition {
+	c := &Condition{Name: name, Weights: append([]engine.Weight(nil), v.Weights...)}
+	for i, cp := range v.Compartments {
+		if cp.Liquid != nil {
+			c.Tanks = append(c.Tanks, TankFill{Compartment: i, Liquid: *cp.Liquid, SoundingM: -1})
+		}
+	}
+	return c
+}
