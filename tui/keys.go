@@ -82,7 +82,7 @@ func (k keyMap) FullHelp() [][]key.Binding {
 			say(k.Remedies, "o", "righting options"), say(k.Girder, "b", "hull girder (l: limits)"),
 			say(k.Readings, "r", "marks, readings (n new)")},
 		{say(k.Hand, "h", "hand working on/off"), say(k.WorkUp, "[ ]", "scroll working/criteria"), k.Report,
-			say(k.Palette, "c", "day / night / mono"), say(k.Help, "?", "close this help"),
+			say(k.Palette, "c", "day / night / mono"), say(conditionKey, "L", "loading condition, save"), say(k.Help, "?", "close this help"),
 			say(k.Quit, "q", "quit (also ctrl+c)")},
 	}
 }

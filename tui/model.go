@@ -85,6 +85,8 @@ type model struct {
 	rd     readingPanel // draft marks, readings by hand and their diagnosis (reading_panel.go)
 	doors  doorsPanel   // the doors and valves, open or shut (doors.go)
 
+	cond conditionPanel // the loading condition: tanks, weights, saving (condition_view.go)
+
 	rend    *lipgloss.Renderer
 	palette int
 	st      Styles
@@ -171,6 +173,7 @@ func newModel(v *engine.Vessel, info *vessels.Info, opts Options) model {
 	if info != nil {
 		m.condition = info.Condition
 	}
+	m.cond = newConditionPanel(v, opts, m.condition)
 	m.into = leadsInto(v)
 	m.derived = derive(v, m.into, nil)
 	m.spaces = make([]space, len(v.Compartments))
@@ -244,9 +247,9 @@ func (m *model) setStyles() {
 // Init computes the intact condition, the reference for every change.
 func (m model) Init() tea.Cmd {
 	v := m.v
-	return newest(0, nil, nil,
+	return tea.Batch(newest(0, nil, nil,
 		func(why string) tea.Msg { return resultMsg{seq: 0, failure: why} },
-		func() tea.Msg { return baselineMsg{engine.Assess(v, v.Intact())} })
+		func() tea.Msg { return baselineMsg{engine.Assess(v, v.Intact())} }), m.cond.start)
 }
 
 // pending reports whether the figures shown are not yet those of the
@@ -266,6 +269,9 @@ func (m model) Update(msg tea.Msg) (tea.Model, tea.Cmd) {
 
 // update handles one message.
 func (m model) update(msg tea.Msg) (tea.Model, tea.Cmd) {
+	if mm, cmd, ok := m.conditionMsg(msg); ok {
+		return mm, cmd
+	}
 	if mm, cmd, ok := m.readingMsg(msg); ok {
 		return mm, cmd
 	}

@@ -232,7 +232,7 @@ func conditionOut(c *Condition, v *engine.Vessel) fileOut {
 // EncodeCondition writes the condition c as a condition file; v is the
 // ship loaded with it (for the fills soundings came to).
 func EncodeCondition(c *Condition, v *engine.Vessel) ([]byte, error) {
-	return encode(conditionOut(c, v), "a loading condition saved by heelwatch")
+	return encode(conditionOut(c, v), "a loading condition saved by heelwatch; read it back with --condition")
 }
 
 // EncodeState writes s as a state file; v is the ship loaded with its
@@ -269,7 +269,7 @@ func EncodeState(s *State, v *engine.Vessel) ([]byte, error) {
 		}
 		out.Readings = append(out.Readings, ro)
 	}
-	return encode(out, "a situation saved by heelwatch's dashboard: condition, damage, connections, readings")
+	return encode(out, "a situation saved by heelwatch's dashboard (condition, damage, connections, readings); take it up again with --resume")
 }
 
 func encode(out fileOut, what string) ([]byte, error) {
@@ -281,7 +281,7 @@ func encode(out fileOut, what string) ([]byte, error) {
 		}
 	}
 	var b bytes.Buffer
-	fmt.Fprintf(&b, "# %s; read it back with --condition or --resume (vessels/FORMAT.md).\n", what)
+	fmt.Fprintf(&b, "# %s (vessels/FORMAT.md).\n", what)
 	if err := toml.NewEncoder(&b).Encode(out); err != nil {
 		return nil, err
 	}

@@ -44,3 +44,34 @@ func withCondition(v *engine.Vessel, info *vessels.Info, path string, stderr io.
 	}
 	return nv, c, exitOK
 }
+
+// resumeState loads the ship base with the state file at path (its
+// condition and its connections' states) for the dashboard to take up.
+func resumeState(base *engine.Vessel, info *vessels.Info, path string, stderr io.Writer) (*engine.Vessel, *vessels.State, int) {
+	s, err := vessels.LoadState(path, base, info)
+	var v *engine.Vessel
+	if err == nil {
+		v, err = s.Condition.Apply(base)
+	}
+	if err != nil {
+		var ps vessels.Problems
+		if errors.As(err, &ps) {
+			for _, p := range ps {
+				fmt.Fprintln(stderr, p.String())
+			}
+			fmt.Fprintf(stderr, "heelwatch: %s: %s; nothing was taken up\n", path, plural(len(ps), "problem"))
+		} else {
+			fmt.Fprintf(stderr, "heelwatch: --resume %s: %v\n", path, err)
+		}
+		return nil, nil, exitInput
+	}
+	for i, open := range s.ConnectionsOpen {
+		if v.Connections[i].Open != open {
+			v = v.WithConnection(i, open)
+		}
+	}
+	if info != nil && s.Condition.Name != "" {
+		info.Condition = s.Condition.Name
+	}
+	return v, s, exitOK
+}

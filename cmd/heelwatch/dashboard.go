@@ -10,6 +10,7 @@ import (
 	"heelwatch/engine"
 	"heelwatch/report"
 	"heelwatch/tui"
+	"heelwatch/vessels"
 )
 
 // dashboardOptions are the top-level flags that only the dashboard uses.
@@ -18,6 +19,7 @@ type dashboardOptions struct {
 	palette   string
 	reportDir string
 	condition string // --condition FILE
+	resume    string // --resume FILE: a state saved from the dashboard
 }
 
 // interactive reports whether the dashboard can run: standard input and
@@ -46,16 +48,36 @@ func runDashboard(vessel string, o dashboardOptions, stdout, stderr io.Writer) i
 			return exitFailed
 		}
 	}
-	v, info, status := openVessel(vessel, stderr)
+	if o.resume != "" && o.condition != "" {
+		fmt.Fprintln(stderr, "heelwatch: --resume takes up a saved state with its own condition: give --resume or --condition, not both")
+		return exitUsage
+	}
+	if o.resume != "" && vessel == "" {
+		var err error
+		if vessel, err = vessels.StateVessel(o.resume); err != nil {
+			fmt.Fprintln(stderr, "heelwatch:", err)
+			return exitInput
+		}
+	}
+	base, info, status := openVessel(vessel, stderr)
 	if status != exitOK {
 		return status
 	}
-	if v, _, status = withCondition(v, info, o.condition, stderr); status != exitOK {
+	v, cond, status := withCondition(base, info, o.condition, stderr)
+	if status != exitOK {
 		return status
+	}
+	var resume *vessels.State
+	if o.resume != "" {
+		if v, resume, status = resumeState(base, info, o.resume, stderr); status != exitOK {
+			return status
+		}
+		cond = resume.Condition
 	}
 	if interactive(stdout) {
 		err := tui.Run(v, info, tui.Options{LogFile: o.logFile, Palette: o.palette,
-			VesselFile: source(info), ReportDir: o.reportDir, Version: version})
+			VesselFile: source(info), ReportDir: o.reportDir, Version: version,
+			Base: base, Condition: cond, Resume: resume})
 		if err != nil {
 			fmt.Fprintln(stderr, "heelwatch:", err)
 			return exitFailed

@@ -65,6 +65,8 @@ Flags:
   --condition FILE     a condition file (weights; tanks by fill, m³, tonnes or
                        sounding) in place of the vessel file's loading condition,
                        for the dashboard and every command that reads a ship
+  --resume FILE        dashboard: take up a state saved with its S key (condition,
+                       damage, doors, readings); --vessel defaults to the state's
   --log FILE           dashboard: append every change (time, heel, drafts) to
                        FILE as it happens, synced, so nothing is lost
   --palette NAME       dashboard: day (default), night (dim red, keeps night
@@ -94,6 +96,7 @@ func run(args []string, stdout, stderr io.Writer) int {
 	fs.StringVar(&dash.palette, "palette", "day", "")
 	fs.StringVar(&dash.reportDir, "reports", "", "")
 	fs.StringVar(&dash.condition, "condition", "", "")
+	fs.StringVar(&dash.resume, "resume", "", "")
 	if err := fs.Parse(args); err != nil {
 		return usageError(err, stdout, stderr, "", func(w io.Writer) { fmt.Fprintf(w, mainHelp, vessels.Default) })
 	}
