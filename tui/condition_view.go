@@ -70,9 +70,6 @@ var (
 	condDownKey    = key.NewBinding(key.WithKeys("down", "j"))
 )
 
-// conditionReplay starts the log line of a state taken up at start.
-const conditionReplay = "taken up from "
-
 // Messages.
 type (
 	// conditionBaseMsg carries the intact assessment of condition gen.
@@ -90,7 +87,7 @@ type (
 // newConditionPanel makes the panel for the ship v as shown (loaded with
 // opts.Condition, if any, over opts.Base).
 func newConditionPanel(v *engine.Vessel, opts Options, name string) conditionPanel {
-	p := conditionPanel{base: opts.Base, resume: opts.Resume, dir: opts.ReportDir, field: newTextField()}
+	p := conditionPanel{base: opts.Base, dir: opts.ReportDir, field: newTextField()}
 	if p.base == nil {
 		p.base = v
 	}
@@ -199,6 +196,7 @@ func (m model) conditionMsg(msg tea.Msg) (tea.Model, tea.Cmd, bool) {
 		if m.lay.small || m.mode != modeBrowse {
 			return m, nil, false
 		}
+		msg = plainKey(msg)
 		if m.cond.typing != condNone {
 			return m.conditionTyped(msg)
 		}
@@ -554,26 +552,17 @@ func (m model) takeCondition(what string) (tea.Model, tea.Cmd) {
 	return mm, tea.Batch(cmd, base)
 }
 
-// resumeCmd takes up a saved state at start: its damage, readings and
-// connections (the condition and connections are already on the ship).
-func (m *model) resumeCmd() tea.Cmd {
-	s := m.cond.resume
-	if s == nil {
-		return nil
+// withCondition gives the dashboard its condition panel and, taking up a
+// saved state, its readings (the state's damage comes as opts.Start).
+func (m model) withCondition(opts Options) model {
+	m.cond = newConditionPanel(m.v, opts, m.condition)
+	if s := opts.Resume; s != nil {
+		m.rd.readings = append([]engine.Reading(nil), s.Readings...)
+		if n := len(s.Readings); n > 0 {
+			m.rd.firstAt = m.now().Add(-time.Duration(s.Readings[n-1].Minutes * float64(time.Minute)))
+		}
 	}
-	m.cond.resume = nil
-	m.rd.readings = append([]engine.Reading(nil), s.Readings...)
-	if n := len(s.Readings); n > 0 {
-		m.rd.firstAt = m.now().Add(-time.Duration(s.Readings[n-1].Minutes * float64(time.Minute)))
-	}
-	d := m.v.Intact()
-	copy(d, s.Damage)
-	if allZero(d) {
-		return nil
-	}
-	mm, cmd := m.commit(d, conditionReplay+s.Condition.File)
-	*m = mm.(model)
-	return cmd
+	return m
 }
 
 // saveCmd writes the condition (or, all, the whole state) to path in a Cmd.

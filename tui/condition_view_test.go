@@ -139,11 +139,10 @@ func TestConditionPanelSavesAndResumes(t *testing.T) {
 	if err != nil {
 		t.Fatal(err)
 	}
-	r := newModel(nv, info, Options{Palette: "day", Base: v, Condition: s.Condition, Resume: s})
+	r := newModel(nv, info, Options{Palette: "day", Base: v, Condition: s.Condition, Resume: s, Start: s.Damage})
 	r.now = fixedClock()
 	r.animate = false
 	r = drive(t, r, tea.WindowSizeMsg{Width: 80, Height: 24})
-	r.cond.start = r.resumeCmd()
 	r = drive(t, r, nil, r.Init())
 	if r.cur == nil || r.cur.Position == nil {
 		t.Fatal("nothing shown after taking up the state")

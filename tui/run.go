@@ -31,12 +31,16 @@ type Options struct {
 	ReportDir string
 	// Version is heelwatch's version, printed in the report.
 	Version string
+	// Start is the damage state the dashboard opens with (--open and
+	// --perm on the command line), undone with the undo key; nil: intact.
+	Start engine.Damage
 	// Base is the ship as her vessel file gives her, when the vessel shown
 	// is loaded with Condition over it; nil: the vessel shown is both.
 	Base      *engine.Vessel
 	Condition *vessels.Condition
-	// Resume is a saved state to take up at start (--resume): its damage
-	// and readings (its condition and connections are on the vessel).
+	// Resume is a saved state to take up at start (--resume): its
+	// readings (its condition and connections are on the vessel, its
+	// damage is Start).
 	Resume *vessels.State
 }
 
@@ -56,7 +60,6 @@ func Run(v *engine.Vessel, info *vessels.Info, opts Options) error {
 		m.file = lg
 		defer lg.close()
 	}
-	m.cond.start = m.resumeCmd()
 	_, err := tea.NewProgram(m, tea.WithAltScreen()).Run()
 	if m.file != nil {
 		if cerr := m.file.close(); err == nil && cerr != nil {

@@ -18,8 +18,10 @@ type dashboardOptions struct {
 	logFile   string
 	palette   string
 	reportDir string
-	condition string // --condition FILE
-	resume    string // --resume FILE: a state saved from the dashboard
+	open      listFlag // compartments open to the sea at start
+	perm      permFlag // their permeabilities
+	condition string   // --condition FILE
+	resume    string   // --resume FILE: a state saved from the dashboard
 }
 
 // interactive reports whether the dashboard can run: standard input and
@@ -48,8 +50,8 @@ func runDashboard(vessel string, o dashboardOptions, stdout, stderr io.Writer) i
 			return exitFailed
 		}
 	}
-	if o.resume != "" && o.condition != "" {
-		fmt.Fprintln(stderr, "heelwatch: --resume takes up a saved state with its own condition: give --resume or --condition, not both")
+	if o.resume != "" && (o.condition != "" || len(o.open) > 0) {
+		fmt.Fprintln(stderr, "heelwatch: --resume takes up a saved state with its own condition and damage: give --resume alone, or --condition and --open")
 		return exitUsage
 	}
 	if o.resume != "" && vessel == "" {
@@ -74,9 +76,17 @@ func runDashboard(vessel string, o dashboardOptions, stdout, stderr io.Writer) i
 		}
 		cond = resume.Condition
 	}
+	start, msg := damageOf(v, o.open, o.perm)
+	if msg != "" {
+		fmt.Fprintln(stderr, "heelwatch:", msg)
+		return exitUsage
+	}
+	if resume != nil {
+		start = resume.Damage
+	}
 	if interactive(stdout) {
 		err := tui.Run(v, info, tui.Options{LogFile: o.logFile, Palette: o.palette,
-			VesselFile: source(info), ReportDir: o.reportDir, Version: version,
+			VesselFile: source(info), ReportDir: o.reportDir, Version: version, Start: start,
 			Base: base, Condition: cond, Resume: resume})
 		if err != nil {
 			fmt.Fprintln(stderr, "heelwatch:", err)
@@ -84,13 +94,18 @@ func runDashboard(vessel string, o dashboardOptions, stdout, stderr io.Writer) i
 		}
 		return exitOK
 	}
-	a := engine.Assess(v, v.Intact())
+	a := engine.Assess(v, start)
 	r := report.New(v, source(info), a, now(), version)
 	r.Condition = info.Condition
+	r.Open = inOrderGiven(v, o.open)
 	if err := report.Text(stdout, r); err != nil {
 		return exitFailed
 	}
-	fmt.Fprintln(stdout, "\nNot a terminal, so no dashboard: this is the intact condition. 'heelwatch solve --open NAME' solves a damage case.")
+	if len(o.open) > 0 {
+		fmt.Fprintln(stdout, "\nNot a terminal, so no dashboard: this is the damage case given with --open.")
+	} else {
+		fmt.Fprintln(stdout, "\nNot a terminal, so no dashboard: this is the intact condition. 'heelwatch solve --open NAME' solves a damage case.")
+	}
 	if a.Position == nil {
 		return exitNoEq
 	}
