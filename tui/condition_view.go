@@ -528,7 +528,9 @@ func (m model) takeRemedy() (tea.Model, tea.Cmd, bool) {
 
 // takeCondition loads the ship with the panel's condition (keeping the
 // connections as they are), and works out the intact reference and the
-// damage state shown for her again.
+// damage state shown for her again. A flooding run going on is stopped
+// (it was of the old condition); the righting options are dropped. The
+// undo key does not undo a change of the condition: it undoes damage.
 func (m model) takeCondition(what string) (tea.Model, tea.Cmd) {
 	nv, err := m.cond.cond.Apply(m.cond.base)
 	if err != nil {
@@ -541,6 +543,7 @@ func (m model) takeCondition(what string) (tea.Model, tea.Cmd) {
 			nv = nv.WithConnection(i, c.Open)
 		}
 	}
+	stop := m.stopFlood() // a run going on is of the old condition
 	m.v = nv
 	m.cond.note = what
 	m.cond.gen++
@@ -549,7 +552,7 @@ func (m model) takeCondition(what string) (tea.Model, tea.Cmd) {
 	gen, v := m.cond.gen, nv
 	base := func() tea.Msg { return conditionBaseMsg{gen: gen, a: engine.Assess(v, v.Intact())} }
 	mm, cmd := m.commit(cloneDamage(m.damage), "condition: "+what)
-	return mm, tea.Batch(cmd, base)
+	return mm, tea.Batch(stop, cmd, base)
 }
 
 // withCondition gives the dashboard its condition panel and, taking up a
