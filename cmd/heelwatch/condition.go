@@ -70,8 +70,22 @@ func resumeState(base *engine.Vessel, info *vessels.Info, path string, stderr io
 			v = v.WithConnection(i, open)
 		}
 	}
-	if info != nil && s.Condition.Name != "" {
+	if info != nil {
 		info.Condition = s.Condition.Name
+		if info.Condition == "" {
+			info.Condition = strings.TrimSuffix(filepath.Base(path), filepath.Ext(path))
+		}
 	}
 	return v, s, exitOK
+}
+
+// openIn names the compartments open to the sea in d, in the ship's order.
+func openIn(v *engine.Vessel, d engine.Damage) []string {
+	out := []string{}
+	for i, s := range d {
+		if s.Open {
+			out = append(out, v.Compartments[i].Name)
+		}
+	}
+	return out
 }

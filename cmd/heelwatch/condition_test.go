@@ -49,3 +49,21 @@ func TestConditionRefusedWithFileLineKey(t *testing.T) {
 		t.Errorf("missing file: exit %d, stderr:\n%s", code, errs)
 	}
 }
+
+// --resume without a terminal prints the state taken up: its condition
+// and its damage; with --condition it is refused as bad usage.
+func TestResumeWithoutTerminal(t *testing.T) {
+	src := "format = 1\nvessel = \"freighter\"\nname = \"Saved at noon\"\n" +
+		"keep = [\"Lightship: hull steel\", \"Lightship: main engine and machinery\", \"Lightship: deckhouse and aft outfit\", \"Lightship: hatch covers and forward outfit\"]\n" +
+		"[[tank]]\nname = \"DB 2 P\"\nfill = 1.0\n[[space]]\nname = \"Wing tank 2 S\"\nopen = true\n"
+	p := filepath.Join(t.TempDir(), "state.toml")
+	os.WriteFile(p, []byte(src), 0o644)
+	code, out, errs := heelwatch(t, "--resume", p)
+	if code != exitOK || !strings.Contains(out, "Saved at noon") || !strings.Contains(out, "Open to the sea: 1 compartment\n  Wing tank 2 S") {
+		t.Errorf("exit %d\n%s\n%s", code, out, errs)
+	}
+	code, _, errs = heelwatch(t, "--resume", p, "--condition", departure)
+	if code != exitUsage || !strings.Contains(errs, "--resume alone") {
+		t.Errorf("both: exit %d, %s", code, errs)
+	}
+}

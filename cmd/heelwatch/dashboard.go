@@ -98,10 +98,15 @@ func runDashboard(vessel string, o dashboardOptions, stdout, stderr io.Writer) i
 	r := report.New(v, source(info), a, now(), version)
 	r.Condition = info.Condition
 	r.Open = inOrderGiven(v, o.open)
+	if resume != nil {
+		r.Open = openIn(v, start)
+	}
 	if err := report.Text(stdout, r); err != nil {
 		return exitFailed
 	}
-	if len(o.open) > 0 {
+	if resume != nil {
+		fmt.Fprintln(stdout, "\nNot a terminal, so no dashboard: this is the state taken up with --resume.")
+	} else if len(o.open) > 0 {
 		fmt.Fprintln(stdout, "\nNot a terminal, so no dashboard: this is the damage case given with --open.")
 	} else {
 		fmt.Fprintln(stdout, "\nNot a terminal, so no dashboard: this is the intact condition. 'heelwatch solve --open NAME' solves a damage case.")
