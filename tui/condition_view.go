@@ -45,7 +45,7 @@ type conditionInput int
 
 const (
 	condNone   conditionInput = iota
-	condTank                  // a tank's contents: "55" (% of capacity), "120t", "80m3"
+	condTank                  // a tank's contents: "55" (% of capacity), "120t", "80m3", "1.2m" (sounding)
 	condWeight                // the chosen weight: "mass lcg tcg vcg"
 	condNew                   // a new weight: "name; mass; lcg; tcg; vcg"
 	condSave                  // the condition's file name
@@ -375,11 +375,15 @@ func (m model) takeTyped(s string) (model, tea.Cmd, string) {
 		i := rows[p.sel].tank
 		c := m.v.Compartments[i]
 		f, err := parseTankAmount(s, c, p.base.Compartments[i], m.v.WaterDensity)
+		what := fmt.Sprintf("%s filled to %.1f %% of capacity", c.Name, f*100)
+		if err == "sounding" {
+			f, what, err = m.sounded(i, s)
+		}
 		if err != "" {
 			return m, nil, err
 		}
 		p.setFill(i, f, m.v)
-		mm, cmd := m.takeCondition(fmt.Sprintf("%s filled to %.1f %% of capacity", c.Name, f*100))
+		mm, cmd := m.takeCondition(what)
 		return mm.(model), cmd, ""
 	case condWeight, condNew:
 		w, err := parseWeight(s, p.typing == condNew, m.v.Hull)
@@ -431,7 +435,7 @@ func parseTankAmount(s string, c, b *engine.Compartment, rho float64) (float64, 
 	}
 	t := strings.ToLower(strings.ReplaceAll(s, " ", ""))
 	unit := "%"
-	for _, u := range []string{"m3", "m³", "t", "%"} {
+	for _, u := range []string{"m3", "m³", "t", "%", "m"} {
 		if strings.HasSuffix(t, u) {
 			unit, t = u, strings.TrimSuffix(t, u)
 			break
@@ -439,7 +443,10 @@ func parseTankAmount(s string, c, b *engine.Compartment, rho float64) (float64, 
 	}
 	x, err := strconv.ParseFloat(t, 64)
 	if err != nil || math.IsNaN(x) || math.IsInf(x, 0) || x < 0 {
-		return 0, fmt.Sprintf("%q: give per cent of capacity (55), tonnes (120t) or m³ (80m3), 0 or more", s)
+		return 0, fmt.Sprintf("%q: give per cent of capacity (55), tonnes (120t), m³ (80m3) or a sounding (1.2m), 0 or more", s)
+	}
+	if unit == "m" {
+		return 0, "sounding"
 	}
 	capM3 := c.CapacityM3()
 	var f float64
@@ -455,6 +462,33 @@ func parseTankAmount(s string, c, b *engine.Compartment, rho float64) (float64, 
 		return 0, fmt.Sprintf("%s is more than %s holds (%.1f m³, %.1f t)", s, c.Name, capM3, capM3*dens)
 	}
 	return math.Min(f, 1), ""
+}
+
+// sounded reads a sounding typed for tank i ("1.2m") at the heel and trim
+// she lies at now, at the tank's pipe (the vessel file's sounding_pipe,
+// else its middle): one reading, not worked again once the fill moves
+// her.
+func (m model) sounded(i int, s string) (float64, string, string) {
+	c := m.v.Compartments[i]
+	x, err := strconv.ParseFloat(strings.TrimSuffix(strings.ToLower(strings.ReplaceAll(s, " ", "")), "m"), 64)
+	if err != nil || math.IsNaN(x) || math.IsInf(x, 0) || x < 0 {
+		return 0, "", fmt.Sprintf("%q: give the sounding in metres, e.g. 1.2m", s)
+	}
+	if m.cur == nil || m.cur.Position == nil {
+		return 0, "", "no floating position to read the sounding at"
+	}
+	pipe := c.DefaultSoundingPipe()
+	if m.info != nil && i < len(m.info.Compartments) && m.info.Compartments[i].SoundingPipe != nil {
+		pipe = *m.info.Compartments[i].SoundingPipe
+	}
+	pos := m.cur.Position
+	vol, verr := c.SoundingVolumeM3(pipe, x, pos.Plane)
+	if verr != nil {
+		return 0, "", verr.Error()
+	}
+	f := math.Min(vol/c.CapacityM3(), 1)
+	return f, fmt.Sprintf("%s sounded %.2f m at heel %s, trim %s: %.1f %% of capacity (%.1f m³)",
+		c.Name, x, heelShort(pos.HeelDeg), num(pos.TrimM, 2)+" m", f*100, vol), ""
 }
 
 // parseWeight reads "mass lcg tcg vcg" (or, new, "name; mass; lcg; tcg;
@@ -672,7 +706,7 @@ func (p conditionPanel) view(v *engine.Vessel, st Styles, w, h int) []string {
 func (p conditionPanel) prompt() string {
 	switch p.typing {
 	case condTank:
-		return "contents: per cent of capacity (55), tonnes (120t) or m³ (80m3); Enter takes, Esc drops"
+		return "contents: per cent of capacity (55), tonnes (120t), m³ (80m3) or sounding (1.2m, read where she lies now); Enter takes, Esc drops"
 	case condWeight:
 		return "mass t, lcg m, tcg m (+ starboard), vcg m; Enter takes, Esc drops"
 	case condNew:

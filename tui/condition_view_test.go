@@ -191,3 +191,39 @@ func TestConditionPanelTakesARightingOption(t *testing.T) {
 		}
 	}
 }
+
+// A sounding typed on the panel is read where she lies: on the box barge
+// the ballast tank is a rectangular prism sounded at its middle, so while
+// the surface cuts all four walls the liquid is μ · L · B · s whatever the
+// trim (the mean depth of a plane over a rectangle is its depth at the
+// centre; derived) — a fill of s over the tank's 1 m height.
+func TestConditionPanelSounding(t *testing.T) {
+	v, info, err := vessels.Open("barge")
+	if err != nil {
+		t.Fatal(err)
+	}
+	m := newModel(v, info, Options{Palette: "day"})
+	m.now = fixedClock()
+	m.animate = false
+	m = drive(t, m, tea.WindowSizeMsg{Width: 120, Height: 40})
+	m = drive(t, m, nil, m.Init())
+	if math.Abs(m.cur.Position.TrimM) < 0.01 {
+		t.Fatal("she floats on an even keel: the test shows nothing of the trim")
+	}
+	m = press(t, m, "L")
+	m = condRowOf(t, m, "DB ballast aft")
+	m = press(t, m, "e")
+	m = typed(t, m, "0.4m")
+	i := indexOf(t, m, "DB ballast aft")
+	if f := m.v.Compartments[i].Liquid.Fill; math.Abs(f-0.4) > 1e-9 {
+		t.Errorf("fill %.12f after sounding 0.4 m, prism 0.4 (%s)", f, m.cond.note)
+	}
+	if !strings.Contains(m.cond.note, "sounded 0.40 m at heel") {
+		t.Errorf("note %q", m.cond.note)
+	}
+	m = press(t, m, "e")
+	m = typed(t, m, "1.5m")
+	if !strings.Contains(m.cond.note, "above the tank's top") {
+		t.Errorf("a sounding above the top: %q", m.cond.note)
+	}
+}
