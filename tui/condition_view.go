@@ -488,7 +488,7 @@ func (m model) sounded(i int, s string) (float64, string, string) {
 	}
 	f := math.Min(vol/c.CapacityM3(), 1)
 	return f, fmt.Sprintf("%s sounded %.2f m at heel %s, trim %s: %.1f %% of capacity (%.1f m³)",
-		c.Name, x, heelShort(pos.HeelDeg), num(pos.TrimM, 2)+" m", f*100, vol), ""
+		c.Name, x, heelShort(pos.HeelDeg), trimText(pos.TrimM), f*100, vol), ""
 }
 
 // parseWeight reads "mass lcg tcg vcg" (or, new, "name; mass; lcg; tcg;
