@@ -108,6 +108,8 @@ func diagnose(v *engine.Vessel, info *vessels.Info, rs []engine.Reading) (report
 		d.TrendNote = "needs readings at two or more times"
 	case len(res.Explanations) == 0 || len(res.Explanations[0].Spaces) == 0:
 		d.TrendNote = "the best explanation floods nothing"
+	case !res.Fits:
+		d.TrendNote = "nothing fits the latest reading, so there is no rate to trust"
 	default:
 		t, err := engine.EstimateTrend(v, rs, res.Explanations[0], info.TrendOptions())
 		if err != nil {
