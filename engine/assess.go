@@ -1,6 +1,9 @@
 package engine
 
-import "sort"
+import (
+	"math"
+	"sort"
+)
 
 // This file holds the result types that the screen and the command line
 // show, and Assess, which computes all of them for one keystroke.
@@ -97,7 +100,11 @@ type GZCurve struct {
 	Downflooding    string  // that opening's name, "" if none
 
 	Note  string   // why the curve ends early, "" when it runs its full span
-	Other *GZCurve // upright ship only: the curve towards the other side (this one is the worse); nil otherwise
+	Other *GZCurve // within NearUprightDeg of upright (Assess, FloodCriteria): the curve towards the other side (upright: this one is the worse); nil otherwise
+
+	upright    Plane // the solved 0° sample (free trim, same displacement)
+	hasUpright bool
+	sp         *cubicSpline // the spline through the samples, fitted once (see GZCurve.fit)
 }
 
 // CriterionResult is one stability criterion applied to a condition.
@@ -128,10 +135,15 @@ type Assessment struct {
 	Criteria []CriterionResult
 	Flags    []Flag
 	Notes    []string // what could not be computed, and why
+	Spills   []Spill  // non-water contents of holed tanks that may escape (see spill.go)
 	// UprightGMM is GM₀, the GM with her held upright at free trim (nil when
-	// unknown): beside Position.GMM, the GM where she lies, it tells a list
-	// from a loll.
+	// unknown), also in Position.GMUprightM: beside Position.GMAtRestM, the
+	// GM where she lies, it tells a list from a loll.
 	UprightGMM *float64
+	// Strength is the hull girder's still-water shear force and bending
+	// moment (strength.go); nil with StrengthWhy saying why.
+	Strength    *Strength
+	StrengthWhy string
 }
 
 // Assess computes everything shown for damage state d of v: the floating
@@ -166,28 +178,43 @@ func Assess(v *Vessel, d Damage) Assessment {
 	up := uprightUnknown
 	var upPtr *float64
 	if a.Position != nil {
-		if gm, ok := UprightGM(v, d, a.Position); ok {
-			up, upPtr = gm, &gm
-			a.UprightGMM = upPtr
-		}
-	}
-	if a.Position != nil {
 		gz, err := RightingLevers(pr, pos)
 		if err != nil {
 			a.Notes = append(a.Notes, "GZ curve not computed: "+err.Error())
 		} else {
-			a.GZ = gz
-			if len(v.CriteriaSets) > 0 {
-				res, err := EvaluateCriteria(v.CriteriaSets, CriteriaCase{Curve: gz, Eq: pos, Damaged: IsDamaged(d), ShipType: v.ShipType, UprightGMM: upPtr})
-				if err != nil {
-					a.Notes = append(a.Notes, "criteria not evaluated: "+err.Error())
-				}
-				a.Criteria = res
+			a.GZ = pr.withOtherSide(gz, pos)
+		}
+		// The upright GM: from the curve's solved 0° sample where there is
+		// one (no further solve), else solved upright on its own.
+		switch {
+		case math.Abs(pos.HeelDeg) < 1e-9:
+			up = a.Position.GMUprightM
+		case a.GZ != nil && a.GZ.hasUpright:
+			up = pr.uprightAt(a.GZ.upright)
+		default:
+			if gm, ok := UprightGM(v, d, a.Position); ok {
+				up = gm
 			}
 		}
+		if !math.IsNaN(up) {
+			a.Position.GMUprightM = up
+			upPtr = &up
+			a.UprightGMM = upPtr
+		}
+		if a.GZ != nil && len(v.CriteriaSets) > 0 {
+			res, err := JudgeCriteria(v.CriteriaSets, CriteriaCase{Curve: a.GZ, Eq: *a.Position, Damaged: IsDamaged(d), ShipType: v.ShipType, UprightGMM: upPtr})
+			if err != nil {
+				a.Notes = append(a.Notes, "criteria not evaluated: "+err.Error())
+			}
+			a.Criteria = res
+		}
 	}
+	a.Strength, a.StrengthWhy = GirderStrength(v, d, a.Position)
 	a.Flags = flags(v, d, a.Position, a.NoEq, a.Hand, up)
-	if more := StabilityFlags(v, a.Position, a.GZ, a.Criteria); len(more) > 0 {
+	a.Spills = Spills(v, d)
+	more := append(StabilityFlags(v, a.Position, a.GZ, a.Criteria), StrengthFlags(a.Strength)...)
+	more = append(more, spillFlags(a.Spills)...)
+	if len(more) > 0 {
 		a.Flags = append(a.Flags, more...)
 		sort.SliceStable(a.Flags, func(i, j int) bool { return a.Flags[i].Severity > a.Flags[j].Severity })
 	}

@@ -14,7 +14,7 @@ type Box struct{ X0, X1, Y0, Y1, Z0, Z1 float64 }
 type Liquid struct {
 	Name    string  // e.g. "fuel oil", "sea water ballast"
 	Density float64 // t/m³
-	Fill    float64 // fraction of the tank's volume, 0 ≤ Fill ≤ 1
+	Fill    float64 // fraction of the tank's capacity (CapacityM3: μ × its volume inside the hull), 0 ≤ Fill ≤ 1
 }
 
 // Compartment is a space of the ship: a box clipped by the hull, so that a
@@ -25,6 +25,7 @@ type Compartment struct {
 	Permeability float64 // μ, 0 < μ ≤ 1: the fraction of the space that water can fill
 	Box          Box
 	Liquid       *Liquid // nil for a dry space
+	PumpM3h      float64 // pumping capacity on the compartment, m³/h (0: none given); the righting options' times
 
 	solid *Solid
 }
@@ -34,6 +35,13 @@ func (c *Compartment) Solid() *Solid { return c.solid }
 
 // Volume returns the compartment's moulded volume (m³), before permeability.
 func (c *Compartment) Volume() float64 { return c.solid.Volume() }
+
+// CapacityM3 returns what the compartment holds when full (m³): μ × its
+// volume inside the hull. For a tank this is its capacity, and Liquid.Fill
+// is a fraction of it; the sea fills the same μ of the space, so a tank
+// pressed full of sea water and holed wholly below the water changes
+// nothing (heelwatch conventions, "tanks and permeability").
+func (c *Compartment) CapacityM3() float64 { return c.Permeability * c.solid.Volume() }
 
 // NewCompartment clips box b by the hull. It fails when the box is not a
 // proper box or holds no part of the hull.

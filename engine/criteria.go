@@ -154,9 +154,15 @@ var criteriaSets = []criteriaSet{
 					}
 					low, name := math.Inf(1), ""
 					for _, o := range k.Eq.Openings {
+						if o.IntoFlooded {
+							continue // into a space flooded already: no progressive flooding
+						}
 						if o.HeightM < low {
 							low, name = o.HeightM, o.Name
 						}
+					}
+					if name == "" {
+						return 0, "every opening leads into a space flooded already"
 					}
 					return low, "height above the water of the lowest opening, " + name
 				}},

@@ -104,7 +104,7 @@ func NewProblem(v *Vessel, d Damage) *Problem {
 	pr.hints = v.Hull.solid.newArcHints()
 	for i, c := range v.Compartments {
 		s := d.state(i)
-		mu := v.permeability(d, i)
+		mu := v.Permeability(d, i)
 		switch {
 		case s.Open:
 			pr.open = append(pr.open, openSpace{c.solid, mu, c.solid.newArcHints()})
@@ -141,6 +141,7 @@ type state struct {
 	j      [3][3]float64
 	heldIm []Immersion // held water at its own level, scaled by μ
 	heldPl []Plane     // the held water's surface in each compartment
+	jac    bool        // j was computed
 }
 
 // eval computes the residuals of equilibrium and their exact Jacobian with
@@ -179,13 +180,7 @@ func (pr *Problem) eval(p Plane, withJac bool) state {
 		if withJac && im.AW > 0 {
 			// The inner level moves to keep the volume: dA_in = −(SX dB + SY dC)/AW.
 			dab, dac := -im.SX/im.AW, -im.SY/im.AW
-			dMX := [3]float64{im.SX, im.IXX, im.IXY}
-			dMY := [3]float64{im.SY, im.IXY, im.IYY}
-			dMZ := [3]float64{
-				pin.A*im.AW + pin.B*im.SX + pin.C*im.SY,
-				pin.A*im.SX + pin.B*im.IXX + pin.C*im.IXY,
-				pin.A*im.SY + pin.B*im.IXY + pin.C*im.IYY,
-			}
+			dMX, dMY, dMZ := momentRates(im, pin)
 			for r, d := range [3][3]float64{dMX, dMY, dMZ} {
 				dg[r][1] += m * (d[1] + d[0]*dab)
 				dg[r][2] += m * (d[2] + d[0]*dac)
@@ -202,14 +197,9 @@ func (pr *Problem) eval(p Plane, withJac bool) state {
 	if !withJac {
 		return s
 	}
+	s.jac = true
 	dV := [3]float64{e.AW, e.SX, e.SY}
-	dMX := [3]float64{e.SX, e.IXX, e.IXY}
-	dMY := [3]float64{e.SY, e.IXY, e.IYY}
-	dMZ := [3]float64{
-		p.A*e.AW + p.B*e.SX + p.C*e.SY,
-		p.A*e.SX + p.B*e.IXX + p.C*e.IXY,
-		p.A*e.SY + p.B*e.IXY + p.C*e.IYY,
-	}
+	dMX, dMY, dMZ := momentRates(e, p)
 	for q := 0; q < 3; q++ {
 		dxg, dyg, dzg := dg[0][q]/W, dg[1][q]/W, dg[2][q]/W
 		s.j[0][q] = dV[q]
@@ -219,6 +209,22 @@ func (pr *Problem) eval(p Plane, withJac bool) state {
 	s.j[1][1] += e.MZ - zg*e.V
 	s.j[2][2] += e.MZ - zg*e.V
 	return s
+}
+
+// momentRates returns the rates of change of the moments MX, MY and MZ of
+// the part of a solid below plane p with p's A, B and C: the waterplane's
+// first and second moments (a plane z = A + B·x + C·y moves the water by
+// dA + x·dB + y·dC at (x, y)), and for MZ the same weighted by the
+// plane's height there.
+func momentRates(im Immersion, p Plane) (dMX, dMY, dMZ [3]float64) {
+	dMX = [3]float64{im.SX, im.IXX, im.IXY}
+	dMY = [3]float64{im.SY, im.IXY, im.IYY}
+	dMZ = [3]float64{
+		p.A*im.AW + p.B*im.SX + p.C*im.SY,
+		p.A*im.SX + p.B*im.IXX + p.C*im.IXY,
+		p.A*im.SY + p.B*im.IXY + p.C*im.IYY,
+	}
+	return dMX, dMY, dMZ
 }
 
 // merit is the scaled squared residual norm.
@@ -390,8 +396,20 @@ func (pr *Problem) AtHeel(heelRad float64, guess Plane) (Plane, float64, error) 
 // Solve finds where v floats under damage d: the free-floating equilibrium
 // at the actual heel and trim. It returns a *NoEquilibrium error when the
 // vessel sinks or capsizes.
+//
+// The position's upright GM (GMUprightM) is filled in.
 func Solve(v *Vessel, d Damage) (Position, error) {
-	return NewProblem(v, d).Equilibrium()
+	pr := NewProblem(v, d)
+	pos, err := pr.Equilibrium()
+	if err != nil {
+		return pos, err
+	}
+	if math.IsNaN(pos.GMUprightM) {
+		if pl, _, err := pr.AtHeel(0, Plane{A: pos.Plane.A, B: pos.Plane.B}); err == nil {
+			pos.GMUprightM = pr.uprightAt(pl)
+		}
+	}
+	return pos, nil
 }
 
 // Equilibrium finds the free-floating position.

@@ -50,6 +50,8 @@ import (
 //	                                       0.05 m (danger); under 20° or 0.10 m (caution)
 //	deck-edge-near        caution          the deck edge is clear but within 0.30 m of    a little more heel or water puts water on deck
 //	                                       the water, or within 5° of further heel        there: how far, and at what heel
+//	spill                 caution          a tank holding oil or another liquid that is   what may be escaping, how much, the rule it is
+//	                                       not water is holed (spill.go)                  counted by, and to report the pollution
 //
 // A flag is a pure function of the state: it clears as soon as its cause is
 // gone.
@@ -60,18 +62,21 @@ const (
 	FlagBilgeEmerged    = "bilge-emerged"
 	FlagKeelEmerged     = "keel-emerged"
 	FlagOpening         = "opening-immersed"
-	FlagClosure         = "closure-immersed"
-	FlagSpaceTopUnder   = "space-top-under"
-	FlagSpaceBottomOut  = "space-bottom-clear"
-	FlagNotWallSided    = "not-wall-sided"
-	FlagGMNegative      = "gm-negative"
-	FlagHeavyTrim       = "heavy-trim"
-	FlagWillSink        = "will-sink"
-	FlagWillCapsize     = "will-capsize"
-	FlagNotSolved       = "not-solved"
-	FlagCriteriaFailed  = "criteria-failed"
-	FlagLittleStability = "little-stability"
-	FlagDeckEdgeNear    = "deck-edge-near"
+	// FlagOpeningIntoFlooded: an immersed opening leads into a compartment
+	// already flooded (Opening.LeadsTo): info, no progressive flooding.
+	FlagOpeningIntoFlooded = "opening-into-flooded"
+	FlagClosure            = "closure-immersed"
+	FlagSpaceTopUnder      = "space-top-under"
+	FlagSpaceBottomOut     = "space-bottom-clear"
+	FlagNotWallSided       = "not-wall-sided"
+	FlagGMNegative         = "gm-negative"
+	FlagHeavyTrim          = "heavy-trim"
+	FlagWillSink           = "will-sink"
+	FlagWillCapsize        = "will-capsize"
+	FlagNotSolved          = "not-solved"
+	FlagCriteriaFailed     = "criteria-failed"
+	FlagLittleStability    = "little-stability"
+	FlagDeckEdgeNear       = "deck-edge-near"
 )
 
 // Thresholds of the flags.
@@ -233,14 +238,14 @@ func flags(v *Vessel, d Damage, pos *Position, noEq *NoEquilibrium, hand *HandWo
 			// The angles are small; what parts them is the coupling of heel
 			// and trim through the waterplane's product of inertia.
 			add(FlagPastSmallAngles, Caution, "The hand method and the direct solution part: heel %s against %s (%.2f° apart), drafts up to %.1f %% apart. The damage is off the centreline and off midships together, so heel and trim work on each other, which the plain hand method leaves out; kept in, the hand working gives %s and %.2f m trim, as the direct solution does. Work from the direct solution.",
-				flagHeel(hand.HeelDeg), flagHeel(pos.HeelDeg), dh, 100*dd, flagHeel(hand.CoupledHeelDeg), hand.CoupledTrimM)
+				heelWords(hand.HeelDeg), heelWords(pos.HeelDeg), dh, 100*dd, heelWords(hand.CoupledHeelDeg), hand.CoupledTrimM)
 		default:
 			add(FlagPastSmallAngles, Caution, "The hand method and the direct solution part: heel %s against %s (%.2f° apart), drafts up to %.1f %% apart. She is beyond the small angles the hand method assumes: work from the direct solution.",
-				flagHeel(hand.HeelDeg), flagHeel(pos.HeelDeg), dh, 100*dd)
+				heelWords(hand.HeelDeg), heelWords(pos.HeelDeg), dh, 100*dd)
 		}
 	} else if math.Abs(pos.HeelDeg) > FlagLargeHeelDeg {
 		add(FlagPastSmallAngles, Caution, "She lies at %s, beyond the %.0f° where small-angle hand methods hold: work from the direct solution and expect the righting lever to change quickly with more heel.",
-			flagHeel(pos.HeelDeg), FlagLargeHeelDeg)
+			heelWords(pos.HeelDeg), FlagLargeHeelDeg)
 	}
 
 	// Deck edge and margin line.
@@ -248,7 +253,7 @@ func flags(v *Vessel, d Damage, pos *Position, noEq *NoEquilibrium, hand *HandWo
 		add(FlagDeckEdge, Danger, "The deck edge is under water on %s %s, %.2f m deep: water lies on deck there and the righting lever falls off from here.",
 			de.Side.On(), flagWhere(de.XM, L), -de.HeightM)
 	}
-	if ml := pos.MarginLine; ml.HeightM < 0 {
+	if ml := pos.MarginLine; ml.HeightM < 0 && v.Passenger() {
 		add(FlagMarginLine, Danger, "The margin line is under water on %s %s, by %.2f m: she is past the limit her subdivision was laid out for and water can spread along the bulkhead deck.",
 			ml.Side.On(), flagWhere(ml.XM, L), -ml.HeightM)
 	}
@@ -273,6 +278,11 @@ func flags(v *Vessel, d Damage, pos *Position, noEq *NoEquilibrium, hand *HandWo
 		what := "\"" + o.Name + "\""
 		if o.Kind != "" {
 			what = o.Kind + " " + what
+		}
+		if o.IntoFlooded && !o.Weathertight {
+			add(FlagOpeningIntoFlooded, Info, "The %s %s is %.2f m under water, but it leads into %s, which is flooded already: no further flooding through it.",
+				what, flagPoint(o.X, o.Y, o.Z, L), -o.HeightM, o.LeadsTo)
+			continue
 		}
 		if o.Weathertight {
 			add(FlagClosure, Caution, "The weathertight %s %s is %.2f m under water: the sea is kept out only while its closure holds, and weathertight is not watertight under a standing head of water. Check it is secured and keep watch on it.",
@@ -315,7 +325,7 @@ func flags(v *Vessel, d Damage, pos *Position, noEq *NoEquilibrium, hand *HandWo
 	// Negative GM upright: loll.
 	if gm := uprightGM; gm < 0 {
 		add(FlagGMNegative, Danger, "Upright, in this state, her GM is %.2f m: she is unstable upright and lolls to whichever side she falls (now %s). Do not counter-ballast the high side: she would flop over to the other side, perhaps further. The remedy is to lower G: take off or lower weights high up; fill a low tank on the low side only with care, one at a time, as a slack tank adds free surface before it helps.",
-			gm, flagHeel(pos.HeelDeg))
+			gm, heelWords(pos.HeelDeg))
 	}
 
 	// Trim.
@@ -330,17 +340,6 @@ func flags(v *Vessel, d Damage, pos *Position, noEq *NoEquilibrium, hand *HandWo
 
 	sort.SliceStable(out, func(i, j int) bool { return out[i].Severity > out[j].Severity })
 	return out
-}
-
-// flagHeel writes a heel in words: "3.21° to starboard".
-func flagHeel(deg float64) string {
-	switch {
-	case deg > 0:
-		return fmt.Sprintf("%.2f° to starboard", deg)
-	case deg < 0:
-		return fmt.Sprintf("%.2f° to port", -deg)
-	}
-	return "upright"
 }
 
 // flagWhere places x along the ship: "at the aft perpendicular (x = 0.0 m)".
@@ -382,17 +381,7 @@ func flagWhereOnFace(y float64, p Plane, low bool) string {
 		}
 		return "at its forward end"
 	}
-	return "on the " + flagSideOf(y) + " side"
-}
-
-func flagSideOf(y float64) string {
-	switch {
-	case y > 0:
-		return "starboard"
-	case y < 0:
-		return "port"
-	}
-	return "centreline"
+	return "on the " + sideWords(y) + " side"
 }
 
 // flagBottomOut returns the highest point of the bottom above the water,
@@ -544,8 +533,11 @@ func flagWallSided(h *Hull, p Plane) string {
 // one the intact criteria ask for. When she floats upright already it is
 // the solved position's. ok is false when she cannot be solved upright.
 func UprightGM(v *Vessel, d Damage, pos *Position) (gm float64, ok bool) {
+	if !math.IsNaN(pos.GMUprightM) && pos.GMUprightM != 0 {
+		return pos.GMUprightM, true
+	}
 	if math.Abs(pos.HeelDeg) < 1e-9 {
-		return pos.GMM, true
+		return pos.GMM * NewProblem(v, d).shipBasis(), true
 	}
 	pr := NewProblem(v, d)
 	if !(pr.vmax > 0) || pr.massT/pr.rho >= pr.vmax {
@@ -556,6 +548,5 @@ func UprightGM(v *Vessel, d Damage, pos *Position) (gm float64, ok bool) {
 	if err != nil {
 		return 0, false
 	}
-	up := pr.position(pr.eval(pl, false), 0)
-	return up.GMM, true
+	return pr.uprightAt(pl), true
 }

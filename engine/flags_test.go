@@ -198,7 +198,12 @@ func TestFlagDeckEdgeAndMarginLine(t *testing.T) {
 			side = "port"
 		}
 		flagExpect(t, c.name, fl, engine.FlagDeckEdge, c.deck, side+" side")
-		flagExpect(t, c.name, fl, engine.FlagMarginLine, c.margin, side+" side")
+		// The margin line is a passenger-ship notion (SOLAS 1974 II-1
+		// definitions): a cargo ship has none.
+		flagExpect(t, c.name+" (cargo ship)", fl, engine.FlagMarginLine, false)
+		v.ShipType = "passenger"
+		fl, _, _ = flagRun(t, v, v.Intact())
+		flagExpect(t, c.name+" (passenger ship)", fl, engine.FlagMarginLine, c.margin, side+" side")
 	}
 }
 

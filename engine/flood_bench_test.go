@@ -27,7 +27,7 @@ func bundledWingCase(tb testing.TB) engine.FloodCase {
 		}
 		h := ci.Hole
 		return engine.FloodCase{Vessel: v, Compartment: i,
-			Hole: engine.Hole{AreaM2: h.AreaM2, XM: h.X, YM: h.Y, ZM: h.Z, Cd: h.Cd}}
+			Hole: *h}
 	}
 	tb.Skipf("the bundled vessel %q has no wing tank with a hole", vessels.Default)
 	return engine.FloodCase{}
@@ -63,8 +63,8 @@ func TestFloodBundledWingTank(t *testing.T) {
 		}
 		prevW, prevD = s.WaterM3, s.Position.DraftMidM
 	}
-	t.Logf("%s: equalised after %s (%.0f s), %.2f m³; final drafts %.4f/%.4f/%.4f heel %.3f°, lost buoyancy %.4f/%.4f/%.4f heel %.3f° (largest draft difference %.2f mm); %d steps, %d rejected, %d solves",
-		rep.Compartment, engine.FormatDuration(rep.EqualiseS), rep.EqualiseS, rep.FinalWaterM3,
+	t.Logf("%s: equalised after %.0f s, %.2f m³; final drafts %.4f/%.4f/%.4f heel %.3f°, lost buoyancy %.4f/%.4f/%.4f heel %.3f° (largest draft difference %.2f mm); %d steps, %d rejected, %d solves",
+		rep.Compartment, rep.EqualiseS, rep.FinalWaterM3,
 		f.DraftAftM, f.DraftMidM, f.DraftFwdM, f.HeelDeg, lb.DraftAftM, lb.DraftMidM, lb.DraftFwdM, lb.HeelDeg, 1000*rep.FinalDiffM,
 		rep.Steps, rep.Rejected, rep.Solves)
 	for _, e := range rep.Events {

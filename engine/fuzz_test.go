@@ -23,7 +23,14 @@ func refCheckFinite(t testing.TB, name string, pos engine.Position) {
 	walk = func(path string, v reflect.Value) {
 		switch v.Kind() {
 		case reflect.Float64:
-			if f := v.Float(); math.IsNaN(f) || math.IsInf(f, 0) {
+			f := v.Float()
+			if path == "Position.GMUprightM" && math.IsNaN(f) {
+				// Documented: NaN when she cannot be solved upright (she
+				// floats heeled but founders brought upright); shown as
+				// "—" and written null.
+				return
+			}
+			if math.IsNaN(f) || math.IsInf(f, 0) {
 				t.Errorf("%s: %s = %v", name, path, f)
 			}
 		case reflect.Struct:

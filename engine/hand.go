@@ -126,41 +126,13 @@ func HandMethod(v *Vessel, d Damage) (*HandWorking, error) {
 		return nil, &HandNotApplicable{"the hand method is for box-shaped vessels; this hull is from station offsets"}
 	}
 	L, B, D := h.LengthM, h.BreadthM, h.DepthM
-	var spaces []handSpace
-	var held []string
-	var spilt []string
-	var spiltT float64
-	for i, c := range v.Compartments {
-		s := d.state(i)
-		switch {
-		case s.Open:
-			b := c.Box
-			hs := handSpace{name: c.Name, mu: v.permeability(d, i),
-				x0: math.Max(b.X0, 0), x1: math.Min(b.X1, L),
-				y0: math.Max(b.Y0, -B/2), y1: math.Min(b.Y1, B/2),
-				z0: math.Max(b.Z0, 0), z1: math.Min(b.Z1, D)}
-			spaces = append(spaces, hs)
-			if m, _, _, _, _ := v.TankContents(i); m > 0 {
-				spilt = append(spilt, c.Name)
-				spiltT += m
-			}
-		case s.WaterM3 > 0:
-			held = append(held, c.Name)
-		}
-	}
-	switch {
-	case len(held) > 0 && len(spaces) == 0:
-		return nil, &HandNotApplicable{fmt.Sprintf("the only floodwater is held as an added weight (%s); the lost-buoyancy hand method needs a compartment open to the sea", strings.Join(held, ", "))}
-	case len(held) > 0:
-		return nil, &HandNotApplicable{fmt.Sprintf("floodwater is held as an added weight in %s; the lost-buoyancy hand method takes only compartments open to the sea", strings.Join(held, ", "))}
-	case len(spaces) == 0:
-		return nil, &HandNotApplicable{"no compartment is open to the sea"}
+	spaces, spilt, spiltT, err := handSpaces(v, d)
+	if err != nil {
+		return nil, err
 	}
 
 	w := &HandWorking{}
-	step := func(label, formula string, value float64, unit string) {
-		w.Steps = append(w.Steps, HandStep{label, formula, value, unit})
-	}
+	step := w.step
 	n := handNum
 	ld := v.Loading(d)
 	rho := v.WaterDensity
@@ -179,22 +151,6 @@ func HandMethod(v *Vessel, d Damage) (*HandWorking, error) {
 	}
 
 	// Lost volume and waterplane at the intact draft.
-	lost := func(t float64) float64 {
-		var s float64
-		for _, c := range spaces {
-			s += c.mu * c.plan() * c.depth(t)
-		}
-		return s
-	}
-	cutArea := func(t float64) float64 {
-		var s float64
-		for _, c := range spaces {
-			if c.pierces(t) {
-				s += c.mu * c.plan()
-			}
-		}
-		return s
-	}
 	for _, c := range spaces {
 		where := "cut by the waterline"
 		switch {
@@ -207,63 +163,14 @@ func HandMethod(v *Vessel, d Damage) (*HandWorking, error) {
 			fmt.Sprintf("μ·l·b·d = %s×%s×%s×%s", n(c.mu), n(c.l()), n(c.b()), n(c.depth(T0))),
 			c.mu*c.plan()*c.depth(T0), "m³")
 	}
-	v0 := lost(T0)
-	a0 := cutArea(T0)
+	v0 := handLost(spaces, T0)
+	a0 := handCutArea(spaces, T0)
 	step("lost volume v", "Σ μ·l·b·d at T₀", v0, "m³")
 	step("lost waterplane a", "Σ μ·l·b of the spaces cut at T₀", a0, "m²")
 	step("intact waterplane A", fmt.Sprintf("L·B − a = %s − %s", n(LB), n(a0)), LB-a0, "m²")
 
-	// Sinkage, in stages where a space's top or bottom is passed: on each
-	// stage the volume still wanting is regained over the waterplane intact
-	// there. Each stage passes at least one of the 2·n heights, so the loop
-	// ends.
-	T := T0
-	T1 := math.NaN()
-	staged := false
-	for stage := 0; stage <= 2*len(spaces)+1; stage++ {
-		next := D
-		for _, c := range spaces {
-			for _, z := range [2]float64{c.z0, c.z1} {
-				if z > T && z < next {
-					next = z
-				}
-			}
-		}
-		want := V - (LB*T - lost(T)) // volume still to be regained at T, ≥ 0
-		area := LB - cutArea(T)
-		if stage == 0 && area > 0 {
-			step("sinkage s", fmt.Sprintf("v/A = %s/%s", n(want), n(area)), want/area, "m")
-		}
-		if area > 0 && T+want/area <= next {
-			T1 = T + want/area
-			if staged {
-				step("last stage", fmt.Sprintf("%s + %s/%s (wanting %s m³ over an intact waterplane of %s m²)", n(T), n(want), n(area), n(want), n(area)), T1, "m")
-			}
-			break
-		}
-		if next >= D {
-			break
-		}
-		if stage == 0 {
-			var passed []string
-			for _, c := range spaces {
-				if c.z0 == next {
-					passed = append(passed, "bottom of "+c.name)
-				} else if c.z1 == next {
-					passed = append(passed, "top of "+c.name)
-				}
-			}
-			step("the sinkage passes the "+strings.Join(passed, " and "),
-				fmt.Sprintf("at %s m, below T₀ + s: the lost waterplane changes there, so the sinkage is worked in stages", n(next)),
-				next, "m")
-		}
-		staged = true
-		regained := area * (next - T)
-		step(fmt.Sprintf("stage %s → %s m", n(T), n(next)),
-			fmt.Sprintf("intact waterplane %s m² × %s m regains %s m³ of %s", n(area), n(next-T), n(regained), n(want)),
-			want-regained, "m³")
-		T = next
-	}
+	// Sinkage, in stages where a space's top or bottom is passed.
+	T1, staged := w.handSinkage(spaces, V, T0, LB, D)
 	if math.IsNaN(T1) || T1 >= D {
 		return nil, &HandNotApplicable{fmt.Sprintf("the lost buoyancy is more than the hull has above the waterline: the sinkage would take the mean draft past the deck at %s m, leaving no waterplane for the method", n(D))}
 	}
@@ -300,8 +207,8 @@ func HandMethod(v *Vessel, d Damage) (*HandWorking, error) {
 		step("lost waterplane at T₁", "Σ μ·l·b of the spaces cut at T₁", aL, "m²")
 		step("intact waterplane at T₁", fmt.Sprintf("L·B − a = %s − %s", n(LB), n(aL)), A1, "m²")
 	}
-	step("transverse shift of the centre of flotation", fmt.Sprintf("(0 − Σ μ·l·b·yc)/A = %s/%s (%s)", n(-myL), n(A1), handSideWord(yF)), yF, "m")
-	step("longitudinal shift of the centre of flotation", fmt.Sprintf("(L·B·L/2 − Σ μ·l·b·xc)/A − L/2 = (%s − %s)/%s − %s (%s)", n(LB*L/2), n(mxL), n(A1), n(L/2), handEndWord(xF-L/2)), xF-L/2, "m")
+	step("transverse shift of the centre of flotation", fmt.Sprintf("(0 − Σ μ·l·b·yc)/A = %s/%s (%s)", n(-myL), n(A1), signWords(yF, "starboard", "port", "on the centreline")), yF, "m")
+	step("longitudinal shift of the centre of flotation", fmt.Sprintf("(L·B·L/2 − Σ μ·l·b·xc)/A − L/2 = (%s − %s)/%s − %s (%s)", n(LB*L/2), n(mxL), n(A1), n(L/2), signWords(xF-L/2, "forward", "aft", "none")), xF-L/2, "m")
 
 	iT := L*B*B*B/12 + LB*yF*yF
 	iL := B*L*L*L/12 + LB*(L/2-xF)*(L/2-xF)
@@ -370,27 +277,16 @@ func HandMethod(v *Vessel, d Damage) (*HandWorking, error) {
 	// The list.
 	step("TCB of the remaining buoyant body", fmt.Sprintf("−Σ μ·l·b·d·yc/V = %s/%s", n(my), n(V)), w.TCBM, "m")
 	lever := ld.TCGM - w.TCBM
-	step("list lever", fmt.Sprintf("TCG − TCB = %s − %s (%s)", n(ld.TCGM), n(w.TCBM), handLeverWord(lever)), lever, "m")
-	var tanT float64
-	if w.GMM > 0 {
-		tanT = lever / w.GMM
-		step("tan θ", fmt.Sprintf("lever/GM = %s/%s", n(lever), n(w.GMM)), tanT, "")
-	} else {
-		tanT = handLollTan(w.GMM, w.BMM, lever)
-		formula := fmt.Sprintf("GM ≤ 0, no small-angle list: root of GM·t + ½·BM·t³ = lever, %s·t + ½×%s·t³ = %s", n(w.GMM), n(w.BMM), n(lever))
-		if lever == 0 {
-			formula = fmt.Sprintf("GM ≤ 0, angle of loll to either side: √(−2GM/BM) = √(−2×%s/%s)", n(w.GMM), n(w.BMM))
-		}
-		step("tan θ (loll)", formula, tanT, "")
-	}
+	step("list lever", fmt.Sprintf("TCG − TCB = %s − %s (%s)", n(ld.TCGM), n(w.TCBM), signWords(lever, "G to starboard of B", "G to port of B", "G over B")), lever, "m")
+	tanT := w.handHeelTan(lever)
 	w.HeelDeg = math.Atan(tanT) * 180 / math.Pi
-	step("heel θ", fmt.Sprintf("atan(%s), %s", strings.TrimSuffix(strings.TrimPrefix(n(tanT), "("), ")"), handHeelWord(tanT)), w.HeelDeg, "°")
+	step("heel θ", fmt.Sprintf("atan(%s), %s", strings.TrimSuffix(strings.TrimPrefix(n(tanT), "("), ")"), signWords(tanT, "starboard side down", "port side down", "upright")), w.HeelDeg, "°")
 
 	// Trim.
 	step("LCB of the remaining buoyant body", fmt.Sprintf("(L·B·T₁·L/2 − Σ μ·l·b·d·xc)/V = %s/%s", n(mx), n(V)), w.LCBM, "m")
 	tlever := w.LCBM - ld.LCGM
 	w.TrimM = tlever * L / w.GMLM
-	step("trim", fmt.Sprintf("(LCB − LCG)·L/GML = (%s − %s)×%s/%s (%s)", n(w.LCBM), n(ld.LCGM), n(L), n(w.GMLM), handTrimWord(w.TrimM)), w.TrimM, "m")
+	step("trim", fmt.Sprintf("(LCB − LCG)·L/GML = (%s − %s)×%s/%s (%s)", n(w.LCBM), n(ld.LCGM), n(L), n(w.GMLM), signWords(w.TrimM, "by the stern", "by the head", "even keel")), w.TrimM, "m")
 
 	// Drafts on the centreline, the waterline turning about F.
 	w.DraftAftM = T1 + w.TrimM*xF/L - tanT*yF
@@ -401,20 +297,163 @@ func HandMethod(v *Vessel, d Damage) (*HandWorking, error) {
 	w.Waterline = Plane{A: w.DraftAftM, B: -w.TrimM / L, C: tanT}
 
 	// Heel and trim solved together (I_xy kept): for the record.
-	w.CoupledHeelDeg, w.CoupledTrimM = w.HeelDeg, w.TrimM
-	if w.GMM > 0 && iXY != 0 {
-		k := iXY / V
-		det := w.GMM*w.GMLM - k*k
-		if det > 0 {
-			ry, rx := lever, ld.LCGM-w.LCBM
-			g := (ry*w.GMLM - k*rx) / det
-			b := (w.GMM*rx - k*ry) / det
-			w.CoupledHeelDeg = math.Atan(g) * 180 / math.Pi
-			w.CoupledTrimM = -b * L
-			step("product of inertia I_xy (neglected above)", fmt.Sprintf("about the new axes; heel and trim solved together give %s° and %s m", n(w.CoupledHeelDeg), n(w.CoupledTrimM)), iXY, "m⁴")
+	w.handCoupled(iXY, V, L, lever, ld.LCGM)
+	return w, nil
+}
+
+// handSpaces returns the compartments open to the sea as the hand method's
+// spaces (clipped to the box), with the tanks among them whose contents run
+// out (names and tonnes). Errors: a *HandNotApplicable when floodwater is
+// held as an added weight or no compartment is open to the sea.
+func handSpaces(v *Vessel, d Damage) (spaces []handSpace, spilt []string, spiltT float64, err error) {
+	L, B, D := v.Hull.LengthM, v.Hull.BreadthM, v.Hull.DepthM
+	var held []string
+	for i, c := range v.Compartments {
+		s := d.state(i)
+		switch {
+		case s.Open:
+			b := c.Box
+			hs := handSpace{name: c.Name, mu: v.Permeability(d, i),
+				x0: math.Max(b.X0, 0), x1: math.Min(b.X1, L),
+				y0: math.Max(b.Y0, -B/2), y1: math.Min(b.Y1, B/2),
+				z0: math.Max(b.Z0, 0), z1: math.Min(b.Z1, D)}
+			spaces = append(spaces, hs)
+			if m, _, _, _, _ := v.TankContents(i); m > 0 {
+				spilt = append(spilt, c.Name)
+				spiltT += m
+			}
+		case s.WaterM3 > 0:
+			held = append(held, c.Name)
 		}
 	}
-	return w, nil
+	switch {
+	case len(held) > 0 && len(spaces) == 0:
+		return nil, nil, 0, &HandNotApplicable{fmt.Sprintf("the only floodwater is held as an added weight (%s); the lost-buoyancy hand method needs a compartment open to the sea", strings.Join(held, ", "))}
+	case len(held) > 0:
+		return nil, nil, 0, &HandNotApplicable{fmt.Sprintf("floodwater is held as an added weight in %s; the lost-buoyancy hand method takes only compartments open to the sea", strings.Join(held, ", "))}
+	case len(spaces) == 0:
+		return nil, nil, 0, &HandNotApplicable{"no compartment is open to the sea"}
+	}
+	return spaces, spilt, spiltT, nil
+}
+
+// step adds one line to the working.
+func (w *HandWorking) step(label, formula string, value float64, unit string) {
+	w.Steps = append(w.Steps, HandStep{label, formula, value, unit})
+}
+
+// handLost is the volume the spaces lose below the draft t (Σ μ·l·b·d).
+func handLost(spaces []handSpace, t float64) float64 {
+	var s float64
+	for _, c := range spaces {
+		s += c.mu * c.plan() * c.depth(t)
+	}
+	return s
+}
+
+// handCutArea is the waterplane the spaces cut at draft t lose (Σ μ·l·b).
+func handCutArea(spaces []handSpace, t float64) float64 {
+	var s float64
+	for _, c := range spaces {
+		if c.pierces(t) {
+			s += c.mu * c.plan()
+		}
+	}
+	return s
+}
+
+// handSinkage works the sinkage from the intact draft T0 to the new mean
+// draft T1 (NaN when she would sink past the deck at D), in stages where a
+// space's top or bottom is passed: on each stage the volume still wanting
+// is regained over the waterplane intact there. Each stage passes at least
+// one of the 2·n heights, so the loop ends. staged reports whether there
+// was more than one stage.
+func (w *HandWorking) handSinkage(spaces []handSpace, V, T0, LB, D float64) (T1 float64, staged bool) {
+	n := handNum
+	T := T0
+	T1 = math.NaN()
+	for stage := 0; stage <= 2*len(spaces)+1; stage++ {
+		next := D
+		for _, c := range spaces {
+			for _, z := range [2]float64{c.z0, c.z1} {
+				if z > T && z < next {
+					next = z
+				}
+			}
+		}
+		want := V - (LB*T - handLost(spaces, T)) // volume still to be regained at T, ≥ 0
+		area := LB - handCutArea(spaces, T)
+		if stage == 0 && area > 0 {
+			w.step("sinkage s", fmt.Sprintf("v/A = %s/%s", n(want), n(area)), want/area, "m")
+		}
+		if area > 0 && T+want/area <= next {
+			T1 = T + want/area
+			if staged {
+				w.step("last stage", fmt.Sprintf("%s + %s/%s (wanting %s m³ over an intact waterplane of %s m²)", n(T), n(want), n(area), n(want), n(area)), T1, "m")
+			}
+			break
+		}
+		if next >= D {
+			break
+		}
+		if stage == 0 {
+			var passed []string
+			for _, c := range spaces {
+				if c.z0 == next {
+					passed = append(passed, "bottom of "+c.name)
+				} else if c.z1 == next {
+					passed = append(passed, "top of "+c.name)
+				}
+			}
+			w.step("the sinkage passes the "+strings.Join(passed, " and "),
+				fmt.Sprintf("at %s m, below T₀ + s: the lost waterplane changes there, so the sinkage is worked in stages", n(next)),
+				next, "m")
+		}
+		staged = true
+		regained := area * (next - T)
+		w.step(fmt.Sprintf("stage %s → %s m", n(T), n(next)),
+			fmt.Sprintf("intact waterplane %s m² × %s m regains %s m³ of %s", n(area), n(next-T), n(regained), n(want)),
+			want-regained, "m³")
+		T = next
+	}
+	return T1, staged
+}
+
+// handHeelTan works tan θ from the list lever and GM: lever/GM, or on the
+// wall-sided relation when GM ≤ 0 (see handLollTan).
+func (w *HandWorking) handHeelTan(lever float64) float64 {
+	n := handNum
+	if w.GMM > 0 {
+		tanT := lever / w.GMM
+		w.step("tan θ", fmt.Sprintf("lever/GM = %s/%s", n(lever), n(w.GMM)), tanT, "")
+		return tanT
+	}
+	tanT := handLollTan(w.GMM, w.BMM, lever)
+	formula := fmt.Sprintf("GM ≤ 0, no small-angle list: root of GM·t + ½·BM·t³ = lever, %s·t + ½×%s·t³ = %s", n(w.GMM), n(w.BMM), n(lever))
+	if lever == 0 {
+		formula = fmt.Sprintf("GM ≤ 0, angle of loll to either side: √(−2GM/BM) = √(−2×%s/%s)", n(w.GMM), n(w.BMM))
+	}
+	w.step("tan θ (loll)", formula, tanT, "")
+	return tanT
+}
+
+// handCoupled records heel and trim solved together with the product of
+// inertia iXY kept (for the record; the method neglects it).
+func (w *HandWorking) handCoupled(iXY, V, L, lever, lcg float64) {
+	w.CoupledHeelDeg, w.CoupledTrimM = w.HeelDeg, w.TrimM
+	if !(w.GMM > 0) || iXY == 0 {
+		return
+	}
+	k := iXY / V
+	det := w.GMM*w.GMLM - k*k
+	if det > 0 {
+		ry, rx := lever, lcg-w.LCBM
+		g := (ry*w.GMLM - k*rx) / det
+		b := (w.GMM*rx - k*ry) / det
+		w.CoupledHeelDeg = math.Atan(g) * 180 / math.Pi
+		w.CoupledTrimM = -b * L
+		w.step("product of inertia I_xy (neglected above)", fmt.Sprintf("about the new axes; heel and trim solved together give %s° and %s m", handNum(w.CoupledHeelDeg), handNum(w.CoupledTrimM)), iXY, "m⁴")
+	}
 }
 
 // handLollTan returns the tangent of heel t on the wall-sided relation
@@ -455,7 +494,7 @@ func handNum(x float64) string {
 		return "0"
 	}
 	if math.IsNaN(x) || math.IsInf(x, 0) {
-		return strconv.FormatFloat(x, 'f', -1, 64)
+		return "—"
 	}
 	a := math.Abs(x)
 	dec := 6
@@ -476,54 +515,4 @@ func handNum(x float64) string {
 		return "(−" + s + ")"
 	}
 	return s
-}
-
-func handSideWord(y float64) string {
-	switch {
-	case y > 0:
-		return "starboard"
-	case y < 0:
-		return "port"
-	}
-	return "on the centreline"
-}
-
-func handLeverWord(lever float64) string {
-	switch {
-	case lever > 0:
-		return "G to starboard of B"
-	case lever < 0:
-		return "G to port of B"
-	}
-	return "G over B"
-}
-
-func handHeelWord(tanT float64) string {
-	switch {
-	case tanT > 0:
-		return "starboard side down"
-	case tanT < 0:
-		return "port side down"
-	}
-	return "upright"
-}
-
-func handEndWord(dx float64) string {
-	switch {
-	case dx > 0:
-		return "forward"
-	case dx < 0:
-		return "aft"
-	}
-	return "none"
-}
-
-func handTrimWord(trim float64) string {
-	switch {
-	case trim > 0:
-		return "by the stern"
-	case trim < 0:
-		return "by the head"
-	}
-	return "even keel"
 }

@@ -44,6 +44,21 @@ func handOpen(v *engine.Vessel, idx ...int) engine.Damage {
 	return d
 }
 
+// handAndSolve works the hand method and the direct solution of v under d,
+// failing the test when either cannot.
+func handAndSolve(t testing.TB, v *engine.Vessel, d engine.Damage) (*engine.HandWorking, engine.Position) {
+	t.Helper()
+	hw, err := engine.HandMethod(v, d)
+	if err != nil {
+		t.Fatal(err)
+	}
+	pos, err := engine.Solve(v, d)
+	if err != nil {
+		t.Fatal(err)
+	}
+	return hw, pos
+}
+
 func handWeight(massT, lcg, tcg, kg float64) []engine.Weight {
 	return []engine.Weight{{Name: "ship and load", MassT: massT, LCGM: lcg, TCGM: tcg, VCGM: kg}}
 }
@@ -429,14 +444,7 @@ func TestHandPartsAsWallSided(t *testing.T) {
 		v := handBox(t, L, B, D, handWeight(mass, L/2, 0, 5.6),
 			handSpec{"wing", engine.Box{X0: 30, X1: 50, Y0: B/2 - b, Y1: B / 2, Z0: 0, Z1: D}, 1, nil})
 		d := handOpen(v, 0)
-		hw, err := engine.HandMethod(v, d)
-		if err != nil {
-			t.Fatal(err)
-		}
-		pos, err := engine.Solve(v, d)
-		if err != nil {
-			t.Fatal(err)
-		}
+		hw, pos := handAndSolve(t, v, d)
 		if pos.DeckEdge.HeightM <= 0 || pos.Plane.Height(0, -B/2, 0) >= 0 {
 			t.Fatalf("wing %.1f m: deck edge or bilge reached at %.2f°: outside the wall-sided range", b, pos.HeelDeg)
 		}
@@ -630,14 +638,7 @@ func TestHandLoll(t *testing.T) {
 	bm := (L - mu*l) * B * B * B / 12 / (L * B * T)
 	gm := T1/2 + bm - kg
 	want := math.Atan(math.Sqrt(-2*gm/bm)) * 180 / math.Pi
-	hw, err := engine.HandMethod(v, d)
-	if err != nil {
-		t.Fatal(err)
-	}
-	pos, err := engine.Solve(v, d)
-	if err != nil {
-		t.Fatal(err)
-	}
+	hw, pos := handAndSolve(t, v, d)
 	if math.Abs(hw.GMM-gm) > 1e-9 || math.Abs(hw.HeelDeg-want) > 1e-7 || math.Abs(math.Abs(pos.HeelDeg)-want) > 1e-7 {
 		t.Errorf("GM %.9f (want %.9f); loll hand %.9f°, direct %.9f°, closed form %.9f°", hw.GMM, gm, hw.HeelDeg, pos.HeelDeg, want)
 	}

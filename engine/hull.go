@@ -209,9 +209,10 @@ func matchStations(a, b []Point) ([]Point, []Point) {
 		}
 	}
 	var ra, rb []Point
+	ca, cb := newOutlineCursor(a), newOutlineCursor(b)
 	for _, z := range levels {
-		a0, a1 := outlineAt(a, z)
-		b0, b1 := outlineAt(b, z)
+		a0, a1 := ca.at(z)
+		b0, b1 := cb.at(z)
 		ra, rb = append(ra, a0), append(rb, b0)
 		if a0 != a1 || b0 != b1 {
 			ra, rb = append(ra, a1), append(rb, b1)

@@ -2,7 +2,7 @@ package engine_test
 
 // Benchmarks of a large ship, the size of a hull exported from a design
 // program: 160 stations of 60 offsets each and 200 compartments, two of
-// them open to the sea (internal/largeship, an invented vessel). Goal
+// them open to the sea (vessels/largeship, an invented vessel). Goal
 // (issue 17): BenchmarkRecomputeLargeHull ≤ 2 ms on one core. Run with
 //
 //	go test ./engine -run '^$' -bench 'LargeHull' -cpu 1 -count 6
@@ -11,8 +11,8 @@ import (
 	"testing"
 
 	"heelwatch/engine"
-	"heelwatch/internal/largeship"
 	"heelwatch/vessels"
+	"heelwatch/vessels/largeship"
 )
 
 // largeDamaged loads the generated ship of spec s and returns her with its

@@ -49,7 +49,16 @@ type StationFreeboard struct {
 type OpeningClearance struct {
 	Opening
 	HeightM float64 // along the true vertical; negative: immersed
+	// IntoFlooded: it leads into a compartment already flooded in this
+	// state (open to the sea or holding water), so water through it
+	// spreads no further: no point of progressive flooding.
+	IntoFlooded bool
 }
+
+// Progressive reports whether the opening, once immersed, lets water
+// spread further: it is not closed weathertight and does not lead into a
+// compartment already flooded.
+func (o OpeningClearance) Progressive() bool { return !o.Weathertight && !o.IntoFlooded }
 
 // Immersed reports whether the opening is under water.
 func (o OpeningClearance) Immersed() bool { return o.HeightM < 0 }
@@ -62,7 +71,13 @@ type Position struct {
 	TrimM                           float64 // draft aft − draft forward
 	HeelDeg                         float64 // positive starboard down
 
-	DisplacementT float64 // mass afloat, floodwater held included
+	// DisplacementT is the mass afloat, floodwater held included. On the
+	// lost-buoyancy basis the sea water in compartments open to the sea is
+	// not in it: it is the ship's weight without the water in open spaces
+	// (OpenWaterT, beside it).
+	DisplacementT float64
+	OpenWaterT    float64 // sea water in the compartments open to the sea, t (μ × their part below the water × ρ)
+	HeldWaterT    float64 // floodwater held as an added weight (in DisplacementT), t
 	VolumeM3      float64 // displaced by the hull still buoyant
 
 	LCBM, TCBM, VCBM float64 // centre of buoyancy
@@ -73,8 +88,24 @@ type Position struct {
 	LCFM, TCFM       float64 // its centroid
 	BMTM, BMLM       float64 // its second moments about its own centroidal axes ÷ V
 	KMTM             float64 // KG + FSC + GM: upright, VCB + BMT
-	GMM              float64 // metacentric height in this position, corrected for free surface
-	GMLM             float64 // longitudinal metacentric height, with the same free-surface correction
+	GMM              float64 // metacentric height in this position, BMT − BG in the inclined waterplane, corrected for free surface (the solver's own test of stability)
+	// GMUprightM is the upright GM of the condition (see UprightGM): she
+	// brought upright at the same displacement and free trim, KM − KG − FSC.
+	// It is what the screen and the reports call GM. NaN until filled in
+	// (Solve, Assess, the flooding run's shown states, the righting
+	// options). Like GMAtRestM it is on the lost-buoyancy basis, per the
+	// ship's own weight: with floodwater held as an added weight the GM of
+	// the whole is scaled by Δ/(Δ − HeldWaterT), the righting moment Δ·GM
+	// kept (the two methods give the same moment of statical stability:
+	// Barrass & Derrett, bilging), so that a flooded space shows one GM
+	// whichever way it was solved.
+	GMUprightM float64
+	// GMAtRestM is the metacentric height where she lies: the slope of the
+	// GZ curve at this heel (free trim, constant displacement), m/rad, from
+	// the exact Jacobian (see gmAtRest), on the same basis. Equal to
+	// GMUprightM when upright.
+	GMAtRestM float64
+	GMLM      float64 // longitudinal metacentric height, with the same free-surface correction
 
 	DeckEdge   Clearance
 	MarginLine Clearance
@@ -145,6 +176,14 @@ func (pr *Problem) position(s state, it int) Position {
 		// KM as GM implies it: KG + FSC + GM (upright, VCB + BMT).
 		pos.KMTM = pos.KGM + pos.FSCM + pos.GMM
 	}
+	pos.OpenWaterT = pr.openWaterT(p)
+	pos.HeldWaterT = W - pr.load.MassT
+	pos.GMUprightM = math.NaN()
+	pos.GMAtRestM = gmAtRest(s, pos.GMM) * pr.shipBasis()
+	if math.Abs(pos.HeelDeg) < 1e-9 {
+		pos.GMUprightM = pos.GMM * pr.shipBasis()
+		pos.GMAtRestM = pos.GMUprightM
+	}
 
 	pos.DeckEdge = Clearance{HeightM: math.Inf(1)}
 	pos.MarginLine = Clearance{HeightM: math.Inf(1)}
@@ -179,7 +218,7 @@ func (pr *Problem) position(s state, it int) Position {
 		pos.Held = append(pos.Held, HeldWater{Index: pr.heldIx[i], VolumeM3: pr.held[i].vol, Surface: pl})
 	}
 	for _, o := range pr.v.Openings {
-		pos.Openings = append(pos.Openings, OpeningClearance{o, p.Height(o.X, o.Y, o.Z)})
+		pos.Openings = append(pos.Openings, OpeningClearance{o, p.Height(o.X, o.Y, o.Z), pr.v.intoFlooded(o, pr.d)})
 	}
 	return pos
 }

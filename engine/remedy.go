@@ -32,7 +32,7 @@ const (
 	RemedyFreeboardLossM = 0.10
 	// RemedyMaxSolves bounds the work of one call: equilibrium solves and
 	// upright-GM solves together, the present state's included.
-	RemedyMaxSolves = 48
+	RemedyMaxSolves = 240
 
 	remedyMaxCandidates = 8    // candidate actions solved, the most promising first
 	remedyEmptyFill     = 5e-3 // a fill below this counts as empty; within it of RemedyFillTo as full
@@ -73,7 +73,7 @@ type Remedy struct {
 	Tanks     []int
 	TankNames []string
 	// FillBefore and FillAfter are each tank's fill, as a fraction of its
-	// volume, now and after the option.
+	// capacity, now and after the option.
 	FillBefore, FillAfter []float64
 	Action                string  // in words, e.g. "fill Wing tank 2 P from the sea to 98 %"
 	MassT                 float64 // mass taken on, pumped out or moved, t (> 0)
@@ -94,11 +94,23 @@ type Remedy struct {
 	// it raises them).
 	FreeboardLossM float64
 
+	// StagesChecked is how many of the RemedyStages equal steps of the
+	// amount were solved and passed (the option itself counts as the
+	// last); StageFail is the first step that failed and why, "" if none.
+	StagesChecked int
+	StageFail     string
+	// DurationS is how long it takes at PumpM3h, the rate the file gives
+	// PumpName, the tank that does the work; NaN when no rate is given.
+	DurationS float64
+	PumpM3h   float64
+	PumpName  string
+
 	Advisable bool   // see FindRemedies for the rule
 	Note      string // why, in plain words, with what to watch
 
-	liquid string  // what the tank emptied holds, "" for a fill
-	vessel *Vessel // the changed loading, for a later upright solve
+	liquid string          // what the tank emptied holds, "" for a fill
+	vessel *Vessel         // the changed loading, for a later upright solve
+	cand   remedyCandidate // the action, for the staged check
 }
 
 // RemedySet is the answer of FindRemedies for one damage state.
@@ -118,7 +130,7 @@ type RemedySet struct {
 // FindRemedies lists and solves the righting options for damage state d of
 // v. It is on demand, not per keystroke: it spends at most RemedyMaxSolves
 // solves (each a full free-floating equilibrium or an upright-GM solve);
-// on the bundled ship holed in a wing tank it takes 16, about 2 ms. It
+// each option is solved at RemedyStages steps of its amount (see below). It
 // does not change v, so it may run in a goroutine (a tea.Cmd) while v is
 // not being edited; d is copied first. It never fails: a state with no
 // floating position gives no options and says why.
@@ -155,6 +167,13 @@ type RemedySet struct {
 //     least freeboard by more than RemedyFreeboardLossM after the others;
 //     within each, the least remaining heel first.
 //
+// Whatever the sign, an option is advisable only if it is safe while it is
+// carried out: it is solved at each of RemedyStages equal steps of its
+// amount (remedyStageCheck), and at every one she must float, with no deck
+// edge and no unprotected opening going under that was clear (nor deeper),
+// and after it her upright GM must be positive. The time it takes at the
+// pump rate the file gives (Compartment.PumpM3h) is said in the note.
+//
 // With positive upright GM and a heel under RemedyUprightDeg no action is
 // needed and there are no options.
 func FindRemedies(v *Vessel, d Damage) RemedySet {
@@ -189,9 +208,9 @@ func FindRemedies(v *Vessel, d Damage) RemedySet {
 	case rs.UprightGMM < 0:
 		rs.Needed, rs.Loll = true, true
 		rs.Summary = fmt.Sprintf("Upright her GM is %.2f m: she lolls, now %s. Do not counter-ballast the high (%s) side: she would flop over to %s, perhaps further. Lower G first: ballast a low empty tank on the %s side or across the centreline, one tank at a time, minding its free surface while it is slack; or pump out tanks high in the ship. Only such options are worked out below.",
-			rs.UprightGMM, remedyHeel(pos.HeelDeg), high, high, low)
+			rs.UprightGMM, heelWords(pos.HeelDeg), high, high, low)
 	case math.Abs(pos.HeelDeg) < RemedyUprightDeg:
-		where := fmt.Sprintf("within %.1f° of upright (%s)", RemedyUprightDeg, remedyHeel(pos.HeelDeg))
+		where := fmt.Sprintf("within %.1f° of upright (%s)", RemedyUprightDeg, heelWords(pos.HeelDeg))
 		if math.Abs(pos.HeelDeg) < 0.005 {
 			where = "upright"
 		}
@@ -200,7 +219,7 @@ func FindRemedies(v *Vessel, d Damage) RemedySet {
 	default:
 		rs.Needed = true
 		rs.Summary = fmt.Sprintf("Upright her GM is %.2f m: she lies %s with a list (weight or water off the centreline), not a loll. Weight taken on or moved to the %s side brings her back.",
-			rs.UprightGMM, remedyHeel(pos.HeelDeg), high)
+			rs.UprightGMM, heelWords(pos.HeelDeg), high)
 	}
 
 	now := remedyMeasure(&pos)
@@ -231,8 +250,11 @@ func FindRemedies(v *Vessel, d Damage) RemedySet {
 		}
 	}
 	for i := range rs.Options {
-		remedyJudge(&rs.Options[i], &rs, now)
-		rs.Options[i].vessel = nil
+		o := &rs.Options[i]
+		remedyStageCheck(v, d, o.cand, o, now, &rs.Solves)
+		remedyDuration(v, o.cand, o)
+		remedyJudge(o, &rs, now)
+		o.vessel = nil
 	}
 	remedyRank(rs.Options, rs.Loll)
 	switch {
@@ -246,14 +268,6 @@ func FindRemedies(v *Vessel, d Damage) RemedySet {
 	}
 	rs.Summary += " They are options to weigh against the ship's approved stability information and the damage found, not orders."
 	return rs
-}
-
-// remedyHeel writes a heel in words, "upright" within 0.005°.
-func remedyHeel(deg float64) string {
-	if math.Abs(deg) < 0.005 {
-		return "upright"
-	}
-	return flagHeel(deg)
 }
 
 func anyAdvisable(rs []Remedy) bool {
@@ -277,7 +291,7 @@ type remedyCandidate struct {
 // remedyTank is what the candidate search needs of an intact tank.
 type remedyTank struct {
 	i          int
-	vol        float64 // moulded volume, m³
+	vol        float64 // capacity (μ × moulded volume), m³
 	yFull      float64 // centroid of the whole tank
 	zFull      float64
 	side       Side // 0: across the centreline
@@ -299,7 +313,7 @@ func remedyTanks(v *Vessel, d Damage) []remedyTank {
 			continue
 		}
 		_, yc, zc := c.solid.whole.Centroid()
-		t := remedyTank{i: i, vol: c.solid.Volume(), yFull: yc, zFull: zc, fill: c.Liquid.Fill}
+		t := remedyTank{i: i, vol: c.CapacityM3(), yFull: yc, zFull: zc, fill: c.Liquid.Fill}
 		switch {
 		case yc > tolY:
 			t.side = Starboard
@@ -308,10 +322,8 @@ func remedyTanks(v *Vessel, d Damage) []remedyTank {
 		}
 		t.massT, _, t.y, t.z, _ = v.TankContents(i)
 		name := strings.ToLower(c.Liquid.Name)
-		oily := strings.Contains(name, "oil") || strings.Contains(name, "sludge") ||
-			strings.Contains(name, "bilge") || strings.Contains(name, "sewage")
-		t.ballast = !oily && (strings.Contains(name, "ballast") || strings.Contains(name, "sea water"))
-		t.discharged = !oily && (strings.Contains(name, "ballast") || strings.Contains(name, "water"))
+		t.discharged = IsWater(name)
+		t.ballast = t.discharged && (strings.Contains(name, "ballast") || strings.Contains(name, "sea water"))
 		out = append(out, t)
 	}
 	return out
@@ -389,7 +401,7 @@ func remedyLoading(v *Vessel, c remedyCandidate, m float64) (map[int]Liquid, []i
 	if c.from >= 0 {
 		comp := v.Compartments[c.from]
 		l := *comp.Liquid
-		vol := comp.solid.Volume()
+		vol := comp.CapacityM3()
 		before = append(before, l.Fill)
 		if m >= c.mass && c.kind == RemedyDischarge || c.kind == RemedyTransfer && m >= c.mass && m >= l.Fill*vol*l.Density*(1-1e-12) {
 			l.Fill = 0
@@ -403,7 +415,7 @@ func remedyLoading(v *Vessel, c remedyCandidate, m float64) (map[int]Liquid, []i
 	if c.to >= 0 {
 		comp := v.Compartments[c.to]
 		l := *comp.Liquid
-		vol := comp.solid.Volume()
+		vol := comp.CapacityM3()
 		before = append(before, l.Fill)
 		rho := v.WaterDensity
 		if c.kind == RemedyTransfer {
@@ -445,7 +457,7 @@ func remedyVessel(v *Vessel, changes map[int]Liquid) (*Vessel, error) {
 func remedySolve(v *Vessel, d Damage, c remedyCandidate, m float64, upright bool, solves *int) Remedy {
 	changes, tanks, before, after := remedyLoading(v, c, m)
 	r := Remedy{Kind: c.kind, Tanks: tanks, FillBefore: before, FillAfter: after, MassT: m,
-		UprightGMM: math.NaN(), LowestOpeningM: math.Inf(1)}
+		UprightGMM: math.NaN(), LowestOpeningM: math.Inf(1), DurationS: math.NaN(), cand: c}
 	for _, i := range tanks {
 		r.TankNames = append(r.TankNames, v.Compartments[i].Name)
 	}
@@ -489,45 +501,26 @@ func remedyUpright(r *Remedy, d Damage, solves *int) {
 
 // remedyToUpright finds the smaller amount of candidate c that brings her
 // nearest upright, when the whole amount (full) overshoots to the other
-// side: regula falsi (Illinois) on the heel between no action (heel0) and
+// side: regula falsi (illinois) on the heel between no action (heel0) and
 // the whole, at most remedyUprightTries equilibrium solves and one upright
 // solve for the amount kept.
 func remedyToUpright(v *Vessel, d Damage, c remedyCandidate, heel0 float64, full Remedy, solves *int) (Remedy, bool) {
-	ma, ha := 0.0, heel0
-	mb, hb := full.MassT, full.Position.HeelDeg
 	var best Remedy
 	found := false
-	side := 0
-	for it := 0; it < remedyUprightTries && *solves+2 <= RemedyMaxSolves; it++ {
-		m := ma - ha*(mb-ma)/(hb-ha)
-		if !(m > 0 && m < full.MassT) {
-			break
+	illinois(0, full.MassT, heel0, full.Position.HeelDeg, math.NaN(), remedyUprightTries, 0, remedyUprightTolDeg, false, func(m float64) (float64, bool) {
+		if *solves+2 > RemedyMaxSolves {
+			return 0, false
 		}
 		r := remedySolve(v, d, c, m, false, solves)
 		if r.Position == nil {
-			break
+			return 0, false
 		}
 		h := r.Position.HeelDeg
 		if !found || math.Abs(h) < math.Abs(best.Position.HeelDeg) {
 			best, found = r, true
 		}
-		if math.Abs(h) <= remedyUprightTolDeg {
-			break
-		}
-		if h*ha > 0 {
-			ma, ha = m, h
-			if side == -1 {
-				hb /= 2
-			}
-			side = -1
-		} else {
-			mb, hb = m, h
-			if side == 1 {
-				ha /= 2
-			}
-			side = 1
-		}
-	}
+		return h, true
+	})
 	if !found {
 		return Remedy{}, false
 	}
@@ -574,7 +567,7 @@ type remedyFigures struct {
 func remedyMeasure(p *Position) remedyFigures {
 	f := remedyFigures{deck: p.DeckEdge.HeightM, openingM: math.Inf(1)}
 	for _, o := range p.Openings {
-		if !o.Weathertight && o.HeightM < f.openingM {
+		if o.Progressive() && o.HeightM < f.openingM {
 			f.opening, f.openingM = o.Name, o.HeightM
 		}
 	}
@@ -584,15 +577,14 @@ func remedyMeasure(p *Position) remedyFigures {
 // remedyJudge decides whether option r is advisable (see FindRemedies) and
 // writes its note.
 func remedyJudge(r *Remedy, rs *RemedySet, now remedyFigures) {
-	var why []string
+	var why remedyWords
 	if r.Note != "" {
 		why = append(why, r.Note)
 	}
-	say := func(format string, a ...any) { why = append(why, fmt.Sprintf(format, a...)) }
 	defer func() { r.Note = strings.Join(why, " ") }()
 	if r.Position == nil {
 		r.Advisable = false
-		why = append([]string{fmt.Sprintf("Not advisable: she would not float so (%s: %s).", r.NoEq.Outcome, r.NoEq.Reason)}, why...)
+		why = append(remedyWords{fmt.Sprintf("Not advisable: she would not float so (%s: %s).", r.NoEq.Outcome, r.NoEq.Reason)}, why...)
 		return
 	}
 	p := r.Position
@@ -613,75 +605,116 @@ func remedyJudge(r *Remedy, rs *RemedySet, now remedyFigures) {
 	if newOpening || deeperOpening {
 		against = append(against, fmt.Sprintf("puts the unprotected opening %s under water (%.2f m)", after.opening, -after.openingM))
 	}
-	up := r.UprightGMM
+	// Safe while it is carried out (remedy_stages.go), not only once done.
+	switch {
+	case r.StageFail != "":
+		against = append(against, "is not safe while it is carried out: "+r.StageFail)
+	case r.StagesChecked < RemedyStages:
+		against = append(against, fmt.Sprintf("was solved at only %d of the %d steps of carrying it out (the bound on the work), so it is not known to be safe on the way", r.StagesChecked, RemedyStages))
+	}
 	if rs.Loll {
-		switch {
-		case math.IsNaN(up):
-			against = append(against, "its upright GM could not be worked out")
-		case !(up > rs.UprightGMM):
-			against = append(against, fmt.Sprintf("does not raise her upright GM (%.2f m, now %.2f m)", up, rs.UprightGMM))
-		}
-		r.Advisable = len(against) == 0
-		switch {
-		case r.Advisable && up > 0:
-			say("Lowers G: upright GM from %.2f to %.2f m, positive, so she would come to %s (now %s), a list and no longer a loll. Only then may the list that is left be taken out from the high side: solve the new condition first.", rs.UprightGMM, up, remedyHeel(p.HeelDeg), remedyHeel(rs.HeelDeg))
-		case r.Advisable:
-			say("Lowers G: upright GM from %.2f to %.2f m, but still negative: she would still loll (%s, now %s); more must be done to bring G down.", rs.UprightGMM, up, remedyHeel(p.HeelDeg), remedyHeel(rs.HeelDeg))
-		}
-		if r.Kind == RemedyFill {
-			say("Fill one tank at a time and watch the heel while it is slack.")
-		}
+		against = remedyJudgeLoll(r, rs, against, &why)
 	} else {
-		switch {
-		case math.IsNaN(up):
-			against = append(against, "its upright GM could not be worked out")
-		case !(up > 0):
-			against = append(against, fmt.Sprintf("leaves her with negative GM upright (%.2f m): she would loll", up))
-		case !(p.GMM > 0):
-			against = append(against, fmt.Sprintf("leaves her with no GM where she lies (%.2f m)", p.GMM))
-		}
-		if !(math.Abs(p.HeelDeg) < math.Abs(rs.HeelDeg)) {
-			against = append(against, fmt.Sprintf("does not reduce the heel (%s)", remedyHeel(p.HeelDeg)))
-		}
-		r.Advisable = len(against) == 0
-		if r.Advisable {
-			if p.HeelDeg*rs.HeelDeg < 0 && math.Abs(p.HeelDeg) >= RemedyUprightDeg {
-				say("Overshoots: she would lie %s instead.", remedyHeel(p.HeelDeg))
-			} else {
-				say("Brings her to %s.", remedyHeel(p.HeelDeg))
-			}
-			if up < rs.UprightGMM {
-				say("Raises G: upright GM from %.2f to %.2f m.", rs.UprightGMM, up)
-			}
-		}
-		if r.ToUpright && r.Kind != RemedyDischarge && len(r.FillAfter) > 0 && r.FillAfter[len(r.FillAfter)-1] < RemedyFillTo {
-			say("The tank filled stays slack: its free surface is counted.")
-		}
+		against = remedyJudgeList(r, rs, against, &why)
 	}
 	if len(against) > 0 {
-		why = append([]string{"Not advisable: it " + strings.Join(against, "; it ") + "."}, why...)
+		why = append(remedyWords{"Not advisable: it " + strings.Join(against, "; it ") + "."}, why...)
 	}
+	remedyCautions(r, after, loss, newDeck || deeperDeck, newOpening || deeperOpening, &why)
+}
+
+// remedyWords are the sentences of an option's note.
+type remedyWords []string
+
+func (w *remedyWords) say(format string, a ...any) { *w = append(*w, fmt.Sprintf(format, a...)) }
+
+// remedyJudgeLoll judges option r for a ship at an angle of loll: it must
+// raise her upright GM. It returns against with its own objections added
+// and sets r.Advisable.
+func remedyJudgeLoll(r *Remedy, rs *RemedySet, against []string, why *remedyWords) []string {
+	p, up := r.Position, r.UprightGMM
+	switch {
+	case math.IsNaN(up):
+		against = append(against, "its upright GM could not be worked out")
+	case !(up > rs.UprightGMM):
+		against = append(against, fmt.Sprintf("does not raise her upright GM (%.2f m, now %.2f m)", up, rs.UprightGMM))
+	case !(up > 0):
+		against = append(against, fmt.Sprintf("lowers G but leaves her upright GM negative (%.2f m, now %.2f m): she would still loll (%s, now %s), and more must be done to bring G down", up, rs.UprightGMM, heelWords(p.HeelDeg), heelWords(rs.HeelDeg)))
+	}
+	r.Advisable = len(against) == 0
+	if r.Advisable {
+		why.say("Lowers G: upright GM from %.2f to %.2f m, positive, so she would come to %s (now %s), a list and no longer a loll. Only then may the list that is left be taken out from the high side: solve the new condition first.", rs.UprightGMM, up, heelWords(p.HeelDeg), heelWords(rs.HeelDeg))
+	}
+	if r.Kind == RemedyFill {
+		why.say("Fill one tank at a time and watch the heel while it is slack.")
+	}
+	return against
+}
+
+// remedyJudgeList judges option r for a listed ship: it must keep GM
+// positive and reduce the heel. It returns against with its own objections
+// added and sets r.Advisable.
+func remedyJudgeList(r *Remedy, rs *RemedySet, against []string, why *remedyWords) []string {
+	p, up := r.Position, r.UprightGMM
+	switch {
+	case math.IsNaN(up):
+		against = append(against, "its upright GM could not be worked out")
+	case !(up > 0):
+		against = append(against, fmt.Sprintf("leaves her with negative GM upright (%.2f m): she would loll", up))
+	case !(p.GMAtRestM > 0):
+		against = append(against, fmt.Sprintf("leaves her with no GM where she lies (%.2f m)", p.GMAtRestM))
+	}
+	if !(math.Abs(p.HeelDeg) < math.Abs(rs.HeelDeg)) {
+		against = append(against, fmt.Sprintf("does not reduce the heel (%s)", heelWords(p.HeelDeg)))
+	}
+	r.Advisable = len(against) == 0
+	if r.Advisable {
+		if p.HeelDeg*rs.HeelDeg < 0 && math.Abs(p.HeelDeg) >= RemedyUprightDeg {
+			why.say("Overshoots: she would lie %s instead.", heelWords(p.HeelDeg))
+		} else {
+			why.say("Brings her to %s.", heelWords(p.HeelDeg))
+		}
+		if up < rs.UprightGMM {
+			why.say("Raises G: upright GM from %.2f to %.2f m.", rs.UprightGMM, up)
+		}
+	}
+	if r.ToUpright && r.Kind != RemedyDischarge && len(r.FillAfter) > 0 && r.FillAfter[len(r.FillAfter)-1] < RemedyFillTo {
+		why.say("The tank filled stays slack: its free surface is counted.")
+	}
+	return against
+}
+
+// remedyCautions adds what goes with option r whether or not it is
+// advisable: the freeboard it costs, what stays under water, what it needs.
+// deckWorse and openingWorse: the option itself puts them (deeper) under.
+func remedyCautions(r *Remedy, after remedyFigures, loss float64, deckWorse, openingWorse bool, why *remedyWords) {
 	if loss > RemedyFreeboardLossM {
-		say("It lowers the least freeboard by %.2f m.", loss)
+		why.say("It lowers the least freeboard by %.2f m.", loss)
 	}
-	if r.DeckEdgeImmersed && !(newDeck || deeperDeck) {
-		say("The deck edge stays under water (%.2f m).", -after.deck)
+	if r.DeckEdgeImmersed && !deckWorse {
+		why.say("The deck edge stays under water (%.2f m).", -after.deck)
 	}
-	if r.OpeningImmersed && !(newOpening || deeperOpening) {
-		say("The opening %s stays under water (%.2f m).", after.opening, -after.openingM)
+	if r.OpeningImmersed && !openingWorse {
+		why.say("The opening %s stays under water (%.2f m).", after.opening, -after.openingM)
 	}
-	for _, o := range p.Openings {
+	for _, o := range r.Position.Openings {
 		if o.Weathertight && o.Immersed() {
-			say("The weathertight %s would be under water: check it is secured.", o.Name)
+			why.say("The weathertight %s would be under water: check it is secured.", o.Name)
 			break
 		}
 	}
+	if r.StagesChecked == RemedyStages && r.StageFail == "" {
+		why.say("Safe at each tenth of the way.")
+	}
+	if tw := remedyTimeWords(r); tw != "" {
+		why.say("%s", tw)
+	}
 	switch r.Kind {
 	case RemedyTransfer:
-		say("Needs a transfer line between the two tanks.")
+		why.say("Needs a transfer line between the two tanks.")
 	case RemedyDischarge:
 		if !strings.Contains(strings.ToLower(r.liquid), "ballast") {
-			say("The %s pumped out is lost to the ship's use.", r.liquid)
+			why.say("The %s pumped out is lost to the ship's use.", r.liquid)
 		}
 	}
 }

@@ -29,6 +29,7 @@ const (
 	rbL, rbB, rbD = 80.0, 16.0, 8.0
 	rbMass        = 4592.0
 	rbRho         = 1.025
+	rbMu          = 0.95 // the tanks' permeability, also their capacity's share of the box (conventions)
 )
 
 // rbTank is a tank of the barge: its box and index.
@@ -56,7 +57,7 @@ func (rb remedyBarge) vessel(t *testing.T) *engine.Vessel {
 		if err != nil {
 			t.Fatal(err)
 		}
-		c.Use, c.Permeability = "tank", 0.95
+		c.Use, c.Permeability = "tank", rbMu
 		c.Liquid = &engine.Liquid{Name: "sea water ballast", Density: rbRho, Fill: rb.fills()[i]}
 		cs = append(cs, c)
 	}
@@ -71,8 +72,10 @@ func (rb remedyBarge) vessel(t *testing.T) *engine.Vessel {
 
 // rbClosedForm works the barge by hand at the given tank fills: each tank a
 // box of level liquid, its centre at the middle of the box in plan and at
-// half the liquid's depth; a slack tank (fill below 98 %, the pressed-full
-// convention) has the free-surface moment ρ·l·b³/12 of a rectangle (practice).
+// half the liquid's depth; its capacity μ·l·b·d and its free-surface
+// moment μ·ρ·l·b³/12 when slack (fill below 98 %, the pressed-full
+// convention; a rectangle, practice), μ the permeability (conventions:
+// capacity = μ × volume, so the liquid stands at fill × d).
 // Then Δ, KG, TCG and the free-surface correction; the box's level draft
 // T = Δ/(ρLB), KB = T/2, BM = B²/(12T) (practice), the fluid GM upright
 // GM = KB + BM − KG − ΣFSM/Δ; and the heel from the wall-sided formula
@@ -90,12 +93,12 @@ func rbClosedForm(rb remedyBarge, fills []float64) (heelDeg, gm, draft float64) 
 		if f <= 0 {
 			continue
 		}
-		mt := rbRho * f * l * w * d
+		mt := rbRho * f * rbMu * l * w * d
 		m += mt
 		my += mt * (b.Y0 + b.Y1) / 2
 		mz += mt * (b.Z0 + f*d/2)
 		if f < engine.PressedFullFill {
-			fsm += rbRho * l * w * w * w / 12
+			fsm += rbMu * rbRho * l * w * w * w / 12
 		}
 	}
 	kg, tcg := mz/m, my/m
@@ -177,7 +180,7 @@ func TestRemedyWallSided(t *testing.T) {
 				var dm float64
 				for k, i := range o.Tanks {
 					b := rbTanks[i].box
-					dm += math.Abs(o.FillAfter[k]-o.FillBefore[k]) * rbRho * (b.X1 - b.X0) * (b.Y1 - b.Y0) * (b.Z1 - b.Z0)
+					dm += math.Abs(o.FillAfter[k]-o.FillBefore[k]) * rbRho * rbMu * (b.X1 - b.X0) * (b.Y1 - b.Y0) * (b.Z1 - b.Z0)
 				}
 				if o.Kind == engine.RemedyTransfer {
 					dm /= 2

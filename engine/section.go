@@ -32,11 +32,7 @@ func clipBelow(p0, dp []Point, s, c, h float64) areaMoments {
 	if n == 0 {
 		return m
 	}
-	var (
-		firstY, firstZ, prevY, prevZ float64
-		have                         bool
-		a2, sy6, sz6                 float64
-	)
+	var sh shoelace
 	lastY, lastZ := p0[n-1].Y+s*dp[n-1].Y, p0[n-1].Z+s*dp[n-1].Z
 	dLast := lastZ - c*lastY - h
 	for k := 0; k < n; k++ {
@@ -46,15 +42,7 @@ func clipBelow(p0, dp []Point, s, c, h float64) areaMoments {
 		if inLast != inCur {
 			t := dLast / (dLast - dCur)
 			qY, qZ := lastY+t*(curY-lastY), lastZ+t*(curZ-lastZ)
-			if have {
-				cr := prevY*qZ - qY*prevZ
-				a2 += cr
-				sy6 += (prevY + qY) * cr
-				sz6 += (prevZ + qZ) * cr
-			} else {
-				firstY, firstZ, have = qY, qZ, true
-			}
-			prevY, prevZ = qY, qZ
+			sh.vertex(qY, qZ)
 			y2 := qY * qY
 			if inLast { // leaving the water: a chord starts here
 				m.W += qY
@@ -67,28 +55,39 @@ func clipBelow(p0, dp []Point, s, c, h float64) areaMoments {
 			}
 		}
 		if inCur {
-			if have {
-				cr := prevY*curZ - curY*prevZ
-				a2 += cr
-				sy6 += (prevY + curY) * cr
-				sz6 += (prevZ + curZ) * cr
-			} else {
-				firstY, firstZ, have = curY, curZ, true
-			}
-			prevY, prevZ = curY, curZ
+			sh.vertex(curY, curZ)
 		}
 		lastY, lastZ, dLast = curY, curZ, dCur
 	}
-	if have {
-		cr := prevY*firstZ - firstY*prevZ
-		a2 += cr
-		sy6 += (prevY + firstY) * cr
-		sz6 += (prevZ + firstZ) * cr
+	if sh.have {
+		sh.vertex(sh.firstY, sh.firstZ)
 	}
-	m.A = a2 / 2
-	m.SY = sy6 / 6
-	m.SZ = sz6 / 6
+	m.A = sh.a2 / 2
+	m.SY = sh.sy6 / 6
+	m.SZ = sh.sz6 / 6
 	return m
+}
+
+// shoelace sums a polygon's area and first moments vertex by vertex (the
+// shoelace formula): twice the area and six times the moments about the
+// axes, from the cross product of each edge's ends. The polygon closes on
+// its first vertex again.
+type shoelace struct {
+	firstY, firstZ, prevY, prevZ float64
+	have                         bool
+	a2, sy6, sz6                 float64
+}
+
+func (s *shoelace) vertex(y, z float64) {
+	if !s.have {
+		s.firstY, s.firstZ, s.have = y, z, true
+	} else {
+		cr := s.prevY*z - y*s.prevZ
+		s.a2 += cr
+		s.sy6 += (s.prevY + y) * cr
+		s.sz6 += (s.prevZ + z) * cr
+	}
+	s.prevY, s.prevZ = y, z
 }
 
 // polygonMoments returns area and first moments of a whole polygon.

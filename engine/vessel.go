@@ -27,7 +27,14 @@ type Weight struct {
 	TCGM  float64 // m, positive to starboard
 	VCGM  float64 // m above the baseline
 	FSMTm float64 // free-surface moment, t·m (≥ 0)
+	// ExtentM is the stretch [aft, fwd] of the ship the mass is spread
+	// over, m, for the hull girder's strength (strength.go); zero when not
+	// given.
+	ExtentM [2]float64
 }
+
+// HasExtent reports whether the weight's extent is given.
+func (w Weight) HasExtent() bool { return w.ExtentM[1] > w.ExtentM[0] }
 
 // Opening is a point through which water would spread further into the
 // ship once immersed: a vent, an air pipe, a door.
@@ -36,6 +43,12 @@ type Opening struct {
 	Kind         string // free text: "vent", "air pipe", "door", …
 	X, Y, Z      float64
 	Weathertight bool // closed weathertight: does not count as a downflooding point
+	// LeadsTo names the compartment water runs into through it (matched
+	// ignoring case); "" for a space not modelled, a point of downflooding.
+	// Into a compartment already flooded it is no point of progressive
+	// flooding (see leads.go).
+	LeadsTo string
+	AreaM2  float64 // flow area for a run through it, m²; 0: DefaultOpeningAreaM2 (connection.go)
 }
 
 // Vessel is one ship with one loading condition. Build it with NewVessel.
@@ -46,9 +59,12 @@ type Vessel struct {
 	Weights      []Weight
 	Compartments []*Compartment
 	Openings     []Opening
-	MarginLineM  float64  // margin line's depth below the deck at side, m
-	CriteriaSets []string // the criteria sets she is held to (see criteria.go)
-	ShipType     string   // "cargo" or "passenger" (SOLAS s's heel limits); "" is cargo
+	Connections  []Connection // ways for water between compartments (connection.go)
+	MarginLineM  float64      // margin line's depth below the deck at side, m
+	CriteriaSets []string     // the criteria sets she is held to (see criteria.go)
+	ShipType     string       // "cargo" or "passenger" (SOLAS s's heel limits); "" is cargo
+	DraftMarks   []DraftMark  // the marks the crew reads (draftmark.go)
+	Girder       GirderLimits // read-out points and permissible values (strength.go)
 
 	tanks []tankLoad // contents of each compartment at its fill, upright
 }
@@ -56,6 +72,7 @@ type Vessel struct {
 // tankLoad is a tank's contents as loaded, upright and level.
 type tankLoad struct {
 	massT, x, y, z, fsm float64
+	level               Plane // the contents' surface
 }
 
 // NewVessel checks v and returns a copy ready to solve: tank contents and
@@ -78,6 +95,14 @@ func NewVessel(v Vessel) (*Vessel, error) {
 	v.Compartments = append([]*Compartment(nil), v.Compartments...)
 	v.Openings = append([]Opening(nil), v.Openings...)
 	v.CriteriaSets = append([]string(nil), v.CriteriaSets...)
+	v.Connections = append([]Connection(nil), v.Connections...)
+	if err := checkConnections(&v); err != nil {
+		return nil, err
+	}
+	if err := checkMarks(v.Hull, v.DraftMarks); err != nil {
+		return nil, err
+	}
+	v.DraftMarks = append([]DraftMark(nil), v.DraftMarks...)
 	for i, w := range v.Weights {
 		for _, f := range []float64{w.MassT, w.LCGM, w.TCGM, w.VCGM, w.FSMTm} {
 			if math.IsNaN(f) || math.IsInf(f, 0) {
@@ -87,6 +112,10 @@ func NewVessel(v Vessel) (*Vessel, error) {
 		if w.MassT < 0 || w.FSMTm < 0 {
 			return nil, fmt.Errorf("weight %d (%q): mass %v t and free-surface moment %v t·m must not be negative", i+1, w.Name, w.MassT, w.FSMTm)
 		}
+	}
+	v.Girder.Points = append([]ReadOutPoint(nil), v.Girder.Points...)
+	if err := checkGirderData(&v); err != nil {
+		return nil, err
 	}
 	v.tanks = make([]tankLoad, len(v.Compartments))
 	for i, c := range v.Compartments {
@@ -103,15 +132,21 @@ func NewVessel(v Vessel) (*Vessel, error) {
 		if !(l.Density > 0) || math.IsInf(l.Density, 0) || !(l.Fill <= 1) {
 			return nil, fmt.Errorf("compartment %q: liquid density %v or fill %v out of range", c.Name, l.Density, l.Fill)
 		}
-		vol := l.Fill * c.solid.Volume()
-		p, im := levelForVolume(c.solid, vol, 0, 0)
-		_ = p
+		// The contents fill μ of the space below their level (the
+		// structure takes the rest), as the sea would: their level is where
+		// μ × the space below it holds them, and their free surface is μ of
+		// the space's plan there.
+		vol := l.Fill * c.CapacityM3()
+		p, im := levelForVolume(c.solid, vol/c.Permeability, 0, 0)
 		x, y, z := im.Centroid()
-		t := tankLoad{massT: vol * l.Density, x: x, y: y, z: z}
+		t := tankLoad{massT: vol * l.Density, x: x, y: y, z: z, level: p}
 		if l.Fill < PressedFullFill && im.AW > 0 {
-			t.fsm = l.Density * (im.IYY - im.SY*im.SY/im.AW)
+			t.fsm = l.Density * c.Permeability * (im.IYY - im.SY*im.SY/im.AW)
 		}
 		v.tanks[i] = t
+	}
+	if err := v.checkLeadsTo(); err != nil {
+		return nil, err
 	}
 	var m float64
 	for _, w := range v.Weights {
@@ -155,12 +190,43 @@ func (d Damage) state(i int) SpaceState {
 	return SpaceState{}
 }
 
-// permeability returns μ of compartment i under d.
-func (v *Vessel) permeability(d Damage, i int) float64 {
-	if mu := d.state(i).Permeability; mu > 0 && mu <= 1 {
+// Permeability returns μ of compartment i under d: the override
+// d[i].Permeability when one is set (non-zero), else the compartment's own
+// (the vessel file's). This is the one place that rule is written.
+//
+// An override must lie in 0 < μ ≤ 1: whoever builds the damage state checks
+// it there (CheckDamage; the front ends read μ with
+// vessels.ParsePermeability), so an override out of range here is a
+// programmer's mistake and panics.
+func (v *Vessel) Permeability(d Damage, i int) float64 {
+	mu := d.state(i).Permeability
+	switch {
+	case mu == 0:
+		return v.Compartments[i].Permeability
+	case mu > 0 && mu <= 1:
 		return mu
 	}
-	return v.Compartments[i].Permeability
+	panic(fmt.Sprintf("engine: permeability override %v of compartment %d is outside 0 < μ ≤ 1 (check the damage state with CheckDamage)", mu, i))
+}
+
+// CheckDamage returns an error naming the first compartment of d whose
+// state cannot be used with v: a permeability override outside 0 < μ ≤ 1
+// (0 means the compartment's own), or held water that is negative or not
+// finite. A state longer than v's compartments is an error too.
+func CheckDamage(v *Vessel, d Damage) error {
+	if len(d) > len(v.Compartments) {
+		return fmt.Errorf("damage state of %d compartments for a vessel of %d", len(d), len(v.Compartments))
+	}
+	for i, s := range d {
+		name := v.Compartments[i].Name
+		if mu := s.Permeability; mu != 0 && !(mu > 0 && mu <= 1) {
+			return fmt.Errorf("%s: permeability %v is outside 0 < μ ≤ 1", name, mu)
+		}
+		if !(s.WaterM3 >= 0) || math.IsInf(s.WaterM3, 0) {
+			return fmt.Errorf("%s: water held %v m³ must be a finite number, zero or more", name, s.WaterM3)
+		}
+	}
+	return nil
 }
 
 // Load is the loading condition's totals under a damage state: the fixed

@@ -103,6 +103,17 @@ func (c *cutState) sides(n int) []bool {
 	return c.big[:n]
 }
 
+// markCut records that edge e is cut at the slab's start; when the list is
+// full the fast path gives up (ok false) and the slab is clipped instead.
+func (c *cutState) markCut(e int) {
+	if c.ncut == len(c.cut) {
+		c.ok = false
+		return
+	}
+	c.cut[c.ncut] = e
+	c.ncut++
+}
+
 func (c *cutState) toggle(e int) {
 	i := 0
 	for i < c.ncut && c.cut[i] < e {
@@ -247,12 +258,7 @@ func (s *slab) belowChains(p Plane, im *Immersion, sc *cutScratch) bool {
 				st.nin += k1 - k0
 			}
 			if k0 > 0 && b != prev {
-				if st.ncut == len(st.cut) {
-					st.ok = false
-				} else {
-					st.cut[st.ncut] = k0 - 1
-					st.ncut++
-				}
+				st.markCut(k0 - 1)
 			}
 			prev = b
 			continue
@@ -268,13 +274,7 @@ func (s *slab) belowChains(p Plane, im *Immersion, sc *cutScratch) bool {
 				st.nin++
 			}
 			if k > 0 && b != prev {
-				// Edge k−1 is cut at x0.
-				if st.ncut == len(st.cut) {
-					st.ok = false
-				} else {
-					st.cut[st.ncut] = k - 1
-					st.ncut++
-				}
+				st.markCut(k - 1) // edge k−1 is cut at x0
 			}
 			prev = b
 			if (d0 < 0 && d1 > 0) || (d0 > 0 && d1 < 0) {

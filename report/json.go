@@ -37,6 +37,13 @@ type Document struct {
 	GZ          GZ           `json:"gz"`
 	Hand        *Hand        `json:"hand"`
 	Flags       []FlagDoc    `json:"flags"`
+	Flooded     []string     `json:"flooded"`          // every compartment holding sea water in the final state
+	Spread      *SpreadDoc   `json:"spread,omitempty"` // how it spread through connections and openings
+	Spills      []SpillDoc   `json:"spills"`           // non-water contents of holed tanks that may escape
+	DraftMarks  []MarkDoc    `json:"draft_marks"`
+	// MarksSurvey: the marks carried to the perpendiculars (draftmarks.go).
+	MarksSurvey *SurveyDoc   `json:"marks_to_perpendiculars"`
+	Strength    *StrengthDoc `json:"strength"` // null: not worked out (strength_note says why)
 
 	Outcome          string         `json:"outcome"`           // floats | sinks | capsizes | not converged
 	Reason           string         `json:"reason"`            // why there is no equilibrium, "" when she floats
@@ -45,7 +52,8 @@ type Document struct {
 	HeldWater        []HeldDoc      `json:"partly_flooded"`    // compartments holding floodwater, not open to the sea
 	Freeboards       []Freeboard    `json:"freeboards"`
 	Openings         []OpeningDoc   `json:"openings"`
-	HandNote         string         `json:"hand_note"` // why the hand method is not applied, "" when it is
+	HandNote         string         `json:"hand_note"`     // why the hand method is not applied, "" when it is
+	StrengthNote     string         `json:"strength_note"` // why strength is null, "" when it is worked out
 	Criteria         []CriterionDoc `json:"criteria"`
 	Notes            []string       `json:"notes"` // what could not be computed, and why
 	VesselFile       string         `json:"vessel_file"`
@@ -67,9 +75,12 @@ type Equilibrium struct {
 	DraftFwdM Num `json:"draft_fwd_m"`
 	TrimM     Num `json:"trim_m"`
 	HeelDeg   Num `json:"heel_deg"`
-	GMM       Num `json:"gm_m"`
+	GMM       Num `json:"gm_m"`         // upright GM of the condition as solved
+	GMAtRestM Num `json:"gm_at_rest_m"` // GZ slope at the equilibrium heel, m/rad
 
-	DisplacementT    Num       `json:"displacement_t"`
+	DisplacementT    Num       `json:"displacement_t"` // lost-buoyancy basis: the ship's weight without the water in open spaces
+	OpenWaterT       Num       `json:"open_water_t"`   // sea water standing in the compartments open to the sea
+	Loll             bool      `json:"loll"`           // heeled with a negative upright GM
 	VolumeM3         Num       `json:"volume_m3"`
 	LCBM             Num       `json:"lcb_m"`
 	TCBM             Num       `json:"tcb_m"`
@@ -116,6 +127,8 @@ type OpeningDoc struct {
 	Weathertight bool   `json:"weathertight"`
 	HeightM      Num    `json:"height_m"` // negative: immersed
 	Immersed     bool   `json:"immersed"`
+	LeadsTo      string `json:"leads_to"`    // the compartment it lets water into; "" a space not modelled
+	Progressive  bool   `json:"progressive"` // a point of progressive flooding: not weathertight, not into a space flooded already
 }
 
 // OpenDoc is a compartment open to the sea.
@@ -213,6 +226,7 @@ func Build(r Report) Document {
 		Vessel:           r.VesselName,
 		Open:             append([]string{}, r.Open...),
 		Flags:            []FlagDoc{},
+		Spills:           buildSpills(a.Spills),
 		Outcome:          r.Outcome(),
 		Severity:         r.Severity(),
 		OpenCompartments: []OpenDoc{},
@@ -220,12 +234,19 @@ func Build(r Report) Document {
 		Freeboards:       []Freeboard{},
 		Openings:         []OpeningDoc{},
 		HandNote:         a.HandWhy,
+		StrengthNote:     a.StrengthWhy,
 		Criteria:         []CriterionDoc{},
 		Notes:            append([]string{}, a.Notes...),
 		VesselFile:       r.VesselFile,
 		Condition:        r.Condition,
 		Version:          r.Version,
 		GZ:               buildGZ(a.GZ),
+		Strength:         StrengthJSON(a.Strength, r.IntactStrength),
+	}
+	if md := MarkDrafts(r.Vessel, a.Position); md != nil {
+		d.DraftMarks, d.MarksSurvey = MarkDocs(md), Survey(r.Vessel.Hull.LengthM, a.Position.Plane.C, md)
+	} else {
+		d.DraftMarks = []MarkDoc{}
 	}
 	if !r.Made.IsZero() {
 		d.Made = r.Made.UTC().Format(time.RFC3339)
@@ -255,7 +276,7 @@ func Build(r Report) Document {
 		for _, o := range p.Openings {
 			d.Openings = append(d.Openings, OpeningDoc{Name: o.Name, Kind: o.Kind,
 				XM: Num(o.X), YM: Num(o.Y), ZM: Num(o.Z), Weathertight: o.Weathertight,
-				HeightM: Num(o.HeightM), Immersed: o.Immersed()})
+				HeightM: Num(o.HeightM), Immersed: o.Immersed(), LeadsTo: o.LeadsTo, Progressive: o.Progressive()})
 		}
 	}
 	if h := a.Hand; h != nil {
@@ -278,6 +299,7 @@ func Build(r Report) Document {
 		d.Remedies, d.RemediesSummary, d.RemediesLoll, d.RemediesCaution = &list, rs.Summary, &loll, RemediesCaution
 	}
 	d.Criteria = append(d.Criteria, CriterionDocs(a.Criteria)...)
+	d.Flooded, d.Spread = flooded(r), buildSpread(r)
 	return d
 }
 
@@ -298,8 +320,8 @@ func buildEquilibrium(p *engine.Position) *Equilibrium {
 	}
 	return &Equilibrium{
 		DraftAftM: Num(p.DraftAftM), DraftMidM: Num(p.DraftMidM), DraftFwdM: Num(p.DraftFwdM),
-		TrimM: Num(p.TrimM), HeelDeg: Num(p.HeelDeg), GMM: Num(p.GMM),
-		DisplacementT: Num(p.DisplacementT), VolumeM3: Num(p.VolumeM3),
+		TrimM: Num(p.TrimM), HeelDeg: Num(p.HeelDeg), GMM: Num(p.GMUprightM), GMAtRestM: Num(p.GMAtRestM),
+		DisplacementT: Num(p.DisplacementT), OpenWaterT: Num(p.OpenWaterT), Loll: p.IsLoll(), VolumeM3: Num(p.VolumeM3),
 		LCBM: Num(p.LCBM), TCBM: Num(p.TCBM), VCBM: Num(p.VCBM),
 		LCGM: Num(p.LCGM), TCGM: Num(p.TCGM), KGM: Num(p.KGM), FSCM: Num(p.FSCM),
 		WaterplaneAreaM2: Num(p.WaterplaneAreaM2), LCFM: Num(p.LCFM), TCFM: Num(p.TCFM),

@@ -33,108 +33,9 @@ func Markdown(w io.Writer, r Report) error {
 	e.line("| Highest flag | ", r.Severity(), " |")
 	e.line()
 
-	e.line("## Condition")
-	e.line()
-	if r.Condition != "" {
-		e.line("Loading condition: ", md(r.Condition), ".")
-		e.line()
-	}
-	held := r.heldWater()
-	if len(r.Open) == 0 && len(held) == 0 {
-		e.line("No compartment is open to the sea: this is the intact loading condition.")
-	} else if len(r.Open) == 0 {
-		e.line("No compartment is open to the sea.")
-	} else {
-		e.line("Compartments open to the sea (lost buoyancy, each with its permeability μ):")
-		e.line()
-		e.line("| Compartment | Use | μ | Volume |")
-		e.line("|---|---|--:|--:|")
-		for _, o := range doc.OpenCompartments {
-			e.line("| ", md(o.Name), " | ", md(orDash(o.Use)), " | ", num(float64(o.Permeability), 2, ""), " | ", num(float64(o.VolumeM3), 1, "m³"), " |")
-		}
-	}
-	if len(held) > 0 {
-		e.line()
-		e.line("Compartments partly flooded (water held, the added-weight method):")
-		e.line()
-		e.line("| Compartment | Water held |")
-		e.line("|---|--:|")
-		for _, h := range held {
-			e.line("| ", md(h.Name), " | ", num(float64(h.WaterM3), 1, "m³"), " |")
-		}
-	}
-	e.line()
-
-	e.line("## Floating position")
-	e.line()
+	markdownCondition(e, r, doc)
+	markdownPosition(e, r)
 	p := a.Position
-	if p == nil {
-		e.line("**No floating position exists: she ", r.Outcome(), ".**")
-		if a.NoEq != nil && a.NoEq.Reason != "" {
-			e.line()
-			e.line(md(sentence(a.NoEq.Reason)), ".")
-		}
-		e.line()
-	} else {
-		e.line("Direct solution from the hull geometry, at the actual heel and trim.")
-		e.line()
-		e.line("| Figure | Value |")
-		e.line("|---|--:|")
-		rows := [][2]string{
-			{"Draft aft (AP)", num(p.DraftAftM, 3, "m")},
-			{"Draft amidships", num(p.DraftMidM, 3, "m")},
-			{"Draft forward (FP)", num(p.DraftFwdM, 3, "m")},
-			{"Trim", TrimWords(p.TrimM)},
-			{"Heel", HeelWords(p.HeelDeg)},
-			{"GM (free-surface corrected)", gmWords(p, a.UprightGMM)},
-			{"KM", num(p.KMTM, 3, "m")},
-			{"KG", num(p.KGM, 3, "m")},
-			{"Free-surface correction", num(p.FSCM, 3, "m")},
-			{"GM longitudinal", num(p.GMLM, 1, "m")},
-			{"Displacement", num(p.DisplacementT, 1, "t")},
-			{"Buoyant volume", num(p.VolumeM3, 1, "m³")},
-		}
-		for _, row := range rows {
-			e.line("| ", row[0], " | ", row[1], " |")
-		}
-		e.line()
-
-		e.line("## Freeboard")
-		e.line()
-		e.line("- Least freeboard to the deck edge: ", clearanceWords(p.DeckEdge))
-		e.line("- Margin line: ", clearanceWords(p.MarginLine))
-		if len(p.Freeboards) > 0 {
-			e.line()
-			e.line("| Station x | Deck at side | Port | Starboard |")
-			e.line("|--:|--:|--:|--:|")
-			for _, f := range p.Freeboards {
-				e.line("| ", num(f.XM, 1, "m"), " | ", num(f.DeckZM, 2, "m"), " | ", num(f.PortM, 3, "m"), " | ", num(f.StarboardM, 3, "m"), " |")
-			}
-		}
-		e.line()
-
-		e.line("## Openings")
-		e.line()
-		if len(p.Openings) == 0 {
-			e.line("The vessel file lists no openings.")
-		} else {
-			e.line("Nearest the water first; a negative height is under water.")
-			e.line()
-			e.line("| Opening | Kind | x | y | z | Height above water | State |")
-			e.line("|---|---|--:|--:|--:|--:|---|")
-			for _, o := range openingsByHeight(p) {
-				state := "clear"
-				if o.Immersed() {
-					state = "**immersed**"
-				}
-				if o.Weathertight {
-					state += ", weathertight"
-				}
-				e.line("| ", md(o.Name), " | ", md(orDash(o.Kind)), " | ", num(o.X, 1, "m"), " | ", num(o.Y, 1, "m"), " | ", num(o.Z, 1, "m"), " | ", num(o.HeightM, 3, "m"), " | ", state, " |")
-			}
-		}
-		e.line()
-	}
 
 	e.line("## Flags")
 	e.line()
@@ -153,6 +54,7 @@ func Markdown(w io.Writer, r Report) error {
 		}
 	}
 	e.line()
+	markdownSpills(e, a.Spills)
 
 	if r.Remedies != nil {
 		markdownRemedies(e, r.Remedies)
@@ -208,6 +110,8 @@ func Markdown(w io.Writer, r Report) error {
 	}
 	e.line()
 
+	markdownStrength(e, r)
+
 	e.line("## Hand method")
 	e.line()
 	if h := a.Hand; h == nil {
@@ -239,7 +143,7 @@ func Markdown(w io.Writer, r Report) error {
 		e.line("| Draft forward | ", num(h.DraftFwdM, 3, "m"), " | ", dash(func() string { return num(p.DraftFwdM, 3, "m") }), " |")
 		e.line("| Trim | ", TrimWords(h.TrimM), " | ", dash(func() string { return TrimWords(p.TrimM) }), " |")
 		e.line("| Heel | ", HeelWords(h.HeelDeg), " | ", dash(func() string { return HeelWords(p.HeelDeg) }), " |")
-		e.line("| GM | ", num(h.GMM, 3, "m"), " | ", dash(func() string { return num(p.GMM, 3, "m") }), " |")
+		e.line("| GM upright | ", num(h.GMM, 3, "m"), " | ", dash(func() string { return num(p.GMUprightM, 3, "m") }), " |")
 	}
 	e.line()
 
@@ -254,12 +158,133 @@ func Markdown(w io.Writer, r Report) error {
 
 	e.line("## Cautions")
 	e.line()
-	for _, c := range Cautions {
+	for _, c := range Cautions() {
 		e.line("- ", c)
 	}
 	e.line()
 	e.line("*Made ", madeWords(r.Made), " by heelwatch ", md(orDash(r.Version)), ".*")
 	return e.err
+}
+
+// markdownCondition writes the condition: the loading condition and the
+// compartments open to the sea or holding water.
+func markdownCondition(e *errWriter, r Report, doc Document) {
+	e.line("## Condition")
+	e.line()
+	if r.Condition != "" {
+		e.line("Loading condition: ", md(r.Condition), ".")
+		e.line()
+	}
+	held := r.heldWater()
+	if len(r.Open) == 0 && len(held) == 0 {
+		e.line("No compartment is open to the sea: this is the intact loading condition.")
+	} else if len(r.Open) == 0 {
+		e.line("No compartment is open to the sea; the compartments below are flooded to a level (a stage of flooding).")
+	} else {
+		e.line("Compartments open to the sea (lost buoyancy, each with its permeability μ):")
+		e.line()
+		e.line("| Compartment | Use | μ | Volume |")
+		e.line("|---|---|--:|--:|")
+		for _, o := range doc.OpenCompartments {
+			e.line("| ", md(o.Name), " | ", md(orDash(o.Use)), " | ", Permeability(float64(o.Permeability)), " | ", num(float64(o.VolumeM3), 1, "m³"), " |")
+		}
+	}
+	if len(held) > 0 {
+		e.line()
+		e.line("Compartments flooded to a level (a stage of flooding: water held, the added-weight method):")
+		e.line()
+		e.line("| Compartment | Water held |")
+		e.line("|---|--:|")
+		for _, h := range held {
+			e.line("| ", md(h.Name), " | ", num(float64(h.WaterM3), 1, "m³"), " |")
+		}
+	}
+	markdownSpread(e, r)
+	e.line()
+}
+
+// markdownPosition writes the floating position, the freeboards, the
+// draft marks and the openings, or why there is no floating position.
+func markdownPosition(e *errWriter, r Report) {
+	a := r.Assessment
+	e.line("## Floating position")
+	e.line()
+	p := a.Position
+	if p == nil {
+		e.line("**No floating position exists: she ", r.Outcome(), ".**")
+		if a.NoEq != nil && a.NoEq.Reason != "" {
+			e.line()
+			e.line(md(sentence(a.NoEq.Reason)), ".")
+		}
+		e.line()
+	} else {
+		e.line("Direct solution from the hull geometry, at the actual heel and trim.")
+		e.line()
+		e.line("| Figure | Value |")
+		e.line("|---|--:|")
+		rows := [][2]string{
+			{"Draft aft (AP)", num(p.DraftAftM, 3, "m")},
+			{"Draft amidships", num(p.DraftMidM, 3, "m")},
+			{"Draft forward (FP)", num(p.DraftFwdM, 3, "m")},
+			{"Trim", TrimWords(p.TrimM)},
+			{"Heel", HeelWords(p.HeelDeg)},
+			{"GM upright (free-surface corrected)", GMUprightWords(p)},
+			{"GM where she lies", GMAtRestWords(p)},
+			{"KM upright", num(kmUpright(p), 3, "m")},
+			{"KG", num(p.KGM, 3, "m")},
+			{"Free-surface correction", num(p.FSCM, 3, "m")},
+			{"GM longitudinal", num(p.GMLM, 1, "m")},
+		}
+		for _, row := range displacementRows(p) {
+			rows = append(rows, [2]string{sentence(row[0]), row[1]})
+		}
+		rows = append(rows, [2]string{"Buoyant volume", num(p.VolumeM3, 1, "m³")})
+		for _, row := range rows {
+			e.line("| ", row[0], " | ", row[1], " |")
+		}
+		e.line()
+
+		e.line("## Freeboard")
+		e.line()
+		for _, row := range deckLineRows(p, r.Vessel) {
+			e.line("- Least clearance of the ", row[0], ": ", row[1])
+		}
+		if len(p.Freeboards) > 0 {
+			e.line()
+			e.line("| Station x | Deck at side | Port | Starboard |")
+			e.line("|--:|--:|--:|--:|")
+			for _, f := range p.Freeboards {
+				e.line("| ", num(f.XM, 1, "m"), " | ", num(f.DeckZM, 2, "m"), " | ", num(f.PortM, 3, "m"), " | ", num(f.StarboardM, 3, "m"), " |")
+			}
+		}
+		e.line()
+		markdownMarks(e, r)
+
+		e.line("## Openings")
+		e.line()
+		if len(p.Openings) == 0 {
+			e.line("The vessel file lists no openings.")
+		} else {
+			e.line("Nearest the water first; a negative height is under water.")
+			e.line()
+			e.line("| Opening | Kind | x | y | z | Height above water | State |")
+			e.line("|---|---|--:|--:|--:|--:|---|")
+			for _, o := range openingsByHeight(p) {
+				state := "clear"
+				if o.Immersed() {
+					state = "**immersed**"
+				}
+				if o.Weathertight {
+					state += ", weathertight"
+				}
+				if o.IntoFlooded {
+					state += ", into " + md(o.LeadsTo) + " (flooded already)"
+				}
+				e.line("| ", md(o.Name), " | ", md(orDash(o.Kind)), " | ", num(o.X, 1, "m"), " | ", num(o.Y, 1, "m"), " | ", num(o.Z, 1, "m"), " | ", num(o.HeightM, 3, "m"), " | ", state, " |")
+			}
+		}
+		e.line()
+	}
 }
 
 // md escapes text for a Markdown table cell or line. An underscore inside

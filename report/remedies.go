@@ -26,7 +26,8 @@ type RemedyDoc struct {
 	MassT          Num      `json:"mass_t"`
 	HeelDeg        Num      `json:"heel_deg"` // after it; null when she would not float
 	TrimM          Num      `json:"trim_m"`
-	GMM            Num      `json:"gm_m"`             // in the position she comes to
+	GMM            Num      `json:"gm_m"`             // upright GM after it (as upright_gm_m)
+	GMAtRestM      Num      `json:"gm_at_rest_m"`     // GZ slope where she comes to rest, m/rad
 	DeckEdgeM      Num      `json:"deck_edge_m"`      // least freeboard to the deck edge; negative: under water
 	LowestOpeningM Num      `json:"lowest_opening_m"` // the unprotected opening nearest the water; null if none
 	Advisable      bool     `json:"advisable"`
@@ -44,6 +45,13 @@ type RemedyDoc struct {
 	DeckEdgeImmersed bool   `json:"deck_edge_immersed"`
 	OpeningImmersed  bool   `json:"opening_immersed"`
 	NoEquilibrium    string `json:"no_equilibrium"` // "" when she floats, else why not
+
+	StagesChecked int    `json:"stages_checked"` // steps of carrying it out solved and passed (of stages_of)
+	StagesOf      int    `json:"stages_of"`      // the steps it is solved at, the last being the option itself
+	StageFail     string `json:"stage_fail"`     // the first step at which it is unsafe, and why; "" if none
+	DurationS     Num    `json:"duration_s"`     // how long it takes at pump_m3h; null when the file gives no rate
+	PumpM3h       Num    `json:"pump_m3h"`       // the rate used, m³/h; null when none
+	PumpTank      string `json:"pump_tank"`      // the tank whose rate it is
 }
 
 // buildRemedies returns the JSON options of rs, never nil.
@@ -52,11 +60,16 @@ func buildRemedies(rs *engine.RemedySet) []RemedyDoc {
 	for _, o := range rs.Options {
 		nan := Num(math.NaN())
 		d := RemedyDoc{Action: o.Action, Tanks: append([]string{}, o.TankNames...), MassT: Num(o.MassT),
-			HeelDeg: nan, TrimM: nan, GMM: nan, DeckEdgeM: nan, LowestOpeningM: Num(o.LowestOpeningM),
+			HeelDeg: nan, TrimM: nan, GMM: Num(o.UprightGMM), GMAtRestM: nan, DeckEdgeM: nan, LowestOpeningM: Num(o.LowestOpeningM),
 			Advisable: o.Advisable, Note: o.Note, Kind: o.Kind.String(), ToUpright: o.ToUpright,
 			FillsBefore: []Num{}, FillsAfter: []Num{}, DraftAftM: nan, DraftMidM: nan, DraftFwdM: nan,
 			UprightGMM: Num(o.UprightGMM), LowestOpening: o.LowestOpening,
-			DeckEdgeImmersed: o.DeckEdgeImmersed, OpeningImmersed: o.OpeningImmersed}
+			DeckEdgeImmersed: o.DeckEdgeImmersed, OpeningImmersed: o.OpeningImmersed,
+			StagesChecked: o.StagesChecked, StagesOf: engine.RemedyStages, StageFail: o.StageFail,
+			DurationS: Num(o.DurationS), PumpM3h: nan, PumpTank: o.PumpName}
+		if o.PumpM3h > 0 {
+			d.PumpM3h = Num(o.PumpM3h)
+		}
 		for _, f := range o.FillBefore {
 			d.FillsBefore = append(d.FillsBefore, Num(f))
 		}
@@ -64,7 +77,7 @@ func buildRemedies(rs *engine.RemedySet) []RemedyDoc {
 			d.FillsAfter = append(d.FillsAfter, Num(f))
 		}
 		if p := o.Position; p != nil {
-			d.HeelDeg, d.TrimM, d.GMM, d.DeckEdgeM = Num(p.HeelDeg), Num(p.TrimM), Num(p.GMM), Num(p.DeckEdge.HeightM)
+			d.HeelDeg, d.TrimM, d.GMAtRestM, d.DeckEdgeM = Num(p.HeelDeg), Num(p.TrimM), Num(p.GMAtRestM), Num(p.DeckEdge.HeightM)
 			d.DraftAftM, d.DraftMidM, d.DraftFwdM = Num(p.DraftAftM), Num(p.DraftMidM), Num(p.DraftFwdM)
 		} else {
 			d.LowestOpeningM = nan
@@ -100,7 +113,7 @@ func clearWords(h float64) string {
 }
 
 // remedyCells are one option's figures as the text and Markdown tables show
-// them: mass, heel, trim, GM, upright GM, deck edge, lowest opening.
+// them: mass, heel, trim, upright GM, GM at rest, deck edge, lowest opening.
 func remedyCells(o engine.Remedy) []string {
 	p := o.Position
 	if p == nil {
@@ -110,8 +123,8 @@ func remedyCells(o engine.Remedy) []string {
 		}
 		return []string{num(o.MassT, 1, "t"), why, "—", "—", "—", "—", "—"}
 	}
-	return []string{num(o.MassT, 1, "t"), HeelWords(p.HeelDeg), TrimWords(p.TrimM), num(p.GMM, 2, "m"),
-		num(o.UprightGMM, 2, "m"), clearWords(p.DeckEdge.HeightM), clearWords(o.LowestOpeningM)}
+	return []string{num(o.MassT, 1, "t"), HeelWords(p.HeelDeg), TrimWords(p.TrimM), num(o.UprightGMM, 2, "m"),
+		num(p.GMAtRestM, 2, "m"), clearWords(p.DeckEdge.HeightM), clearWords(o.LowestOpeningM)}
 }
 
 // textRemedies writes the options as aligned text.
@@ -120,7 +133,7 @@ func textRemedies(e *errWriter, rs *engine.RemedySet) {
 	e.line("  ", rs.Summary)
 	if len(rs.Options) > 0 {
 		t := table{right: []bool{true, false, true, false, false, true, true, true, true, false}}
-		t.add("#", "action", "mass", "heel after", "trim after", "GM", "GM upright", "deck edge", "lowest opening", "advisable")
+		t.add("#", "action", "mass", "heel after", "trim after", "GM upright", "GM at rest", "deck edge", "lowest opening", "advisable")
 		for i, o := range rs.Options {
 			t.add(append(append([]string{strconv.Itoa(i + 1), o.Action}, remedyCells(o)...), advisableWord(o))...)
 		}
@@ -142,7 +155,7 @@ func markdownRemedies(e *errWriter, rs *engine.RemedySet) {
 	e.line(md(rs.Summary))
 	e.line()
 	if len(rs.Options) > 0 {
-		e.line("| # | Action | Mass | Heel after | Trim after | GM | GM upright | Deck edge | Lowest opening | Advisable | Note |")
+		e.line("| # | Action | Mass | Heel after | Trim after | GM upright | GM at rest | Deck edge | Lowest opening | Advisable | Note |")
 		e.line("|--:|---|--:|---|---|--:|--:|--:|--:|---|---|")
 		for i, o := range rs.Options {
 			adv := advisableWord(o)

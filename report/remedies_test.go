@@ -19,7 +19,7 @@ func remedySetForTest() *engine.RemedySet {
 		Options: []engine.Remedy{
 			{Kind: engine.RemedyFill, Tanks: []int{0}, TankNames: []string{"WB 2 P"}, FillBefore: []float64{0}, FillAfter: []float64{0.98},
 				Action: "fill WB 2 P from the sea to 98 %", MassT: 120, UprightGMM: 0.75, LowestOpening: "vent", LowestOpeningM: 2.5,
-				Position:  &engine.Position{HeelDeg: -0.4, TrimM: 0.2, GMM: 0.77, DeckEdge: engine.Clearance{HeightM: 1.9}},
+				Position:  &engine.Position{HeelDeg: -0.4, TrimM: 0.2, GMM: 0.77, GMUprightM: 0.75, GMAtRestM: 0.77, DeckEdge: engine.Clearance{HeightM: 1.9}},
 				Advisable: true, Note: "Brings her to 0.40° to port."},
 			{Kind: engine.RemedyDischarge, Tanks: []int{1}, TankNames: []string{"FW S"}, FillBefore: []float64{0.5}, FillAfter: []float64{0},
 				Action: "pump out FW S (fresh water)", MassT: nan, UprightGMM: nan, LowestOpeningM: math.Inf(1),
@@ -82,7 +82,7 @@ func TestRemediesRendered(t *testing.T) {
 	}
 	first := list[0].(map[string]any)
 	for k, want := range map[string]any{"action": "fill WB 2 P from the sea to 98 %", "mass_t": 120.0, "heel_deg": -0.4,
-		"trim_m": 0.2, "gm_m": 0.77, "deck_edge_m": 1.9, "lowest_opening_m": 2.5, "advisable": true, "kind": "fill", "lowest_opening": "vent"} {
+		"trim_m": 0.2, "gm_m": 0.75, "deck_edge_m": 1.9, "lowest_opening_m": 2.5, "advisable": true, "kind": "fill", "lowest_opening": "vent"} {
 		if first[k] != want {
 			t.Errorf("remedies[0].%s = %#v, want %#v", k, first[k], want)
 		}

@@ -43,8 +43,14 @@ type Report struct {
 	// state (engine.FindRemedies), shown after the flags; nil leaves them
 	// out of every format.
 	Remedies *engine.RemedySet
-	Made     time.Time // when the assessment was made (shown in UTC)
-	Version  string    // heelwatch's version
+	// Spread, when set, is how flooding spread through connections and
+	// openings (engine.Progressive); Assessment is then of its final state.
+	Spread *engine.Spread
+	// IntactStrength is the hull girder of the same ship intact, shown
+	// beside a damaged state's (nil when intact or not worked out).
+	IntactStrength *engine.Strength
+	Made           time.Time // when the assessment was made (shown in UTC)
+	Version        string    // heelwatch's version
 }
 
 // New returns the Report of assessment a of vessel v: the open
@@ -57,24 +63,22 @@ func New(v *engine.Vessel, file string, a engine.Assessment, made time.Time, ver
 			continue
 		}
 		r.Open = append(r.Open, c.Name)
-		r.Permeabilities[c.Name] = permeabilityOf(c, a.Damage[i])
+		r.Permeabilities[c.Name] = v.Permeability(a.Damage, i)
+	}
+	if a.Strength != nil && engine.IsDamaged(a.Damage) {
+		r.IntactStrength, _ = engine.IntactStrength(v)
 	}
 	return r
 }
 
-func permeabilityOf(c *engine.Compartment, s engine.SpaceState) float64 {
-	if s.Permeability > 0 && s.Permeability <= 1 {
-		return s.Permeability
+// Cautions returns the words that go with every report: what heelwatch is for
+// and what governs instead of it. Each call returns a new slice.
+func Cautions() []string {
+	return []string{
+		"heelwatch is decision support only. It computes from the hull geometry in the vessel file; it is not an approved loading instrument.",
+		"The ship's approved stability information and loading instrument, the master's judgement, class rules and flag-state requirements govern.",
+		"Follow local codes and licensed practice first. Check every figure against the ship's own documents before acting on it.",
 	}
-	return c.Permeability
-}
-
-// Cautions are the words that go with every report: what heelwatch is for
-// and what governs instead of it.
-var Cautions = []string{
-	"heelwatch is decision support only. It computes from the hull geometry in the vessel file; it is not an approved loading instrument.",
-	"The ship's approved stability information and loading instrument, the master's judgement, class rules and flag-state requirements govern.",
-	"Follow local codes and licensed practice first. Check every figure against the ship's own documents before acting on it.",
 }
 
 // Outcome is how the state ends: "floats", or why not ("sinks",
@@ -154,59 +158,11 @@ func (r Report) compartment(name string) *engine.Compartment {
 		return nil
 	}
 	for _, c := range r.Vessel.Compartments {
-		if c.Name == name {
+		if engine.SameName(c.Name, name) {
 			return c
 		}
 	}
 	return nil
-}
-
-// finite reports whether x is neither NaN nor infinite.
-func finite(x float64) bool { return !math.IsNaN(x) && !math.IsInf(x, 0) }
-
-// num formats x with prec decimals and unit, or "—" when x is not finite.
-func num(x float64, prec int, unit string) string {
-	if !finite(x) {
-		return "—"
-	}
-	if x == 0 || math.Abs(x) < 0.5*math.Pow(10, -float64(prec)) {
-		x = 0 // no "-0.000"
-	}
-	s := fmt.Sprintf("%.*f", prec, x)
-	if unit == "" {
-		return s
-	}
-	if unit == "°" {
-		return s + unit
-	}
-	return s + " " + unit
-}
-
-// heelWords says a heel in degrees with its side.
-// HeelWords says a heel with its side: "3.20° to starboard", "0.00° upright".
-func HeelWords(deg float64) string {
-	switch {
-	case !finite(deg):
-		return "—"
-	case math.Abs(deg) < 0.005:
-		return "0.00° upright"
-	case deg > 0:
-		return num(deg, 2, "°") + " to starboard"
-	}
-	return num(-deg, 2, "°") + " to port"
-}
-
-// TrimWords says a trim in metres with its sense: "0.410 m by the stern".
-func TrimWords(m float64) string {
-	switch {
-	case !finite(m):
-		return "—"
-	case math.Abs(m) < 0.0005:
-		return "0.000 m even keel"
-	case m > 0:
-		return num(m, 3, "m") + " by the stern"
-	}
-	return num(-m, 3, "m") + " by the head"
 }
 
 // clearanceWords says a least clearance: height, where and which side.
@@ -307,18 +263,4 @@ func requirementWords(c engine.CriterionResult) string {
 		return c.Requirement
 	}
 	return c.Requirement + " (" + c.Note + ")"
-}
-
-// gmWords gives GM where she lies and, when she is heeled, the upright GM
-// beside it: "1.077 m at 11.9° heel (upright 1.000 m)".
-func gmWords(p *engine.Position, upright *float64) string {
-	s := num(p.GMM, 3, "m")
-	if math.Abs(p.HeelDeg) < 0.05 {
-		return s
-	}
-	s += " at " + num(math.Abs(p.HeelDeg), 1, "°") + " heel"
-	if upright != nil {
-		s += " (upright " + num(*upright, 3, "m") + ")"
-	}
-	return s
 }

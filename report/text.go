@@ -22,24 +22,28 @@ func Text(w io.Writer, r Report) error {
 	}
 	e.line()
 
-	if len(r.Open) == 0 {
+	held := r.heldWater()
+	if len(r.Open) == 0 && len(held) == 0 {
 		e.line("Open to the sea: none (intact)")
+	} else if len(r.Open) == 0 {
+		e.line("Open to the sea: none")
 	} else {
 		e.line("Open to the sea: ", plural(len(r.Open), "compartment"))
 		t := table{right: []bool{false, false, true, true}}
 		for _, o := range Build(r).OpenCompartments {
-			t.add(o.Name, orDash(o.Use), "μ "+num(float64(o.Permeability), 2, ""), num(float64(o.VolumeM3), 1, "m³"))
+			t.add(o.Name, orDash(o.Use), "μ "+Permeability(float64(o.Permeability)), num(float64(o.VolumeM3), 1, "m³"))
 		}
 		writeLines(e, t.lines("  "))
 	}
-	if held := r.heldWater(); len(held) > 0 {
-		e.line("Partly flooded (water held): ", plural(len(held), "compartment"))
+	if len(held) > 0 {
+		e.line("Flooded to a level (a stage of flooding, water held as added weight): ", plural(len(held), "compartment"))
 		t := table{right: []bool{false, true}}
 		for _, h := range held {
 			t.add(h.Name, num(float64(h.WaterM3), 1, "m³"))
 		}
 		writeLines(e, t.lines("  "))
 	}
+	writeSpread(e, r)
 	e.line()
 
 	p := a.Position
@@ -58,14 +62,22 @@ func Text(w io.Writer, r Report) error {
 		t.add("draft forward", num(p.DraftFwdM, 3, "m"))
 		t.add("trim", TrimWords(p.TrimM))
 		t.add("heel", HeelWords(p.HeelDeg))
-		t.add("GM", gmWords(p, a.UprightGMM))
-		t.add("KM", num(p.KMTM, 3, "m"))
+		t.add(LabelGMUpright, GMUprightWords(p))
+		t.add(LabelGMAtRest, GMAtRestWords(p))
+		t.add("KM upright", num(kmUpright(p), 3, "m"))
 		t.add("KG", num(p.KGM, 3, "m"))
 		t.add("free-surface corr.", num(p.FSCM, 3, "m"))
-		t.add("displacement", num(p.DisplacementT, 1, "t"))
-		t.add("deck edge", clearanceWords(p.DeckEdge))
-		t.add("margin line", clearanceWords(p.MarginLine))
+		for _, row := range displacementRows(p) {
+			t.add(row[0], row[1])
+		}
+		for _, row := range deckLineRows(p, r.Vessel) {
+			t.add(row[0], row[1])
+		}
 		writeLines(e, t.lines("  "))
+		if ml := markLines(r); len(ml) > 0 {
+			e.line()
+			writeLines(e, ml)
+		}
 		if len(p.Openings) > 0 {
 			e.line()
 			e.line("Openings, nearest the water first (height above water)")
@@ -77,6 +89,9 @@ func Text(w io.Writer, r Report) error {
 				}
 				if o.Weathertight {
 					note = strings.TrimSpace(note + " weathertight")
+				}
+				if o.IntoFlooded {
+					note = strings.TrimSpace(note + " into " + o.LeadsTo + ", flooded already")
 				}
 				t.add(o.Name, orDash(o.Kind), num(o.HeightM, 3, "m"), note)
 			}
@@ -123,6 +138,8 @@ func Text(w io.Writer, r Report) error {
 		writeLines(e, t.lines("  "))
 	}
 
+	textStrength(e, r)
+
 	e.line()
 	if h := a.Hand; h != nil {
 		e.line("Hand method (lost buoyancy, small angles)")
@@ -144,7 +161,7 @@ func Text(w io.Writer, r Report) error {
 		c.add("draft forward", num(h.DraftFwdM, 3, "m"), direct(func() string { return num(p.DraftFwdM, 3, "m") }))
 		c.add("trim", TrimWords(h.TrimM), direct(func() string { return TrimWords(p.TrimM) }))
 		c.add("heel", HeelWords(h.HeelDeg), direct(func() string { return HeelWords(p.HeelDeg) }))
-		c.add("GM", num(h.GMM, 3, "m"), direct(func() string { return num(p.GMM, 3, "m") }))
+		c.add("GM upright", num(h.GMM, 3, "m"), direct(func() string { return num(p.GMUprightM, 3, "m") }))
 		writeLines(e, c.lines("  "))
 	} else {
 		why := a.HandWhy
@@ -166,6 +183,7 @@ func Text(w io.Writer, r Report) error {
 		}
 		writeLines(e, t.lines("  "))
 	}
+	textSpills(e, a.Spills)
 	if r.Remedies != nil {
 		e.line()
 		textRemedies(e, r.Remedies)
@@ -178,7 +196,7 @@ func Text(w io.Writer, r Report) error {
 		}
 	}
 	e.line()
-	for _, c := range Cautions {
+	for _, c := range Cautions() {
 		e.line(c)
 	}
 	return e.err
@@ -202,15 +220,6 @@ func plural(n int, word string) string {
 		return "1 " + word
 	}
 	return num(float64(n), 0, "") + " " + word + "s"
-}
-
-// signed formats x with an explicit sign.
-func signed(x float64, prec int, unit string) string {
-	s := num(x, prec, unit)
-	if finite(x) && !strings.HasPrefix(s, "-") && s != num(0, prec, unit) {
-		return "+" + s
-	}
-	return s
 }
 
 // precision is the number of decimals shown for a value in unit.

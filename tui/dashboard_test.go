@@ -262,8 +262,8 @@ func TestFiguresAreTheEngines(t *testing.T) {
 				{"Draft fwd", p.DraftFwdM, 0.005},
 				{"Heel", math.Abs(p.HeelDeg), 0.05},
 				{"Trim", math.Abs(p.TrimM), 0.005},
-				{"GM", p.GMM, 0.005},
-				{"Displacement", p.DisplacementT, 0.5},
+				{"GM upright", p.GMUprightM, 0.005},
+				{dispLabel(p), p.DisplacementT - p.HeldWaterT, 0.5},
 				{"Deck edge", p.DeckEdge.HeightM, 0.005},
 			} {
 				got, rest := figureOnScreen(t, view, f.label)
@@ -420,4 +420,14 @@ func checkFits(t *testing.T, name string, m model, w, h int) string {
 		t.Errorf("%s %dx%d: %q on screen", name, w, h, bad)
 	}
 	return v
+}
+
+// dispLabel is the displacement figure's label: "Ship weight" when sea
+// water stands in flooded spaces (the lost-buoyancy basis), else
+// "Displacement".
+func dispLabel(p *engine.Position) string {
+	if p.OpenWaterT+p.HeldWaterT > 0 {
+		return "Ship weight"
+	}
+	return "Displacement"
 }

@@ -153,9 +153,17 @@
 // number of their own too: each request's Cmd calls engine.FindRemedies on
 // a copy of the damage state and only the newest request's options are
 // kept; while it computes, the panel's title carries the computing mark,
-// and a report asked for meanwhile waits for them. View draws only: every size is decided in
-// one WindowSizeMsg handler (resize) and every figure went through num,
-// which prints "—" for a value that is not a finite number.
+// and a report asked for meanwhile waits for them. All of these Cmds are
+// made by one function, newest (newest.go).
+//
+// Keys go where one mode value sends them: the list and panels, the
+// flooding run's form (a child model with its own update and view), or a
+// typed permeability. View draws only: the screen is divided once at the
+// end of every Update (resize); the pictures are drawn again only when
+// their data, the selection, the palette or their size changed
+// (picture_cache.go); every scroll is kept within its text by bubbles'
+// viewport (scroll.go); and every figure went through num (report's
+// words), which prints "—" for a value that is not a finite number.
 //
 // Palettes are values built by newStyles: day, night (dim reds only, for a
 // dark bridge) and mono (NO_COLOR forces it). Every state has a mark or a

@@ -8,6 +8,7 @@ import (
 	"github.com/charmbracelet/lipgloss"
 
 	"heelwatch/engine"
+	"heelwatch/report"
 )
 
 // figure is one line of the floating position: what, the figure now, a few
@@ -53,16 +54,28 @@ func (m model) figures() []figure {
 	}
 	trim := figure{label: "Trim", value: metres(math.Abs(p.TrimM)), note: trimSense(p.TrimM),
 		delta: dif(func(q *engine.Position) float64 { return q.TrimM }, 2)}
+	// GM is the upright GM of the condition; where she lies heeled the GZ
+	// slope there is said beside it, and a negative upright GM with a heel
+	// is a loll, in the danger style.
 	gmNote := "KM " + num(p.KMTM, 2) + " m"
-	if up := m.cur.UprightGMM; up != nil && math.Abs(p.HeelDeg) >= 0.05 {
-		// Heeled, GM is that of the heeled waterline; upright tells a list
-		// from a loll.
-		gmNote = "upright " + num(*up, 2) + " m"
+	if math.Abs(p.HeelDeg) >= 0.05 {
+		gmNote = "at rest " + num(p.GMAtRestM, 2) + " m"
 	}
-	gm := figure{label: "GM", value: metres(p.GMM), note: gmNote,
-		delta: dif(func(q *engine.Position) float64 { return q.GMM }, 2), alarm: !(p.GMM > 0)}
+	if p.IsLoll() {
+		gmNote = "LOLL, not a list"
+	}
+	gm := figure{label: "GM upright", value: metres(p.GMUprightM), note: gmNote,
+		delta: dif(func(q *engine.Position) float64 { return q.GMUprightM }, 2), alarm: !(p.GMUprightM > 0)}
+	// On the lost-buoyancy basis the displacement is the ship's weight
+	// without the sea water in flooded spaces: labelled so, and the water
+	// (open spaces and water held) said beside it.
 	disp := figure{label: "Displacement", value: withUnit(num(p.DisplacementT, 0), "t"),
-		delta: dif(func(q *engine.Position) float64 { return q.DisplacementT }, 0)}
+		delta: dif(func(q *engine.Position) float64 { return q.DisplacementT - q.HeldWaterT }, 0)}
+	if w := p.OpenWaterT + p.HeldWaterT; w > 0 {
+		disp.label = "Ship weight"
+		disp.value = withUnit(num(p.DisplacementT-p.HeldWaterT, 0), "t")
+		disp.note = "+" + num(w, 0) + " t water"
+	}
 	out = append(out, heel, trim, gm, disp)
 
 	de := p.DeckEdge
@@ -106,31 +119,11 @@ func withUnit(s, unit string) string {
 	return s + " " + unit
 }
 
-func heelSide(deg float64) string {
-	t := heelText(deg)
-	if i := strings.Index(t, "° "); i >= 0 {
-		return t[i+len("° "):]
-	}
-	return t
-}
+func heelSide(deg float64) string { return report.HeelSide(deg, 1) }
 
-func trimSense(m float64) string {
-	t := trimText(m)
-	if i := strings.Index(t, " m "); i >= 0 {
-		return t[i+len(" m "):]
-	}
-	return t
-}
+func trimSense(m float64) string { return report.TrimSense(m, 2) }
 
-func sideShort(s engine.Side) string {
-	switch s {
-	case engine.Port:
-		return "port"
-	case engine.Both:
-		return "P+S"
-	}
-	return "stbd"
-}
+func sideShort(s engine.Side) string { return report.SideShort(s) }
 
 // figuresView draws the floating position in w columns, figLines lines.
 func (m model) figuresView(w int) []string {
@@ -154,10 +147,26 @@ func (m model) figuresView(w int) []string {
 	return fit(lines, w, figLines)
 }
 
-// flagsView lists the flags, most severe first, one line each, in w × h:
-// the mark of its severity and its sentence (the codes are on the criteria
-// sheet). When they do not all fit, the last line says how many more.
+// flagsView lists the flags about the ship, danger first, in w × h: each
+// flag with the mark of its severity and its sentence, wrapped. When not
+// all of them fit whole, the first get their whole sentence and each of the
+// rest at least its first line; when not even that fits, the last line
+// says how many more there are.
 func (m model) flagsView(w, h int) []string {
+	return fit(m.flagLines(w, h), w, h)
+}
+
+// flagsNeed is how many lines the flags take whole at width w.
+func (m model) flagsNeed(w int) int {
+	n := 0
+	for _, f := range m.derived.flags {
+		n += len(wrap(f.Message, w-2))
+	}
+	return max(1, n)
+}
+
+// flagLines is flagsView's lines, at most h of them.
+func (m model) flagLines(w, h int) []string {
 	st := m.st
 	if h <= 0 {
 		return nil
@@ -165,25 +174,43 @@ func (m model) flagsView(w, h int) []string {
 	flags := m.derived.flags
 	if len(flags) == 0 {
 		if m.cur == nil {
-			return fit([]string{st.Dim.Render("computing the intact condition…")}, w, h)
+			return []string{st.Dim.Render("computing the intact condition…")}
 		}
-		return fit([]string{st.Dim.Render("no flags raised")}, w, h)
+		return []string{st.Dim.Render("no flags raised")}
 	}
 	var lines []string
-	for i, f := range flags {
-		if len(flags) > h && i == h-1 {
-			more := len(flags) - i
-			if h == 1 {
-				// One line only: the worst flag, and the count of the rest.
-				lines = append(lines, flagLine(st, f, fmt.Sprintf("(+%d) ", more-1)))
-			} else {
-				lines = append(lines, st.Dim.Render(fmt.Sprintf("… %d more flags on the criteria sheet", more)))
+	if len(flags) > h {
+		for i, f := range flags[:h] {
+			if i == h-1 {
+				more := len(flags) - i
+				if h == 1 {
+					// One line only: the worst flag, and the count of the rest.
+					return []string{flagLine(st, f, fmt.Sprintf("(+%d) ", more-1))}
+				}
+				return append(lines, st.Dim.Render(fmt.Sprintf("… %d more flags on the criteria sheet", more)))
 			}
-			break
+			lines = append(lines, flagLine(st, f, ""))
 		}
-		lines = append(lines, flagLine(st, f, ""))
+		return lines
 	}
-	return fit(lines, w, h)
+	spare := h - len(flags)
+	for _, f := range flags {
+		ws := wrap(f.Message, w-2)
+		take := min(len(ws), 1+spare)
+		spare -= take - 1
+		if take < len(ws) {
+			// The rest of the sentence on its last line, cut with "…".
+			ws[take-1] = strings.Join(ws[take-1:], " ")
+		}
+		for k, l := range ws[:take] {
+			if k == 0 {
+				lines = append(lines, flagMark(st, f)+st.Text.Render(l))
+			} else {
+				lines = append(lines, "  "+st.Text.Render(l))
+			}
+		}
+	}
+	return lines
 }
 
 // flagLine is one flag: a mark by its severity and its sentence.

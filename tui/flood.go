@@ -2,13 +2,15 @@ package tui
 
 import (
 	"fmt"
-	"math"
 	"strings"
 	"sync/atomic"
 
+	"github.com/charmbracelet/bubbles/progress"
 	tea "github.com/charmbracelet/bubbletea"
+	"github.com/charmbracelet/lipgloss"
 
 	"heelwatch/engine"
+	"heelwatch/report"
 	"heelwatch/vessels"
 )
 
@@ -24,51 +26,28 @@ import (
 // hiding the panel, stops an older run at its next step.
 
 // floodRequest is what the form asked for: the compartment, its hole and
-// pumps, and the base damage state.
+// pumps, and the base damage state, resolved into the run's case by
+// vessels.ResolveFlood (the same rules as the command line's).
 type floodRequest struct {
 	ci      int
 	areaM2  float64
 	zM      float64
 	cd      float64
 	pumpM3h float64
-	// file is the vessel file's hole, used for its position when the
-	// height asked is the file's own; otherwise the hole goes in the shell
-	// (engine.ShellHole).
-	file *vessels.Hole
 	// base is the dashboard's damage state when the run was asked for,
 	// with the flooded compartment not open (its permeability and any water
 	// already held kept: that water is in at time zero).
 	base    engine.Damage
 	wasOpen bool // it was open to the sea on the dashboard (the run starts it dry)
-}
-
-// useFile reports whether the hole is the vessel file's, at its position.
-func (q floodRequest) useFile() bool {
-	return q.file != nil && math.Abs(q.zM-q.file.Z) < 0.005
-}
-
-// hole returns the engine's hole for the request.
-func (q floodRequest) hole(v *engine.Vessel) (engine.Hole, error) {
-	if q.useFile() {
-		return engine.Hole{AreaM2: q.areaM2, XM: q.file.X, YM: q.file.Y, ZM: q.file.Z, Cd: q.cd}, nil
-	}
-	return engine.ShellHole(v, q.ci, q.areaM2, q.zM, q.cd)
-}
-
-// floodCase is the engine's case for the request.
-func (m model) floodCase(q floodRequest) engine.FloodCase {
-	c := engine.FloodCase{Vessel: m.v, Base: cloneDamage(q.base), Compartment: q.ci,
-		Criteria: engine.FloodCriteria(m.shipType)}
-	if q.pumpM3h > 0 {
-		c.Pumps = []engine.Pump{{Name: "pumps", CapacityM3h: q.pumpM3h}}
-	}
-	return c
+	// flood is the case to run and where its values came from.
+	flood vessels.FloodResolved
 }
 
 // floodPoint is one moment of a run in progress, for the plot.
 type floodPoint struct{ timeS, waterM3 float64 }
 
-// floodState is the flooding run and its panel.
+// floodState is the flooding run and its panel: a child of the dashboard
+// whose view (flood_view.go) draws with what with gives it.
 type floodState struct {
 	show      bool // the panel is on screen
 	seq       int  // the newest request's number
@@ -81,7 +60,17 @@ type floodState struct {
 	track     []floodPoint // the progress so far
 	rep       *engine.FloodReport
 	err       string
-	stage     int // the stage the stage key shows next
+	stage     int                   // the stage the stage key shows nex
+	net       *engine.NetworkReport // the run through the ship, once it has ended (flood_network.go); nil if none
+
+	// What the panel draws with, given by with before each use.
+	v          *engine.Vessel
+	sel        int
+	damage     engine.Damage
+	st         Styles
+	inks       map[ink]lipgloss.Style
+	bar        progress.Model
+	cachedPlot func(w, h int) []string // the plot, drawn again only when it changed
 }
 
 // Messages of a flooding run.
@@ -108,60 +97,51 @@ type (
 
 // floodStartCmd places the hole and sets the run up (the start and the
 // lost-buoyancy solution are solved here).
-func floodStartCmd(v *engine.Vessel, c engine.FloodCase, q floodRequest, seq int, latest *atomic.Int64) tea.Cmd {
-	return func() (msg tea.Msg) {
-		if latest.Load() != int64(seq) {
-			return floodStepMsg{seq: seq, stale: true}
-		}
-		defer func() {
-			if r := recover(); r != nil {
-				msg = floodStepMsg{seq: seq, err: "engine failure: " + fmt.Sprint(r)}
-			}
-		}()
-		h, err := q.hole(v)
-		if err != nil {
-			return floodStepMsg{seq: seq, err: err.Error()}
-		}
-		c.Hole = h
+func floodStartCmd(c engine.FloodCase, seq int, latest *atomic.Int64) tea.Cmd {
+	return newest(seq, latest, floodStale(seq), floodFailed(seq), func() tea.Msg {
 		r, err := engine.NewFloodRun(c)
 		if err != nil {
 			return floodStepMsg{seq: seq, err: err.Error()}
 		}
 		p := r.Progress()
-		return floodStepMsg{seq: seq, run: r, prog: p, hole: h, started: true, more: !p.Done}
-	}
+		return floodStepMsg{seq: seq, run: r, prog: p, hole: c.Hole, started: true, more: !p.Done}
+	})
 }
 
 // floodStepCmd takes one step of run r.
 func floodStepCmd(r *engine.FloodRun, seq int, latest *atomic.Int64) tea.Cmd {
-	return func() (msg tea.Msg) {
-		if latest.Load() != int64(seq) {
-			return floodStepMsg{seq: seq, stale: true}
-		}
-		defer func() {
-			if x := recover(); x != nil {
-				msg = floodStepMsg{seq: seq, err: "engine failure: " + fmt.Sprint(x)}
-			}
-		}()
+	return newest(seq, latest, floodStale(seq), floodFailed(seq), func() tea.Msg {
 		more := r.Step()
 		return floodStepMsg{seq: seq, run: r, prog: r.Progress(), more: more}
-	}
+	})
 }
 
 // floodReportCmd works out the report of an ended run: its table and its
 // stages (some tens of solves, with their criteria).
 func floodReportCmd(r *engine.FloodRun, seq int, latest *atomic.Int64) tea.Cmd {
-	return func() (msg tea.Msg) {
-		if latest.Load() != int64(seq) {
-			return floodDoneMsg{seq: seq, stale: true}
-		}
-		defer func() {
-			if x := recover(); x != nil {
-				msg = floodDoneMsg{seq: seq, err: "engine failure: " + fmt.Sprint(x)}
-			}
-		}()
-		return floodDoneMsg{seq: seq, rep: r.Report()}
-	}
+	return newest(seq, latest,
+		func() tea.Msg { return floodDoneMsg{seq: seq, stale: true} },
+		func(why string) tea.Msg { return floodDoneMsg{seq: seq, err: "engine failure: " + why} },
+		func() tea.Msg { return floodDoneMsg{seq: seq, rep: r.Report()} })
+}
+
+// floodStale and floodFailed are a step's messages when a newer request
+// came first and when the engine failed.
+func floodStale(seq int) func() tea.Msg {
+	return func() tea.Msg { return floodStepMsg{seq: seq, stale: true} }
+}
+
+func floodFailed(seq int) func(string) tea.Msg {
+	return func(why string) tea.Msg { return floodStepMsg{seq: seq, err: "engine failure: " + why} }
+}
+
+// with returns the panel drawing for m's vessel, selection, damage state
+// and styles.
+func (f floodState) with(m model) floodState {
+	f.v, f.sel, f.damage, f.st, f.inks, f.bar = m.v, m.sel, m.damage, m.st, m.inks, m.bar
+	g := f
+	f.cachedPlot = func(w, h int) []string { return m.cached(picFloodPlot, w, h, g.plot) }
+	return f
 }
 
 // startFlood starts a run for q, cancelling any older one.
@@ -171,7 +151,7 @@ func (m model) startFlood(q floodRequest) (tea.Model, tea.Cmd) {
 	f.latest.Store(int64(f.seq))
 	f.show, f.running, f.finishing = true, true, false
 	m.rem.show = false // the run's panel in its place
-	f.req, f.hole, f.prog, f.track, f.rep, f.err, f.stage = q, engine.Hole{}, engine.FloodProgress{}, nil, nil, "", 0
+	f.req, f.hole, f.prog, f.track, f.rep, f.err, f.stage, f.net = q, engine.Hole{}, engine.FloodProgress{}, nil, nil, "", 0, nil
 	m.keys.RunStage.SetEnabled(false)
 	name := m.v.Compartments[q.ci].Name
 	what := fmt.Sprintf("flooding run: %s through %s m² at z %s m, C_d %s, pumps %s m³/h",
@@ -182,7 +162,7 @@ func (m model) startFlood(q floodRequest) (tea.Model, tea.Cmd) {
 		what += fmt.Sprintf(" (%s m³ in at the start)", num(w, 1))
 	}
 	log := m.addLog(m.now(), what)
-	return m, tea.Batch(floodStartCmd(m.v, m.floodCase(q), q, f.seq, f.latest), log)
+	return m, tea.Batch(floodStartCmd(q.flood.Case, f.seq, f.latest), log)
 }
 
 // stopFlood abandons a run in progress; a finished run's report stays.
@@ -238,7 +218,7 @@ func (m model) takeFloodReport(msg floodDoneMsg) (tea.Model, tea.Cmd) {
 	f.rep = &rep
 	f.hole = rep.Hole
 	m.keys.RunStage.SetEnabled(len(rep.Stages) > 0)
-	return m, m.addLog(m.now(), "flooding run of "+name+" → "+outcomeText(rep))
+	return m, tea.Batch(m.addLog(m.now(), "flooding run of "+name+" → "+outcomeText(rep)), netCmd(f.req.flood.Case, rep, f.seq, f.latest))
 }
 
 // applyStage puts the run's next stage on the dashboard: the flooded
@@ -267,7 +247,7 @@ func (m model) applyStage() (tea.Model, tea.Cmd) {
 	ci := f.req.ci
 	d := cloneDamage(m.damage)
 	d[ci] = engine.SpaceState{Permeability: f.req.base[ci].Permeability, WaterM3: st.WaterM3}
-	what := fmt.Sprintf("%s partly flooded: %s stage of the flooding run, %s m³ held",
+	what := fmt.Sprintf("%s flooded to a level: %s stage of the flooding run, %s m³ held",
 		m.v.Compartments[ci].Name, stageName(st.Fraction), num(st.WaterM3, 1))
 	if st.Fraction >= 1 && f.rep.End == engine.FloodEqualised {
 		// Once the levels have met, the space is open to the sea: the water
@@ -310,28 +290,8 @@ func (f floodState) baseChanged(d engine.Damage) bool {
 }
 
 // outcomeText is a run's end in a sentence, its first words in capitals,
-// for the panel and the log.
+// for the panel and the log (report.FloodOutcome).
 func outcomeText(r engine.FloodReport) string {
-	at := engine.FormatDuration(r.EndS)
-	in := num(r.FinalWaterM3, 0) + " m³ in"
-	switch r.End {
-	case engine.FloodEqualised:
-		return fmt.Sprintf("LEVELS EQUAL after %s, %s", engine.FormatDuration(r.EqualiseS), in)
-	case engine.FloodPumpsHold:
-		return fmt.Sprintf("PUMPS HOLD the level %s m below the sea from %s: sounding %s m, %s",
-			num(r.SteadyHeadM, 3), at, num(r.Final.SoundingM, 2), in)
-	case engine.FloodKeptDry:
-		return "PUMPS KEEP IT DRY: they take all that the hole lets in"
-	case engine.FloodNoInflow:
-		return "NOTHING COMES IN: the hole is clear of the water"
-	case engine.FloodFull:
-		return fmt.Sprintf("COMPARTMENT FULL after %s, %s, its top below the sea", at, in)
-	case engine.FloodSinks:
-		return fmt.Sprintf("SHE SINKS after %s, with %s: %s", at, in, strings.TrimPrefix(r.EndReason, r.End.String()+": "))
-	case engine.FloodCapsizes:
-		return fmt.Sprintf("SHE CAPSIZES after %s, with %s: %s", at, in, strings.TrimPrefix(r.EndReason, r.End.String()+": "))
-	case engine.FloodTimeLimit:
-		return fmt.Sprintf("STILL FILLING at the time limit (%s), %s", at, in)
-	}
-	return "NO ANSWER: " + r.EndReason
+	head, rest := report.FloodOutcome(r)
+	return strings.ToUpper(head) + rest
 }

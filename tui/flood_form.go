@@ -2,7 +2,6 @@ package tui
 
 import (
 	"fmt"
-	"math"
 	"strconv"
 	"strings"
 
@@ -11,6 +10,7 @@ import (
 	tea "github.com/charmbracelet/bubbletea"
 
 	"heelwatch/engine"
+	"heelwatch/vessels"
 )
 
 // defaultHoleM2 is the area of a hole the vessel file does not give: 0.05
@@ -29,13 +29,34 @@ const (
 
 // floodForm is the small form that sets the hole and the pumps of a
 // flooding run for one compartment.
+//
+// It is a child of the dashboard with its own update and view: it holds
+// what it shows (the compartment, the vessel file's hole, where a shell
+// hole goes, the compartment's state) from when it was opened, and tells
+// the dashboard through a formAction when it is sent or closed.
 type floodForm struct {
-	on     bool
 	ci     int
 	fields [numFields]textinput.Model
 	focus  int
 	err    string
+
+	name    string       // the compartment's name
+	hole    *engine.Hole // the vessel file's hole into it, nil if none
+	shellZ  float64      // its lowest point in the shell at mid-length
+	state   engine.SpaceState
+	animate bool
+	st      Styles
 }
+
+// formAction is what a key in the form asks of the dashboard.
+type formAction int
+
+const (
+	formStays  formAction = iota // the form stays open
+	formCancel                   // esc: close it
+	formSend                     // enter: read it and start the run
+	formQuit                     // ctrl+c
+)
 
 // fieldSpec says what a field holds and what is allowed.
 var fieldSpec = [numFields]struct {
@@ -55,15 +76,16 @@ func (m model) openForm() (tea.Model, tea.Cmd) {
 	sp := m.spaces[i]
 	area, z, cd := defaultHoleM2, sp.shellZ, engine.DefaultDischargeCoefficient
 	if h := sp.hole; h != nil {
-		area, z = h.AreaM2, h.Z
+		area, z = h.AreaM2, h.ZM
 		if h.Cd > 0 {
 			cd = h.Cd
 		}
 	}
-	f := floodForm{on: true, ci: i}
+	f := floodForm{ci: i, name: m.v.Compartments[i].Name, hole: sp.hole, shellZ: sp.shellZ,
+		state: m.damage[i], animate: m.animate, st: m.st}
 	vals := [numFields]string{short(area, 4), short(z, 2), short(cd, 2), short(sp.pump, 0)}
 	for k := range f.fields {
-		in := textinput.New()
+		in := newTextField()
 		in.Prompt = ""
 		in.CharLimit = 9
 		in.SetValue(vals[k])
@@ -74,57 +96,72 @@ func (m model) openForm() (tea.Model, tea.Cmd) {
 		}
 		f.fields[k] = in
 	}
-	m.form = f
-	m.resize()
-	return m, m.focusField(0)
+	var cmd tea.Cmd
+	m.form, cmd = f.focusField(0)
+	m.mode = modeForm
+	return m, cmd
 }
 
 // focusField moves the form's cursor to field k.
-func (m *model) focusField(k int) tea.Cmd {
-	m.form.focus = (k + numFields) % numFields
+func (f floodForm) focusField(k int) (floodForm, tea.Cmd) {
+	f.focus = (k + numFields) % numFields
 	var cmd tea.Cmd
-	for j := range m.form.fields {
-		if j == m.form.focus {
-			cmd = m.form.fields[j].Focus()
-			m.form.fields[j].CursorEnd()
+	for j := range f.fields {
+		if j == f.focus {
+			cmd = f.fields[j].Focus()
+			f.fields[j].CursorEnd()
 		} else {
-			m.form.fields[j].Blur()
+			f.fields[j].Blur()
 		}
 	}
-	if !m.animate {
-		return nil
+	if !f.animate {
+		return f, nil
 	}
-	return cmd
+	return f, cmd
 }
 
-// formKey handles a key while the form is open.
-func (m model) formKey(msg tea.KeyMsg) (tea.Model, tea.Cmd) {
+// update handles a key while the form is open.
+func (f floodForm) update(msg tea.KeyMsg) (floodForm, tea.Cmd, formAction) {
 	switch msg.Type {
 	case tea.KeyEsc:
-		m.form.on = false
-		m.resize()
-		return m, nil
+		return f, nil, formCancel
 	case tea.KeyCtrlC:
-		return m, tea.Quit
+		return f, tea.Quit, formQuit
 	case tea.KeyTab, tea.KeyDown:
-		return m, m.focusField(m.form.focus + 1)
+		f, cmd := f.focusField(f.focus + 1)
+		return f, cmd, formStays
 	case tea.KeyShiftTab, tea.KeyUp:
-		return m, m.focusField(m.form.focus - 1)
+		f, cmd := f.focusField(f.focus - 1)
+		return f, cmd, formStays
 	case tea.KeyEnter:
+		return f, nil, formSend
+	}
+	var cmd tea.Cmd
+	f.fields[f.focus], cmd = f.fields[f.focus].Update(msg)
+	f.err = ""
+	return f, cmd, formStays
+}
+
+// formKey passes a key to the form and does what it asks: close it, or
+// read it and start the run (a bad field keeps it open with the cursor
+// there and the reason shown).
+func (m model) formKey(msg tea.KeyMsg) (tea.Model, tea.Cmd) {
+	var cmd tea.Cmd
+	var act formAction
+	m.form, cmd, act = m.form.update(msg)
+	switch act {
+	case formCancel:
+		m.mode = modeBrowse
+	case formSend:
 		q, at, err := m.readForm()
 		if err != nil {
 			m.form.err = err.Error()
-			return m, m.focusField(at)
+			m.form, cmd = m.form.focusField(at)
+			return m, cmd
 		}
-		m.form.on = false
-		mm, cmd := m.startFlood(q)
-		m = mm.(model)
-		m.resize()
-		return m, cmd
+		m.mode = modeBrowse
+		return m.startFlood(q)
 	}
-	var cmd tea.Cmd
-	m.form.fields[m.form.focus], cmd = m.form.fields[m.form.focus].Update(msg)
-	m.form.err = ""
 	return m, cmd
 }
 
@@ -134,8 +171,6 @@ func (m model) formKey(msg tea.KeyMsg) (tea.Model, tea.Cmd) {
 func (m model) readForm() (floodRequest, int, error) {
 	f := m.form
 	ci := f.ci
-	c := m.v.Compartments[ci]
-	b := c.Box
 	var v [numFields]float64
 	for k := range f.fields {
 		x, err := parseNumber(f.fields[k].Value())
@@ -144,24 +179,24 @@ func (m model) readForm() (floodRequest, int, error) {
 		}
 		v[k] = x
 	}
-	switch {
-	case !(v[fieldArea] > 0 && v[fieldArea] <= 100):
-		return floodRequest{}, fieldArea, fmt.Errorf("hole area %s m²: give the breach's area, more than 0 and at most 100 m²", short(v[fieldArea], 4))
-	case v[fieldZ] < b.Z0-0.005 || v[fieldZ] > b.Z1+0.005:
-		return floodRequest{}, fieldZ, fmt.Errorf("height %s m is outside %s, which runs from z %s to %s m", short(v[fieldZ], 2), c.Name, num(b.Z0, 2), num(b.Z1, 2))
-	case !(v[fieldCd] > 0 && v[fieldCd] <= 1):
-		return floodRequest{}, fieldCd, fmt.Errorf("Cd %s: a discharge coefficient is more than 0 and at most 1 (0.6 sharp-edged, about 0.7 ragged)", short(v[fieldCd], 2))
-	case !(v[fieldPump] >= 0 && v[fieldPump] <= 1e5):
-		return floodRequest{}, fieldPump, fmt.Errorf("pumps %s m³/h: give the capacity on this space, 0 for none", short(v[fieldPump], 0))
-	}
 	base := cloneDamage(m.damage)
 	wasOpen := base[ci].Open
 	base[ci].Open = false
 	if wasOpen {
 		base[ci].WaterM3 = 0
 	}
+	ask := vessels.FloodAsk{Compartment: ci, AreaM2: v[fieldArea], ZM: v[fieldZ], Cd: v[fieldCd],
+		Pumps: []vessels.FloodPump{{Compartment: ci, M3h: v[fieldPump]}}, Base: base, Criteria: true, By: "dashboard"}
+	fc, err := vessels.ResolveFlood(m.v, m.info, ask)
+	if err != nil {
+		field := fieldArea
+		if e := vessels.AsFloodAskError(err); e != nil {
+			field = map[vessels.FloodField]int{vessels.FieldZ: fieldZ, vessels.FieldCd: fieldCd, vessels.FieldPumps: fieldPump}[e.Field]
+		}
+		return floodRequest{}, field, err
+	}
 	return floodRequest{ci: ci, areaM2: v[fieldArea], zM: v[fieldZ], cd: v[fieldCd], pumpM3h: v[fieldPump],
-		file: m.spaces[ci].hole, base: base, wasOpen: wasOpen}, 0, nil
+		base: base, wasOpen: wasOpen, flood: fc}, 0, nil
 }
 
 // parseNumber reads a typed number, with a comma or a point for the
@@ -190,13 +225,11 @@ func short(v float64, prec int) string {
 // formLines is how many lines the form takes at the foot of the screen.
 const formLines = 3
 
-// formView draws the form: what it is for, the fields, and a hint on where
-// the hole goes or what is wrong.
-func (m model) formView() []string {
-	st := m.st
-	f := m.form
-	c := m.v.Compartments[f.ci]
-	title := st.Prompt.Render("FLOODING RUN · "+c.Name) + st.Dim.Render(" · tab next field · enter starts · esc cancels")
+// view draws the form in w columns, formLines lines: what it is for, the
+// fields, and a hint on where the hole goes or what is wrong.
+func (f floodForm) view(w, h int) []string {
+	st := f.st
+	title := st.Prompt.Render("FLOODING RUN · "+f.name) + st.Dim.Render(" · tab next field · enter starts · esc cancels")
 	var row strings.Builder
 	for k := range f.fields {
 		if k > 0 {
@@ -209,29 +242,26 @@ func (m model) formView() []string {
 		// A field is its value and the cursor's cell, then the unit.
 		row.WriteString(label.Render(fieldSpec[k].label+" ") + f.fields[k].View() + st.Dim.Render(fieldSpec[k].unit))
 	}
-	hint := st.Dim.Render(m.formHint())
+	hint := st.Dim.Render(f.hint())
 	if f.err != "" {
 		hint = st.Error.Render(f.err)
 	}
-	return []string{fitLine(title, m.width), fitLine(row.String(), m.width), fitLine(hint, m.width)}
+	return fit([]string{fitLine(title, w), fitLine(row.String(), w), fitLine(hint, w)}, w, h)
 }
 
-// formHint says where the hole goes and what the run starts from.
-func (m model) formHint() string {
-	f := m.form
-	sp := m.spaces[f.ci]
+// hint says where the hole goes and what the run starts from.
+func (f floodForm) hint() string {
 	var where string
 	z, err := parseNumber(f.fields[fieldZ].Value())
 	switch {
-	case sp.hole != nil && err == nil && math.Abs(z-sp.hole.Z) < 0.005:
-		where = fmt.Sprintf("the vessel file's hole, at x %s y %s m", num(sp.hole.X, 1), num(sp.hole.Y, 2))
-	case sp.hole != nil:
-		where = "in the shell at mid-length (the file's hole is at z " + short(sp.hole.Z, 2) + " m)"
+	case err == nil && vessels.FileHoleAt(f.hole, z):
+		where = fmt.Sprintf("the vessel file's hole, at x %s y %s m", num(f.hole.XM, 1), num(f.hole.YM, 2))
+	case f.hole != nil:
+		where = "in the shell at mid-length (the file's hole is at z " + short(f.hole.ZM, 2) + " m)"
 	default:
-		where = "in the shell at mid-length, outboard; lowest point z " + short(sp.shellZ, 2) + " m"
+		where = "in the shell at mid-length, outboard; lowest point z " + short(f.shellZ, 2) + " m"
 	}
-	s := m.damage[f.ci]
-	switch {
+	switch s := f.state; {
 	case s.Open:
 		where += " · open on the dashboard: the run starts it dry"
 	case s.WaterM3 > 0:

@@ -6,33 +6,34 @@ import (
 	"strings"
 
 	"heelwatch/engine"
+	"heelwatch/report"
 )
 
-// floodPanel is the flooding run on a narrow screen, in w × h: the times
+// view is the flooding run on a narrow screen, in w × h: the times
 // and the stages on top, the plot against time under them when it has
 // room.
-func (m model) floodPanel(w, h int) []string {
+func (p floodState) view(w, h int) []string {
 	const minPlot = 7
-	text := m.floodText(w, h, h-minPlot)
+	text := p.text(w, h, h-minPlot)
 	if len(text)+minPlot > h {
-		return fit(m.floodText(w, h, h), w, h)
+		return fit(p.text(w, h, h), w, h)
 	}
-	out := append(text, m.floodPlot(w, h-len(text))...)
+	out := append(text, p.cachedPlot(w, h-len(text))...)
 	return fit(out, w, h)
 }
 
-// floodText is the panel's text in width w: what is flooding and through
+// text is the panel's text in width w: what is flooding and through
 // what, then the progress while the run computes, or its outcome, the
 // times to each event and the intermediate stages. It takes at most h
 // lines, and tries to keep within want by shortening the list of events.
-func (m model) floodText(w, h, want int) []string {
-	st := m.st
-	f := m.flood
+func (p floodState) text(w, h, want int) []string {
+	st := p.st
+	f := p
 	head := []string{st.Heading.Render(clip("FLOODING RUN", w))}
 	if f.seq == 0 {
 		name := ""
-		if len(m.v.Compartments) > 0 {
-			name = " (" + m.v.Compartments[m.sel].Name + ")"
+		if len(p.v.Compartments) > 0 {
+			name = " (" + p.v.Compartments[p.sel].Name + ")"
 		}
 		for _, l := range wrap("No run yet. f sets a hole and pumps for the selected compartment"+name+
 			" and starts one: how long until the levels meet, what goes under on the way, whether the pumps hold. t hides this panel.", w) {
@@ -40,7 +41,7 @@ func (m model) floodText(w, h, want int) []string {
 		}
 		return fit(head, w, min(h, len(head)))
 	}
-	name := m.v.Compartments[f.req.ci].Name
+	name := p.v.Compartments[f.req.ci].Name
 	head[0] = st.Heading.Render(titleFit(w, "FLOODING RUN", name))
 	hole := f.hole
 	if hole.AreaM2 == 0 {
@@ -63,7 +64,7 @@ func (m model) floodText(w, h, want int) []string {
 		lines = append(lines, st.Dim.Render(clip("f sets the hole again", w)))
 		return fit(lines, w, min(h, len(lines)))
 	case f.running:
-		return fit(append(head, m.floodProgress(w)...), w, min(h, len(head)+4))
+		return fit(append(head, p.progress(w)...), w, min(h, len(head)+4))
 	case f.rep == nil:
 		lines := append(head, st.Dim.Render(clip("stopped before its end · f runs it again", w)))
 		return fit(lines, w, min(h, len(lines)))
@@ -83,14 +84,14 @@ func (m model) floodText(w, h, want int) []string {
 	for _, l := range out {
 		head = append(head, verdict.Render(l))
 	}
-	if f.baseChanged(m.damage) {
+	if f.baseChanged(p.damage) {
 		head = append(head, st.Caution.Render(clip("! the dashboard has changed since: f runs it again", w)))
 	}
 
-	events := m.floodEvents(w)
-	stages := m.floodStages(w)
+	events := p.events(w)
+	stages := p.stages(w)
 	var clear []string
-	if c := clearLine(r); c != "" {
+	if c := clearLine(r, p.v.Passenger()); c != "" {
 		clear = []string{st.Dim.Render(clip(c, w))}
 	}
 	fixed := len(head) + len(stages)
@@ -108,11 +109,11 @@ func (m model) floodText(w, h, want int) []string {
 	return fit(lines, w, min(h, len(lines)))
 }
 
-// floodProgress is the progress bar and the figures of a run in progress.
-func (m model) floodProgress(w int) []string {
-	st := m.st
-	p := m.flood.prog
-	bar := m.bar
+// progress is the progress bar and the figures of a run in progress.
+func (f floodState) progress(w int) []string {
+	st := f.st
+	p := f.prog
+	bar := f.bar
 	bar.Width = max(10, w-10)
 	lines := []string{st.Busy.Render("computing ") + bar.ViewAs(p.Fraction())}
 	target := ""
@@ -120,9 +121,9 @@ func (m model) floodProgress(w int) []string {
 		target = " of " + num(p.TargetM3, 0)
 	}
 	lines = append(lines,
-		st.Text.Render(clip("flooding time "+engine.FormatDuration(p.TimeS), w)),
+		st.Text.Render(clip("flooding time "+report.Duration(p.TimeS), w)),
 		st.Text.Render(clip(fmt.Sprintf("water %s%s m³ · head %s m · step %d", num(p.WaterM3, 1), target, num(p.HeadM, 2), p.Steps), w)))
-	if m.flood.finishing {
+	if f.finishing {
 		lines = append(lines, st.Dim.Render(clip("working out the table and the stages…", w)))
 	}
 	return lines
@@ -174,14 +175,14 @@ func eventWords(e engine.FloodEvent, r *engine.FloodReport) string {
 	case engine.CriterionFails:
 		return e.Name + " fails"
 	}
-	return r.End.Headline()
+	return report.FloodHeadline(r.End)
 }
 
 // floodEvents lists the run's events in time order, the end last: mark,
 // time from the start, water in, what happened.
-func (m model) floodEvents(w int) []string {
-	st := m.st
-	r := m.flood.rep
+func (p floodState) events(w int) []string {
+	st := p.st
+	r := p.rep
 	var lines []string
 	for _, e := range r.Events {
 		t := e.TimeS
@@ -197,21 +198,26 @@ func (m model) floodEvents(w int) []string {
 		case e.Kind == engine.RunEnds:
 			s = st.Value
 		}
-		text := eventMark(e.Kind) + " " + padLeft(engine.FormatDuration(t), 11) + " " + padLeft(num(e.WaterM3, 0), 4) + " m³ " + eventWords(e, r)
+		text := eventMark(e.Kind) + " " + padLeft(report.Duration(t), 11) + " " + padLeft(num(e.WaterM3, 0), 4) + " m³ " + eventWords(e, r)
 		lines = append(lines, s.Render(clip(text, w)))
 	}
 	return lines
 }
 
 // clearLine says which of the deck edge and the margin line stayed clear
-// of the water all through the run ("" if both went under).
-func clearLine(r *engine.FloodReport) string {
+// of the water all through the run ("" if both went under). A cargo ship
+// has no margin line (a passenger-ship notion): only the deck edge is said.
+func clearLine(r *engine.FloodReport, passenger bool) string {
 	var deck, margin bool
 	for _, e := range r.Events {
 		deck = deck || e.Kind == engine.DeckEdgeReached
 		margin = margin || e.Kind == engine.MarginLineReached
 	}
 	switch {
+	case !passenger && !deck:
+		return "  deck edge (bulkhead deck) stays clear"
+	case !passenger:
+		return ""
 	case !deck && !margin:
 		return "  deck edge and margin line stay clear"
 	case !deck:
@@ -225,9 +231,9 @@ func clearLine(r *engine.FloodReport) string {
 // floodStages is the table of the intermediate stages: the fraction of the
 // final water, the water, when the run reached it, heel, GM, (on a wider
 // panel) the deck edge's freeboard, and the criteria.
-func (m model) floodStages(w int) []string {
-	st := m.st
-	r := m.flood.rep
+func (p floodState) stages(w int) []string {
+	st := p.st
+	r := p.rep
 	if len(r.Stages) == 0 {
 		return nil
 	}
@@ -241,13 +247,13 @@ func (m model) floodStages(w int) []string {
 	for _, s := range r.Stages {
 		reached := "not reached"
 		if s.Reached {
-			reached = engine.FormatDuration(s.TimeS)
+			reached = report.Duration(s.TimeS)
 		}
 		row := padLeft(stageName(s.Fraction), 4) + " " + padLeft(num(s.WaterM3, 0), 4) + " " + padLeft(reached, 11) + " "
 		crit, bad := criteriaWord(s.Criteria)
 		style := st.Text
 		if p := s.Position; p != nil {
-			row += padLeft(heelShort(p.HeelDeg), 7) + " " + padLeft(num(p.GMM, 2), 5)
+			row += padLeft(heelShort(p.HeelDeg), 7) + " " + padLeft(num(p.GMUprightM, 2), 5)
 			if deck {
 				row += " " + padLeft(num(p.DeckEdge.HeightM, 2), 5)
 			}
@@ -266,7 +272,7 @@ func (m model) floodStages(w int) []string {
 			style = st.Caution
 		}
 		text := clip(row+" "+crit, w)
-		if m.stageShown(s) {
+		if p.stageShown(s) {
 			// The stage the dashboard shows now (the stage key).
 			style, text = st.Selected, pad(text, w)
 		}
@@ -277,12 +283,12 @@ func (m model) floodStages(w int) []string {
 
 // stageShown reports whether the dashboard holds stage s now: the run's
 // compartment not open and holding that stage's water.
-func (m model) stageShown(s engine.FloodStage) bool {
-	ci := m.flood.req.ci
-	if ci >= len(m.damage) || s.WaterM3 <= 0 {
+func (p floodState) stageShown(s engine.FloodStage) bool {
+	ci := p.req.ci
+	if ci >= len(p.damage) || s.WaterM3 <= 0 {
 		return false
 	}
-	d := m.damage[ci]
+	d := p.damage[ci]
 	return !d.Open && d.WaterM3 == s.WaterM3
 }
 
@@ -326,9 +332,12 @@ func timeUnit(T float64) (scale float64, unit string) {
 // compartment (dotted, scale on the right) against time since the hole
 // was made, with the events marked by their letters; while the run
 // computes, the water so far.
-func (m model) floodPlot(w, h int) []string {
-	st := m.st
-	f := m.flood
+func (p floodState) plot(w, h int) []string {
+	if p.net != nil {
+		return p.netPlot(w, h)
+	}
+	st := p.st
+	f := p
 	const rightW = 6
 	cw, ch := w-axisW-rightW, h-2
 	if cw < 10 || ch < 3 || f.seq == 0 || f.err != "" {
@@ -423,9 +432,9 @@ func (m model) floodPlot(w, h int) []string {
 	for i := 1; i < len(ts); i++ {
 		c.dotted(ts[i-1], wy(water[i-1]), ts[i], wy(water[i]), inkWater)
 	}
-	body := m.framed(c, niceStep(hi-lo, max(2, ch/3)), func(v float64) string { return num(v, 0) })
+	body := framedIn(p.st, p.inks, c, niceStep(hi-lo, max(2, ch/3)), func(v float64) string { return num(v, 0) })
 	if !any {
-		body = m.framed(c, 0, nil)
+		body = framedIn(p.st, p.inks, c, 0, nil)
 	}
 	// The water's scale on the right.
 	right := make([]string, c.h)
@@ -465,7 +474,13 @@ func (m model) floodRow(w, h int) []string {
 	sw := (w - 2 - tw) / 2
 	pw := w - 2 - tw - sw
 	return besides(sep,
-		fit(m.sectionView(sw, h), sw, h),
-		fit(m.floodText(tw, h, h), tw, h),
-		fit(m.floodPlot(pw, h), pw, h))
+		fit(m.cached(picSection, sw, h, m.sectionView), sw, h),
+		fit(m.flood.with(m).text(tw, h, h), tw, h),
+		fit(m.cached(picFloodPlot, pw, h, m.flood.with(m).plot), pw, h))
 }
+
+// floodPanel, floodText and floodPlot are the run's panel, its text and its
+// plot as the dashboard draws them (floodState.view, text and plot).
+func (m model) floodPanel(w, h int) []string      { return m.flood.with(m).view(w, h) }
+func (m model) floodText(w, h, want int) []string { return m.flood.with(m).text(w, h, want) }
+func (m model) floodPlot(w, h int) []string       { return m.flood.with(m).plot(w, h) }

@@ -128,6 +128,9 @@ func (m model) listView(w, h int) []string {
 		i := row.idx
 		c := m.v.Compartments[i]
 		word, mark := spaceState(m.damage, i)
+		if sw, sm := spreadState(m.cur, m.damage, i); sw != "" {
+			word, mark = sw, sm
+		}
 		risk := ""
 		style := st.Text
 		switch {
@@ -195,7 +198,7 @@ func (m model) detailView(w int) []string {
 	case "OPEN":
 		l2 = st.Open.Render("open to the sea") + st.Text.Render(", μ "+muText(mu)+": "+num(mu*vol, 0)+" m³ of sea")
 	case "part":
-		l2 = st.Open.Render("partly flooded") + st.Text.Render(": "+num(m.damage[i].WaterM3, 0)+" m³ of water held")
+		l2 = st.Open.Render("flooded to a level") + st.Text.Render(": "+num(m.damage[i].WaterM3, 0)+" m³ held")
 	default:
 		l2 = st.Text.Render("intact, μ " + muText(mu) + " if opened")
 		if c.Liquid != nil && c.Liquid.Fill > 0 {
@@ -218,4 +221,15 @@ func (m model) detailView(w int) []string {
 		l3 = st.Dim.Render("pump " + num(sp.pump, 0) + " m³/h")
 	}
 	return []string{l1, l2, l3}
+}
+
+// page moves the selection a screenful of the list down (up when down is
+// false): as many compartments as the list shows, less one for the
+// context.
+func (m *model) page(down bool) {
+	n := max(1, m.listVisible()-1)
+	if !down {
+		n = -n
+	}
+	m.move(n)
 }

@@ -3,8 +3,6 @@ package tui
 import (
 	"fmt"
 	"math"
-	"strconv"
-	"strings"
 	"sync/atomic"
 	"time"
 
@@ -25,8 +23,8 @@ import (
 type space struct {
 	group string
 	use   string
-	pump  float64       // m³/h, 0 if none
-	hole  *vessels.Hole // the vessel file's hole into it, nil if none
+	pump  float64      // m³/h, 0 if none
+	hole  *engine.Hole // the vessel file's hole into it, nil if none
 	// shellZ is the height of the compartment's lowest point in the shell
 	// at the middle of its length (engine.ShellHole): where a hole the
 	// vessel file does not give goes by default.
@@ -53,7 +51,6 @@ type (
 	// baselineMsg carries the intact assessment, the reference for every
 	// "since intact" figure.
 	baselineMsg struct{ a engine.Assessment }
-	logErrMsg   struct{ err error }
 	reportMsg   struct {
 		path string
 		err  error
@@ -67,8 +64,8 @@ type model struct {
 	spaces    []space
 	into      []int // the compartment each opening leads into (leadsInto)
 	opts      Options
-	condition string // the loading condition's name from the file
-	shipType  string // "cargo" or "passenger", for the criteria of a flooding run
+	condition string        // the loading condition's name from the file
+	info      *vessels.Info // the vessel file's holes, pumps and ship type for a flooding run; may be nil
 	now       func() time.Time
 
 	keys     keyMap
@@ -78,12 +75,16 @@ type model struct {
 	animate  bool // false in tests: no spinner ticks
 	input    textinput.Model
 	bar      progress.Model // a flooding run's progress, drawn with ViewAs
-	editing  bool
 	inputErr string
+	mode     mode // what the keys work on
 
-	form  floodForm   // the hole-and-pumps form of a flooding run
-	flood floodState  // the flooding run and its panel
-	rem   remedyState // the righting options and their panel
+	form   floodForm    // the hole-and-pumps form of a flooding run
+	flood  floodState   // the flooding run and its panel
+	rem    remedyState  // the righting options and their panel
+	girder girderPanel  // the hull girder's shear force and bending moment (strength_view.go)
+	rd     readingPanel // draft marks, readings by hand and their diagnosis (reading_panel.go)
+	doors  doorsPanel   // the doors and valves, open or shut (doors.go)
+	find   finder       // the type-to-find of the compartment list (find.go)
 
 	rend    *lipgloss.Renderer
 	palette int
@@ -112,13 +113,23 @@ type model struct {
 	sel        int
 	offset     int
 	picture    int
-	showHand   bool
-	handScroll int // the first step of the hand working shown
-	textScroll int // the first line of the flags and criteria shown
+	hand       handPanel // the hand method's panel
+	textScroll int       // the first line of the flags and criteria shown
 	width      int
 	height     int
 	lay        layout
+	pics       *pictureCache // the pictures as last drawn (View's only state)
 }
+
+// mode is what the keys work on: one value routes every key.
+type mode int
+
+const (
+	modeBrowse mode = iota // the list, the panels and their keys
+	modeForm               // the flooding run's form (floodForm.update)
+	modeMu                 // a permeability being typed (editKey)
+	modeFind               // a compartment's name being typed (finder.update)
+)
 
 type undoEntry struct {
 	damage engine.Damage
@@ -136,7 +147,9 @@ const (
 
 // newModel builds the dashboard for v. info may be nil.
 func newModel(v *engine.Vessel, info *vessels.Info, opts Options) model {
+	v, info, opts = plainNames(v), plainInfo(info), plainOptions(opts)
 	m := model{
+		pics:    &pictureCache{},
 		v:       v,
 		opts:    opts,
 		now:     time.Now,
@@ -144,7 +157,7 @@ func newModel(v *engine.Vessel, info *vessels.Info, opts Options) model {
 		help:    help.New(),
 		spin:    spinner.New(spinner.WithSpinner(spinner.MiniDot)),
 		animate: true,
-		input:   textinput.New(),
+		input:   newTextField(),
 		rend:    lipgloss.DefaultRenderer(),
 		damage:  v.Intact(),
 		latest:  new(atomic.Int64),
@@ -156,9 +169,9 @@ func newModel(v *engine.Vessel, info *vessels.Info, opts Options) model {
 		width:   80,
 		height:  24,
 	}
+	m.info = info
 	if info != nil {
 		m.condition = info.Condition
-		m.shipType = info.ShipType
 	}
 	m.into = leadsInto(v)
 	m.derived = derive(v, m.into, nil)
@@ -198,7 +211,7 @@ func newModel(v *engine.Vessel, info *vessels.Info, opts Options) model {
 	}
 	m.setStyles()
 	m.resize()
-	return m
+	return m.startWith(opts.Start)
 }
 
 // zoneOf places a compartment without a group by where it lies along the
@@ -224,6 +237,7 @@ func (m *model) setStyles() {
 	m.input.TextStyle = m.st.Value
 	m.bar = progress.New(progress.WithSolidFill(m.st.BarColor), progress.WithColorProfile(m.rend.ColorProfile()))
 	m.bar.EmptyColor = ""
+	m.form.st = m.st
 	for k := range m.form.fields {
 		m.form.fields[k].PromptStyle, m.form.fields[k].TextStyle = m.st.Prompt, m.st.Value
 	}
@@ -232,14 +246,9 @@ func (m *model) setStyles() {
 // Init computes the intact condition, the reference for every change.
 func (m model) Init() tea.Cmd {
 	v := m.v
-	return func() (msg tea.Msg) {
-		defer func() {
-			if r := recover(); r != nil {
-				msg = resultMsg{seq: 0, failure: fmt.Sprint(r)}
-			}
-		}()
-		return baselineMsg{engine.Assess(v, v.Intact())}
-	}
+	return newest(0, nil, nil,
+		func(why string) tea.Msg { return resultMsg{seq: 0, failure: why} },
+		func() tea.Msg { return baselineMsg{engine.Assess(v, v.Intact())} })
 }
 
 // pending reports whether the figures shown are not yet those of the
@@ -248,12 +257,23 @@ func (m model) pending() bool {
 	return m.shown != m.seq || (m.base == nil && m.failure == "")
 }
 
-// Update handles one message.
+// Update handles one message, then divides the screen for what it left:
+// the one place sizes are decided (resize), once per message.
 func (m model) Update(msg tea.Msg) (tea.Model, tea.Cmd) {
+	next, cmd := m.update(msg)
+	mm := next.(model)
+	mm.resize()
+	return mm, cmd
+}
+
+// update handles one message.
+func (m model) update(msg tea.Msg) (tea.Model, tea.Cmd) {
+	if mm, cmd, ok := m.readingMsg(msg); ok {
+		return mm, cmd
+	}
 	switch msg := msg.(type) {
 	case tea.WindowSizeMsg:
 		m.width, m.height = msg.Width, msg.Height
-		m.resize()
 		return m, nil
 
 	case baselineMsg:
@@ -273,14 +293,18 @@ func (m model) Update(msg tea.Msg) (tea.Model, tea.Cmd) {
 			file += ", " + m.condition
 		}
 		file += ", all intact"
-		return m, m.addLogPair(m.now(), what+" → "+m.outcome(&a, false), file+" → "+m.outcome(&a, true))
+		logged := m.addLogPair(m.now(), what+" → "+m.outcome(&a, false), file+" → "+m.outcome(&a, true))
+		var start tea.Cmd
+		m, start = m.startCase() // the case given on the command line, if any
+		return m, tea.Batch(logged, start)
 
 	case resultMsg:
 		return m.takeResult(msg)
 
-	case logErrMsg:
-		m.log = append(m.log, m.now().Format("15:04:05")+" event log file: "+msg.err.Error())
-		return m, nil
+	case logStatusMsg:
+		return m.takeLogStatus()
+	case logRetryMsg:
+		return m.retryLog()
 
 	case reportMsg:
 		line := "report written to " + msg.path
@@ -307,7 +331,16 @@ func (m model) Update(msg tea.Msg) (tea.Model, tea.Cmd) {
 	case remedyMsg:
 		return m.takeRemedies(msg)
 
+	case doorMsg:
+		return m.takeDoor(msg)
+	case netDoneMsg:
+		return m.takeNet(msg)
+
 	case tea.KeyMsg:
+		msg = plainKey(msg)
+		if m.lay.small {
+			return m.smallScreenKey(msg)
+		}
 		if msg.Type == tea.KeyRunes && len(msg.Runes) > 1 && !msg.Paste {
 			// Keys pressed faster than the terminal is read arrive as one
 			// message ("jj"): take them one at a time, each in the mode the
@@ -321,11 +354,13 @@ func (m model) Update(msg tea.Msg) (tea.Model, tea.Cmd) {
 			}
 			return cur, tea.Batch(cmds...)
 		}
-		switch {
-		case m.form.on:
+		switch m.mode {
+		case modeForm:
 			return m.formKey(msg)
-		case m.editing:
+		case modeMu:
 			return m.editKey(msg)
+		case modeFind:
+			return m.findKey(msg)
 		}
 		return m.key(msg)
 	}
@@ -334,13 +369,26 @@ func (m model) Update(msg tea.Msg) (tea.Model, tea.Cmd) {
 
 func (m model) key(msg tea.KeyMsg) (tea.Model, tea.Cmd) {
 	k := m.keys
+	if !m.rem.show || key.Matches(msg, k.Hand) {
+		// The hand panel's own keys (the righting options' panel, when
+		// shown, takes the scroll keys first).
+		var took bool
+		if m.hand, took = m.hand.with(m.cur, m.st).update(msg, k); took {
+			return m, nil
+		}
+	}
 	n := len(m.v.Compartments)
 	switch {
 	case key.Matches(msg, k.Quit):
 		return m, tea.Quit
 	case key.Matches(msg, k.Help):
 		m.help.ShowAll = !m.help.ShowAll
-		m.resize()
+	case key.Matches(msg, doorsKey):
+		return m.doorsToggle()
+	case m.doors.handles(msg):
+		var cmd tea.Cmd
+		m.doors, cmd = m.doors.update(msg, m.v.Connections)
+		return m, cmd
 	case key.Matches(msg, k.Up):
 		m.move(-1)
 	case key.Matches(msg, k.Down):
@@ -349,24 +397,18 @@ func (m model) key(msg tea.KeyMsg) (tea.Model, tea.Cmd) {
 		m.move(-len(m.rows))
 	case key.Matches(msg, k.Bottom):
 		m.move(len(m.rows))
+	case key.Matches(msg, k.PageUp), key.Matches(msg, k.PageDown):
+		m.page(key.Matches(msg, k.PageDown))
+	case key.Matches(msg, k.Find):
+		return m.openFind()
 	case key.Matches(msg, k.Picture):
 		m.picture = (m.picture + 1) % numPictures
-	case key.Matches(msg, k.Hand):
-		m.showHand = !m.showHand
 	case key.Matches(msg, k.WorkUp), key.Matches(msg, k.WorkDown):
-		step := 3
+		step := scrollStep
 		if key.Matches(msg, k.WorkUp) {
-			step = -3
+			step = -scrollStep
 		}
-		// The righting options while their panel is shown, else the hand
-		// working while it is shown, else the flags and criteria.
-		if m.rem.show {
-			m.rem.scroll = min(max(0, m.rem.scroll+step), m.remedyScrollMax())
-		} else if m.showHand && m.cur != nil && m.cur.Hand != nil {
-			m.handScroll = min(max(0, m.handScroll+step), max(0, len(m.cur.Hand.Steps)-1))
-		} else {
-			m.textScroll = min(max(0, m.textScroll+step), 200)
-		}
+		m.scroll(step)
 	case key.Matches(msg, k.Palette):
 		m.palette = (m.palette + 1) % len(paletteNames)
 		m.setStyles()
@@ -381,18 +423,14 @@ func (m model) key(msg tea.KeyMsg) (tea.Model, tea.Cmd) {
 		return m, m.writeReport()
 	case key.Matches(msg, k.Remedies):
 		return m.remedyKey()
+	case key.Matches(msg, k.Girder):
+		return m.girderKey()
+	case m.girder.handles(msg):
+		var cmd tea.Cmd
+		m.girder, cmd = m.girder.update(msg)
+		return m, cmd
 	case key.Matches(msg, k.RunPanel):
-		if m.rem.show {
-			// The righting options give way to the run's panel.
-			m.rem.show = false
-			m.flood.show = true
-			return m, nil
-		}
-		if m.flood.show {
-			m.flood.show = false
-			return m, m.stopFlood()
-		}
-		m.flood.show = true
+		return m.runPanelKey()
 	case n == 0:
 		return m, nil
 	case key.Matches(msg, k.HoleRun):
@@ -400,35 +438,16 @@ func (m model) key(msg tea.KeyMsg) (tea.Model, tea.Cmd) {
 	case key.Matches(msg, k.RunStage):
 		return m.applyStage()
 	case key.Matches(msg, k.Flood):
-		d := cloneDamage(m.damage)
-		c := m.v.Compartments[m.sel]
-		var what string
-		if d[m.sel].Open || d[m.sel].WaterM3 > 0 {
-			d[m.sel].Open, d[m.sel].WaterM3 = false, 0
-			what = c.Name + " closed up (intact)"
-		} else {
-			d[m.sel].Open = true
-			what = c.Name + " opened to sea (μ " + muText(m.mu(d, m.sel)) + ")"
-		}
-		return m.apply(d, what)
-	case key.Matches(msg, k.MuUp), key.Matches(msg, k.MuDown):
-		step := 0.05
-		if key.Matches(msg, k.MuDown) {
-			step = -0.05
-		}
-		old := m.mu(m.damage, m.sel)
-		mu := math.Round((old+step)*100) / 100
-		mu = math.Min(1, math.Max(0.05, mu))
-		if mu == old {
-			return m, nil
-		}
-		return m.setMu(mu)
+		return m.toggleFlooded()
+	case key.Matches(msg, k.MuUp):
+		return m.stepMu(0.05)
+	case key.Matches(msg, k.MuDown):
+		return m.stepMu(-0.05)
 	case key.Matches(msg, k.MuSet):
-		m.editing = true
+		m.mode = modeMu
 		m.inputErr = ""
 		m.input.SetValue("")
 		m.input.Placeholder = muText(m.mu(m.damage, m.sel))
-		m.resize()
 		cmd := m.input.Focus()
 		if !m.animate {
 			// Tests: a still cursor, so that no blink timer runs.
@@ -450,6 +469,72 @@ func (m model) key(msg tea.KeyMsg) (tea.Model, tea.Cmd) {
 		return m.apply(m.v.Intact(), "all compartments intact (reset)")
 	}
 	return m, nil
+}
+
+// runPanelKey shows the flooding run's panel in place of the righting
+// options', or hides it (stopping a run in progress).
+func (m model) runPanelKey() (tea.Model, tea.Cmd) {
+	switch {
+	case m.rem.show:
+		// The righting options give way to the run's panel.
+		m.rem.show = false
+		m.flood.show = true
+	case m.flood.show:
+		m.flood.show = false
+		return m, m.stopFlood()
+	default:
+		m.flood.show = true
+	}
+	return m, nil
+}
+
+// toggleFlooded opens the selected compartment to the sea, or closes it up
+// (intact) when it is open or holds water.
+func (m model) toggleFlooded() (tea.Model, tea.Cmd) {
+	d := cloneDamage(m.damage)
+	c := m.v.Compartments[m.sel]
+	if d[m.sel].Open || d[m.sel].WaterM3 > 0 {
+		d[m.sel].Open, d[m.sel].WaterM3 = false, 0
+		return m.apply(d, c.Name+" closed up (intact)")
+	}
+	d[m.sel].Open = true
+	return m.apply(d, c.Name+" opened to sea (μ "+muText(m.mu(d, m.sel))+")")
+}
+
+// stepMu moves the selected compartment's permeability by step, to the
+// nearest hundredth, between 0.05 and 1.
+func (m model) stepMu(step float64) (tea.Model, tea.Cmd) {
+	old := m.mu(m.damage, m.sel)
+	mu := math.Round((old+step)*100) / 100
+	mu = math.Min(1, math.Max(0.05, mu))
+	if mu == old {
+		return m, nil
+	}
+	return m.setMu(mu)
+}
+
+// scroll moves by step lines (up when negative) the text the scroll keys
+// work on: the righting options while their panel is shown, else the hand
+// working while it is shown (a step at a time), else the flags and
+// criteria where they are on screen.
+func (m *model) scroll(step int) {
+	switch {
+	case m.rem.show:
+		head, body, foot := m.rem.with(*m).parts(m.width, m.lay.bodyH)
+		m.rem.scroll = scrolled(m.rem.scroll, body, m.lay.bodyH-len(head)-len(foot), step)
+	case m.cur != nil:
+		w, h := m.criteriaBox()
+		m.textScroll = scrolled(m.textScroll, m.criteriaLines(w, true), h-1, step)
+	}
+}
+
+// criteriaBox is the size the flags and criteria are drawn in: the wide
+// screen's third column, else the narrow screen's sheet.
+func (m model) criteriaBox() (w, h int) {
+	if m.lay.wide {
+		return m.lay.thirdW, m.lay.topH
+	}
+	return m.lay.rightW, m.lay.sheetH
 }
 
 // move selects the compartment steps rows down the list (up when
@@ -477,9 +562,8 @@ func (m *model) move(steps int) {
 func (m model) editKey(msg tea.KeyMsg) (tea.Model, tea.Cmd) {
 	switch msg.Type {
 	case tea.KeyEsc:
-		m.editing = false
+		m.mode = modeBrowse
 		m.input.Blur()
-		m.resize()
 		return m, nil
 	case tea.KeyCtrlC:
 		return m, tea.Quit
@@ -489,9 +573,8 @@ func (m model) editKey(msg tea.KeyMsg) (tea.Model, tea.Cmd) {
 			m.inputErr = err.Error()
 			return m, nil
 		}
-		m.editing = false
+		m.mode = modeBrowse
 		m.input.Blur()
-		m.resize()
 		if mu == m.mu(m.damage, m.sel) {
 			return m, nil
 		}
@@ -503,28 +586,9 @@ func (m model) editKey(msg tea.KeyMsg) (tea.Model, tea.Cmd) {
 	return m, cmd
 }
 
-// parseMu reads a typed permeability: a fraction ("0.85", ",85" or "0,85")
-// or a percentage ("85%"), 0 < μ ≤ 1, rounded to 0.001.
-func parseMu(s string) (float64, error) {
-	t := strings.TrimSpace(strings.ReplaceAll(s, ",", "."))
-	pct := strings.HasSuffix(t, "%")
-	t = strings.TrimSpace(strings.TrimSuffix(t, "%"))
-	if t == "" {
-		return 0, fmt.Errorf("type a permeability between 0.01 and 1, e.g. 0.85 or 85%%")
-	}
-	v, err := strconv.ParseFloat(t, 64)
-	if err != nil || !finite(v) {
-		return 0, fmt.Errorf("%q is not a number: type e.g. 0.85 or 85%%", s)
-	}
-	if pct {
-		v /= 100
-	}
-	v = math.Round(v*1000) / 1000
-	if !(v > 0 && v <= 1) {
-		return 0, fmt.Errorf("%s is outside 0 < μ ≤ 1 (the fraction of the space that water can fill)", strings.TrimSpace(s))
-	}
-	return v, nil
-}
+// parseMu reads a typed permeability as the command line does (see
+// vessels.ParsePermeability).
+func parseMu(s string) (float64, error) { return vessels.ParsePermeability(s) }
 
 // setMu sets the selected compartment's permeability.
 func (m model) setMu(mu float64) (tea.Model, tea.Cmd) {
@@ -540,14 +604,7 @@ func (m model) setMu(mu float64) (tea.Model, tea.Cmd) {
 }
 
 // mu returns the permeability compartment i has under d.
-func (m model) mu(d engine.Damage, i int) float64 {
-	if i < len(d) {
-		if p := d[i].Permeability; p > 0 && p <= 1 {
-			return p
-		}
-	}
-	return m.v.Compartments[i].Permeability
-}
+func (m model) mu(d engine.Damage, i int) float64 { return m.v.Permeability(d, i) }
 
 // apply makes d the damage state, keeping the old one for undo.
 func (m model) apply(d engine.Damage, what string) (tea.Model, tea.Cmd) {
@@ -566,8 +623,9 @@ func (m model) commit(d engine.Damage, what string) (tea.Model, tea.Cmd) {
 	m.seq++
 	m.latest.Store(int64(m.seq))
 	m.changes[m.seq] = change{at: m.now(), what: what}
-	spin := m.startSpinner() // before m is copied out: the order is not Go's to promise
-	return m, tea.Batch(recompute(m.v, cloneDamage(d), m.seq, m.latest), spin)
+	logged := m.logChange(m.seq, m.changes[m.seq]) // in the file before it is computed or shown
+	spin := m.startSpinner()                       // before m is copied out: the order is not Go's to promise
+	return m, tea.Batch(logged, recompute(m.v, cloneDamage(d), m.seq, m.latest), spin)
 }
 
 // recompute returns the Cmd that assesses damage state d, change number seq.
@@ -575,17 +633,10 @@ func (m model) commit(d engine.Damage, what string) (tea.Model, tea.Cmd) {
 // result could never be shown), and it turns an engine failure into a
 // message instead of taking the screen down.
 func recompute(v *engine.Vessel, d engine.Damage, seq int, latest *atomic.Int64) tea.Cmd {
-	return func() (msg tea.Msg) {
-		if latest != nil && latest.Load() != int64(seq) {
-			return resultMsg{seq: seq, skipped: true}
-		}
-		defer func() {
-			if r := recover(); r != nil {
-				msg = resultMsg{seq: seq, failure: fmt.Sprint(r)}
-			}
-		}()
-		return resultMsg{seq: seq, a: engine.Assess(v, d)}
-	}
+	return newest(seq, latest,
+		func() tea.Msg { return resultMsg{seq: seq, skipped: true} },
+		func(why string) tea.Msg { return resultMsg{seq: seq, failure: why} },
+		func() tea.Msg { return resultMsg{seq: seq, a: assessSpread(v, d)} })
 }
 
 // takeResult shows a result if it is the newest and logs every change in
@@ -626,8 +677,8 @@ func (m model) takeResult(r resultMsg) (tea.Model, tea.Cmd) {
 		ch := m.changes[m.logNext]
 		delete(m.results, m.logNext)
 		delete(m.changes, m.logNext)
+		cmds = append(cmds, m.addLogResult(m.logNext, ch, res))
 		m.logNext++
-		cmds = append(cmds, m.addLogPair(ch.at, ch.what+" → "+res[0], ch.what+" → "+res[1]))
 	}
 	return m, tea.Batch(cmds...)
 }
@@ -657,21 +708,8 @@ func (m *model) addLog(at time.Time, line string) tea.Cmd { return m.addLogPair(
 
 // addLogPair is addLog with a fuller line for the file than for the screen.
 func (m *model) addLogPair(at time.Time, line, fileLine string) tea.Cmd {
-	m.log = append(m.log, at.Format("15:04:05")+" "+line)
-	if len(m.log) > 200 {
-		m.log = m.log[len(m.log)-200:]
-	}
-	if m.file == nil {
-		return nil
-	}
-	m.file.add(at.Format(time.RFC3339) + "  " + fileLine)
-	f := m.file
-	return func() tea.Msg {
-		if err := f.flush(); err != nil {
-			return logErrMsg{err}
-		}
-		return nil
-	}
+	m.screenLog(at, line)
+	return m.fileLine(at, fileLine)
 }
 
 func (m *model) startSpinner() tea.Cmd {

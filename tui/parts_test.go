@@ -69,7 +69,7 @@ func TestNumberGuard(t *testing.T) {
 	bad.Hand = &engine.HandWorking{GMM: nan, HeelDeg: math.Inf(1), Steps: []engine.HandStep{{Label: "sinkage", Formula: "V/A", Value: nan, Unit: "m"}}}
 	m = drive(t, m, resultMsg{seq: m.seq, a: bad})
 	for _, hand := range []bool{false, true} {
-		m.showHand = hand
+		m.hand.show = hand
 		for _, size := range [][2]int{{120, 40}, {80, 24}} {
 			mm, _ := m.Update(tea.WindowSizeMsg{Width: size[0], Height: size[1]})
 			mv := mm.(model)
@@ -187,19 +187,19 @@ func TestKeys(t *testing.T) {
 	}
 	// Type an exact value: a bad one is refused and the prompt stays.
 	m = press(t, m, "m", "1", ".", "5", "enter")
-	if !m.editing || m.inputErr == "" {
-		t.Fatalf("μ 1.5 accepted (editing %v, error %q)", m.editing, m.inputErr)
+	if m.mode != modeMu || m.inputErr == "" {
+		t.Fatalf("μ 1.5 accepted (editing %v, error %q)", m.mode == modeMu, m.inputErr)
 	}
 	if !strings.Contains(m.View(), "outside") {
 		t.Error("the refusal is not on screen")
 	}
 	m = press(t, m, "esc")
-	if m.editing || m.mu(m.damage, i) != 0.05 {
+	if m.mode == modeMu || m.mu(m.damage, i) != 0.05 {
 		t.Error("esc did not cancel")
 	}
 	m = press(t, m, "m", "8", "2", "%", "enter")
-	if m.editing || math.Abs(m.mu(m.damage, i)-0.82) > 1e-12 {
-		t.Errorf("82%%: μ %v, editing %v", m.mu(m.damage, i), m.editing)
+	if m.mode == modeMu || math.Abs(m.mu(m.damage, i)-0.82) > 1e-12 {
+		t.Errorf("82%%: μ %v, editing %v", m.mu(m.damage, i), m.mode == modeMu)
 	}
 	m = press(t, m, "space")
 	if !m.damage[i].Open {
@@ -279,13 +279,7 @@ func TestNightPalette(t *testing.T) {
 // TestEventLogFile: each change reaches the file, with its time and the
 // resulting heel and drafts, before the next key.
 func TestEventLogFile(t *testing.T) {
-	path := filepath.Join(t.TempDir(), "watch.log")
-	lg, err := openEventLog(path)
-	if err != nil {
-		t.Fatal(err)
-	}
-	m := testModel(t, 100, 30)
-	m.file = lg
+	m, lg, path := loggedModel(t, 100, 30)
 	m = openSpaces(t, m, goldenOpen...)
 	data, err := os.ReadFile(path)
 	if err != nil {
@@ -294,7 +288,7 @@ func TestEventLogFile(t *testing.T) {
 	lines := strings.Split(strings.TrimSpace(string(data)), "\n")
 	var opened []string
 	for _, l := range lines {
-		if strings.Contains(l, "opened to sea") {
+		if strings.Contains(l, "opened to sea") && strings.Contains(l, "→") { // the results' lines
 			opened = append(opened, l)
 		}
 	}
@@ -434,7 +428,7 @@ func TestHandWorkingShown(t *testing.T) {
 		}{
 			{"Draft aft", a.Hand.DraftAftM, a.Position.DraftAftM},
 			{"Draft fwd", a.Hand.DraftFwdM, a.Position.DraftFwdM},
-			{"GM", a.Hand.GMM, a.Position.GMM},
+			{"GM upright", a.Hand.GMM, a.Position.GMUprightM},
 		} {
 			// Only the hand table has three numbers in a row after the label.
 			re := regexp.MustCompile(f.label + `\s+(-?\d+\.\d+)\s+(-?\d+\.\d+)\s+(\d+\.\d+) m`)
@@ -451,11 +445,11 @@ func TestHandWorkingShown(t *testing.T) {
 			t.Errorf("%v: the first step of the working is not on screen", size)
 		}
 		m = press(t, m, "]")
-		if m.handScroll == 0 || strings.Contains(m.View(), "steps 1–") {
+		if m.hand.scroll == 0 || strings.Contains(m.View(), "steps 1–") {
 			t.Errorf("%v: ] did not scroll the working", size)
 		}
 		m = press(t, m, "[")
-		if m.handScroll != 0 {
+		if m.hand.scroll != 0 {
 			t.Errorf("%v: [ did not scroll back", size)
 		}
 	}

@@ -21,7 +21,8 @@ import (
 // date and that the key works them out again. Undoing back to the state
 // they were worked out for makes them current again.
 
-// remedyState is the righting options and their panel.
+// remedyState is the righting options and their panel: a child of the
+// dashboard whose view (remedy_view.go) draws with what with gives it.
 type remedyState struct {
 	show    bool // the panel is on screen
 	seq     int  // the newest request's number
@@ -31,6 +32,12 @@ type remedyState struct {
 	set     *engine.RemedySet
 	err     string // the newest request failed (a recovered panic)
 	scroll  int    // the first line of the panel's scrolling part shown
+
+	// What the panel draws with, given by with before each use.
+	v      *engine.Vessel
+	damage engine.Damage // the damage state shown
+	st     Styles
+	spin   string // the computing mark
 }
 
 // remedyMsg carries the righting options of request seq. Stale is set when
@@ -47,17 +54,16 @@ type remedyMsg struct {
 // damage state d (a copy the Cmd owns), request number seq. The vessel is
 // never edited by the dashboard, so FindRemedies may read it here.
 func remediesCmd(v *engine.Vessel, d engine.Damage, seq int, latest *atomic.Int64) tea.Cmd {
-	return func() (msg tea.Msg) {
-		if latest.Load() != int64(seq) {
-			return remedyMsg{seq: seq, stale: true}
-		}
-		defer func() {
-			if r := recover(); r != nil {
-				msg = remedyMsg{seq: seq, err: fmt.Sprint(r)}
-			}
-		}()
-		return remedyMsg{seq: seq, set: engine.FindRemedies(v, d)}
-	}
+	return newest(seq, latest,
+		func() tea.Msg { return remedyMsg{seq: seq, stale: true} },
+		func(why string) tea.Msg { return remedyMsg{seq: seq, err: why} },
+		func() tea.Msg { return remedyMsg{seq: seq, set: engine.FindRemedies(v, d)} })
+}
+
+// with returns the panel drawing for m's vessel, damage state and styles.
+func (r remedyState) with(m model) remedyState {
+	r.v, r.damage, r.st, r.spin = m.v, m.damage, m.st, m.spinView()
+	return r
 }
 
 // current reports whether the options held were worked out for damage

@@ -82,7 +82,7 @@ func TestRemedyPanelGolden(t *testing.T) {
 		}
 		view := m.View()
 		checkScreen(t, view, sz[0], sz[1])
-		for _, want := range []string{"LIST, not a loll", "fill Wing tank 2 P from the sea to 62 %", remedyCautionShort[:20]} {
+		for _, want := range []string{"LIST, not a loll", "fill Wing tank 2 P from the sea to 65 %", remedyCautionShort[:20]} {
 			if sz[1] >= 30 && want == remedyCautionShort[:20] {
 				want = remedyCautionLead
 			}
@@ -122,7 +122,7 @@ func TestRemedyLollDangerStyle(t *testing.T) {
 	m.rend = r
 	m.setStyles()
 	found := 0
-	for _, l := range m.remedyLead(m.rem.set, 80) {
+	for _, l := range m.rem.with(m).lead(m.rem.set, 80) {
 		plain := ansi.Strip(l)
 		if l != m.st.Danger.Render(plain) || l == plain {
 			t.Errorf("not in the danger style: %q", l)
@@ -175,7 +175,7 @@ func TestRemedyFiguresAreTheEngines(t *testing.T) {
 				if !w.Advisable {
 					adv = "NO"
 				}
-				for _, fig := range []string{massText(w.MassT), heelShort(w.Position.HeelDeg), num(w.Position.GMM, 2),
+				for _, fig := range []string{massText(w.MassT), heelShort(w.Position.HeelDeg), num(w.Position.GMAtRestM, 2),
 					num(w.Position.DeckEdge.HeightM, 2), num(w.UprightGMM, 2), num(w.LowestOpeningM, 2), adv} {
 					if !strings.Contains(line, " "+fig) {
 						t.Errorf("option %d: %q not in its row %q", i+1, fig, line)

@@ -29,8 +29,8 @@ const (
 const remedyWideW = 110
 
 // remedyPanel draws the panel in w × h.
-func (m model) remedyPanel(w, h int) []string {
-	head, body, foot := m.remedyParts(w, h)
+func (p remedyState) view(w, h int) []string {
+	head, body, foot := p.parts(w, h)
 	room := h - len(head) - len(foot)
 	if room < 1 {
 		// Too little room for a scrolling part: the head and the foot
@@ -39,9 +39,9 @@ func (m model) remedyPanel(w, h int) []string {
 		return fit(append(fit(head, w, keep), foot...), w, h)
 	}
 	if len(body) > room {
-		first := min(m.rem.scroll, len(body)-room)
+		first := min(p.scroll, len(body)-room)
 		last := first + room
-		head[0] = fitLine(head[0], max(0, w-16)) + m.st.Dim.Render(fmt.Sprintf(" %d–%d/%d [ ]", first+1, last, len(body)))
+		head[0] = fitLine(head[0], max(0, w-16)) + p.st.Dim.Render(fmt.Sprintf(" %d–%d/%d [ ]", first+1, last, len(body)))
 		body = body[first:last]
 	}
 	out := append(append(head, body...), fit(nil, w, room-len(body))...)
@@ -50,41 +50,48 @@ func (m model) remedyPanel(w, h int) []string {
 
 // remedyScrollMax is how far the panel's scrolling part can be scrolled.
 func (m model) remedyScrollMax() int {
-	w, h := m.width, m.lay.bodyH
-	head, body, foot := m.remedyParts(w, h)
-	return max(0, len(body)-(h-len(head)-len(foot)))
+	return m.rem.with(m).scrollMax(m.width, m.lay.bodyH)
+}
+
+// remedyPanel draws the righting options' panel in w × h.
+func (m model) remedyPanel(w, h int) []string { return m.rem.with(m).view(w, h) }
+
+// scrollMax is how far the panel's scrolling part can be scrolled in w × h.
+func (p remedyState) scrollMax(w, h int) int {
+	head, body, foot := p.parts(w, h)
+	return scrolled(len(body), body, h-len(head)-len(foot), 0)
 }
 
 // remedyParts is the panel's fixed head, its scrolling body and its fixed
 // foot, for width w (h only decides how much of the summary stands in the
 // head).
-func (m model) remedyParts(w, h int) (head, body, foot []string) {
-	st := m.st
-	r := m.rem
+func (p remedyState) parts(w, h int) (head, body, foot []string) {
+	st := p.st
+	r := p
 	title := []string{"RIGHTING OPTIONS"}
 	switch {
-	case r.current(m.damage):
-		title = append(title, "for "+m.damageWords(r.set.Damage))
-	case r.running && sameDamage(r.asked, m.damage):
-		title = append(title, "for "+m.damageWords(r.asked))
+	case r.current(p.damage):
+		title = append(title, "for "+p.damageWords(r.set.Damage))
+	case r.running && sameDamage(r.asked, p.damage):
+		title = append(title, "for "+p.damageWords(r.asked))
 	}
-	if r.current(m.damage) && !r.running {
+	if r.current(p.damage) && !r.running {
 		title = append(title, "o hides")
 	}
 	t := st.Heading.Render(titleFit(w, title...))
 	if r.running {
-		t = st.Heading.Render(titleFit(max(0, w-12), title...)) + " " + st.Busy.Render(m.spinView()+" computing")
+		t = st.Heading.Render(titleFit(max(0, w-12), title...)) + " " + st.Busy.Render(p.spin+" computing")
 	}
 	head = []string{t}
-	foot = m.remedyFoot(w, h)
+	foot = p.foot(w, h)
 	add := func(to *[]string, s func(...string) string, text string) {
 		for _, l := range wrap(text, w) {
 			*to = append(*to, s(l))
 		}
 	}
-	cur := r.current(m.damage)
+	cur := r.current(p.damage)
 	switch {
-	case r.running && !cur && sameDamage(r.asked, m.damage):
+	case r.running && !cur && sameDamage(r.asked, p.damage):
 		add(&head, st.Busy.Render, fmt.Sprintf("Working out the righting options for the state shown (up to %d solves)…", engine.RemedyMaxSolves))
 		return head, nil, foot
 	case r.running && !cur:
@@ -102,7 +109,7 @@ func (m model) remedyParts(w, h int) (head, body, foot []string) {
 		return head, nil, foot
 	}
 	rs := r.set
-	head = append(head, m.remedyLead(rs, w)...)
+	head = append(head, p.lead(rs, w)...)
 	summary := wrap(rs.Summary, w)
 	if len(rs.Options) == 0 {
 		for _, l := range summary {
@@ -120,7 +127,7 @@ func (m model) remedyParts(w, h int) (head, body, foot []string) {
 	cols := remedyColumns(w)
 	head = append(head, st.Heading.Render(cols.header()))
 	for i, o := range rs.Options {
-		body = append(body, m.remedyRow(cols, i+1, o)...)
+		body = append(body, p.row(cols, i+1, o)...)
 	}
 	body = append(body, st.Heading.Render("NOTES"))
 	for i, o := range rs.Options {
@@ -149,8 +156,8 @@ func (m model) remedyParts(w, h int) (head, body, foot []string) {
 // remedyLead says plainly what kind of heel it is, from the engine's
 // figures: a list, a loll (with the warning not to ballast the high side,
 // in the danger style), no action needed, or no floating position.
-func (m model) remedyLead(rs *engine.RemedySet, w int) []string {
-	st := m.st
+func (p remedyState) lead(rs *engine.RemedySet, w int) []string {
+	st := p.st
 	var out []string
 	add := func(s func(...string) string, text string) {
 		for _, l := range wrap(text, w) {
@@ -194,7 +201,7 @@ func (m model) remedyLead(rs *engine.RemedySet, w int) []string {
 // remedyFoot is the caution, always on screen under the options: in full
 // (the report's words after a line of the panel's own) on a panel of 30
 // lines or more when it takes at most three lines, else in short.
-func (m model) remedyFoot(w, h int) []string {
+func (p remedyState) foot(w, h int) []string {
 	var lines []string
 	if h >= 30 {
 		lines = append(wrap(remedyCautionLead, w), wrap(report.RemediesCaution, w)...)
@@ -204,7 +211,7 @@ func (m model) remedyFoot(w, h int) []string {
 	}
 	out := make([]string, len(lines))
 	for i, l := range lines {
-		out[i] = m.st.Caution.Render(l)
+		out[i] = p.st.Caution.Render(l)
 	}
 	return out
 }
@@ -230,7 +237,7 @@ func remedyColumns(w int) remedyCols {
 func (c remedyCols) header() string {
 	s := " # " + pad("action", c.actionW) + padLeft("mass t", 7) + padLeft("heel", 8) + padLeft("GM m", 6) + padLeft("deck m", 7)
 	if c.wide {
-		s += padLeft("GM₀ m", 7) + padLeft("opening", 8)
+		s += padLeft("rest m", 7) + padLeft("opening", 8)
 		return s + "  advisable"
 	}
 	return s + "  adv"
@@ -241,8 +248,8 @@ func (c remedyCols) header() string {
 // comes to with its side, GM, the least freeboard to the deck edge (and
 // on a wide screen the upright GM and the lowest unprotected opening's
 // height), and whether it is advisable.
-func (m model) remedyRow(c remedyCols, rank int, o engine.Remedy) []string {
-	st := m.st
+func (p remedyState) row(c remedyCols, rank int, o engine.Remedy) []string {
+	st := p.st
 	text := st.Text
 	if !o.Advisable {
 		text = st.Dim
@@ -254,11 +261,11 @@ func (m model) remedyRow(c remedyCols, rank int, o engine.Remedy) []string {
 	var heel, gm, deck, gm0, open string
 	deckStyle, heelStyle := text, text
 	if p := o.Position; p != nil {
-		heel, gm, deck = heelShort(p.HeelDeg), num(p.GMM, 2), num(p.DeckEdge.HeightM, 2)
+		heel, gm, deck = heelShort(p.HeelDeg), num(o.UprightGMM, 2), num(p.DeckEdge.HeightM, 2)
 		if p.DeckEdge.HeightM < 0 {
 			deckStyle = st.Danger
 		}
-		gm0, open = num(o.UprightGMM, 2), num(o.LowestOpeningM, 2)
+		gm0, open = num(p.GMAtRestM, 2), num(o.LowestOpeningM, 2)
 	} else {
 		heel, heelStyle = "no pos.", st.Danger
 		if o.NoEq != nil && o.NoEq.Outcome != engine.NotConverged {
@@ -312,11 +319,11 @@ func firstOf(s []string) string {
 
 // damageWords names a damage state for the panel's title: the
 // compartments open to the sea or holding water, or "intact".
-func (m model) damageWords(d engine.Damage) string {
+func (p remedyState) damageWords(d engine.Damage) string {
 	var open []string
-	for i := range m.v.Compartments {
+	for i := range p.v.Compartments {
 		if i < len(d) && (d[i].Open || d[i].WaterM3 > 0) {
-			open = append(open, m.v.Compartments[i].Name)
+			open = append(open, p.v.Compartments[i].Name)
 		}
 	}
 	switch len(open) {

@@ -2,7 +2,6 @@ package tui
 
 import (
 	"math"
-	"sort"
 
 	"heelwatch/engine"
 )
@@ -20,19 +19,27 @@ type derived struct {
 	// nearest to immersion (-1 if none); nearestAll counts weathertight ones too.
 	nearest    int
 	nearestAll int
-	flags      []engine.Flag // most severe first
+	flags      []engine.Flag // about the ship: danger, caution, notes
+	hand       []engine.Flag // the hand method's caveats, shown with its working
 }
 
 // leadsInto returns, for each opening of v, the compartment it leads into:
-// of the compartments whose plan (x, y) holds the opening and whose bottom
-// is below it, the one whose top is highest (the space directly under a
-// vent or behind a door). -1 when no compartment is under it. This is
-// heelwatch's own rule for the screen's "next at risk"; the vessel file does
-// not say which space an opening serves.
+// the one its leads_to names (engine.Opening.LeadsTo) where the file says.
+// Where it does not, the screen's "next at risk" falls back on heelwatch's
+// own rule: of the compartments whose plan (x, y) holds the opening and
+// whose bottom is below it, the one whose top is highest (the space
+// directly under a vent or behind a door); -1 when none is under it. The
+// criteria and flags never guess: without leads_to an opening leads to a
+// space not modelled.
 func leadsInto(v *engine.Vessel) []int {
 	out := make([]int, len(v.Openings))
 	for k, o := range v.Openings {
 		out[k] = -1
+		if o.LeadsTo != "" {
+			// The file says where it leads (leads_to): no guessing.
+			out[k] = v.LeadsToIndex(o)
+			continue
+		}
 		best := math.Inf(-1)
 		for i, c := range v.Compartments {
 			b := c.Box
@@ -58,8 +65,7 @@ func derive(v *engine.Vessel, into []int, a *engine.Assessment) derived {
 	if a == nil {
 		return d
 	}
-	d.flags = append([]engine.Flag(nil), a.Flags...)
-	sort.SliceStable(d.flags, func(i, j int) bool { return d.flags[i].Severity > d.flags[j].Severity })
+	d.flags, d.hand = splitFlags(a.Flags)
 	p := a.Position
 	if p == nil {
 		return d
@@ -71,8 +77,8 @@ func derive(v *engine.Vessel, into []int, a *engine.Assessment) derived {
 		if d.nearestAll < 0 || oc.HeightM < p.Openings[d.nearestAll].HeightM {
 			d.nearestAll = k
 		}
-		if oc.Weathertight {
-			continue
+		if !oc.Progressive() {
+			continue // closed weathertight, or into a space flooded already
 		}
 		if d.nearest < 0 || oc.HeightM < p.Openings[d.nearest].HeightM {
 			d.nearest = k

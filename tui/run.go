@@ -2,6 +2,7 @@ package tui
 
 import (
 	"fmt"
+	"io"
 	"os"
 	"path/filepath"
 
@@ -30,6 +31,9 @@ type Options struct {
 	ReportDir string
 	// Version is heelwatch's version, printed in the report.
 	Version string
+	// Start is the damage state the dashboard opens with (--open and
+	// --perm on the command line), undone with the undo key; nil: intact.
+	Start engine.Damage
 }
 
 // Run shows the dashboard for v until the officer quits. info, which may be
@@ -87,29 +91,9 @@ func (m model) writeReport() tea.Cmd {
 	dir := m.opts.ReportDir
 	return func() tea.Msg {
 		base := "heelwatch-report-" + made.Format("20060102-150405")
-		var f *os.File
-		var err error
-		var path string
-		for k := 1; k < 100; k++ {
-			name := base + ".md"
-			if k > 1 {
-				name = fmt.Sprintf("%s-%d.md", base, k)
-			}
-			path = filepath.Join(dir, name)
-			f, err = os.OpenFile(path, os.O_WRONLY|os.O_CREATE|os.O_EXCL, 0o644)
-			if !os.IsExist(err) {
-				break
-			}
-		}
-		if err != nil {
-			return reportMsg{path, err}
-		}
-		err = report.Markdown(f, r)
-		if serr := f.Sync(); err == nil {
-			err = serr
-		}
-		if cerr := f.Close(); err == nil {
-			err = cerr
+		path, err := writeNewFile(dir, base, func(w io.Writer) error { return report.Markdown(w, r) })
+		if path == "" {
+			path = filepath.Join(dir, base+".md")
 		}
 		return reportMsg{path, err}
 	}

@@ -27,8 +27,12 @@ const axisW = 5
 // framed puts a vertical scale left of a picture's canvas, labelled at
 // round values of the world's y, and returns the canvas's lines.
 func (m model) framed(c *canvas, yStep float64, yFmt func(float64) string) []string {
-	st := m.st
-	body := c.render(m.inks)
+	return framedIn(m.st, m.inks, c, yStep, yFmt)
+}
+
+// framedIn is framed for a part that holds its own styles.
+func framedIn(st Styles, inks map[ink]lipgloss.Style, c *canvas, yStep float64, yFmt func(float64) string) []string {
+	body := c.render(inks)
 	left := make([]string, c.h)
 	if yStep > 0 {
 		for v := math.Ceil(c.y0/yStep) * yStep; v <= c.y1; v += yStep {
@@ -146,7 +150,7 @@ func (m model) sectionView(w, h int) []string {
 		}
 		var surface *engine.Plane
 		switch {
-		case p != nil && i < len(m.damage) && m.damage[i].Open:
+		case p != nil && m.openNow(i):
 			surface = p
 		case p != nil:
 			for k := range m.cur.Position.Held {

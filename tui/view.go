@@ -69,17 +69,38 @@ func (m model) headerView(w int) string {
 	}
 	if m.cur != nil && m.cur.Position != nil {
 		p := m.cur.Position
-		sum = append(sum, "heel "+heelShort(p.HeelDeg), "GM "+num(p.GMM, 2)+" m")
+		sum = append(sum, "heel "+heelShort(p.HeelDeg), "GM "+num(p.GMUprightM, 2)+" m")
 	} else if m.noPosition() {
 		sum = append(sum, "NO FLOATING POSITION")
 	}
-	right := st.Header.Render(strings.Join(sum, " · "))
-	if m.pending() {
-		right = st.Busy.Render(m.spin.View()+" computing") + "  " + right
+	summary := func(sum []string) string {
+		right := st.Header.Render(strings.Join(sum, " · "))
+		if m.cur != nil || m.failure != "" {
+			// The worst of the flags in a word, first, so that it is the
+			// last thing a narrow screen cuts.
+			right = m.severityWord() + st.Header.Render(" · ") + right
+		}
+		right = m.logWarning() + right
+		if m.pending() {
+			right = st.Busy.Render(m.spin.View()+" computing") + "  " + right
+		}
+		return right
 	}
-	right += st.Dim.Render("  " + m.st.Palette)
+	right := summary(sum)
+	if lipgloss.Width(left)+lipgloss.Width(right)+1 > w && len(sum) > 1 {
+		// Short of room, the count of flooded spaces goes first: the
+		// list's heading says it too.
+		right = summary(sum[1:])
+	}
+	if palette := st.Dim.Render("  " + m.st.Palette); lipgloss.Width(left)+lipgloss.Width(right+palette)+1 <= w {
+		right += palette
+	}
 	if m.condition != "" && lipgloss.Width(left)+lipgloss.Width(right)+len([]rune(m.condition))+4 <= w {
 		left += st.Dim.Render(" · " + m.condition)
+	}
+	if lipgloss.Width(left)+lipgloss.Width(right)+1 > w {
+		// The vessel's name gives way to the figures.
+		left = fitLine(left, max(10, w-lipgloss.Width(right)-1))
 	}
 	gap := w - lipgloss.Width(left) - lipgloss.Width(right)
 	if gap < 1 {
@@ -94,6 +115,15 @@ func (m model) narrowBody() []string {
 	l := m.lay
 	sep := m.st.Dim.Render("│")
 	list := m.listView(l.listW, l.bodyH)
+	if m.rd.show {
+		return besides(sep, fit(list, l.listW, l.bodyH), fit(m.readingLines(l.rightW, l.bodyH), l.rightW, l.bodyH))
+	}
+	if m.girder.show {
+		return besides(sep, fit(list, l.listW, l.bodyH), fit(m.girderLines(l.rightW, l.bodyH), l.rightW, l.bodyH))
+	}
+	if m.doors.show {
+		return besides(sep, fit(list, l.listW, l.bodyH), fit(m.doorsLines(l.rightW, l.bodyH), l.rightW, l.bodyH))
+	}
 	if m.flood.show {
 		return besides(sep, fit(list, l.listW, l.bodyH), m.floodPanel(l.rightW, l.bodyH))
 	}
@@ -101,9 +131,10 @@ func (m model) narrowBody() []string {
 	if m.noPosition() {
 		right = append(right, m.bannerView(l.rightW, l.flagH+l.sheetH)...)
 	} else {
-		right = append(right, m.flagsView(l.rightW, l.flagH)...)
-		if l.sheetH > 0 {
-			right = append(right, m.sheetView(l.rightW, l.sheetH)...)
+		flagH, sheetH := m.flagRoom()
+		right = append(right, m.flagsView(l.rightW, flagH)...)
+		if sheetH > 0 {
+			right = append(right, m.sheetView(l.rightW, sheetH)...)
 		}
 	}
 	return besides(sep, fit(list, l.listW, l.bodyH), fit(right, l.rightW, l.bodyH))
@@ -113,8 +144,8 @@ func (m model) narrowBody() []string {
 // criteria (the picture key turns to the next), or the hand working while
 // it is shown.
 func (m model) sheetView(w, h int) []string {
-	if m.showHand {
-		return fit(m.handView(w, h, true), w, h)
+	if m.hand.show {
+		return fit(m.handShown().view(w, h, true), w, h)
 	}
 	return fit(m.pictureView(m.picture, w, h), w, h)
 }
@@ -122,11 +153,11 @@ func (m model) sheetView(w, h int) []string {
 func (m model) pictureView(which, w, h int) []string {
 	switch which {
 	case picSection:
-		return m.sectionView(w, h)
+		return m.cached(picSection, w, h, m.sectionView)
 	case picProfile:
-		return m.profileView(w, h)
+		return m.cached(picProfile, w, h, m.profileView)
 	case picGZ:
-		return m.gzView(w, h)
+		return m.cached(picGZ, w, h, m.gzView)
 	}
 	return m.criteriaView(w, h, true)
 }
@@ -140,16 +171,18 @@ func (m model) wideBody() []string {
 	sep := m.st.Dim.Render("│")
 	list := m.listView(l.listW, l.topH)
 	mid := m.figuresView(l.posW)
-	if m.showHand && m.cur != nil {
+	if m.hand.show && m.cur != nil {
 		// The hand method's answers right under the direct figures.
 		if m.cur.Hand != nil {
 			mid = append(mid, m.st.Heading.Render("HAND METHOD"))
-			mid = append(mid, m.handAnswers(l.posW)...)
+			mid = append(mid, m.handShown().answers(l.posW)...)
 		} else {
 			mid = append(mid, m.st.Heading.Render("HAND METHOD"))
-			for _, s := range wrap(m.handWhy(), l.posW) {
+			for _, s := range wrap(m.handShown().why(), l.posW) {
 				mid = append(mid, m.st.Dim.Render(s))
 			}
+			// Without a hand working below, its caveats go here.
+			mid = append(mid, m.handShown().caveatLines(l.posW)...)
 		}
 	} else {
 		mid = append(mid, m.flagsView(l.posW, l.topH-figLines)...)
@@ -159,17 +192,23 @@ func (m model) wideBody() []string {
 	rule := m.st.Dim.Render(strings.Repeat("─", m.width))
 	var pics []string
 	switch {
+	case m.rd.show:
+		pics = m.readingLines(m.width, l.picH)
+	case m.girder.show:
+		pics = m.girderLines(m.width, l.picH)
+	case m.doors.show:
+		pics = m.doorsLines(m.width, l.picH)
 	case m.flood.show:
 		pics = m.floodRow(m.width, l.picH)
 	case m.noPosition():
 		pics = m.bannerView(m.width, l.picH)
-	case m.showHand && m.cur != nil && m.cur.Hand != nil:
-		pics = m.handView(m.width, l.picH, false)
+	case m.handShown().hasWorking():
+		pics = m.handShown().view(m.width, l.picH, false)
 	default:
 		pics = besides(sep,
-			fit(m.sectionView(l.picW[0], l.picH), l.picW[0], l.picH),
-			fit(m.profileView(l.picW[1], l.picH), l.picW[1], l.picH),
-			fit(m.gzView(l.picW[2], l.picH), l.picW[2], l.picH))
+			fit(m.cached(picSection, l.picW[0], l.picH, m.sectionView), l.picW[0], l.picH),
+			fit(m.cached(picProfile, l.picW[1], l.picH, m.profileView), l.picW[1], l.picH),
+			fit(m.cached(picGZ, l.picW[2], l.picH, m.gzView), l.picW[2], l.picH))
 	}
 	out := append(top, rule)
 	return append(out, pics...)
@@ -189,10 +228,12 @@ func (m model) logView(w, n int) []string {
 // footView is the help bar, or the permeability prompt while one is typed.
 func (m model) footView() []string {
 	st := m.st
-	if m.form.on {
-		return m.formView()
-	}
-	if m.editing {
+	switch m.mode {
+	case modeForm:
+		return m.form.view(m.width, formLines)
+	case modeFind:
+		return strings.Split(m.find.view(m.width, findLines), "\n")
+	case modeMu:
 		name := ""
 		if len(m.v.Compartments) > 0 {
 			name = m.v.Compartments[m.sel].Name

@@ -75,7 +75,7 @@ func Source(name string) ([]byte, bool) {
 
 // Load reads the vessel file at path.
 func Load(path string) (*engine.Vessel, *Info, error) {
-	data, err := os.ReadFile(path)
+	data, err := readRegular(path)
 	if err != nil {
 		return nil, nil, fmt.Errorf("vessel file: %w", err)
 	}

@@ -59,6 +59,13 @@ func FuzzParse(f *testing.F) {
 						t.Fatalf("solved position holds %v: %+v", f, pos)
 					}
 				}
+				if s, _ := engine.GirderStrength(v, v.Intact(), &pos); s != nil {
+					for i := range s.XM {
+						if f := s.MomentKNm[i] + s.ShearKN[i]; math.IsNaN(f) || math.IsInf(f, 0) {
+							t.Fatalf("hull girder holds %v at x = %v", f, s.XM[i])
+						}
+					}
+				}
 			}
 		}
 	})

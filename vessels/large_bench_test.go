@@ -1,15 +1,15 @@
 package vessels_test
 
 // BenchmarkLoadLargeHull times reading the vessel file of a large generated
-// ship (internal/largeship, an invented vessel: 160 stations of 60 offsets
+// ship (vessels/largeship, an invented vessel: 160 stations of 60 offsets
 // and 200 compartments) into engine values: what the dashboard does before
 // its first frame, whose budget is 100 ms.
 
 import (
 	"testing"
 
-	"heelwatch/internal/largeship"
 	"heelwatch/vessels"
+	"heelwatch/vessels/largeship"
 )
 
 func BenchmarkLoadLargeHull(b *testing.B) {

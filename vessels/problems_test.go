@@ -46,7 +46,7 @@ var badFiles = map[string][]want{
 	"bounds-reversed.toml":            {{19, "compartment[1].x", "low < high"}},
 	"comma-in-name.toml":              {{17, "compartment[1].name", "holds a comma"}},
 	"fill-above-one.toml":             {{24, "compartment[1].fill", "outside [0, 1]"}},
-	"fill-m3-above-capacity.toml":     {{24, "compartment[1].fill_m3", "more than the tank holds (150.0 m³"}},
+	"fill-m3-above-capacity.toml":     {{24, "compartment[1].fill_m3", "more than the tank holds (142.5 m³"}},
 	"liquid-in-dry-space.toml":        {{22, "compartment[1].liquid", `only a compartment with use = "tank"`}},
 	"hole-outside-compartment.toml":   {{22, "compartment[1].hole.z", "outside the compartment's z bounds"}},
 	"unknown-criteria.toml":           {{3, "criteria[2]", `"imo-weather" is not a criteria set`}},

@@ -16,7 +16,8 @@ import (
 const FormatVersion = 1
 
 // Info is what a vessel file says beyond the engine's values: text for the
-// screen and the flooding-over-time data the engine has no types for yet.
+// screen, and each compartment's hole (an engine.Hole) and pumps, which a
+// flooding run takes when it is not told otherwise (ResolveFlood).
 type Info struct {
 	File        string // the file name used in messages ("bundled/barge.toml" for a bundled one)
 	Bundled     string // the bundled name ("barge"), "" for a file of the user's
@@ -27,13 +28,16 @@ type Info struct {
 
 	// Compartments is index-aligned with engine.Vessel.Compartments.
 	Compartments []CompartmentInfo
+	// Warnings are things in the file that are allowed but look wrong (see
+	// connections.go); the file is still used.
+	Warnings Problems
 }
 
 // CompartmentInfo is the file's extra data on one compartment.
 type CompartmentInfo struct {
-	Use   string // as in the file; also set on engine.Compartment.Use
-	Group string // the group key, or the use's default group (see FORMAT.md)
-	Hole  *Hole  // a hole in the shell into this compartment, nil if none
+	Use   string       // as in the file; also set on engine.Compartment.Use
+	Group string       // the group key, or the use's default group (see FORMAT.md)
+	Hole  *engine.Hole // a hole in the shell into this compartment (C_d filled in), nil if none
 	// PumpM3h is the pumping capacity that can be put on the compartment, m³/h.
 	PumpM3h float64
 	// DefaultPermeabilityFromUse is true when the file gave no permeability
@@ -41,22 +45,23 @@ type CompartmentInfo struct {
 	DefaultPermeabilityFromUse bool
 }
 
-// Hole is an opening in the shell through which the sea enters a
-// compartment: flow Q = Cd·A·√(2 g h), h the head across it (Torricelli).
-type Hole struct {
-	AreaM2  float64 // m²
-	X, Y, Z float64 // m, ship frame: its centre
-	Cd      float64 // discharge coefficient, 0 < Cd ≤ 1 (default 0.6)
-}
-
 // Parse reads a vessel file. file is the name used in messages. Any problem
 // in the file is returned as Problems, all of them at once.
 func Parse(file string, data []byte) (*engine.Vessel, *Info, error) {
+	if len(data) > MaxFileBytes {
+		return nil, nil, Problems{{File: file, Line: 1, Key: "syntax", Msg: errTooLarge.Error()}}
+	}
+	if p := tooDeep(file, data); p != nil {
+		return nil, nil, Problems{*p}
+	}
 	var doc map[string]any
 	if _, err := toml.Decode(string(data), &doc); err != nil {
 		return nil, nil, syntaxProblem(file, err)
 	}
 	r := &reader{file: file, lines: indexLines(string(data))}
+	if r.tooMany("", doc) {
+		return nil, nil, r.probs.sorted()
+	}
 	v, info := r.vessel(r.table("", doc))
 	if len(r.probs) > 0 {
 		return nil, nil, r.probs.sorted()
@@ -92,6 +97,8 @@ func (r *reader) vessel(root *table) (*engine.Vessel, *Info) {
 	name, ok := root.str("name", true, "the vessel's name in quotes")
 	if ok && strings.TrimSpace(name) == "" {
 		r.addf("name", "is empty: give the vessel's name")
+	} else if ok {
+		r.checkName("name", name, "vessel's name")
 	}
 	rho := engine.SeaWaterDensity
 	if d, ok := root.num("water_density", "t/m³", false); ok {
@@ -102,12 +109,14 @@ func (r *reader) vessel(root *table) (*engine.Vessel, *Info) {
 		}
 	}
 	info.Description, _ = root.str("about", false, "a description of the vessel")
+	r.checkText("about", info.Description, "the description")
 	info.Condition, _ = root.str("condition", false, "the loading condition's name")
+	r.checkName("condition", info.Condition, "condition's name")
 	info.ShipType = "cargo"
 	if s, ok := root.choice("ship_type", false, shipTypes); ok {
 		info.ShipType = s
 	}
-	criteria := append([]string(nil), DefaultCriteria...)
+	criteria := DefaultCriteria()
 	if v, ok := root.get("criteria"); ok {
 		criteria = r.criteria(v)
 	}
@@ -118,9 +127,20 @@ func (r *reader) vessel(root *table) (*engine.Vessel, *Info) {
 		r.addf("margin_line_depth", "%g m is not less than the depth %g m: the margin line lies just below the deck (SOLAS: 0.076 m)", margin, hull.DepthM)
 	}
 
-	weights := r.weights(root.entries("weight", "one item of the loading condition"))
+	weights := r.weights(root.entries("weight", "one item of the loading condition"), hull)
 	comps, cinfo := r.compartments(root.entries("compartment", "one space of the ship"), hull)
-	openings := r.openings(root.entries("opening", "a point where water would spread"))
+	openingTables := root.entries("opening", "a point where water would spread")
+	openings := r.openings(openingTables)
+	r.checkLeadsTo(openingTables, openings, comps)
+	conns, warns := r.connections(root.entries("connection", "a door, hatch, duct or pipe between two compartments"), comps, len(r.probs) == 0)
+	if hull != nil && (marginOK && margin < hull.DepthM || !root.has("margin_line_depth")) {
+		r.marginBelowKeel(hull, margin, marginOK)
+	}
+	if hull != nil {
+		r.openingsNearHull(hull, openings)
+	}
+	marks := r.draftMarks(root.entries("draft_mark", "a draft mark on the shell"), hull)
+	girder := r.girder(root, hull)
 	root.finish()
 
 	if len(r.probs) > 0 || hull == nil {
@@ -128,13 +148,16 @@ func (r *reader) vessel(root *table) (*engine.Vessel, *Info) {
 	}
 	v, err := engine.NewVessel(engine.Vessel{
 		Name: name, WaterDensity: rho, Hull: hull, Weights: weights,
-		Compartments: comps, Openings: openings, MarginLineM: margin, CriteriaSets: criteria, ShipType: info.ShipType,
+		Compartments: comps, Openings: openings, Connections: conns, MarginLineM: margin, CriteriaSets: criteria, ShipType: info.ShipType,
+		DraftMarks: marks,
+		Girder:     girder,
 	})
 	if err != nil {
 		r.addf("weight", "%v", err)
 		return nil, nil
 	}
 	info.Compartments = cinfo
+	info.Warnings = warns
 	return v, info
 }
 
@@ -245,7 +268,7 @@ func (r *reader) stations(t *table, sections []*table) ([]engine.Station, bool) 
 		ok = ok && offOK
 		out = append(out, engine.Station{X: x, Offsets: off})
 	}
-	return out, ok
+	return out, ok && !r.spanTooLong(out)
 }
 
 func (r *reader) offsets(s *table) ([]engine.Point, bool) {
@@ -286,6 +309,9 @@ func (r *reader) offsets(s *table) ([]engine.Point, bool) {
 			ok = false
 			continue
 		}
+		if r.pointTooFar(ep, y, z) {
+			ok = false
+		}
 		if y < 0 {
 			r.addf(ep, "half-breadth %g m is negative: give the starboard half, 0 or more", y)
 			ok = false
@@ -308,7 +334,7 @@ func (r *reader) offsets(s *table) ([]engine.Point, bool) {
 }
 
 // weights reads the [[weight]] tables.
-func (r *reader) weights(ts []*table) []engine.Weight {
+func (r *reader) weights(ts []*table, hull *engine.Hull) []engine.Weight {
 	if len(ts) == 0 {
 		r.addf("weight", "missing: the loading condition needs at least one [[weight]] (lightship at least) with name, mass, lcg, vcg")
 	}
@@ -318,7 +344,8 @@ func (r *reader) weights(ts []*table) []engine.Weight {
 		var w engine.Weight
 		w.Name, _ = r.name(t, names, "weight")
 		w.MassT, _ = t.positive("mass", "t", true)
-		w.LCGM, _ = t.num("lcg", "m from the aft perpendicular", true)
+		var lcgOK bool
+		w.LCGM, lcgOK = t.num("lcg", "m from the aft perpendicular", true)
 		w.TCGM, _ = t.num("tcg", "m from the centreline, + to starboard", false)
 		w.VCGM, _ = t.num("vcg", "m above the baseline", true)
 		if f, ok := t.num("fsm", "t·m", false); ok {
@@ -327,6 +354,7 @@ func (r *reader) weights(ts []*table) []engine.Weight {
 			}
 			w.FSMTm = f
 		}
+		w.ExtentM = r.weightExtent(t, w.LCGM, lcgOK, hull)
 		t.finish()
 		out = append(out, w)
 	}
@@ -343,6 +371,9 @@ func (r *reader) name(t *table, seen map[string]string, what string) (string, bo
 	p := t.keyPath("name")
 	if strings.TrimSpace(n) == "" {
 		r.addf(p, "is empty: every %s needs a name", what)
+		return n, false
+	}
+	if !r.checkName(p, n, what+"'s name") {
 		return n, false
 	}
 	if what != "weight" && strings.Contains(n, ",") {
@@ -390,7 +421,7 @@ func (r *reader) compartments(ts []*table, hull *engine.Hull) ([]*engine.Compart
 		if g, ok := t.str("group", false, "the compartment's group, e.g. \"double bottom\""); ok {
 			if strings.TrimSpace(g) == "" {
 				r.addf(t.keyPath("group"), "is empty: give a group name or leave the key out")
-			} else {
+			} else if r.checkName(t.keyPath("group"), g, "group's name") {
 				ci.Group = g
 			}
 		}
@@ -416,10 +447,11 @@ func (r *reader) compartments(ts []*table, hull *engine.Hull) ([]*engine.Compart
 		}
 		c.Use = use
 		c.Permeability = mu
+		c.PumpM3h = ci.PumpM3h
 		if liquid != nil {
 			if liquid.volumeM3 >= 0 {
-				if vol := c.Volume(); liquid.volumeM3 > vol*(1+1e-9) {
-					r.addf(t.keyPath("fill_m3"), "%g m³ is more than the tank holds (%.1f m³ inside the hull)", liquid.volumeM3, vol)
+				if vol := c.CapacityM3(); liquid.volumeM3 > vol*(1+1e-9) {
+					r.addf(t.keyPath("fill_m3"), "%g m³ is more than the tank holds (%.1f m³: permeability %g × %.1f m³ inside the hull)", liquid.volumeM3, vol, c.Permeability, c.Volume())
 				} else {
 					liquid.Fill = math.Min(liquid.volumeM3/vol, 1)
 				}
@@ -491,6 +523,7 @@ type tankLiquid struct {
 // liquid reads a tank's liquid, liquid_density and fill or fill_m3.
 func (r *reader) liquid(t *table, use string, useOK bool) *tankLiquid {
 	name, nameOK := t.str("liquid", false, "what the tank holds, e.g. \"fuel oil\"")
+	nameOK = nameOK && r.checkName(t.keyPath("liquid"), name, "liquid's name")
 	dens, densOK := t.positive("liquid_density", "t/m³", false)
 	fill, fillOK := t.num("fill", "fraction of the tank, 0 to 1", false)
 	vol, volOK := t.num("fill_m3", "m³", false)
@@ -543,7 +576,7 @@ func (r *reader) liquid(t *table, use string, useOK bool) *tankLiquid {
 }
 
 // hole reads a compartment's hole table.
-func (r *reader) hole(t *table, b engine.Box, boxOK bool) *Hole {
+func (r *reader) hole(t *table, b engine.Box, boxOK bool) *engine.Hole {
 	h, ok := t.sub("hole", false, "area, z and optionally x, y, cd")
 	if !ok {
 		return nil
@@ -589,7 +622,7 @@ func (r *reader) hole(t *table, b engine.Box, boxOK bool) *Hole {
 			return nil
 		}
 	}
-	return &Hole{AreaM2: area, X: x, Y: y, Z: z, Cd: cd}
+	return &engine.Hole{AreaM2: area, XM: x, YM: y, ZM: z, Cd: cd}
 }
 
 // openings reads the [[opening]] tables.
@@ -611,6 +644,8 @@ func (r *reader) openings(ts []*table) []engine.Opening {
 			o.Kind = k
 		}
 		o.Weathertight, _ = t.boolean("closed_weathertight")
+		o.LeadsTo = r.leadsTo(t)
+		r.openingArea(t, &o)
 		t.finish()
 		out = append(out, o)
 	}

@@ -176,16 +176,18 @@ func TestDefaultPermeability(t *testing.T) {
 	}
 }
 
-// TestTankContents reads a box tank 15 × 10 × 1 m in a box barge, given by
-// volume and by fraction: mass = ρ·volume, the centre of the liquid half way
-// up its depth, and its free-surface moment ρ·l·b³/12 of the rectangular
-// surface (closed forms, practice).
+// TestTankContents reads a box tank 15 × 10 × 1 m (permeability 0.95, the
+// default for a tank: capacity 0.95 × 150 m³, conventions) in a box barge,
+// given by volume and by fraction of the capacity: mass = ρ·volume, the
+// liquid standing at the fill's share of the depth with its centre half way
+// up, and its free-surface moment μ·ρ·l·b³/12 of the rectangular surface
+// (closed forms, practice).
 func TestTankContents(t *testing.T) {
 	for _, c := range []struct {
 		fill string
 		frac float64
 	}{
-		{"fill_m3 = 75.0", 0.5},
+		{"fill_m3 = 71.25", 0.5},
 		{"fill = 0.25", 0.25},
 		{"fill = 1.0", 1.0}, // pressed full: no free surface
 		{"fill = 0", 0},
@@ -213,8 +215,8 @@ liquid_density = 1.0
 			t.Errorf("default group of a tank = %q, want \"tanks\"", info.Compartments[0].Group)
 		}
 		m, x, _, z, fsm := v.TankContents(0)
-		vol := 150 * c.frac
-		wantFSM := 15.0 * 1000 / 12
+		vol := 0.95 * 150 * c.frac
+		wantFSM := 0.95 * 15.0 * 1000 / 12
 		if c.frac == 0 || c.frac >= engine.PressedFullFill {
 			wantFSM = 0
 		}
@@ -258,10 +260,10 @@ hole = { area = 0.05, x = 12.0, y = -5.0, z = 0.5, cd = 0.7 }
 		t.Fatalf("%d infos", len(info.Compartments))
 	}
 	s, p := info.Compartments[0], info.Compartments[1]
-	if s.Group != "wing voids" || s.PumpM3h != 90 || s.Hole == nil || *s.Hole != (Hole{AreaM2: 0.2, X: 15, Y: 4, Z: 1, Cd: DefaultCd}) {
+	if s.Group != "wing voids" || s.PumpM3h != 90 || s.Hole == nil || *s.Hole != (engine.Hole{AreaM2: 0.2, XM: 15, YM: 4, ZM: 1, Cd: DefaultCd}) {
 		t.Errorf("Wing S: %+v hole %+v", s, s.Hole)
 	}
-	if p.Group != "voids" || p.PumpM3h != 0 || p.Hole == nil || *p.Hole != (Hole{AreaM2: 0.05, X: 12, Y: -5, Z: 0.5, Cd: 0.7}) {
+	if p.Group != "voids" || p.PumpM3h != 0 || p.Hole == nil || *p.Hole != (engine.Hole{AreaM2: 0.05, XM: 12, YM: -5, ZM: 0.5, Cd: 0.7}) {
 		t.Errorf("Wing P: %+v hole %+v", p, p.Hole)
 	}
 }
@@ -448,13 +450,14 @@ func TestFormatExample(t *testing.T) {
 	if v.Name != "Pontoon P-40" || len(v.Compartments) != 2 || len(v.Openings) != 2 || info.Compartments[1].Hole == nil {
 		t.Errorf("example read as %q with %d compartments, %d openings", v.Name, len(v.Compartments), len(v.Openings))
 	}
-	// Box pontoon: Δ = 320 t + 0.5 × 32 × 10 × 0.8 m³ of sea water, and the
-	// draft ρLBT closed form (practice).
+	// Box pontoon: Δ = 320 t + 0.5 × 0.95 × 32 × 10 × 0.8 m³ of sea water
+	// (half the capacity μ × volume, μ = 0.95 for a tank), and the draft
+	// ρLBT closed form (practice).
 	pos, err := engine.Solve(v, v.Intact())
 	if err != nil {
 		t.Fatal(err)
 	}
-	mass := 320 + 0.5*32*10*0.8*1.025
+	mass := 320 + 0.5*0.95*32*10*0.8*1.025
 	if T := mass / (1.025 * 40 * 10); math.Abs(pos.DraftMidM-T) > 1e-9 {
 		t.Errorf("draft amidships %.12g, want %.12g", pos.DraftMidM, T)
 	}

@@ -38,9 +38,10 @@ var criteriaSets = engine.CriteriaSetIDs()
 // shipTypes are the accepted values of ship_type.
 var shipTypes = []string{"cargo", "passenger"}
 
-// DefaultCriteria is the criteria list of a file without a criteria key:
-// the IMO 2008 IS Code Part A 2.2 intact criteria.
-var DefaultCriteria = []string{"is-code-2008"}
+// DefaultCriteria returns the criteria list of a file without a criteria
+// key: the IMO 2008 IS Code Part A 2.2 intact criteria. Each call returns a
+// new slice.
+func DefaultCriteria() []string { return []string{"is-code-2008"} }
 
 // DefaultCd is the discharge coefficient of a hole when the file gives none
 // (sharp-edged orifice, practice): the engine's.

@@ -7,6 +7,7 @@
 //	heelwatch check FILE            validate a vessel file and summarise it
 //	heelwatch vessels               the bundled vessels
 //	heelwatch flood …               flooding through a hole over time
+//	heelwatch diagnose --readings R what is flooding, from the crew's readings
 //
 // Run any command with --help for its flags. Exit status: 0 done, 1 bad
 // input (a vessel file that cannot be used), 2 bad usage, 3 no equilibrium
@@ -43,7 +44,7 @@ const (
 )
 
 func main() {
-	os.Exit(run(os.Args[1:], os.Stdout, os.Stderr))
+	os.Exit(guarded(os.Args[1:], os.Stdout, os.Stderr))
 }
 
 const mainHelp = `heelwatch: how the ship will lie when compartments flood.
@@ -54,6 +55,8 @@ Usage:
   heelwatch check [FILE|NAME ...]    validate vessel files and summarise them
   heelwatch vessels [NAME]           list the bundled vessels, or print one's file
   heelwatch flood [flags]            flooding through a hole over time
+  heelwatch diagnose --readings FILE what is flooding, from the crew's readings
+  heelwatch drill SCENARIO           a damage-control exercise (--run: headless)
   heelwatch help [COMMAND]           help on a command
 
 Flags:
@@ -65,6 +68,9 @@ Flags:
                        vision) or mono; NO_COLOR in the environment means mono
   --reports DIR        dashboard: where its report key writes Markdown reports
                        (default: the working directory)
+  --open A,B           dashboard: start with these compartments open to the sea
+                       (names ignore case; the undo key brings her back intact)
+  --perm NAME=μ,...    dashboard: their permeability, as solve's --perm
   --version            print heelwatch's version
   --help               this help
 
@@ -87,6 +93,8 @@ func run(args []string, stdout, stderr io.Writer) int {
 	fs.StringVar(&dash.logFile, "log", "", "")
 	fs.StringVar(&dash.palette, "palette", "day", "")
 	fs.StringVar(&dash.reportDir, "reports", "", "")
+	fs.Var(&dash.open, "open", "")
+	fs.Var(&dash.perm, "perm", "")
 	if err := fs.Parse(args); err != nil {
 		return usageError(err, stdout, stderr, "", func(w io.Writer) { fmt.Fprintf(w, mainHelp, vessels.Default) })
 	}
@@ -97,6 +105,10 @@ func run(args []string, stdout, stderr io.Writer) int {
 	rest := fs.Args()
 	if len(rest) == 0 {
 		return runDashboard(*vessel, dash, stdout, stderr)
+	}
+	if len(dash.open)+len(dash.perm) > 0 {
+		fmt.Fprintf(stderr, "heelwatch: --open and --perm before %q are the dashboard's: give them after the command\n", rest[0])
+		return exitUsage
 	}
 	cmd, rest := rest[0], rest[1:]
 	withVessel := func(a []string) []string {
@@ -114,6 +126,10 @@ func run(args []string, stdout, stderr io.Writer) int {
 		return runVessels(rest, stdout, stderr)
 	case "flood":
 		return runFlood(withVessel(rest), stdout, stderr)
+	case "diagnose":
+		return runDiagnose(withVessel(rest), stdout, stderr)
+	case "drill":
+		return runDrill(rest, stdout, stderr)
 	case "help":
 		if len(rest) == 0 {
 			fmt.Fprintf(stdout, mainHelp, vessels.Default)
@@ -122,10 +138,10 @@ func run(args []string, stdout, stderr io.Writer) int {
 		if len(rest) == 1 && rest[0] != "help" {
 			return run([]string{rest[0], "--help"}, stdout, stderr)
 		}
-		fmt.Fprintf(stderr, "heelwatch help: name one command: solve, check, vessels or flood\n")
+		fmt.Fprintf(stderr, "heelwatch help: name one command: solve, check, vessels, flood, diagnose or drill\n")
 		return exitUsage
 	}
-	fmt.Fprintf(stderr, "heelwatch: no command %q; the commands are solve, check, vessels, flood and help\n", cmd)
+	fmt.Fprintf(stderr, "heelwatch: no command %q; the commands are solve, check, vessels, flood, diagnose, drill and help\n", cmd)
 	return exitUsage
 }
 
@@ -203,6 +219,9 @@ func openVessel(nameOrPath string, stderr io.Writer) (*engine.Vessel, *vessels.I
 	}
 	if info == nil {
 		info = &vessels.Info{File: nameOrPath}
+	}
+	for _, w := range info.Warnings {
+		fmt.Fprintln(stderr, "warning:", w.String())
 	}
 	return v, info, exitOK
 }

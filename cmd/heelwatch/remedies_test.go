@@ -137,12 +137,13 @@ func TestSolveRemediesJSON(t *testing.T) {
 		})
 	}
 
-	// The barge: Wing P filled from the sea to 98 % takes 0.98·280 m³ at
-	// 1.025 t/m³ at y = −7 m, z = 1 + 0.98·7/2 m. By hand: Δ, KG and TCG by
+	// The barge: Wing P filled from the sea to 98 % of its capacity
+	// (μ 0.95 × 280 m³, conventions) takes 0.98·0.95·280 m³ at 1.025 t/m³ at
+	// y = −7 m, z = 1 + 0.98·7/2 m. By hand: Δ, KG and TCG by
 	// moments, T = Δ/(ρLB), KB = T/2, BM = B²/(12T) (practice), and the heel
 	// from GM·tanθ + ½BM·tan³θ = TCG, the wall-sided formula.
 	_, m := solveJSON(t, "--vessel", remedyBargeFile(t, 0.08, 5.0), "--remedies")
-	w := 0.98 * 280 * 1.025
+	w := 0.98 * 0.95 * 280 * 1.025
 	disp := 4592 + w
 	kg := (4592*5.0 + w*(1+0.98*7/2)) / disp
 	tcg := (4592*0.08 - w*7) / disp

@@ -1,0 +1,90 @@
+package vessels_test
+
+import (
+	"errors"
+	"strings"
+	"testing"
+
+	"heelwatch/engine"
+	"heelwatch/vessels"
+)
+
+func TestBundledScenariosRead(t *testing.T) {
+	list := vessels.BundledScenarios()
+	if len(list) < 2 {
+		t.Fatalf("bundled scenarios: %v", list)
+	}
+	for _, b := range list {
+		sc, err := vessels.OpenScenario(b.Name)
+		if err != nil {
+			t.Fatalf("%s: %v", b.Name, err)
+		}
+		if sc.Minutes <= 0 || len(sc.Events) == 0 || sc.Vessel == nil {
+			t.Errorf("%s: %+v", b.Name, sc)
+		}
+		breaches := 0
+		for _, e := range sc.Events {
+			if e.Kind == engine.DrillBreach {
+				breaches++
+			}
+		}
+		if breaches == 0 {
+			t.Errorf("%s: no breach", b.Name)
+		}
+	}
+}
+
+const goodHead = "format = 1\nvessel = \"freighter\"\nminutes = 30\n"
+
+// TestScenarioRefused: bad scenarios are refused with file, line and key.
+func TestScenarioRefused(t *testing.T) {
+	cases := []struct {
+		name, src, key string
+		line           int
+		msg            string
+	}{
+		{"out of order", goodHead + "[[event]]\nminutes = 5\nkind = \"note\"\ntext = \"a\"\n[[event]]\nminutes = 3\nkind = \"note\"\ntext = \"b\"\n",
+			"event[2].minutes", 9, "time order"},
+		{"unknown compartment", goodHead + "[[event]]\nminutes = 1\nkind = \"breach\"\ncompartment = \"Hold 9\"\narea = 0.1\n",
+			"event[1].compartment", 7, "not a compartment"},
+		{"past the end", goodHead + "[[event]]\nminutes = 31\nkind = \"note\"\ntext = \"late\"\n",
+			"event[1].minutes", 5, "past the end"},
+		{"unknown kind", goodHead + "[[event]]\nminutes = 1\nkind = \"flood\"\n",
+			"event[1].kind", 6, "not one of"},
+		{"breach without area", goodHead + "[[event]]\nminutes = 1\nkind = \"breach\"\ncompartment = \"Hold 1\"\n",
+			"event[1].area", 4, "missing"},
+		{"hole above the compartment", goodHead + "[[event]]\nminutes = 1\nkind = \"breach\"\ncompartment = \"Hold 1\"\narea = 0.1\nz = 12\n",
+			"event[1].z", 9, "outside"},
+		{"note without text", goodHead + "[[event]]\nminutes = 1\nkind = \"note\"\n",
+			"event[1].text", 4, "missing"},
+		{"unknown key", goodHead + "[[event]]\nminutes = 1\nkind = \"note\"\ntext = \"x\"\ncolour = 3\n",
+			"event[1].colour", 8, "unknown"},
+		{"area on a note", goodHead + "[[event]]\nminutes = 1\nkind = \"note\"\ntext = \"x\"\narea = 3\n",
+			"event[1].area", 8, "takes no area"},
+		{"no vessel", "format = 1\nminutes = 30\n", "vessel", 1, "missing"},
+		{"unknown vessel", "format = 1\nvessel = \"tug\"\nminutes = 30\n", "vessel", 2, "no bundled vessel"},
+		{"pump without capacity on a space with none", goodHead + "[[event]]\nminutes = 1\nkind = \"pump\"\ncompartment = \"Bosun store\"\nstate = \"starts\"\n",
+			"event[1].capacity_m3h", 4, "capacity"},
+		{"connection the vessel lacks", goodHead + "[[event]]\nminutes = 1\nkind = \"connection\"\nconnection = \"WT door 9\"\nopen = true\n",
+			"event[1].connection", 7, "not a connection"},
+		{"alarm in no compartment", goodHead + "alarms = [\"Hold 7\"]\n", "alarms[1]", 4, "not a compartment"},
+	}
+	for _, c := range cases {
+		t.Run(c.name, func(t *testing.T) {
+			_, err := vessels.ParseScenario("drill.toml", []byte(c.src), "")
+			var ps vessels.Problems
+			if !errors.As(err, &ps) {
+				t.Fatalf("want Problems, got %v", err)
+			}
+			for _, p := range ps {
+				if p.Key == c.key {
+					if p.File != "drill.toml" || p.Line != c.line || !strings.Contains(p.Msg, c.msg) {
+						t.Errorf("got %s; want line %d and %q", p, c.line, c.msg)
+					}
+					return
+				}
+			}
+			t.Errorf("no problem at %s in:\n%v", c.key, err)
+		})
+	}
+}
