@@ -76,6 +76,7 @@ type Drill struct {
 	inPlay []bool    // holed once, or holding water
 	open   []bool    // equalised: open to the sea
 	holes  [][]Hole
+	inlet  []*Hole // a sea inlet opened to counter-flood, per compartment
 	pumps  []float64 // m³/s per compartment
 	conns  map[string]bool
 
@@ -119,7 +120,7 @@ func NewDrill(v *Vessel, base Damage, events []DrillEvent, endMin float64) (*Dri
 	}
 	d := &Drill{v: v, base: b, endMin: endMin, events: ev,
 		water: make([]float64, n), inPlay: make([]bool, n), open: make([]bool, n),
-		holes: make([][]Hole, n), pumps: make([]float64, n), conns: map[string]bool{}, dt: 5}
+		holes: make([][]Hole, n), inlet: make([]*Hole, n), pumps: make([]float64, n), conns: map[string]bool{}, dt: 5}
 	for i, s := range b {
 		if s.WaterM3 > 0 {
 			d.water[i], d.inPlay[i] = s.WaterM3, true
@@ -135,12 +136,15 @@ func checkDrillEvent(v *Vessel, e DrillEvent, endMin float64) error {
 	if !(e.Minutes >= 0 && e.Minutes <= endMin) {
 		return fmt.Errorf("drill: event %s at %v min: outside the drill's 0…%g min", e.Kind, e.Minutes, endMin)
 	}
-	needComp := e.Kind == DrillBreach || e.Kind == DrillPump || e.Kind == DrillMark
+	needComp := e.Kind == DrillBreach || e.Kind == DrillPump || e.Kind == DrillMark || e.Kind == DrillCounterflood
 	if needComp && (e.Compartment < 0 || e.Compartment >= len(v.Compartments)) {
 		return fmt.Errorf("drill: event %s at %v min: no compartment %d", e.Kind, e.Minutes, e.Compartment)
 	}
 	switch e.Kind {
-	case DrillBreach:
+	case DrillBreach, DrillCounterflood:
+		if e.Kind == DrillCounterflood && !e.Open {
+			break
+		}
 		h := e.Hole
 		if !(h.AreaM2 > 0) || math.IsInf(h.AreaM2, 0) || !(h.Cd > 0 && h.Cd <= 1) {
 			return fmt.Errorf("drill: breach at %v min: hole area %v m² and C_d %v must be positive (C_d at most 1)", e.Minutes, h.AreaM2, h.Cd)
@@ -233,14 +237,23 @@ func (d *Drill) apply(e DrillEvent) {
 	}
 	i := e.Compartment
 	switch e.Kind {
+	case DrillCounterflood:
+		if !e.Open {
+			d.inlet[i] = nil
+			if d.open[i] {
+				d.open[i] = false
+				if d.pos != nil {
+					d.water[i] = d.mu(i) * d.v.Compartments[i].solid.Below(d.pos.Plane).V
+				}
+			}
+			break
+		}
+		h := e.Hole
+		d.inlet[i] = &h
+		d.enter(i)
 	case DrillBreach:
 		d.holes[i] = append(d.holes[i], e.Hole)
-		if !d.inPlay[i] {
-			d.inPlay[i] = true
-			if m := d.v.tanks[i].massT; m > 0 && d.water[i] == 0 {
-				d.water[i] = math.Min(m/d.v.WaterDensity, d.capacity(i))
-			}
-		}
+		d.enter(i)
 	case DrillPump:
 		d.pumps[i] = e.PumpM3h / 3600
 		if d.open[i] && d.pumps[i] > 0 {
@@ -257,6 +270,26 @@ func (d *Drill) apply(e DrillEvent) {
 		d.resolve()
 	}
 	d.record(e.Label(d.v))
+}
+
+// enter puts compartment i in play: a tank holed with contents starts
+// with them in, as sea water of the same mass (as in FloodRun).
+func (d *Drill) enter(i int) {
+	if d.inPlay[i] {
+		return
+	}
+	d.inPlay[i] = true
+	if m := d.v.tanks[i].massT; m > 0 && d.water[i] == 0 {
+		d.water[i] = math.Min(m/d.v.WaterDensity, d.capacity(i))
+	}
+}
+
+// holesOf returns the holes into compartment i, its sea inlet included.
+func (d *Drill) holesOf(i int) []Hole {
+	if d.inlet[i] == nil {
+		return d.holes[i]
+	}
+	return append(append([]Hole(nil), d.holes[i]...), *d.inlet[i])
 }
 
 func (d *Drill) mu(i int) float64       { return d.v.Permeability(d.base, i) }
@@ -304,7 +337,7 @@ func (d *Drill) eval(w []float64) drillEval {
 		wm := math.Min(math.Max(wi, floodFloorFrac*d.capacity(i))/d.mu(i), c.solid.Volume()*(1-1e-9))
 		pin, _ := levelForVolume(c.solid, wm, p.B, p.C)
 		var q float64
-		for _, h := range d.holes[i] {
+		for _, h := range d.holesOf(i) {
 			dSea := -p.Height(h.XM, h.YM, h.ZM)
 			dIn := -pin.Height(h.XM, h.YM, h.ZM)
 			if wi <= 0 {
@@ -441,7 +474,7 @@ func (d *Drill) integrate(stop float64) {
 // with no pump running, as open to the sea.
 func (d *Drill) equalise(e drillEval) {
 	for i := range d.water {
-		if !d.inPlay[i] || d.open[i] || d.pumps[i] > 0 || len(d.holes[i]) == 0 {
+		if !d.inPlay[i] || d.open[i] || d.pumps[i] > 0 || len(d.holesOf(i)) == 0 {
 			continue
 		}
 		ok := true
@@ -449,7 +482,7 @@ func (d *Drill) equalise(e drillEval) {
 		for _, h := range e.heads[i] {
 			ok = ok && math.Abs(h) <= FloodHeadTolM
 		}
-		for _, h := range d.holes[i] {
+		for _, h := range d.holesOf(i) {
 			wet = wet || -e.pos.Plane.Height(h.XM, h.YM, h.ZM) > 0
 		}
 		if ok && wet && d.water[i] > 0 {

@@ -72,6 +72,7 @@ const (
 	pickMark
 	pickPump
 	pickStop
+	pickCounter
 	pickBreach // instructor
 	pickFail   // instructor
 )
@@ -89,6 +90,7 @@ type drillModel struct {
 	status  string
 	marks   map[int]bool    // the crew's picture: marked flooded
 	ordered map[int]float64 // pumps the crew ordered on, m³/h
+	inlets  map[int]bool    // sea inlets the crew opened to counter-flood
 
 	pick     pickFor
 	pickList []int
@@ -129,7 +131,7 @@ func newDrillModel(sc *vessels.Scenario, opts DrillOptions) (*drillModel, error)
 	}
 	in := newTextField()
 	in.CharLimit = 200
-	return &drillModel{sc: sc, d: d, speed: opts.Speed, opts: opts, marks: map[int]bool{}, ordered: map[int]float64{},
+	return &drillModel{sc: sc, d: d, speed: opts.Speed, opts: opts, marks: map[int]bool{}, ordered: map[int]float64{}, inlets: map[int]bool{},
 		input: in, w: 80, h: 24, debrief: viewport.New(80, 20)}, nil
 }
 
@@ -242,6 +244,8 @@ func (m *drillModel) key(k tea.KeyMsg) (tea.Model, tea.Cmd) {
 		m.startPick(pickMark, all)
 	case s == "p" && m.mode == drillCrew:
 		m.startPick(pickPump, all)
+	case s == "c" && m.mode == drillCrew:
+		m.startPick(pickCounter, all)
 	case s == "g" && m.mode == drillCrew && !m.diagnosing:
 		m.diagnosing = true
 		m.status = "Diagnosing from our readings…"
@@ -336,6 +340,23 @@ func (m *drillModel) chosen(p pickFor, i int) {
 		delete(m.ordered, i)
 		m.decide(engine.DrillEvent{Kind: engine.DrillPump, By: engine.ByCrew, Compartment: i})
 		m.status = "Pumping stopped on " + name + "."
+	case pickCounter:
+		h, err := vessels.CounterfloodInlet(v, i, vessels.CounterfloodAreaM2)
+		if err != nil {
+			m.status = err.Error()
+			return
+		}
+		open := !m.inlets[i]
+		m.inlets[i] = open
+		if !open {
+			delete(m.inlets, i)
+		}
+		m.decide(engine.DrillEvent{Kind: engine.DrillCounterflood, By: engine.ByCrew, Compartment: i, Hole: h, Open: open})
+		if open {
+			m.status = fmt.Sprintf("Sea inlet opened into %s (%.2f m²).", name, h.AreaM2)
+		} else {
+			m.status = "Sea inlet into " + name + " shut."
+		}
 	case pickBreach:
 		m.pickComp = i
 		m.ask("breach", "Breach in "+name+": area m² [height z m]: ")
@@ -508,7 +529,10 @@ func (m *drillModel) footer() string {
 	case m.mode == drillInstructor:
 		s = "b breach · f pump fails · n note · D debrief · i crew · space pause · +/- speed · q quit"
 	default:
-		s = "m mark · p pump · s stop pump · g diagnose · space pause · +/- speed · i instructor"
+		s = "m mark · p pump · s stop pump · c counter-flood · g diagnose · space pause · +/- speed · i instructor · q quit"
+		if m.w < 110 {
+			s = "m mark·p pump·s stop·c counter-flood·g diagnose·space pause·+/- speed·i instr.·q quit"
+		}
 	}
 	if m.status != "" && m.asking == "" && m.pick == pickNone {
 		s = m.status + " · " + s

@@ -129,6 +129,15 @@ func (m *drillModel) crewPicture(w int) []string {
 	}
 	out = append(out, clipText("  Marked flooded: "+strings.Join(marked, ", "), w))
 	out = append(out, clipText("  Pumps ordered:  "+strings.Join(pumps, ", "), w))
+	var inl []string
+	for i, c := range v.Compartments {
+		if m.inlets[i] {
+			inl = append(inl, c.Name)
+		}
+	}
+	if len(inl) > 0 {
+		out = append(out, clipText("  Counter-flooding: "+strings.Join(inl, ", "), w))
+	}
 	return out
 }
 
@@ -137,6 +146,7 @@ func (m *drillModel) crewPicture(w int) []string {
 func (m *drillModel) pickerView(w, h int) []string {
 	v := m.d.Vessel()
 	title := map[pickFor]string{pickMark: "Mark flooded / dry", pickPump: "Start pumping on", pickStop: "Stop pumping on",
+		pickCounter: "Counter-flood: open / shut the sea inlet into",
 		pickBreach: "Breach in (instructor)", pickFail: "Pump fails on (instructor)"}[m.pick]
 	out := []string{lipgloss.NewStyle().Bold(true).Render(title)}
 	rows := max(1, h-1)
@@ -144,7 +154,7 @@ func (m *drillModel) pickerView(w, h int) []string {
 	for k := top; k < len(m.pickList) && k < top+rows; k++ {
 		i := m.pickList[k]
 		mark := " "
-		if m.pick == pickMark && m.marks[i] {
+		if (m.pick == pickMark && m.marks[i]) || (m.pick == pickCounter && m.inlets[i]) {
 			mark = "✓"
 		}
 		line := fmt.Sprintf("  %s %s", mark, v.Compartments[i].Name)

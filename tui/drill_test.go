@@ -6,6 +6,7 @@ import (
 	"testing"
 
 	tea "github.com/charmbracelet/bubbletea"
+	"github.com/charmbracelet/lipgloss"
 
 	"heelwatch/engine"
 	"heelwatch/vessels"
@@ -53,6 +54,15 @@ func TestDrillCrewViewHidesTruth(t *testing.T) {
 			check := func(where string) {
 				s := m.View()
 				screens++
+				lines := strings.Split(s, "\n")
+				if len(lines) > size[1] {
+					t.Errorf("%s: %d lines on a screen of %d", where, len(lines), size[1])
+				}
+				for _, l := range lines {
+					if lipgloss.Width(l) > size[0] {
+						t.Errorf("%s: a line of %d columns on a screen of %d: %q", where, lipgloss.Width(l), size[0], l)
+					}
+				}
 				if m.mode != drillCrew {
 					t.Fatalf("%s: not the crew's view", where)
 				}
