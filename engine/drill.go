@@ -76,7 +76,7 @@ type Drill struct {
 	inPlay []bool    // holed once, or holding water
 	open   []bool    // equalised: open to the sea
 	holes  [][]Hole
-	inlet  []*Hole // a sea inlet opened to counter-flood, per compartment
+	inlet  []*Hole   // a sea inlet opened to counter-flood, per compartment
 	pumps  []float64 // m³/s per compartment
 	conns  map[string]bool
 
