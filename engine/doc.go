@@ -47,6 +47,13 @@
 //     run: Torricelli inflow, the re-solve at each evaluation, stopping),
 //     dormand_prince.go (the integrator), flood_events.go, flood_end.go,
 //     flood_report.go (table, trace, intermediate stages) and shell_hole.go.
+//   - Water spreading through the ship: connection.go (doors, ducts,
+//     pipes and cross-flooding fittings between compartments), spread.go
+//     (the final state of progressive flooding, to a fixed point),
+//     crossflood.go (the MSC.362(92) time to equalise), network.go (a run
+//     through the ship: the case and the flow law of each path),
+//     network_run.go (the run, its events and report) and
+//     network_stepper.go (its linearly implicit Rosenbrock integrator).
 //   - One root-finder for functions that cost a solve per value:
 //     illinois.go (the vanishing angle, flooding events, righting options).
 //

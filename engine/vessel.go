@@ -48,6 +48,7 @@ type Opening struct {
 	// Into a compartment already flooded it is no point of progressive
 	// flooding (see leads.go).
 	LeadsTo string
+	AreaM2  float64 // flow area for a run through it, m²; 0: DefaultOpeningAreaM2 (connection.go)
 }
 
 // Vessel is one ship with one loading condition. Build it with NewVessel.
@@ -58,6 +59,7 @@ type Vessel struct {
 	Weights      []Weight
 	Compartments []*Compartment
 	Openings     []Opening
+	Connections  []Connection // ways for water between compartments (connection.go)
 	MarginLineM  float64      // margin line's depth below the deck at side, m
 	CriteriaSets []string     // the criteria sets she is held to (see criteria.go)
 	ShipType     string       // "cargo" or "passenger" (SOLAS s's heel limits); "" is cargo
@@ -93,6 +95,10 @@ func NewVessel(v Vessel) (*Vessel, error) {
 	v.Compartments = append([]*Compartment(nil), v.Compartments...)
 	v.Openings = append([]Opening(nil), v.Openings...)
 	v.CriteriaSets = append([]string(nil), v.CriteriaSets...)
+	v.Connections = append([]Connection(nil), v.Connections...)
+	if err := checkConnections(&v); err != nil {
+		return nil, err
+	}
 	if err := checkMarks(v.Hull, v.DraftMarks); err != nil {
 		return nil, err
 	}

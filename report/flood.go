@@ -23,6 +23,9 @@ type Flood struct {
 	HoleFrom   string   // where the hole came from: "command line", "vessel file", …
 	PumpsFrom  string   // where the pumps came from: "command line", "vessel file" or "none"
 	Version    string   // heelwatch's version
+	// Network is the run through the ship (network.go), nil when the water
+	// goes nowhere beyond the holed compartment.
+	Network *engine.NetworkReport
 	// Passenger: the vessel is a passenger ship, whose margin line is
 	// watched; on a cargo ship the line is the deck edge alone.
 	Passenger bool
@@ -219,8 +222,10 @@ func FloodText(w io.Writer, f Flood) error {
 		}
 	}
 	fmt.Fprintf(&b, "\n%d steps (%d rejected), %d solves. Decision support only: the ship's approved stability information governs.\n", r.Steps, r.Rejected, r.Solves)
-	_, err := io.WriteString(w, b.String())
-	return err
+	if _, err := io.WriteString(w, b.String()); err != nil || f.Network == nil {
+		return err
+	}
+	return NetworkText(w, *f.Network)
 }
 
 func tableEvent(s engine.FloodSample) string {

@@ -33,7 +33,7 @@ type floodDoc struct {
 	Table        []floodRowDoc `json:"table"`
 	Stages       []floodStDoc  `json:"stages"`
 	StagesOfM3   Num           `json:"stages_of_m3"`
-	Final        floodRowDoc   `json:"final"`
+	Final        floodFinalDoc `json:"final"`
 	LostBuoyancy *floodPosDoc  `json:"lost_buoyancy"`
 	LBReason     string        `json:"lost_buoyancy_reason"`
 	LBWaterM3    Num           `json:"lost_buoyancy_water_m3"`
@@ -41,6 +41,9 @@ type floodDoc struct {
 	Trace        []floodRowDoc `json:"trace"`
 	Solver       floodSolver   `json:"solver"`
 	Version      string        `json:"heelwatch_version"`
+	// Compartments: each compartment that took water (network.go).
+	Compartments []NetCompDoc `json:"compartments"`
+	Network      *NetworkDoc  `json:"network"` // the run through the ship; null when the water goes nowhere else
 }
 
 type floodHoleDoc struct {
@@ -84,6 +87,14 @@ type floodRowDoc struct {
 	Position  *floodPosDoc   `json:"position"`
 	NoEq      string         `json:"no_equilibrium"`
 	Criteria  []CriterionDoc `json:"criteria,omitempty"`
+}
+
+// floodFinalDoc is the run's last state: a row of the table, and the end
+// position in the shape of solve's `equilibrium` (heelwatch conventions;
+// its keys absent when there is no floating position).
+type floodFinalDoc struct {
+	floodRowDoc
+	*Equilibrium
 }
 
 type floodStDoc struct {
@@ -151,7 +162,7 @@ func FloodJSON(w io.Writer, f Flood) error {
 		End: r.End.String(), EndS: Num(r.EndS), EndReason: r.EndReason, Spills: buildSpills(r.Spills),
 		SteadyHeadM: Num(r.SteadyHeadM), PumpsHold: r.PumpsHoldLevel, FinalWaterM3: Num(r.FinalWaterM3),
 		Events: []floodEvDoc{}, Table: []floodRowDoc{}, Stages: []floodStDoc{}, Trace: []floodRowDoc{},
-		StagesOfM3: Num(r.StagesOfM3), Final: rowDoc(r.Final), LostBuoyancy: posDoc(r.LostBuoyancy),
+		StagesOfM3: Num(r.StagesOfM3), Final: floodFinalDoc{rowDoc(r.Final), EquilibriumOf(r.Final.Position)}, LostBuoyancy: posDoc(r.LostBuoyancy),
 		LBWaterM3: Num(r.LostBuoyancyWaterM3),
 		Solver:    floodSolver{r.Steps, r.Rejected, r.Solves}, Version: f.Version,
 	}
@@ -184,6 +195,7 @@ func FloodJSON(w io.Writer, f Flood) error {
 		}
 		doc.Stages = append(doc.Stages, st)
 	}
+	doc.Compartments, doc.Network = networkKeys(f)
 	enc := json.NewEncoder(w)
 	enc.SetIndent("", "  ")
 	return enc.Encode(doc)

@@ -37,7 +37,9 @@ type Document struct {
 	GZ          GZ           `json:"gz"`
 	Hand        *Hand        `json:"hand"`
 	Flags       []FlagDoc    `json:"flags"`
-	Spills      []SpillDoc   `json:"spills"` // non-water contents of holed tanks that may escape
+	Flooded     []string     `json:"flooded"`          // every compartment holding sea water in the final state
+	Spread      *SpreadDoc   `json:"spread,omitempty"` // how it spread through connections and openings
+	Spills      []SpillDoc   `json:"spills"`           // non-water contents of holed tanks that may escape
 	DraftMarks  []MarkDoc    `json:"draft_marks"`
 	// MarksSurvey: the marks carried to the perpendiculars (draftmarks.go).
 	MarksSurvey *SurveyDoc   `json:"marks_to_perpendiculars"`
@@ -297,6 +299,7 @@ func Build(r Report) Document {
 		d.Remedies, d.RemediesSummary, d.RemediesLoll, d.RemediesCaution = &list, rs.Summary, &loll, RemediesCaution
 	}
 	d.Criteria = append(d.Criteria, CriterionDocs(a.Criteria)...)
+	d.Flooded, d.Spread = flooded(r), buildSpread(r)
 	return d
 }
 

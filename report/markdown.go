@@ -199,6 +199,7 @@ func markdownCondition(e *errWriter, r Report, doc Document) {
 			e.line("| ", md(h.Name), " | ", num(float64(h.WaterM3), 1, "m³"), " |")
 		}
 	}
+	markdownSpread(e, r)
 	e.line()
 }
 

@@ -43,6 +43,9 @@ type Report struct {
 	// state (engine.FindRemedies), shown after the flags; nil leaves them
 	// out of every format.
 	Remedies *engine.RemedySet
+	// Spread, when set, is how flooding spread through connections and
+	// openings (engine.Progressive); Assessment is then of its final state.
+	Spread *engine.Spread
 	// IntactStrength is the hull girder of the same ship intact, shown
 	// beside a damaged state's (nil when intact or not worked out).
 	IntactStrength *engine.Strength

@@ -43,6 +43,7 @@ func Text(w io.Writer, r Report) error {
 		}
 		writeLines(e, t.lines("  "))
 	}
+	writeSpread(e, r)
 	e.line()
 
 	p := a.Position

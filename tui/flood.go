@@ -60,7 +60,8 @@ type floodState struct {
 	track     []floodPoint // the progress so far
 	rep       *engine.FloodReport
 	err       string
-	stage     int // the stage the stage key shows nex
+	stage     int                   // the stage the stage key shows nex
+	net       *engine.NetworkReport // the run through the ship, once it has ended (flood_network.go); nil if none
 
 	// What the panel draws with, given by with before each use.
 	v          *engine.Vessel
@@ -150,7 +151,7 @@ func (m model) startFlood(q floodRequest) (tea.Model, tea.Cmd) {
 	f.latest.Store(int64(f.seq))
 	f.show, f.running, f.finishing = true, true, false
 	m.rem.show = false // the run's panel in its place
-	f.req, f.hole, f.prog, f.track, f.rep, f.err, f.stage = q, engine.Hole{}, engine.FloodProgress{}, nil, nil, "", 0
+	f.req, f.hole, f.prog, f.track, f.rep, f.err, f.stage, f.net = q, engine.Hole{}, engine.FloodProgress{}, nil, nil, "", 0, nil
 	m.keys.RunStage.SetEnabled(false)
 	name := m.v.Compartments[q.ci].Name
 	what := fmt.Sprintf("flooding run: %s through %s m² at z %s m, C_d %s, pumps %s m³/h",
@@ -217,7 +218,7 @@ func (m model) takeFloodReport(msg floodDoneMsg) (tea.Model, tea.Cmd) {
 	f.rep = &rep
 	f.hole = rep.Hole
 	m.keys.RunStage.SetEnabled(len(rep.Stages) > 0)
-	return m, m.addLog(m.now(), "flooding run of "+name+" → "+outcomeText(rep))
+	return m, tea.Batch(m.addLog(m.now(), "flooding run of "+name+" → "+outcomeText(rep)), netCmd(f.req.flood.Case, rep, f.seq, f.latest))
 }
 
 // applyStage puts the run's next stage on the dashboard: the flooded

@@ -333,6 +333,9 @@ func timeUnit(T float64) (scale float64, unit string) {
 // was made, with the events marked by their letters; while the run
 // computes, the water so far.
 func (p floodState) plot(w, h int) []string {
+	if p.net != nil {
+		return p.netPlot(w, h)
+	}
 	st := p.st
 	f := p
 	const rightW = 6

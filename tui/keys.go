@@ -76,7 +76,7 @@ func (k keyMap) FullHelp() [][]key.Binding {
 	stage.SetEnabled(true)
 	return [][]key.Binding{
 		{k.Up, k.Down, say(k.Top, "home", "first"), say(k.Bottom, "end", "last"), say(k.Picture, "tab", "next picture"),
-			say(k.HoleRun, "f", "hole & pumps"), say(k.RunPanel, "t", "run panel")},
+			say(k.HoleRun, "f", "hole & pumps"), say(k.RunPanel, "t", "run panel"), doorsKey},
 		{say(k.Flood, "space", "open to sea / intact"), say(k.MuUp, "+ −", "permeability ±0.05"),
 			say(k.MuSet, "m", "type a permeability"), k.Undo, k.Reset, stage,
 			say(k.Remedies, "o", "righting options"), say(k.Girder, "b", "hull girder (l: limits)"),

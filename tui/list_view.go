@@ -128,6 +128,9 @@ func (m model) listView(w, h int) []string {
 		i := row.idx
 		c := m.v.Compartments[i]
 		word, mark := spaceState(m.damage, i)
+		if sw, sm := spreadState(m.cur, m.damage, i); sw != "" {
+			word, mark = sw, sm
+		}
 		risk := ""
 		style := st.Text
 		switch {

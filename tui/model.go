@@ -83,6 +83,7 @@ type model struct {
 	rem    remedyState  // the righting options and their panel
 	girder girderPanel  // the hull girder's shear force and bending moment (strength_view.go)
 	rd     readingPanel // draft marks, readings by hand and their diagnosis (reading_panel.go)
+	doors  doorsPanel   // the doors and valves, open or shut (doors.go)
 
 	rend    *lipgloss.Renderer
 	palette int
@@ -325,6 +326,11 @@ func (m model) update(msg tea.Msg) (tea.Model, tea.Cmd) {
 	case remedyMsg:
 		return m.takeRemedies(msg)
 
+	case doorMsg:
+		return m.takeDoor(msg)
+	case netDoneMsg:
+		return m.takeNet(msg)
+
 	case tea.KeyMsg:
 		msg = plainKey(msg)
 		if m.lay.small {
@@ -370,6 +376,12 @@ func (m model) key(msg tea.KeyMsg) (tea.Model, tea.Cmd) {
 		return m, tea.Quit
 	case key.Matches(msg, k.Help):
 		m.help.ShowAll = !m.help.ShowAll
+	case key.Matches(msg, doorsKey):
+		return m.doorsToggle()
+	case m.doors.handles(msg):
+		var cmd tea.Cmd
+		m.doors, cmd = m.doors.update(msg, m.v.Connections)
+		return m, cmd
 	case key.Matches(msg, k.Up):
 		m.move(-1)
 	case key.Matches(msg, k.Down):
@@ -599,7 +611,7 @@ func recompute(v *engine.Vessel, d engine.Damage, seq int, latest *atomic.Int64)
 	return newest(seq, latest,
 		func() tea.Msg { return resultMsg{seq: seq, skipped: true} },
 		func(why string) tea.Msg { return resultMsg{seq: seq, failure: why} },
-		func() tea.Msg { return resultMsg{seq: seq, a: engine.Assess(v, d)} })
+		func() tea.Msg { return resultMsg{seq: seq, a: assessSpread(v, d)} })
 }
 
 // takeResult shows a result if it is the newest and logs every change in

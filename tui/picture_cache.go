@@ -18,6 +18,7 @@ type pictureKey struct {
 	floodSeq int                // the flooding run's request
 	floodN   int                // its progress points
 	floodRep *engine.FloodReport
+	floodNet *engine.NetworkReport // the run through the ship (flood_network.go)
 	running  bool
 }
 
@@ -44,6 +45,7 @@ func (m model) cached(kind, w, h int, draw func(w, h int) []string) []string {
 	if kind == picFloodPlot {
 		f := m.flood
 		k.floodSeq, k.floodN, k.floodRep, k.running = f.seq, len(f.track), f.rep, f.running
+		k.floodNet = f.net
 	}
 	e := &m.pics.entries[kind]
 	if !e.ok || e.key != k {

@@ -99,7 +99,7 @@ func (m model) profileView(w, h int) []string {
 			break
 		}
 		surface := p
-		if i >= len(m.damage) || !m.damage[i].Open {
+		if !m.openNow(i) {
 			surface = nil
 			for k := range m.cur.Position.Held {
 				if hw := &m.cur.Position.Held[k]; hw.Index == i && hw.VolumeM3 > 0 {

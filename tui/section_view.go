@@ -150,7 +150,7 @@ func (m model) sectionView(w, h int) []string {
 		}
 		var surface *engine.Plane
 		switch {
-		case p != nil && i < len(m.damage) && m.damage[i].Open:
+		case p != nil && m.openNow(i):
 			surface = p
 		case p != nil:
 			for k := range m.cur.Position.Held {

@@ -101,6 +101,9 @@ func (m model) narrowBody() []string {
 	if m.girder.show {
 		return besides(sep, fit(list, l.listW, l.bodyH), fit(m.girderLines(l.rightW, l.bodyH), l.rightW, l.bodyH))
 	}
+	if m.doors.show {
+		return besides(sep, fit(list, l.listW, l.bodyH), fit(m.doorsLines(l.rightW, l.bodyH), l.rightW, l.bodyH))
+	}
 	if m.flood.show {
 		return besides(sep, fit(list, l.listW, l.bodyH), m.floodPanel(l.rightW, l.bodyH))
 	}
@@ -170,6 +173,8 @@ func (m model) wideBody() []string {
 		pics = m.readingLines(m.width, l.picH)
 	case m.girder.show:
 		pics = m.girderLines(m.width, l.picH)
+	case m.doors.show:
+		pics = m.doorsLines(m.width, l.picH)
 	case m.flood.show:
 		pics = m.floodRow(m.width, l.picH)
 	case m.noPosition():

@@ -28,6 +28,9 @@ type Info struct {
 
 	// Compartments is index-aligned with engine.Vessel.Compartments.
 	Compartments []CompartmentInfo
+	// Warnings are things in the file that are allowed but look wrong (see
+	// connections.go); the file is still used.
+	Warnings Problems
 }
 
 // CompartmentInfo is the file's extra data on one compartment.
@@ -129,6 +132,7 @@ func (r *reader) vessel(root *table) (*engine.Vessel, *Info) {
 	openingTables := root.entries("opening", "a point where water would spread")
 	openings := r.openings(openingTables)
 	r.checkLeadsTo(openingTables, openings, comps)
+	conns, warns := r.connections(root.entries("connection", "a door, hatch, duct or pipe between two compartments"), comps, len(r.probs) == 0)
 	if hull != nil && (marginOK && margin < hull.DepthM || !root.has("margin_line_depth")) {
 		r.marginBelowKeel(hull, margin, marginOK)
 	}
@@ -144,7 +148,7 @@ func (r *reader) vessel(root *table) (*engine.Vessel, *Info) {
 	}
 	v, err := engine.NewVessel(engine.Vessel{
 		Name: name, WaterDensity: rho, Hull: hull, Weights: weights,
-		Compartments: comps, Openings: openings, MarginLineM: margin, CriteriaSets: criteria, ShipType: info.ShipType,
+		Compartments: comps, Openings: openings, Connections: conns, MarginLineM: margin, CriteriaSets: criteria, ShipType: info.ShipType,
 		DraftMarks: marks,
 		Girder:     girder,
 	})
@@ -153,6 +157,7 @@ func (r *reader) vessel(root *table) (*engine.Vessel, *Info) {
 		return nil, nil
 	}
 	info.Compartments = cinfo
+	info.Warnings = warns
 	return v, info
 }
 
@@ -640,6 +645,7 @@ func (r *reader) openings(ts []*table) []engine.Opening {
 		}
 		o.Weathertight, _ = t.boolean("closed_weathertight")
 		o.LeadsTo = r.leadsTo(t)
+		r.openingArea(t, &o)
 		t.finish()
 		out = append(out, o)
 	}

@@ -70,8 +70,9 @@ func runFlood(args []string, stdout, stderr io.Writer) int {
 	var holes, pumps pumpFlag
 	fs.Var(&holes, "hole", "")
 	fs.Var(&pumps, "pump", "")
-	var open listFlag
+	var open, conns listFlag
 	fs.Var(&open, "open", "")
+	fs.Var(&conns, "connection", "")
 	cdText := fs.String("cd", "", "")
 	limit := fs.Duration("limit", 24*time.Hour, "")
 	criteria := fs.Bool("criteria", true, "")
@@ -109,6 +110,10 @@ func runFlood(args []string, stdout, stderr io.Writer) int {
 	v, info, status := openVessel(*vessel, stderr)
 	if status != exitOK {
 		return status
+	}
+	v, msg := applyConnections(v, conns)
+	if msg != "" {
+		return fail("%s", msg)
 	}
 	index := map[string]int{}
 	for i, c := range v.Compartments {
@@ -178,6 +183,9 @@ func runFlood(args []string, stdout, stderr io.Writer) int {
 		return fail("%v", err)
 	}
 	fr := report.Flood{Run: rep, VesselFile: source(info), Open: inOrderGiven(open), HoleFrom: fc.HoleFrom, PumpsFrom: fc.PumpsFrom, Version: version, Passenger: v.Passenger()}
+	if fr.Network, err = floodNetwork(c, rep); err != nil {
+		return fail("%v", err)
+	}
 	if *format == "json" {
 		err = report.FloodJSON(stdout, fr)
 	} else {
@@ -186,6 +194,10 @@ func runFlood(args []string, stdout, stderr io.Writer) int {
 	if err != nil {
 		fmt.Fprintln(stderr, "heelwatch flood: writing the report:", err)
 		return exitFailed
+	}
+	if n := fr.Network; n != nil && (n.End == engine.FloodSinks || n.End == engine.FloodCapsizes) {
+		fmt.Fprintf(stderr, "heelwatch flood: through the ship: %s\n", n.EndReason)
+		return exitNoEq
 	}
 	switch rep.End {
 	case engine.FloodSinks, engine.FloodCapsizes:

@@ -211,6 +211,9 @@ func openVessel(nameOrPath string, stderr io.Writer) (*engine.Vessel, *vessels.I
 	if info == nil {
 		info = &vessels.Info{File: nameOrPath}
 	}
+	for _, w := range info.Warnings {
+		fmt.Fprintln(stderr, "warning:", w.String())
+	}
 	return v, info, exitOK
 }
 

@@ -14,7 +14,8 @@ import (
 const solveHelp = `heelwatch solve: where the ship floats with compartments open to the sea.
 
 Usage:
-  heelwatch solve [--vessel FILE|NAME] [--open A,B] [--perm NAME=μ,...] [--remedies] [--format F]
+  heelwatch solve [--vessel FILE|NAME] [--open A,B] [--perm NAME=μ,...]
+                  [--connection NAME=open|closed] [--remedies] [--format F]
 
 Flags:
   --vessel FILE|NAME  the vessel file, or a bundled vessel's name (default %q)
@@ -22,7 +23,7 @@ Flags:
                       in the vessel file; repeat the flag or separate with commas
   --perm NAME=μ,...   permeability of an open compartment for this solve,
                       0 < μ ≤ 1, in place of the file's (e.g. --perm "Hold 2=0.85")
-  --remedies          also work out the righting options: ballast into an intact
+` + connectionHelp + `  --remedies          also work out the righting options: ballast into an intact
                       tank on the high side, a low-side tank pumped out, liquid
                       moved to the mirror tank; with negative upright GM (a loll)
                       only options that lower G. Each is solved from the hull
@@ -32,9 +33,12 @@ Flags:
                       file's pump rates. Options to weigh, not orders.
   --format F          text (default), json or markdown
 
-The answer is the direct solution from the hull geometry at the actual heel
-and trim, with the hand method (lost buoyancy, small angles) beside it where
-it applies, the flags, and the criteria the vessel is held to.
+Water spreads from the open compartments through every open connection whose
+sill is under the water inside and every opening that goes under and leads
+into a compartment, to a fixed point; the chain is printed. The answer is the
+direct solution from the hull geometry at the actual heel and trim (of that
+final state), with the hand method (lost buoyancy, small angles) beside it
+where it applies, the flags, and the criteria the vessel is held to.
 
 GM is the upright GM (she brought upright, same displacement, free trim,
 free-surface corrected); the GM where she lies, the GZ slope at her heel, is
@@ -55,8 +59,9 @@ func runSolve(args []string, stdout, stderr io.Writer) int {
 	fs.SetOutput(stderr)
 	fs.Usage = func() {}
 	vessel := fs.String("vessel", vessels.Default, "")
-	var open, perm listFlag
+	var open, perm, conns listFlag
 	fs.Var(&open, "open", "")
+	fs.Var(&conns, "connection", "")
 	fs.Var(&perm, "perm", "")
 	format := fs.String("format", "text", "")
 	remedies := fs.Bool("remedies", false, "")
@@ -79,17 +84,24 @@ func runSolve(args []string, stdout, stderr io.Writer) int {
 	if status != exitOK {
 		return status
 	}
+	v, msg := applyConnections(v, conns)
+	if msg != "" {
+		fmt.Fprintln(stderr, "heelwatch solve:", msg)
+		return exitUsage
+	}
 	d, msg := damageOf(v, open, perm)
 	if msg != "" {
 		fmt.Fprintln(stderr, "heelwatch solve:", msg)
 		return exitUsage
 	}
-	a := engine.Assess(v, d)
+	sp := engine.Progressive(v, d)
+	a := engine.Assess(v, sp.Damage)
 	r := report.New(v, source(info), a, now(), version)
+	r.Spread = &sp
 	r.Condition = info.Condition
 	r.Open = inOrderGiven(open)
 	if *remedies {
-		rs := engine.FindRemedies(v, d)
+		rs := engine.FindRemedies(v, sp.Damage)
 		r.Remedies = &rs
 	}
 	if err := write(stdout, r); err != nil {
