@@ -73,6 +73,7 @@ const (
 	pickPump
 	pickStop
 	pickCounter
+	pickDoor // a connection, not a compartment
 	pickBreach // instructor
 	pickFail   // instructor
 )
@@ -91,6 +92,7 @@ type drillModel struct {
 	marks   map[int]bool    // the crew's picture: marked flooded
 	ordered map[int]float64 // pumps the crew ordered on, m³/h
 	inlets  map[int]bool    // sea inlets the crew opened to counter-flood
+	doors   map[int]bool    // connections as the crew believe them: open (true) or shut
 
 	pick     pickFor
 	pickList []int
@@ -131,7 +133,7 @@ func newDrillModel(sc *vessels.Scenario, opts DrillOptions) (*drillModel, error)
 	}
 	in := newTextField()
 	in.CharLimit = 200
-	return &drillModel{sc: sc, d: d, speed: opts.Speed, opts: opts, marks: map[int]bool{}, ordered: map[int]float64{}, inlets: map[int]bool{},
+	return &drillModel{sc: sc, d: d, speed: opts.Speed, opts: opts, marks: map[int]bool{}, ordered: map[int]float64{}, inlets: map[int]bool{}, doors: doorsAsFitted(sc),
 		input: in, w: 80, h: 24, debrief: viewport.New(80, 20)}, nil
 }
 
@@ -246,6 +248,16 @@ func (m *drillModel) key(k tea.KeyMsg) (tea.Model, tea.Cmd) {
 		m.startPick(pickPump, all)
 	case s == "c" && m.mode == drillCrew:
 		m.startPick(pickCounter, all)
+	case s == "d" && m.mode == drillCrew:
+		if len(v.Connections) == 0 {
+			m.status = "This ship has no doors or valves between compartments in her file."
+		} else {
+			conns := make([]int, len(v.Connections))
+			for i := range conns {
+				conns[i] = i
+			}
+			m.startPick(pickDoor, conns)
+		}
 	case s == "g" && m.mode == drillCrew && !m.diagnosing:
 		m.diagnosing = true
 		m.status = "Diagnosing from our readings…"
@@ -316,9 +328,31 @@ func (m *drillModel) picking(s string) (tea.Model, tea.Cmd) {
 	return m, nil
 }
 
-// chosen acts on the compartment picked.
+// doorsAsFitted is the state of each connection as the vessel file gives
+// it: what the crew believe at the start.
+func doorsAsFitted(sc *vessels.Scenario) map[int]bool {
+	out := map[int]bool{}
+	for i, c := range sc.Vessel.Connections {
+		out[i] = c.Open
+	}
+	return out
+}
+
+// chosen acts on the compartment (or connection) picked.
 func (m *drillModel) chosen(p pickFor, i int) {
 	v := m.d.Vessel()
+	if p == pickDoor {
+		c := v.Connections[i]
+		open := !m.doors[i]
+		m.doors[i] = open
+		m.decide(engine.DrillEvent{Kind: engine.DrillConnection, By: engine.ByCrew, Compartment: -1, Name: c.Name, Open: open})
+		if open {
+			m.status = c.Name + " ordered open."
+		} else {
+			m.status = c.Name + " ordered shut."
+		}
+		return
+	}
 	name := v.Compartments[i].Name
 	switch p {
 	case pickMark:
@@ -529,9 +563,9 @@ func (m *drillModel) footer() string {
 	case m.mode == drillInstructor:
 		s = "b breach · f pump fails · n note · D debrief · i crew · space pause · +/- speed · q quit"
 	default:
-		s = "m mark · p pump · s stop pump · c counter-flood · g diagnose · space pause · +/- speed · i instructor · q quit"
-		if m.w < 110 {
-			s = "m mark·p pump·s stop·c counter-flood·g diagnose·space pause·+/- speed·i instr.·q quit"
+		s = "m mark · p pump · s stop pump · d doors · c counter-flood · g diagnose · space pause · +/- speed · i instructor · q quit"
+		if m.w < 120 {
+			s = "m mark·p pump·s stop·d doors·c cntr-flood·g diag·spc pause·+/-·i instr·q quit"
 		}
 	}
 	if m.status != "" && m.asking == "" && m.pick == pickNone {

@@ -82,9 +82,12 @@ func TestDrillCrewViewHidesTruth(t *testing.T) {
 				if strings.Contains(s, hidden) {
 					t.Errorf("%s: the hidden compartment is named:\n%s", where, s)
 				}
+				// Its water, to a tenth or a hundredth of a m³ (a whole
+				// number would meet a pump's capacity or a draft by chance;
+				// no m³ at all is shown, above).
 				w := m.d.Now().WaterM3[hi]
-				for _, f := range []string{"%.1f", "%.0f", "%.2f"} {
-					if w > 1 && strings.Contains(s, fmt.Sprintf(f+" m", w)) {
+				for _, f := range []string{"%.1f", "%.2f"} {
+					if w > 1 && strings.Contains(s, fmt.Sprintf(f, w)) {
 						t.Errorf("%s: the hidden water %s is shown", where, fmt.Sprintf(f, w))
 					}
 				}
@@ -117,6 +120,14 @@ func TestDrillCrewViewHidesTruth(t *testing.T) {
 						t.Errorf("no diagnosis: %q", m.status)
 					}
 					check("diagnosed")
+				case 35: // the crew shuts the door they believe shut already
+					m.Update(drillKey("d"))
+					check("door picker")
+					m.Update(drillKey("enter"))
+					check("door toggled")
+					m.Update(drillKey("d"))
+					m.Update(drillKey("enter"))
+					check("door toggled back")
 				case 40:
 					m.Update(drillKey(" "))
 					check("paused")
