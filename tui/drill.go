@@ -73,7 +73,7 @@ const (
 	pickPump
 	pickStop
 	pickCounter
-	pickDoor // a connection, not a compartment
+	pickDoor   // a connection, not a compartment
 	pickBreach // instructor
 	pickFail   // instructor
 )

@@ -159,7 +159,7 @@ func (m *drillModel) pickerView(w, h int) []string {
 	v := m.d.Vessel()
 	title := map[pickFor]string{pickMark: "Mark flooded / dry", pickPump: "Start pumping on", pickStop: "Stop pumping on",
 		pickCounter: "Counter-flood: open / shut the sea inlet into", pickDoor: "Doors and valves: order open / shut",
-		pickBreach:  "Breach in (instructor)", pickFail: "Pump fails on (instructor)"}[m.pick]
+		pickBreach: "Breach in (instructor)", pickFail: "Pump fails on (instructor)"}[m.pick]
 	out := []string{lipgloss.NewStyle().Bold(true).Render(title)}
 	rows := max(1, h-1)
 	top := max(0, min(m.cursor-rows/2, len(m.pickList)-rows))

@@ -70,7 +70,9 @@ func TestDrillCrewViewHidesTruth(t *testing.T) {
 					t.Errorf("%s: a volume of water on the crew's screen:\n%s", where, s)
 				}
 				if m.pick != pickNone {
-					pickerLists = append(pickerLists, s[strings.Index(s, "Mark flooded")+0:])
+					if i := strings.Index(s, "Mark flooded"); i >= 0 {
+						pickerLists = append(pickerLists, s[i:])
+					}
 					return
 				}
 				// The crew's own diagnosis is worked out from their readings
