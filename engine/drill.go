@@ -411,7 +411,7 @@ func (d *Drill) row(event string) DrillRow {
 			continue
 		}
 		r.WaterM3[i] = w
-		if w > 0 {
+		if w > 1e-6*d.capacity(i) {
 			r.Flooded = append(r.Flooded, d.v.Compartments[i].Name)
 		}
 	}
