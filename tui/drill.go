@@ -324,8 +324,26 @@ func (m *drillModel) picking(s string) (tea.Model, tea.Cmd) {
 		p := m.pick
 		m.pick = pickNone
 		m.chosen(p, i)
+	case "o":
+		if m.pick == pickDoor {
+			m.pick = pickNone
+			m.orderDoor(m.pickList[m.cursor], true)
+		}
 	}
 	return m, nil
+}
+
+// orderDoor orders connection i open or shut (shut: checked and closed,
+// whatever the crew believed of it).
+func (m *drillModel) orderDoor(i int, open bool) {
+	c := m.d.Vessel().Connections[i]
+	m.doors[i] = open
+	m.decide(engine.DrillEvent{Kind: engine.DrillConnection, By: engine.ByCrew, Compartment: -1, Name: c.Name, Open: open})
+	if open {
+		m.status = c.Name + " ordered open."
+	} else {
+		m.status = c.Name + " ordered checked and shut."
+	}
 }
 
 // doorsAsFitted is the state of each connection as the vessel file gives
@@ -342,15 +360,7 @@ func doorsAsFitted(sc *vessels.Scenario) map[int]bool {
 func (m *drillModel) chosen(p pickFor, i int) {
 	v := m.d.Vessel()
 	if p == pickDoor {
-		c := v.Connections[i]
-		open := !m.doors[i]
-		m.doors[i] = open
-		m.decide(engine.DrillEvent{Kind: engine.DrillConnection, By: engine.ByCrew, Compartment: -1, Name: c.Name, Open: open})
-		if open {
-			m.status = c.Name + " ordered open."
-		} else {
-			m.status = c.Name + " ordered shut."
-		}
+		m.orderDoor(i, false)
 		return
 	}
 	name := v.Compartments[i].Name
@@ -556,6 +566,8 @@ func (m *drillModel) footer() string {
 	switch {
 	case m.asking != "":
 		s = m.input.View()
+	case m.pick == pickDoor:
+		s = "↑/↓ choose · enter check and shut · o open · esc cancel"
 	case m.pick != pickNone:
 		s = "↑/↓ choose · enter take · esc cancel"
 	case m.mode == drillDebrief:

@@ -122,14 +122,19 @@ func TestDrillCrewViewHidesTruth(t *testing.T) {
 						t.Errorf("no diagnosis: %q", m.status)
 					}
 					check("diagnosed")
-				case 35: // the crew shuts the door they believe shut already
+				case 35: // the crew checks and shuts the engine-room door, opens and shuts the next
 					m.Update(drillKey("d"))
 					check("door picker")
 					m.Update(drillKey("enter"))
-					check("door toggled")
+					check("door shut")
 					m.Update(drillKey("d"))
+					m.Update(drillKey("down"))
+					m.Update(drillKey("o"))
+					check("door opened")
+					m.Update(drillKey("d"))
+					m.Update(drillKey("down"))
 					m.Update(drillKey("enter"))
-					check("door toggled back")
+					check("door shut again")
 				case 40:
 					m.Update(drillKey(" "))
 					check("paused")
