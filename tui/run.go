@@ -92,7 +92,7 @@ func (m model) writeReport() tea.Cmd {
 	made := m.now()
 	r := report.New(m.v, m.opts.VesselFile, *m.cur, made, m.opts.Version)
 	r.Condition = m.condition
-	r.Remedies = m.reportRemedies(m.cur)
+	r.Remedies = m.rem.forReport(m.cur)
 	if m.opts.VesselName != "" {
 		r.VesselName = m.opts.VesselName
 	}

@@ -24,7 +24,7 @@ func (m model) View() string {
 	var lines []string
 	lines = append(lines, m.headerView(m.width))
 	if m.rem.show {
-		lines = append(lines, m.remedyPanel(m.width, l.bodyH)...)
+		lines = append(lines, strings.Split(m.rem.with(m).view(m.width, l.bodyH), "\n")...)
 	} else if l.wide {
 		lines = append(lines, m.wideBody()...)
 	} else {
