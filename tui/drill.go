@@ -29,7 +29,7 @@ import (
 // DrillOptions are the drill dashboard's settings.
 type DrillOptions struct {
 	Speed   float64 // scenario minutes per real minute at the start (1: real time)
-	LogFile string  // the drill's log (a scenario file) is written here after every change
+	LogFile string  // the drill's log (a scenario file) is written here after every change; the debrief beside it (.debrief.md) at the end
 	Version string
 }
 
@@ -186,6 +186,14 @@ func (m *drillModel) Update(msg tea.Msg) (tea.Model, tea.Cmd) {
 			return m, nil
 		}
 		m.debriefText = msg.text
+		if m.opts.LogFile != "" && m.d.Over() {
+			path := strings.TrimSuffix(m.opts.LogFile, ".toml") + ".debrief.md"
+			if err := os.WriteFile(path, []byte(msg.text), 0o644); err != nil {
+				m.status = "debrief: " + err.Error()
+			} else {
+				m.status = "Debrief written to " + path
+			}
+		}
 		m.debrief.SetContent(lipgloss.NewStyle().Width(m.w).Render(msg.text))
 		m.mode = drillDebrief
 		return m, nil
