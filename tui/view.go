@@ -24,7 +24,7 @@ func (m model) View() string {
 	var lines []string
 	lines = append(lines, m.headerView(m.width))
 	if m.rem.show {
-		lines = append(lines, m.remedyPanel(m.width, l.bodyH)...)
+		lines = append(lines, strings.Split(m.rem.with(m).view(m.width, l.bodyH), "\n")...)
 	} else if l.wide {
 		lines = append(lines, m.wideBody()...)
 	} else {
@@ -115,6 +115,9 @@ func (m model) narrowBody() []string {
 	l := m.lay
 	sep := m.st.Dim.Render("│")
 	list := m.listView(l.listW, l.bodyH)
+	if m.cond.show {
+		return besides(sep, fit(list, l.listW, l.bodyH), fit(m.conditionLines(l.rightW, l.bodyH), l.rightW, l.bodyH))
+	}
 	if m.rd.show {
 		return besides(sep, fit(list, l.listW, l.bodyH), fit(m.readingLines(l.rightW, l.bodyH), l.rightW, l.bodyH))
 	}
@@ -192,6 +195,8 @@ func (m model) wideBody() []string {
 	rule := m.st.Dim.Render(strings.Repeat("─", m.width))
 	var pics []string
 	switch {
+	case m.cond.show:
+		pics = m.conditionLines(m.width, l.picH)
 	case m.rd.show:
 		pics = m.readingLines(m.width, l.picH)
 	case m.girder.show:
