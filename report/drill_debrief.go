@@ -33,9 +33,9 @@ func DrillDebrief(w io.Writer, dr Drill, a engine.DrillAnalysis) error {
 	b.WriteString("| | heel | deck edge above water | sea water in her | deck edge under |\n|---|---|---|---|---|\n")
 	outcomeRow(&b, "this drill", a.Actual)
 	outcomeRow(&b, "no action by the crew", a.NoAction)
-	outcomeRow(&b, "every pump at once (below)", a.Best)
+	outcomeRow(&b, "pumps and doors at once (below)", a.Best)
 	b.WriteString("\n")
-	fmt.Fprintf(&b, "The best response heelwatch plays for comparison: every pump the vessel file gives started on each breached compartment the minute it is breached, and again at once after a pump fails (no counter-flooding, no doors). ")
+	fmt.Fprintf(&b, "The best response heelwatch plays for comparison: every pump the vessel file gives started on each breached compartment the minute it is breached, and again at once after a pump fails; every watertight door and hatch shut at the first breach, and again at once if one is found open (no counter-flooding, no cross-flooding fittings). ")
 	b.WriteString(saved(a.Actual, a.Best))
 	b.WriteString("\n\n")
 
@@ -137,22 +137,22 @@ func outcomeRow(b *strings.Builder, what string, o engine.DrillOutcome) {
 func saved(actual, best engine.DrillOutcome) string {
 	switch {
 	case actual.Lost && !best.Lost:
-		return "She was lost; with every pump at once she would have stayed afloat."
+		return "She was lost; with pumps and doors at once she would have stayed afloat."
 	case actual.Lost && best.Lost:
-		return "She is lost even with every pump at once: the pumps cannot hold this damage."
+		return "She is lost even with pumps and doors at once: they cannot hold this damage."
 	case best.Lost:
-		return "With every pump alone she would have been lost: this drill's response did better."
+		return "With pumps and doors alone she would have been lost: this drill's response did better."
 	}
 	gain := best.FreeboardM - actual.FreeboardM
 	detail := fmt.Sprintf("%s of freeboard to the deck edge, %s of heel and %s of sea water at the end",
 		Signed(gain, 2, "m"), change(math.Abs(best.HeelDeg), math.Abs(actual.HeelDeg), "°"), change(best.WaterM3, actual.WaterM3, "m³"))
 	switch {
 	case gain > 0.005:
-		return "Every pump at once would have saved, beside this drill: " + detail + "."
+		return "Pumps and doors at once would have saved, beside this drill: " + detail + "."
 	case gain < -0.005:
-		return "This drill's response did better than every pump at once, which gives " + detail + " beside it."
+		return "This drill's response did better than pumps and doors at once, which give " + detail + " beside it."
 	}
-	return "This drill's response did as well as every pump at once."
+	return "This drill's response did as well as pumps and doors at once."
 }
 
 // change writes a − b signed, or "—".

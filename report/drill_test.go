@@ -76,7 +76,7 @@ func TestDrillLogReplays(t *testing.T) {
 	if err := report.DrillDebrief(&md, dr, a); err != nil {
 		t.Fatal(err)
 	}
-	for _, want := range []string{"pump Hold 2 100 m3/h", "counter-flood Wing tank 2 P open", "| Wing tank 2 S | min 2.", "every pump at once"} {
+	for _, want := range []string{"pump Hold 2 100 m3/h", "counter-flood Wing tank 2 P open", "| Wing tank 2 S | min 2.", "pumps and doors at once"} {
 		if !strings.Contains(md.String(), want) {
 			t.Errorf("debrief lacks %q", want)
 		}

@@ -29,7 +29,7 @@ import (
 // DrillOptions are the drill dashboard's settings.
 type DrillOptions struct {
 	Speed   float64 // scenario minutes per real minute at the start (1: real time)
-	LogFile string  // the drill's log (a scenario file) is written here after every change
+	LogFile string  // the drill's log (a scenario file) is written here after every change; the debrief beside it (.debrief.md) at the end
 	Version string
 }
 
@@ -73,9 +73,10 @@ const (
 	pickPump
 	pickStop
 	pickCounter
-	pickDoor   // a connection, not a compartment
-	pickBreach // instructor
-	pickFail   // instructor
+	pickDoor      // a connection, not a compartment
+	pickDoorTruth // instructor: a connection's true state
+	pickBreach    // instructor
+	pickFail      // instructor
 )
 
 // drillModel is the drill's root model.
@@ -186,6 +187,14 @@ func (m *drillModel) Update(msg tea.Msg) (tea.Model, tea.Cmd) {
 			return m, nil
 		}
 		m.debriefText = msg.text
+		if m.opts.LogFile != "" && m.d.Over() {
+			path := strings.TrimSuffix(m.opts.LogFile, ".toml") + ".debrief.md"
+			if err := os.WriteFile(path, []byte(msg.text), 0o644); err != nil {
+				m.status = "debrief: " + err.Error()
+			} else {
+				m.status = "Debrief written to " + path
+			}
+		}
 		m.debrief.SetContent(lipgloss.NewStyle().Width(m.w).Render(msg.text))
 		m.mode = drillDebrief
 		return m, nil
@@ -277,6 +286,12 @@ func (m *drillModel) key(k tea.KeyMsg) (tea.Model, tea.Cmd) {
 		m.startPick(pickBreach, all)
 	case s == "f" && m.mode == drillInstructor:
 		m.startPick(pickFail, all)
+	case s == "o" && m.mode == drillInstructor && len(v.Connections) > 0:
+		conns := make([]int, len(v.Connections))
+		for i := range conns {
+			conns[i] = i
+		}
+		m.startPick(pickDoorTruth, conns)
 	case s == "n" && m.mode == drillInstructor:
 		m.ask("note", "Note to the crew: ")
 	case s == "D" && m.mode == drillInstructor:
@@ -361,6 +376,16 @@ func (m *drillModel) chosen(p pickFor, i int) {
 	v := m.d.Vessel()
 	if p == pickDoor {
 		m.orderDoor(i, false)
+		return
+	}
+	if p == pickDoorTruth {
+		c := v.Connections[i]
+		m.decide(engine.DrillEvent{Kind: engine.DrillConnection, By: engine.ByInstructor, Compartment: -1, Name: c.Name, Open: !c.Open})
+		if c.Open {
+			m.status = c.Name + " now shut (instructor)."
+		} else {
+			m.status = c.Name + " now open (instructor): found open if the crew look."
+		}
 		return
 	}
 	name := v.Compartments[i].Name
@@ -573,7 +598,7 @@ func (m *drillModel) footer() string {
 	case m.mode == drillDebrief:
 		s = "↑/↓ pgup/pgdn scroll · q quit"
 	case m.mode == drillInstructor:
-		s = "b breach · f pump fails · n note · D debrief · i crew · space pause · +/- speed · q quit"
+		s = "b breach · f pump fails · o door open/shut · n note · D debrief · i crew · space pause · +/- · q quit"
 	default:
 		s = "m mark · p pump · s stop pump · d doors · c counter-flood · g diagnose · space pause · +/- speed · i instructor · q quit"
 		if m.w < 120 {

@@ -159,7 +159,8 @@ func (m *drillModel) pickerView(w, h int) []string {
 	v := m.d.Vessel()
 	title := map[pickFor]string{pickMark: "Mark flooded / dry", pickPump: "Start pumping on", pickStop: "Stop pumping on",
 		pickCounter: "Counter-flood: open / shut the sea inlet into", pickDoor: "Doors and valves: order open / shut",
-		pickBreach: "Breach in (instructor)", pickFail: "Pump fails on (instructor)"}[m.pick]
+		pickDoorTruth: "Doors and valves (instructor): open / shut in truth",
+		pickBreach:    "Breach in (instructor)", pickFail: "Pump fails on (instructor)"}[m.pick]
 	out := []string{lipgloss.NewStyle().Bold(true).Render(title)}
 	rows := max(1, h-1)
 	top := max(0, min(m.cursor-rows/2, len(m.pickList)-rows))
@@ -170,14 +171,22 @@ func (m *drillModel) pickerView(w, h int) []string {
 			mark = "✓"
 		}
 		name := ""
-		if m.pick == pickDoor {
+		switch m.pick {
+		case pickDoor:
 			c := v.Connections[i]
 			state := "shut"
 			if m.doors[i] {
 				state = "open"
 			}
 			name = fmt.Sprintf("%s (%s, %s–%s): we believe it %s", c.Name, c.Kind, v.Compartments[c.From].Name, v.Compartments[c.To].Name, state)
-		} else {
+		case pickDoorTruth:
+			c := v.Connections[i]
+			state := "shut"
+			if c.Open {
+				state = "open"
+			}
+			name = fmt.Sprintf("%s: %s", c.Name, state)
+		default:
 			name = v.Compartments[i].Name
 		}
 		line := fmt.Sprintf("  %s %s", mark, name)

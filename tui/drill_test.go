@@ -205,6 +205,15 @@ func TestDrillInstructorInjects(t *testing.T) {
 	if len(m.extra) != 1 || m.extra[0].Kind != engine.DrillBreach || m.extra[0].By != engine.ByInstructor {
 		t.Fatalf("no breach injected: %v (%s)", m.extra, m.status)
 	}
+	// A door found open: the first of the freighter's, shut in her file.
+	m.Update(drillKey("o"))
+	m.Update(drillKey("enter"))
+	if len(m.extra) != 2 || m.extra[1].Kind != engine.DrillConnection || !m.extra[1].Open || !m.d.Vessel().Connections[0].Open {
+		t.Fatalf("no door opened: %v (%s)", m.extra, m.status)
+	}
+	if s := m.View(); !strings.Contains(s, "Open doors and valves: "+m.d.Vessel().Connections[0].Name) {
+		t.Errorf("the instructor does not see the door open:\n%s", s)
+	}
 	for !m.d.Over() {
 		m.Update(drillTick{})
 	}
