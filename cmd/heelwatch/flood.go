@@ -115,10 +115,6 @@ func runFlood(args []string, stdout, stderr io.Writer) int {
 	if msg != "" {
 		return fail("%s", msg)
 	}
-	index := map[string]int{}
-	for i, c := range v.Compartments {
-		index[c.Name] = i
-	}
 	ask := vessels.FloodAsk{Compartment: -1, AreaM2: math.NaN(), ZM: math.NaN(), Cd: cd,
 		LimitS: limit.Seconds(), Criteria: *criteria, By: "command line"}
 	for _, p := range pumps {
@@ -126,8 +122,8 @@ func runFlood(args []string, stdout, stderr io.Writer) int {
 		if len(nums) != 1 {
 			return fail("--pump %q: write NAME:M3H, the capacity in m³/h, e.g. --pump %q", p, exampleName(v)+":120")
 		}
-		i, ok := index[name]
-		if !ok {
+		i := v.CompartmentIndex(name)
+		if i < 0 {
 			return fail("%s", unknownName("--pump", name, v))
 		}
 		ask.Pumps = append(ask.Pumps, vessels.FloodPump{Compartment: i, M3h: nums[0]})
@@ -138,15 +134,15 @@ func runFlood(args []string, stdout, stderr io.Writer) int {
 		if msg := finiteNumbers("--hole", holes[0], nums); msg != "" {
 			return fail("%s", msg)
 		}
-		i, ok := index[name]
-		if !ok {
+		i := v.CompartmentIndex(name)
+		if i < 0 {
 			msg := unknownName("--hole", name, v)
 			if strings.Contains(holes[0], ":") {
 				msg += "\n(write --hole NAME[:AREA[:Z]], AREA in m² and Z in m above the baseline)"
 			}
 			return fail("%s", msg)
 		}
-		ask.Compartment, holeName = i, name
+		ask.Compartment, holeName = i, v.Compartments[i].Name
 		if len(nums) > 0 {
 			ask.AreaM2 = nums[0]
 		}
@@ -182,7 +178,7 @@ func runFlood(args []string, stdout, stderr io.Writer) int {
 	if err != nil {
 		return fail("%v", err)
 	}
-	fr := report.Flood{Run: rep, VesselFile: source(info), Open: inOrderGiven(open), HoleFrom: fc.HoleFrom, PumpsFrom: fc.PumpsFrom, Version: version, Passenger: v.Passenger()}
+	fr := report.Flood{Run: rep, VesselFile: source(info), Open: inOrderGiven(v, open), HoleFrom: fc.HoleFrom, PumpsFrom: fc.PumpsFrom, Version: version, Passenger: v.Passenger()}
 	if fr.Network, err = floodNetwork(c, rep); err != nil {
 		return fail("%v", err)
 	}

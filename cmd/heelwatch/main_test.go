@@ -278,10 +278,7 @@ func TestUnknownOpenRefusedByName(t *testing.T) {
 			t.Errorf("stderr lacks %s:\n%s", want, errOut)
 		}
 	}
-	_, _, errOut = heelwatch(t, "solve", "--vessel", "barge", "--open", "hold aft")
-	if !strings.Contains(errOut, `Did you mean "Hold aft"`) {
-		t.Errorf("a name in the wrong case gets no suggestion:\n%s", errOut)
-	}
+	// A name in another case is the same name (TestCommandLineNamesIgnoreCase).
 }
 
 func TestPermeabilityOverride(t *testing.T) {

@@ -22,7 +22,8 @@ Flags:
   --open A,B          compartments open to the sea (lost buoyancy), by the names
                       in the vessel file; repeat the flag or separate with commas
   --perm NAME=μ,...   permeability of an open compartment for this solve,
-                      0 < μ ≤ 1, in place of the file's (e.g. --perm "Hold 2=0.85")
+                      0 < μ ≤ 1, in place of the file's (e.g. --perm "Hold 2=0.85";
+                      a decimal comma or a percentage also: "Hold 2=0,85", "Hold 2=85%%")
 ` + connectionHelp + `  --remedies          also work out the righting options: ballast into an intact
                       tank on the high side, a low-side tank pumped out, liquid
                       moved to the mirror tank; with negative upright GM (a loll)
@@ -59,7 +60,8 @@ func runSolve(args []string, stdout, stderr io.Writer) int {
 	fs.SetOutput(stderr)
 	fs.Usage = func() {}
 	vessel := fs.String("vessel", vessels.Default, "")
-	var open, perm, conns listFlag
+	var open, conns listFlag
+	var perm permFlag
 	fs.Var(&open, "open", "")
 	fs.Var(&conns, "connection", "")
 	fs.Var(&perm, "perm", "")
@@ -99,7 +101,7 @@ func runSolve(args []string, stdout, stderr io.Writer) int {
 	r := report.New(v, source(info), a, now(), version)
 	r.Spread = &sp
 	r.Condition = info.Condition
-	r.Open = inOrderGiven(open)
+	r.Open = inOrderGiven(v, open)
 	if *remedies {
 		rs := engine.FindRemedies(v, sp.Damage)
 		r.Remedies = &rs
@@ -129,14 +131,10 @@ var writers = map[string]func(io.Writer, report.Report) error{
 // damageOf turns --open and --perm into a damage state of v. It returns a
 // message saying what is wrong when a name or a value cannot be used.
 func damageOf(v *engine.Vessel, open, perm []string) (engine.Damage, string) {
-	index := map[string]int{}
-	for i, c := range v.Compartments {
-		index[c.Name] = i
-	}
 	d := v.Intact()
 	for _, name := range open {
-		i, ok := index[name]
-		if !ok {
+		i := v.CompartmentIndex(name)
+		if i < 0 {
 			return nil, unknownName("--open", name, v)
 		}
 		d[i].Open = true
@@ -151,12 +149,12 @@ func damageOf(v *engine.Vessel, open, perm []string) (engine.Damage, string) {
 			return nil, fmt.Sprintf("--perm %q: write NAME=μ, e.g. --perm %q", item, example+"=0.85")
 		}
 		name, val := strings.TrimSpace(item[:eq]), strings.TrimSpace(item[eq+1:])
-		i, ok := index[name]
-		if !ok {
+		i := v.CompartmentIndex(name)
+		if i < 0 {
 			return nil, unknownName("--perm", name, v)
 		}
-		// Read as the dashboard reads it (vessels.ParsePermeability); the
-		// comma separates items here, so it cannot be a decimal mark.
+		// Read as the dashboard reads it (vessels.ParsePermeability),
+		// decimal comma included (permFlag keeps "0,85" whole).
 		mu, err := vessels.ParsePermeability(val)
 		if err != nil {
 			return nil, fmt.Sprintf("--perm %q: permeability %v", name, err)
@@ -169,11 +167,15 @@ func damageOf(v *engine.Vessel, open, perm []string) (engine.Damage, string) {
 	return d, ""
 }
 
-// inOrderGiven returns the names in the order first given, once each.
-func inOrderGiven(names []string) []string {
+// inOrderGiven returns the compartments named, as the vessel file spells
+// them (names ignore case), in the order first given, once each.
+func inOrderGiven(v *engine.Vessel, names []string) []string {
 	seen := map[string]bool{}
 	var out []string
 	for _, n := range names {
+		if i := v.CompartmentIndex(n); i >= 0 {
+			n = v.Compartments[i].Name
+		}
 		if !seen[n] {
 			seen[n] = true
 			out = append(out, n)
@@ -186,12 +188,6 @@ func inOrderGiven(names []string) []string {
 func unknownName(flagName, name string, v *engine.Vessel) string {
 	var b strings.Builder
 	fmt.Fprintf(&b, "%s: %q is not a compartment of %s.", flagName, name, v.Name)
-	for _, c := range v.Compartments {
-		if strings.EqualFold(c.Name, name) {
-			fmt.Fprintf(&b, " Did you mean %q? Names must match exactly.", c.Name)
-			break
-		}
-	}
 	if len(v.Compartments) == 0 {
 		b.WriteString(" It has no compartments.")
 		return b.String()
