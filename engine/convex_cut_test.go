@@ -84,23 +84,7 @@ func TestConvexMatchesClip(t *testing.T) {
 			}
 			fast := sol.belowHinted(p, hints)
 			slow := slowBelow(sol, p)
-			L, B, D := 80.0, 16.0, 8.0
-			for _, q := range [][3]float64{
-				{fast.V, slow.V, sol.Volume()},
-				{fast.MX, slow.MX, sol.Volume() * L},
-				{fast.MY, slow.MY, sol.Volume() * B},
-				{fast.MZ, slow.MZ, sol.Volume() * D},
-				{fast.AW, slow.AW, L * B},
-				{fast.SX, slow.SX, L * B * L},
-				{fast.SY, slow.SY, L * B * B},
-				{fast.IXX, slow.IXX, L * B * L * L},
-				{fast.IXY, slow.IXY, L * B * L * B},
-				{fast.IYY, slow.IYY, L * B * B * B},
-			} {
-				if math.Abs(q[0]-q[1]) > 1e-12*q[2] {
-					t.Fatalf("%s, plane %+v: fast %v, clip %v", name, p, q[0], q[1])
-				}
-			}
+			sameImmersion(t, name+", ", p, fast, slow, sol.Volume(), 80, 16, 8)
 		}
 	}
 }

@@ -31,22 +31,34 @@
 // # Where each piece lives
 //
 //   - Geometry: section.go (a section clipped by a plane), solid.go (slabs
-//     integrated along the length; the plane of the water), waterline_cut.go
-//     (the fast path of a slab's immersion), hull.go and compartment.go.
+//     integrated along the length; the plane of the water), waterline_cut.go,
+//     convex_cut.go and outline_cursor.go (the fast paths of a slab's
+//     immersion), hull.go and compartment.go; leads.go and neighbours.go
+//     (where openings lead, which compartments touch).
 //   - The loading condition: vessel.go (weights, tanks and their contents,
 //     damage states, permeability).
 //   - Where she floats: equilibrium.go (Newton with the exact Jacobian, the
 //     lost-buoyancy and added-weight methods, NoEquilibrium) and position.go
 //     (what a solved position reports: drafts, GM, freeboards, openings).
+//   - The two GMs every screen shows: gm_upright.go.
 //   - The righting-lever curve: gz.go (the curve and what is read off it),
 //     spline.go (the not-a-knot spline that joins its samples, fitted once per
-//     curve) and criteria.go (the stability criteria read off it).
+//     curve), criteria.go (the stability criteria read off it) and gz_sides.go
+//     (the worse side near upright).
 //   - The hand method: hand.go. The flags: flags.go. Righting options:
-//     remedy.go. All of one keystroke: assess.go (Assess and the result types).
+//     remedy.go and remedy_stages.go (each checked while carried out).
+//     Still-water strength: strength.go. All of one keystroke: assess.go
+//     (Assess and the result types).
 //   - Flooding over time: flood_case.go (what a run is given), flood.go (the
 //     run: Torricelli inflow, the re-solve at each evaluation, stopping),
 //     dormand_prince.go (the integrator), flood_events.go, flood_end.go,
-//     flood_report.go (table, trace, intermediate stages) and shell_hole.go.
+//     flood_direction.go, flood_report.go (table, trace, intermediate
+//     stages), shell_hole.go, spill.go (what a holed tank lets out) and
+//     warm_start.go (each solve of a sequence started from the last).
+//   - Readings and exercises: draftmark.go, draftsurvey.go, reading.go,
+//     diagnose.go and diagnose_fit.go (what is flooding, from what the crew
+//     reads), trend.go; drill.go, drill_event.go, drill_reading.go (an
+//     exercise's truth and what the crew would read of it).
 //   - Water spreading through the ship: connection.go (doors, ducts,
 //     pipes and cross-flooding fittings between compartments), spread.go
 //     (the final state of progressive flooding, to a fixed point),

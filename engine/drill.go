@@ -79,13 +79,12 @@ type Drill struct {
 	pumps  []float64 // m³/s per compartment
 	conns  map[string]bool
 
-	guess Plane
-	haveG bool
-	pos   *Position
-	noEq  *NoEquilibrium
-	dt    float64
-	rows  []DrillRow
-	lost  bool
+	warm warmStart
+	pos  *Position
+	noEq *NoEquilibrium
+	dt   float64
+	rows []DrillRow
+	lost bool
 
 	equalisedAny bool // set by equalise: the state changed, the slope must be taken anew
 
@@ -287,12 +286,11 @@ type drillEval struct {
 func (d *Drill) eval(w []float64) drillEval {
 	n := len(w)
 	e := drillEval{rate: make([]float64, n), heads: make([][]float64, n)}
-	pos, err := NewProblem(d.v, d.damage(w)).EquilibriumFrom(d.guess, d.haveG)
-	if err != nil {
-		e.noEq = asNoEquilibrium(err)
+	pos, noEq := d.warm.solve(d.v, d.damage(w))
+	if noEq != nil {
+		e.noEq = noEq
 		return e
 	}
-	d.guess, d.haveG = pos.Plane, true
 	e.pos = pos
 	p := pos.Plane
 	for i := range w {

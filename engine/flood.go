@@ -109,8 +109,7 @@ type FloodRun struct {
 
 	st      stepper
 	last    floodEval // at the step end (FSAL)
-	guess   Plane
-	haveG   bool
+	warm    warmStart
 	solves  int
 	recs    []stepRec
 	evals   []floodEval // at each accepted step end (index-aligned with recs, plus the start at 0)
@@ -277,15 +276,12 @@ func (r *FloodRun) damageAt(w float64) Damage {
 func (r *FloodRun) eval(w float64) floodEval {
 	w = math.Max(0, math.Min(w, r.capacity))
 	e := floodEval{water: w}
-	d := r.damageAt(w)
-	pr := NewProblem(r.v, d)
-	pos, err := pr.EquilibriumFrom(r.guess, r.haveG)
+	pos, noEq := r.warm.solve(r.v, r.damageAt(w))
 	r.solves++
-	if err != nil {
-		e.noEq = asNoEquilibrium(err)
+	if noEq != nil {
+		e.noEq = noEq
 		return e
 	}
-	r.guess, r.haveG = pos.Plane, true
 	e.pos = pos
 	p := pos.Plane
 	h := r.c.Hole

@@ -4,8 +4,9 @@ import "math"
 
 // This file holds the one root-finder of the engine for functions that cost
 // a solve per value: the angle of vanishing stability (gz.go), the moment
-// of an event inside a flooding step (flood_events.go) and the amount of a
-// righting option that brings her nearest upright (remedy.go).
+// of an event inside a flooding step (flood_events.go, network_run.go) and
+// the amount of a righting option that brings her nearest upright
+// (remedy.go).
 
 // illinois narrows a bracket [a, b] of a sign change of f (fa and fb of
 // opposite signs, f(a) = fa, f(b) = fb) by the Illinois variant of regula

@@ -39,6 +39,15 @@ type slab struct {
 	dents  []dent  // …unless the plane runs in one of these directions
 }
 
+// planeSpan returns the lowest and the highest z of plane p over the
+// slab's box (x from x0 to x1, |y| up to ymax): a slab whose lowest point
+// is above hi is dry, one whose highest is below lo wholly immersed.
+func (s *slab) planeSpan(p Plane) (lo, hi float64) {
+	lo = p.A + min(p.B*s.x0, p.B*s.x1) - math.Abs(p.C)*s.ymax
+	hi = p.A + max(p.B*s.x0, p.B*s.x1) + math.Abs(p.C)*s.ymax
+	return lo, hi
+}
+
 func newSlab(x0, x1 float64, a, b []Point) slab {
 	if len(a) != len(b) {
 		panic("engine: slab ends with different vertex counts")
@@ -253,10 +262,8 @@ func (s *Solid) belowHinted(p Plane, hints []arc) Immersion {
 	phi := math.Atan(p.C)
 	for i := range s.slabs {
 		sl := &s.slabs[i]
-		// Whole-slab bounds test: the plane's lowest and highest z over the
-		// slab's box.
-		zlo := p.A + min(p.B*sl.x0, p.B*sl.x1) - math.Abs(p.C)*sl.ymax
-		zhi := p.A + max(p.B*sl.x0, p.B*sl.x1) + math.Abs(p.C)*sl.ymax
+		// Whole-slab bounds test.
+		zlo, zhi := sl.planeSpan(p)
 		switch {
 		case sl.zmin >= zhi:
 			continue

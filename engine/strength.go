@@ -365,8 +365,7 @@ func GirderStrength(v *Vessel, d Damage, pos *Position) (*Strength, string) {
 			// Solid.Below: a slab wholly above it carries nothing, one
 			// wholly below it its whole section, a polynomial in x
 			// (the prefix sums of waterline_cut.go).
-			zlo := p.A + min(p.B*b.x0, p.B*b.x1) - math.Abs(p.C)*b.ymax
-			zhi := p.A + max(p.B*b.x0, p.B*b.x1) + math.Abs(p.C)*b.ymax
+			zlo, zhi := b.planeSpan(p)
 			switch {
 			case b.zmin >= zhi:
 				continue

@@ -158,7 +158,7 @@ func (r Report) compartment(name string) *engine.Compartment {
 		return nil
 	}
 	for _, c := range r.Vessel.Compartments {
-		if c.Name == name {
+		if engine.SameName(c.Name, name) {
 			return c
 		}
 	}

@@ -83,14 +83,8 @@ func fileLines(t *testing.T, path string) []string {
 // as Update returns, before any Cmd (the computation) has run; its result
 // follows on a line of its own once the computation is done.
 func TestChangeLoggedBeforeItsComputation(t *testing.T) {
-	path := filepath.Join(t.TempDir(), "watch.log")
-	lg, err := openEventLog(path)
-	if err != nil {
-		t.Fatal(err)
-	}
+	m, lg, path := loggedModel(t, 100, 30)
 	defer lg.close()
-	m := testModel(t, 100, 30)
-	m.file = lg
 	m = selectSpace(t, m, "Hold 2")
 	mm, cmd := m.Update(keyMsg("space")) // no Cmd run yet: nothing computed
 	lines := fileLines(t, path)
@@ -182,13 +176,7 @@ func TestDiskFullKeepsEveryLineWhole(t *testing.T) {
 // why, the screen says so, and no later line goes to the old file alone.
 func TestLogFileMovedOrDeleted(t *testing.T) {
 	for _, how := range []string{"moved", "deleted"} {
-		path := filepath.Join(t.TempDir(), "watch.log")
-		lg, err := openEventLog(path)
-		if err != nil {
-			t.Fatal(err)
-		}
-		m := testModel(t, 100, 30)
-		m.file = lg
+		m, lg, path := loggedModel(t, 100, 30)
 		m = openSpaces(t, m, "Hold 2")
 		if how == "moved" {
 			if err := os.Rename(path, path+".old"); err != nil {
@@ -229,14 +217,8 @@ func TestLogFileRefusedAtStart(t *testing.T) {
 // TestTooSmallTakesOnlyQuit: while the screen says it is too small, keys
 // change nothing and log nothing; q quits.
 func TestTooSmallTakesOnlyQuit(t *testing.T) {
-	path := filepath.Join(t.TempDir(), "watch.log")
-	lg, err := openEventLog(path)
-	if err != nil {
-		t.Fatal(err)
-	}
+	m, lg, path := loggedModel(t, 100, 30)
 	defer lg.close()
-	m := testModel(t, 100, 30)
-	m.file = lg
 	m = drive(t, m, tea.WindowSizeMsg{Width: 30, Height: 8})
 	if !m.lay.small || !strings.Contains(m.View(), "heelwatch needs") {
 		t.Fatal("not the too-small screen")
@@ -312,4 +294,18 @@ func TestLogAfterATornLine(t *testing.T) {
 	if len(lines) != 3 || lines[2] != "2025-03-14T02:30:00Z  next" {
 		t.Errorf("lines %q", lines)
 	}
+}
+
+// loggedModel is a test dashboard of w × h writing its event log to a new
+// file; it returns the model, the log and the file's path.
+func loggedModel(t *testing.T, w, h int) (model, *eventLog, string) {
+	t.Helper()
+	path := filepath.Join(t.TempDir(), "watch.log")
+	lg, err := openEventLog(path)
+	if err != nil {
+		t.Fatal(err)
+	}
+	m := testModel(t, w, h)
+	m.file = lg
+	return m, lg, path
 }

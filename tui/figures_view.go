@@ -147,10 +147,26 @@ func (m model) figuresView(w int) []string {
 	return fit(lines, w, figLines)
 }
 
-// flagsView lists the flags, most severe first, one line each, in w × h:
-// the mark of its severity and its sentence (the codes are on the criteria
-// sheet). When they do not all fit, the last line says how many more.
+// flagsView lists the flags about the ship, danger first, in w × h: each
+// flag with the mark of its severity and its sentence, wrapped. When not
+// all of them fit whole, the first get their whole sentence and each of the
+// rest at least its first line; when not even that fits, the last line
+// says how many more there are.
 func (m model) flagsView(w, h int) []string {
+	return fit(m.flagLines(w, h), w, h)
+}
+
+// flagsNeed is how many lines the flags take whole at width w.
+func (m model) flagsNeed(w int) int {
+	n := 0
+	for _, f := range m.derived.flags {
+		n += len(wrap(f.Message, w-2))
+	}
+	return max(1, n)
+}
+
+// flagLines is flagsView's lines, at most h of them.
+func (m model) flagLines(w, h int) []string {
 	st := m.st
 	if h <= 0 {
 		return nil
@@ -158,25 +174,43 @@ func (m model) flagsView(w, h int) []string {
 	flags := m.derived.flags
 	if len(flags) == 0 {
 		if m.cur == nil {
-			return fit([]string{st.Dim.Render("computing the intact condition…")}, w, h)
+			return []string{st.Dim.Render("computing the intact condition…")}
 		}
-		return fit([]string{st.Dim.Render("no flags raised")}, w, h)
+		return []string{st.Dim.Render("no flags raised")}
 	}
 	var lines []string
-	for i, f := range flags {
-		if len(flags) > h && i == h-1 {
-			more := len(flags) - i
-			if h == 1 {
-				// One line only: the worst flag, and the count of the rest.
-				lines = append(lines, flagLine(st, f, fmt.Sprintf("(+%d) ", more-1)))
-			} else {
-				lines = append(lines, st.Dim.Render(fmt.Sprintf("… %d more flags on the criteria sheet", more)))
+	if len(flags) > h {
+		for i, f := range flags[:h] {
+			if i == h-1 {
+				more := len(flags) - i
+				if h == 1 {
+					// One line only: the worst flag, and the count of the rest.
+					return []string{flagLine(st, f, fmt.Sprintf("(+%d) ", more-1))}
+				}
+				return append(lines, st.Dim.Render(fmt.Sprintf("… %d more flags on the criteria sheet", more)))
 			}
-			break
+			lines = append(lines, flagLine(st, f, ""))
 		}
-		lines = append(lines, flagLine(st, f, ""))
+		return lines
 	}
-	return fit(lines, w, h)
+	spare := h - len(flags)
+	for _, f := range flags {
+		ws := wrap(f.Message, w-2)
+		take := min(len(ws), 1+spare)
+		spare -= take - 1
+		if take < len(ws) {
+			// The rest of the sentence on its last line, cut with "…".
+			ws[take-1] = strings.Join(ws[take-1:], " ")
+		}
+		for k, l := range ws[:take] {
+			if k == 0 {
+				lines = append(lines, flagMark(st, f)+st.Text.Render(l))
+			} else {
+				lines = append(lines, "  "+st.Text.Render(l))
+			}
+		}
+	}
+	return lines
 }
 
 // flagLine is one flag: a mark by its severity and its sentence.

@@ -19,8 +19,9 @@ type handPanel struct {
 	show   bool
 	scroll int // the first step of the working shown
 
-	a  *engine.Assessment // the figures shown; nil while computing
-	st Styles
+	a       *engine.Assessment // the figures shown; nil while computing
+	st      Styles
+	caveats []engine.Flag // the hand method's caveats among the flags (severity.go)
 }
 
 // with returns the panel drawing assessment a in styles st.
@@ -64,11 +65,12 @@ func (hp handPanel) view(w, h int, withAnswers bool) []string {
 		for _, l := range wrap(hp.why(), w) {
 			lines = append(lines, st.Dim.Render(l))
 		}
-		return fit(lines, w, h)
+		return fit(append(lines, hp.caveatLines(w)...), w, h)
 	}
 	if withAnswers {
 		lines = append(lines, hp.answers(w)...)
 	}
+	lines = append(lines, hp.caveatLines(w)...)
 	return fit(append(lines, hp.working(w, h-len(lines))...), w, h)
 }
 

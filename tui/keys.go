@@ -8,6 +8,8 @@ import "github.com/charmbracelet/bubbles/key"
 type keyMap struct {
 	Move                  key.Binding // for the help bar only: up and down in one
 	Up, Down, Top, Bottom key.Binding
+	PageUp, PageDown      key.Binding // a screenful of the list
+	Find                  key.Binding // type-to-find in the list
 	Flood                 key.Binding // open to the sea / close up (intact)
 	MuUp, MuDown, MuSet   key.Binding
 	Undo, Reset           key.Binding
@@ -31,8 +33,11 @@ func newKeyMap() keyMap {
 		Move:     key.NewBinding(key.WithKeys("up", "down"), key.WithHelp("↑↓/jk", "move")),
 		Up:       key.NewBinding(key.WithKeys("up", "k"), key.WithHelp("↑/k", "up")),
 		Down:     key.NewBinding(key.WithKeys("down", "j"), key.WithHelp("↓/j", "down")),
-		Top:      key.NewBinding(key.WithKeys("home", "g", "pgup"), key.WithHelp("home/pgup", "first")),
-		Bottom:   key.NewBinding(key.WithKeys("end", "G", "pgdown"), key.WithHelp("end/pgdn", "last")),
+		Top:      key.NewBinding(key.WithKeys("home", "g"), key.WithHelp("home", "first")),
+		Bottom:   key.NewBinding(key.WithKeys("end", "G"), key.WithHelp("end", "last")),
+		PageUp:   key.NewBinding(key.WithKeys("pgup"), key.WithHelp("pgup", "page up")),
+		PageDown: key.NewBinding(key.WithKeys("pgdown"), key.WithHelp("pgdn", "page down")),
+		Find:     key.NewBinding(key.WithKeys("/"), key.WithHelp("/", "find")),
 		Flood:    key.NewBinding(key.WithKeys(" ", "enter"), key.WithHelp("space", "open/close")),
 		MuUp:     key.NewBinding(key.WithKeys("+", "="), key.WithHelp("+/−", "μ")),
 		MuDown:   key.NewBinding(key.WithKeys("-", "_"), key.WithHelp("−", "μ −0.05")),
@@ -60,7 +65,7 @@ func newKeyMap() keyMap {
 func (k keyMap) ShortHelp() []key.Binding {
 	// ? and q before the rest, so that a narrow bar cuts the others first;
 	// then the righting options, the flooding run, then the pictures.
-	return []key.Binding{k.Move, k.Flood, k.MuUp, k.MuSet, k.Undo, k.Help, k.Quit, k.Remedies, k.HoleRun, k.RunPanel, k.RunStage, k.Picture, k.Hand, k.Girder, k.Readings}
+	return []key.Binding{k.Move, k.Flood, k.MuUp, k.MuSet, k.Undo, k.Help, k.Quit, k.Remedies, k.HoleRun, k.RunPanel, k.RunStage, k.Picture, k.Hand, k.Girder, k.Readings, k.Find}
 }
 
 // FullHelp is the help shown with `?`, in three columns that fit 80
@@ -75,13 +80,15 @@ func (k keyMap) FullHelp() [][]key.Binding {
 	stage := say(k.RunStage, "s", "a run's stage shown")
 	stage.SetEnabled(true)
 	return [][]key.Binding{
-		{k.Up, k.Down, say(k.Top, "home", "first"), say(k.Bottom, "end", "last"), say(k.Picture, "tab", "next picture"),
-			say(k.HoleRun, "f", "hole & pumps"), say(k.RunPanel, "t", "run panel"), doorsKey},
+		{k.Up, k.Down, say(k.Top, "home", "first"), say(k.Bottom, "end", "last"),
+			say(k.PageUp, "pgup", "page up"), say(k.PageDown, "pgdn", "page down"),
+			say(k.Find, "/", "find by name"), say(k.Picture, "tab", "next picture"), say(k.HoleRun, "f", "hole & pumps")},
 		{say(k.Flood, "space", "open to sea / intact"), say(k.MuUp, "+ −", "permeability ±0.05"),
 			say(k.MuSet, "m", "type a permeability"), k.Undo, k.Reset, stage,
-			say(k.Remedies, "o", "righting options"), say(k.Girder, "b", "hull girder (l: limits)"),
-			say(k.Readings, "r", "marks, readings (n new)")},
-		{say(k.Hand, "h", "hand working on/off"), say(k.WorkUp, "[ ]", "scroll working/criteria"), k.Report,
+			say(k.Remedies, "o", "righting options"), say(k.Girder, "b", "hull girder, l limits"),
+			say(k.Readings, "r", "draft readings, n new")},
+		{say(k.RunPanel, "t", "run panel"), doorsKey, say(k.Hand, "h", "hand working on/off"),
+			say(k.WorkUp, "[ ]", "scroll working/criteria"), k.Report,
 			say(k.Palette, "c", "day / night / mono"), say(k.Help, "?", "close this help"),
 			say(k.Quit, "q", "quit (also ctrl+c)")},
 	}

@@ -17,7 +17,7 @@ const (
 const (
 	listWidthNarrow = 35
 	listWidthWide   = 37
-	posWidthWide    = 44
+	posWidthWide    = 50 // the figures with an opening's name whole (20 letters)
 )
 
 // layout is the division of the screen, worked out at the end of every Update by
@@ -42,7 +42,7 @@ type layout struct {
 }
 
 // maxFigWidth keeps each figure near its label on a wide column.
-const maxFigWidth = 52
+const maxFigWidth = 64
 
 // figLines is the height of the floating-position block: a heading and
 // nine figures.
@@ -71,6 +71,8 @@ func (m *model) resize() {
 		l.helpH = formLines
 	case modeMu:
 		l.helpH = 2
+	case modeFind:
+		l.helpH = findLines
 	default:
 		l.helpH = len(m.helpLines())
 	}
@@ -202,4 +204,30 @@ func wrap(text string, w int) []string {
 		out = append(out, line)
 	}
 	return out
+}
+
+// flagRoom divides the narrow screen's room under the figures between the
+// flags and the sheet: the flags take what they need whole, down to the
+// sheet's least height (a picture still readable), and never less than
+// resize gave them. With a danger flag the words come before the picture:
+// the flags may take the whole room (unless the hand working was asked
+// for), and a sheet too small to read gives its lines to them.
+func (m model) flagRoom() (flagH, sheetH int) {
+	l := m.lay
+	if l.sheetH == 0 {
+		return l.flagH, 0
+	}
+	room := l.flagH + l.sheetH
+	least := 8
+	if l.bodyH < 22 {
+		least = 6
+	}
+	if m.danger() && !m.hand.show {
+		least = 0
+	}
+	flagH = max(l.flagH, min(m.flagsNeed(l.rightW), room-least))
+	if room-flagH < 5 {
+		flagH = room
+	}
+	return flagH, room - flagH
 }

@@ -222,3 +222,14 @@ func (m model) detailView(w int) []string {
 	}
 	return []string{l1, l2, l3}
 }
+
+// page moves the selection a screenful of the list down (up when down is
+// false): as many compartments as the list shows, less one for the
+// context.
+func (m *model) page(down bool) {
+	n := max(1, m.listVisible()-1)
+	if !down {
+		n = -n
+	}
+	m.move(n)
+}

@@ -84,6 +84,7 @@ type model struct {
 	girder girderPanel  // the hull girder's shear force and bending moment (strength_view.go)
 	rd     readingPanel // draft marks, readings by hand and their diagnosis (reading_panel.go)
 	doors  doorsPanel   // the doors and valves, open or shut (doors.go)
+	find   finder       // the type-to-find of the compartment list (find.go)
 
 	rend    *lipgloss.Renderer
 	palette int
@@ -127,6 +128,7 @@ const (
 	modeBrowse mode = iota // the list, the panels and their keys
 	modeForm               // the flooding run's form (floodForm.update)
 	modeMu                 // a permeability being typed (editKey)
+	modeFind               // a compartment's name being typed (finder.update)
 )
 
 type undoEntry struct {
@@ -209,7 +211,7 @@ func newModel(v *engine.Vessel, info *vessels.Info, opts Options) model {
 	}
 	m.setStyles()
 	m.resize()
-	return m
+	return m.startWith(opts.Start)
 }
 
 // zoneOf places a compartment without a group by where it lies along the
@@ -291,7 +293,10 @@ func (m model) update(msg tea.Msg) (tea.Model, tea.Cmd) {
 			file += ", " + m.condition
 		}
 		file += ", all intact"
-		return m, m.addLogPair(m.now(), what+" → "+m.outcome(&a, false), file+" → "+m.outcome(&a, true))
+		logged := m.addLogPair(m.now(), what+" → "+m.outcome(&a, false), file+" → "+m.outcome(&a, true))
+		var start tea.Cmd
+		m, start = m.startCase() // the case given on the command line, if any
+		return m, tea.Batch(logged, start)
 
 	case resultMsg:
 		return m.takeResult(msg)
@@ -354,6 +359,8 @@ func (m model) update(msg tea.Msg) (tea.Model, tea.Cmd) {
 			return m.formKey(msg)
 		case modeMu:
 			return m.editKey(msg)
+		case modeFind:
+			return m.findKey(msg)
 		}
 		return m.key(msg)
 	}
@@ -390,6 +397,10 @@ func (m model) key(msg tea.KeyMsg) (tea.Model, tea.Cmd) {
 		m.move(-len(m.rows))
 	case key.Matches(msg, k.Bottom):
 		m.move(len(m.rows))
+	case key.Matches(msg, k.PageUp), key.Matches(msg, k.PageDown):
+		m.page(key.Matches(msg, k.PageDown))
+	case key.Matches(msg, k.Find):
+		return m.openFind()
 	case key.Matches(msg, k.Picture):
 		m.picture = (m.picture + 1) % numPictures
 	case key.Matches(msg, k.WorkUp), key.Matches(msg, k.WorkDown):
@@ -419,17 +430,7 @@ func (m model) key(msg tea.KeyMsg) (tea.Model, tea.Cmd) {
 		m.girder, cmd = m.girder.update(msg)
 		return m, cmd
 	case key.Matches(msg, k.RunPanel):
-		if m.rem.show {
-			// The righting options give way to the run's panel.
-			m.rem.show = false
-			m.flood.show = true
-			return m, nil
-		}
-		if m.flood.show {
-			m.flood.show = false
-			return m, m.stopFlood()
-		}
-		m.flood.show = true
+		return m.runPanelKey()
 	case n == 0:
 		return m, nil
 	case key.Matches(msg, k.HoleRun):
@@ -437,29 +438,11 @@ func (m model) key(msg tea.KeyMsg) (tea.Model, tea.Cmd) {
 	case key.Matches(msg, k.RunStage):
 		return m.applyStage()
 	case key.Matches(msg, k.Flood):
-		d := cloneDamage(m.damage)
-		c := m.v.Compartments[m.sel]
-		var what string
-		if d[m.sel].Open || d[m.sel].WaterM3 > 0 {
-			d[m.sel].Open, d[m.sel].WaterM3 = false, 0
-			what = c.Name + " closed up (intact)"
-		} else {
-			d[m.sel].Open = true
-			what = c.Name + " opened to sea (μ " + muText(m.mu(d, m.sel)) + ")"
-		}
-		return m.apply(d, what)
-	case key.Matches(msg, k.MuUp), key.Matches(msg, k.MuDown):
-		step := 0.05
-		if key.Matches(msg, k.MuDown) {
-			step = -0.05
-		}
-		old := m.mu(m.damage, m.sel)
-		mu := math.Round((old+step)*100) / 100
-		mu = math.Min(1, math.Max(0.05, mu))
-		if mu == old {
-			return m, nil
-		}
-		return m.setMu(mu)
+		return m.toggleFlooded()
+	case key.Matches(msg, k.MuUp):
+		return m.stepMu(0.05)
+	case key.Matches(msg, k.MuDown):
+		return m.stepMu(-0.05)
 	case key.Matches(msg, k.MuSet):
 		m.mode = modeMu
 		m.inputErr = ""
@@ -486,6 +469,48 @@ func (m model) key(msg tea.KeyMsg) (tea.Model, tea.Cmd) {
 		return m.apply(m.v.Intact(), "all compartments intact (reset)")
 	}
 	return m, nil
+}
+
+// runPanelKey shows the flooding run's panel in place of the righting
+// options', or hides it (stopping a run in progress).
+func (m model) runPanelKey() (tea.Model, tea.Cmd) {
+	switch {
+	case m.rem.show:
+		// The righting options give way to the run's panel.
+		m.rem.show = false
+		m.flood.show = true
+	case m.flood.show:
+		m.flood.show = false
+		return m, m.stopFlood()
+	default:
+		m.flood.show = true
+	}
+	return m, nil
+}
+
+// toggleFlooded opens the selected compartment to the sea, or closes it up
+// (intact) when it is open or holds water.
+func (m model) toggleFlooded() (tea.Model, tea.Cmd) {
+	d := cloneDamage(m.damage)
+	c := m.v.Compartments[m.sel]
+	if d[m.sel].Open || d[m.sel].WaterM3 > 0 {
+		d[m.sel].Open, d[m.sel].WaterM3 = false, 0
+		return m.apply(d, c.Name+" closed up (intact)")
+	}
+	d[m.sel].Open = true
+	return m.apply(d, c.Name+" opened to sea (μ "+muText(m.mu(d, m.sel))+")")
+}
+
+// stepMu moves the selected compartment's permeability by step, to the
+// nearest hundredth, between 0.05 and 1.
+func (m model) stepMu(step float64) (tea.Model, tea.Cmd) {
+	old := m.mu(m.damage, m.sel)
+	mu := math.Round((old+step)*100) / 100
+	mu = math.Min(1, math.Max(0.05, mu))
+	if mu == old {
+		return m, nil
+	}
+	return m.setMu(mu)
 }
 
 // scroll moves by step lines (up when negative) the text the scroll keys

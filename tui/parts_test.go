@@ -279,13 +279,7 @@ func TestNightPalette(t *testing.T) {
 // TestEventLogFile: each change reaches the file, with its time and the
 // resulting heel and drafts, before the next key.
 func TestEventLogFile(t *testing.T) {
-	path := filepath.Join(t.TempDir(), "watch.log")
-	lg, err := openEventLog(path)
-	if err != nil {
-		t.Fatal(err)
-	}
-	m := testModel(t, 100, 30)
-	m.file = lg
+	m, lg, path := loggedModel(t, 100, 30)
 	m = openSpaces(t, m, goldenOpen...)
 	data, err := os.ReadFile(path)
 	if err != nil {

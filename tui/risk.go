@@ -2,7 +2,6 @@ package tui
 
 import (
 	"math"
-	"sort"
 
 	"heelwatch/engine"
 )
@@ -20,7 +19,8 @@ type derived struct {
 	// nearest to immersion (-1 if none); nearestAll counts weathertight ones too.
 	nearest    int
 	nearestAll int
-	flags      []engine.Flag // most severe first
+	flags      []engine.Flag // about the ship: danger, caution, notes
+	hand       []engine.Flag // the hand method's caveats, shown with its working
 }
 
 // leadsInto returns, for each opening of v, the compartment it leads into:
@@ -65,8 +65,7 @@ func derive(v *engine.Vessel, into []int, a *engine.Assessment) derived {
 	if a == nil {
 		return d
 	}
-	d.flags = append([]engine.Flag(nil), a.Flags...)
-	sort.SliceStable(d.flags, func(i, j int) bool { return d.flags[i].Severity > d.flags[j].Severity })
+	d.flags, d.hand = splitFlags(a.Flags)
 	p := a.Position
 	if p == nil {
 		return d

@@ -31,6 +31,9 @@ type Options struct {
 	ReportDir string
 	// Version is heelwatch's version, printed in the report.
 	Version string
+	// Start is the damage state the dashboard opens with (--open and
+	// --perm on the command line), undone with the undo key; nil: intact.
+	Start engine.Damage
 }
 
 // Run shows the dashboard for v until the officer quits. info, which may be

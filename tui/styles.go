@@ -187,6 +187,15 @@ func newStyles(r *lipgloss.Renderer, p palette) Styles {
 		s.Selected = r.NewStyle().Background(p.accent).Foreground(p.onBand).Bold(true)
 	}
 
+	if mono || p.name == "night" {
+		// Where danger and headings share a colour (night: all red) or have
+		// none (mono), danger is told by reverse video and caution by an
+		// underline, besides their marks (‼ and !).
+		s.Danger = s.Danger.Reverse(true)
+		s.Fail = s.Fail.Reverse(true)
+		s.Caution = s.Caution.Underline(true)
+	}
+
 	s.Help = help.Styles{
 		ShortKey:       fg(p.heading).Bold(true),
 		ShortDesc:      fg(p.dim),

@@ -73,14 +73,34 @@ func (m model) headerView(w int) string {
 	} else if m.noPosition() {
 		sum = append(sum, "NO FLOATING POSITION")
 	}
-	right := st.Header.Render(strings.Join(sum, " · "))
-	right = m.logWarning() + right
-	if m.pending() {
-		right = st.Busy.Render(m.spin.View()+" computing") + "  " + right
+	summary := func(sum []string) string {
+		right := st.Header.Render(strings.Join(sum, " · "))
+		if m.cur != nil || m.failure != "" {
+			// The worst of the flags in a word, first, so that it is the
+			// last thing a narrow screen cuts.
+			right = m.severityWord() + st.Header.Render(" · ") + right
+		}
+		right = m.logWarning() + right
+		if m.pending() {
+			right = st.Busy.Render(m.spin.View()+" computing") + "  " + right
+		}
+		return right
 	}
-	right += st.Dim.Render("  " + m.st.Palette)
+	right := summary(sum)
+	if lipgloss.Width(left)+lipgloss.Width(right)+1 > w && len(sum) > 1 {
+		// Short of room, the count of flooded spaces goes first: the
+		// list's heading says it too.
+		right = summary(sum[1:])
+	}
+	if palette := st.Dim.Render("  " + m.st.Palette); lipgloss.Width(left)+lipgloss.Width(right+palette)+1 <= w {
+		right += palette
+	}
 	if m.condition != "" && lipgloss.Width(left)+lipgloss.Width(right)+len([]rune(m.condition))+4 <= w {
 		left += st.Dim.Render(" · " + m.condition)
+	}
+	if lipgloss.Width(left)+lipgloss.Width(right)+1 > w {
+		// The vessel's name gives way to the figures.
+		left = fitLine(left, max(10, w-lipgloss.Width(right)-1))
 	}
 	gap := w - lipgloss.Width(left) - lipgloss.Width(right)
 	if gap < 1 {
@@ -111,9 +131,10 @@ func (m model) narrowBody() []string {
 	if m.noPosition() {
 		right = append(right, m.bannerView(l.rightW, l.flagH+l.sheetH)...)
 	} else {
-		right = append(right, m.flagsView(l.rightW, l.flagH)...)
-		if l.sheetH > 0 {
-			right = append(right, m.sheetView(l.rightW, l.sheetH)...)
+		flagH, sheetH := m.flagRoom()
+		right = append(right, m.flagsView(l.rightW, flagH)...)
+		if sheetH > 0 {
+			right = append(right, m.sheetView(l.rightW, sheetH)...)
 		}
 	}
 	return besides(sep, fit(list, l.listW, l.bodyH), fit(right, l.rightW, l.bodyH))
@@ -124,7 +145,7 @@ func (m model) narrowBody() []string {
 // it is shown.
 func (m model) sheetView(w, h int) []string {
 	if m.hand.show {
-		return fit(m.hand.with(m.cur, m.st).view(w, h, true), w, h)
+		return fit(m.handShown().view(w, h, true), w, h)
 	}
 	return fit(m.pictureView(m.picture, w, h), w, h)
 }
@@ -154,12 +175,14 @@ func (m model) wideBody() []string {
 		// The hand method's answers right under the direct figures.
 		if m.cur.Hand != nil {
 			mid = append(mid, m.st.Heading.Render("HAND METHOD"))
-			mid = append(mid, m.hand.with(m.cur, m.st).answers(l.posW)...)
+			mid = append(mid, m.handShown().answers(l.posW)...)
 		} else {
 			mid = append(mid, m.st.Heading.Render("HAND METHOD"))
-			for _, s := range wrap(m.hand.with(m.cur, m.st).why(), l.posW) {
+			for _, s := range wrap(m.handShown().why(), l.posW) {
 				mid = append(mid, m.st.Dim.Render(s))
 			}
+			// Without a hand working below, its caveats go here.
+			mid = append(mid, m.handShown().caveatLines(l.posW)...)
 		}
 	} else {
 		mid = append(mid, m.flagsView(l.posW, l.topH-figLines)...)
@@ -179,8 +202,8 @@ func (m model) wideBody() []string {
 		pics = m.floodRow(m.width, l.picH)
 	case m.noPosition():
 		pics = m.bannerView(m.width, l.picH)
-	case m.hand.with(m.cur, m.st).hasWorking():
-		pics = m.hand.with(m.cur, m.st).view(m.width, l.picH, false)
+	case m.handShown().hasWorking():
+		pics = m.handShown().view(m.width, l.picH, false)
 	default:
 		pics = besides(sep,
 			fit(m.cached(picSection, l.picW[0], l.picH, m.sectionView), l.picW[0], l.picH),
@@ -208,6 +231,8 @@ func (m model) footView() []string {
 	switch m.mode {
 	case modeForm:
 		return m.form.view(m.width, formLines)
+	case modeFind:
+		return strings.Split(m.find.view(m.width, findLines), "\n")
 	case modeMu:
 		name := ""
 		if len(m.v.Compartments) > 0 {

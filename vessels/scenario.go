@@ -270,91 +270,113 @@ func (r *reader) scenarioEvent(t *table, sc *Scenario) (engine.DrillEvent, bool)
 	} else if wantComp {
 		ok = false
 	}
-	area, aOK := t.num("area", "m², the hole's area", kind == "breach")
-	z, zOK := t.num("z", "m, the height of the hole's centre above the baseline", false)
-	cd, cdOK := t.num("cd", "the hole's discharge coefficient", false)
-	state, sOK := t.choice("state", kind == "pump", []string{"starts", "fails", "stops"})
-	capm, capOK := t.num("capacity_m3h", "m³/h", false)
-	conn, connOK := t.str("connection", kind == "connection", "the connection's name")
-	open, openOK := t.boolean("open")
-	flooded, fOK := t.boolean("flooded")
+	var k eventKeys
+	k.area, k.aOK = t.num("area", "m², the hole's area", kind == "breach")
+	k.z, k.zOK = t.num("z", "m, the height of the hole's centre above the baseline", false)
+	k.cd, k.cdOK = t.num("cd", "the hole's discharge coefficient", false)
+	k.state, k.sOK = t.choice("state", kind == "pump", []string{"starts", "fails", "stops"})
+	k.capm, k.capOK = t.num("capacity_m3h", "m³/h", false)
+	k.conn, k.connOK = t.str("connection", kind == "connection", "the connection's name")
+	k.open, k.openOK = t.boolean("open")
+	k.flooded, k.fOK = t.boolean("flooded")
 	t.finish()
-	for _, k := range []string{"area", "z", "cd"} {
-		need(k, kind == "breach")
+	for _, key := range []string{"area", "z", "cd"} {
+		need(key, kind == "breach")
 	}
-	for _, k := range []string{"state", "capacity_m3h"} {
-		need(k, kind == "pump")
+	for _, key := range []string{"state", "capacity_m3h"} {
+		need(key, kind == "pump")
 	}
-	for _, k := range []string{"connection", "open"} {
-		need(k, kind == "connection")
+	for _, key := range []string{"connection", "open"} {
+		need(key, kind == "connection")
 	}
 	need("flooded", kind == "mark")
 	if !kOK {
 		return e, false
 	}
+	if !r.scenarioKind(t, sc, &e, kind, k) {
+		return e, false
+	}
+	return e, ok
+}
+
+// eventKeys are the keys of an [[event]] that belong to one kind or another.
+type eventKeys struct {
+	area, z, cd, capm     float64
+	aOK, zOK, cdOK, capOK bool
+	state, conn           string
+	sOK, connOK           bool
+	open, flooded         bool
+	openOK, fOK           bool
+}
+
+// scenarioKind reads what an [[event]] of this kind says into e, from the
+// keys k read for it; false when something is missing or wrong (said).
+func (r *reader) scenarioKind(t *table, sc *Scenario, e *engine.DrillEvent, kind string, k eventKeys) bool {
+	v := sc.Vessel
 	switch kind {
 	case "breach":
 		e.Kind = engine.DrillBreach
-		if !aOK || e.Compartment < 0 {
-			return e, false
+		if !k.aOK || e.Compartment < 0 {
+			return false
 		}
-		if !(area > 0 && area <= MaxHoleM2) {
-			r.addf(t.keyPath("area"), "%g m² must be above zero and at most %d m²", area, MaxHoleM2)
-			return e, false
+		if !(k.area > 0 && k.area <= MaxHoleM2) {
+			r.addf(t.keyPath("area"), "%g m² must be above zero and at most %d m²", k.area, MaxHoleM2)
+			return false
 		}
-		if cdOK && !(cd > 0 && cd <= 1) {
-			r.addf(t.keyPath("cd"), "%g is not a discharge coefficient: 0 < C ≤ 1 (about 0.6 sharp-edged, 0.7 a ragged hole)", cd)
-			return e, false
+		if k.cdOK && !(k.cd > 0 && k.cd <= 1) {
+			r.addf(t.keyPath("cd"), "%g is not a discharge coefficient: 0 < C ≤ 1 (about 0.6 sharp-edged, 0.7 a ragged hole)", k.cd)
+			return false
 		}
-		if !zOK {
+		z, cd := k.z, k.cd
+		if !k.zOK {
 			z = math.NaN()
 		}
-		if !cdOK {
+		if !k.cdOK {
 			cd = math.NaN()
 		}
-		res, err := ResolveFlood(v, sc.Info, FloodAsk{Compartment: e.Compartment, AreaM2: area, ZM: z, Cd: cd, Pumps: []FloodPump{}, By: "scenario"})
+		res, err := ResolveFlood(v, sc.Info, FloodAsk{Compartment: e.Compartment, AreaM2: k.area, ZM: z, Cd: cd, Pumps: []FloodPump{}, By: "scenario"})
 		if err != nil {
 			key := "area"
 			if fe := AsFloodAskError(err); fe != nil && fe.Field == FieldZ {
 				key = "z"
 			}
 			r.addf(t.keyPath(key), "%v", err)
-			return e, false
+			return false
 		}
 		e.Hole = res.Case.Hole
 	case "pump":
 		e.Kind = engine.DrillPump
-		if !sOK || e.Compartment < 0 {
-			return e, false
+		if !k.sOK || e.Compartment < 0 {
+			return false
 		}
-		if state == "starts" {
+		if k.state == "starts" {
 			e.PumpM3h = sc.Info.Compartments[e.Compartment].PumpM3h
-			if capOK {
-				e.PumpM3h = capm
+			if k.capOK {
+				e.PumpM3h = k.capm
 			}
 			if !(e.PumpM3h > 0 && e.PumpM3h <= MaxPumpM3h) {
 				r.addf(t.keyPath("capacity_m3h"), "give the pumping capacity that starts on %q, above 0 and at most %.0f m³/h (the vessel file gives it no pump_m3h)", v.Compartments[e.Compartment].Name, float64(MaxPumpM3h))
-				return e, false
+				return false
 			}
-		} else if capOK {
-			r.addf(t.keyPath("capacity_m3h"), "a pump that %s has no capacity to give", state)
-			return e, false
+		} else if k.capOK {
+			r.addf(t.keyPath("capacity_m3h"), "a pump that %s has no capacity to give", k.state)
+			return false
 		}
 	case "connection":
 		e.Kind = engine.DrillConnection
-		if !connOK {
-			return e, false
+		if !k.connOK {
+			return false
 		}
-		if !openOK {
+		if !k.openOK {
 			r.addf(t.keyPath("open"), "missing: say open = true (found or left open) or open = false (closed)")
-			return e, false
+			return false
 		}
-		name, found := connectionNamed(v, conn)
+		name, found := connectionNamed(v, k.conn)
 		if !found {
-			r.addf(t.keyPath("connection"), "%q is not a connection of %s%s", conn, v.Name, connectionList(v))
-			return e, false
+			r.addf(t.keyPath("connection"), "%q is not a connection of %s%s", k.conn, v.Name, connectionList(v))
+			return false
 		}
-		e.Name, e.Open = name, open
+		e.Name, e.Open = name, k.open
 	case "note", "report":
 		e.Kind = engine.DrillNote
 		if kind == "report" {
@@ -362,20 +384,20 @@ func (r *reader) scenarioEvent(t *table, sc *Scenario) (engine.DrillEvent, bool)
 		}
 		if e.Text == "" {
 			r.addf(t.keyPath("text"), "missing: a %s says something to the crew: give its text", kind)
-			return e, false
+			return false
 		}
 	case "mark":
 		e.Kind = engine.DrillMark
 		if e.Compartment < 0 {
-			return e, false
+			return false
 		}
-		if !fOK {
+		if !k.fOK {
 			r.addf(t.keyPath("flooded"), "missing: say flooded = true or flooded = false")
-			return e, false
+			return false
 		}
-		e.Flooded = flooded
+		e.Flooded = k.flooded
 	}
-	return e, ok
+	return true
 }
 
 // Setup returns what the drill of sc is played from, with extra events

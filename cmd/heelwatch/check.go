@@ -20,7 +20,12 @@ Usage:
 With no argument it checks --vessel, or the bundled %q. Every problem in a
 file is listed with its line and key. For a good file it prints the hull's
 dimensions, the loading condition, the intact floating position and the
-compartments with their volume, use, permeability and contents.
+compartments with their volume, use, permeability and contents; and a
+second look at the model, with WARNING where it finds something to mend:
+the intact criteria (pass or FAIL, figure and margin), the hull volume
+below the deck that no compartment holds (a warning above 1 %%), and holes
+that are not on the shell (more than 0.05 m from it) or not in their
+compartment; and the openings that lead to no compartment (no leads_to).
 
 Exit status: 0 every file is good and floats intact; 1 a file has problems;
 2 bad usage; 3 a good file whose loading condition does not float intact.
@@ -123,6 +128,7 @@ func summarise(w io.Writer, v *engine.Vessel, info *vessels.Info) int {
 	}
 	fmt.Fprintf(tw, "  criteria\t%s\n", crit)
 	tw.Flush()
+	practice(w, v, info)
 
 	fmt.Fprintf(w, "\n  %s\n", plural(len(v.Compartments), "compartment"))
 	tw = tabwriter.NewWriter(w, 0, 0, 2, ' ', 0)

@@ -17,6 +17,8 @@ type dashboardOptions struct {
 	logFile   string
 	palette   string
 	reportDir string
+	open      listFlag // compartments open to the sea at start
+	perm      permFlag // their permeabilities
 }
 
 // interactive reports whether the dashboard can run: standard input and
@@ -49,22 +51,32 @@ func runDashboard(vessel string, o dashboardOptions, stdout, stderr io.Writer) i
 	if status != exitOK {
 		return status
 	}
+	start, msg := damageOf(v, o.open, o.perm)
+	if msg != "" {
+		fmt.Fprintln(stderr, "heelwatch:", msg)
+		return exitUsage
+	}
 	if interactive(stdout) {
 		err := tui.Run(v, info, tui.Options{LogFile: o.logFile, Palette: o.palette,
-			VesselFile: source(info), ReportDir: o.reportDir, Version: version})
+			VesselFile: source(info), ReportDir: o.reportDir, Version: version, Start: start})
 		if err != nil {
 			fmt.Fprintln(stderr, "heelwatch:", err)
 			return exitFailed
 		}
 		return exitOK
 	}
-	a := engine.Assess(v, v.Intact())
+	a := engine.Assess(v, start)
 	r := report.New(v, source(info), a, now(), version)
 	r.Condition = info.Condition
+	r.Open = inOrderGiven(v, o.open)
 	if err := report.Text(stdout, r); err != nil {
 		return exitFailed
 	}
-	fmt.Fprintln(stdout, "\nNot a terminal, so no dashboard: this is the intact condition. 'heelwatch solve --open NAME' solves a damage case.")
+	if len(o.open) > 0 {
+		fmt.Fprintln(stdout, "\nNot a terminal, so no dashboard: this is the damage case given with --open.")
+	} else {
+		fmt.Fprintln(stdout, "\nNot a terminal, so no dashboard: this is the intact condition. 'heelwatch solve --open NAME' solves a damage case.")
+	}
 	if a.Position == nil {
 		return exitNoEq
 	}

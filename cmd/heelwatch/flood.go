@@ -115,6 +115,7 @@ func runFlood(args []string, stdout, stderr io.Writer) int {
 	if msg != "" {
 		return fail("%s", msg)
 	}
+	index := func(name string) (int, bool) { return compartmentNamed(v, name) } // names ignore case
 	ask := vessels.FloodAsk{Compartment: -1, AreaM2: math.NaN(), ZM: math.NaN(), Cd: cd,
 		LimitS: limit.Seconds(), Criteria: *criteria, By: "command line"}
 	for _, p := range pumps {
@@ -122,8 +123,8 @@ func runFlood(args []string, stdout, stderr io.Writer) int {
 		if len(nums) != 1 {
 			return fail("--pump %q: write NAME:M3H, the capacity in m³/h, e.g. --pump %q", p, exampleName(v)+":120")
 		}
-		i := v.CompartmentIndex(name)
-		if i < 0 {
+		i, ok := index(name)
+		if !ok {
 			return fail("%s", unknownName("--pump", name, v))
 		}
 		ask.Pumps = append(ask.Pumps, vessels.FloodPump{Compartment: i, M3h: nums[0]})
@@ -134,15 +135,15 @@ func runFlood(args []string, stdout, stderr io.Writer) int {
 		if msg := finiteNumbers("--hole", holes[0], nums); msg != "" {
 			return fail("%s", msg)
 		}
-		i := v.CompartmentIndex(name)
-		if i < 0 {
+		i, ok := index(name)
+		if !ok {
 			msg := unknownName("--hole", name, v)
 			if strings.Contains(holes[0], ":") {
 				msg += "\n(write --hole NAME[:AREA[:Z]], AREA in m² and Z in m above the baseline)"
 			}
 			return fail("%s", msg)
 		}
-		ask.Compartment, holeName = i, v.Compartments[i].Name
+		ask.Compartment, holeName = i, name
 		if len(nums) > 0 {
 			ask.AreaM2 = nums[0]
 		}
@@ -157,21 +158,7 @@ func runFlood(args []string, stdout, stderr io.Writer) int {
 	ask.Base = base
 	fc, err := vessels.ResolveFlood(v, info, ask)
 	if err != nil {
-		switch e := vessels.AsFloodAskError(err); {
-		case e == nil:
-			return fail("%v", err)
-		case e.Field == vessels.FieldArea && holeName != "" && !math.IsNaN(ask.AreaM2):
-			return fail("--hole %q: %s", holeName, e.Msg)
-		case e.Field == vessels.FieldZ:
-			return fail("--hole: %s", e.Msg)
-		case e.Field == vessels.FieldCd:
-			return fail("--cd %q: %s", *cdText, e.Msg)
-		case e.Field == vessels.FieldPumps:
-			return fail("--pump: %s", e.Msg)
-		case e.Field == vessels.FieldBase:
-			return fail("--open: %s; leave it out of --open", e.Msg)
-		}
-		return fail("%s", err)
+		return fail("%s", floodAskWords(err, holeName, !math.IsNaN(ask.AreaM2), *cdText))
 	}
 	c := fc.Case
 	rep, err := engine.RunFlood(c, nil)
@@ -191,6 +178,34 @@ func runFlood(args []string, stdout, stderr io.Writer) int {
 		fmt.Fprintln(stderr, "heelwatch flood: writing the report:", err)
 		return exitFailed
 	}
+	return floodExit(fr, stderr)
+}
+
+// floodAskWords says what is wrong with the flooding case asked, naming the
+// flag it came from (vessels.ResolveFlood decides; this only words it).
+func floodAskWords(err error, holeName string, areaGiven bool, cdText string) string {
+	e := vessels.AsFloodAskError(err)
+	switch {
+	case e == nil:
+		return err.Error()
+	case e.Field == vessels.FieldArea && holeName != "" && areaGiven:
+		return fmt.Sprintf("--hole %q: %s", holeName, e.Msg)
+	case e.Field == vessels.FieldZ:
+		return "--hole: " + e.Msg
+	case e.Field == vessels.FieldCd:
+		return fmt.Sprintf("--cd %q: %s", cdText, e.Msg)
+	case e.Field == vessels.FieldPumps:
+		return "--pump: " + e.Msg
+	case e.Field == vessels.FieldBase:
+		return "--open: " + e.Msg + "; leave it out of --open"
+	}
+	return err.Error()
+}
+
+// floodExit is the exit status of a finished run, with why on stderr when
+// she sinks or capsizes (3) or the run failed.
+func floodExit(fr report.Flood, stderr io.Writer) int {
+	rep := fr.Run
 	if n := fr.Network; n != nil && (n.End == engine.FloodSinks || n.End == engine.FloodCapsizes) {
 		fmt.Fprintf(stderr, "heelwatch flood: through the ship: %s\n", n.EndReason)
 		return exitNoEq

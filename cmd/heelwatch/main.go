@@ -68,6 +68,9 @@ Flags:
                        vision) or mono; NO_COLOR in the environment means mono
   --reports DIR        dashboard: where its report key writes Markdown reports
                        (default: the working directory)
+  --open A,B           dashboard: start with these compartments open to the sea
+                       (names ignore case; the undo key brings her back intact)
+  --perm NAME=μ,...    dashboard: their permeability, as solve's --perm
   --version            print heelwatch's version
   --help               this help
 
@@ -90,6 +93,8 @@ func run(args []string, stdout, stderr io.Writer) int {
 	fs.StringVar(&dash.logFile, "log", "", "")
 	fs.StringVar(&dash.palette, "palette", "day", "")
 	fs.StringVar(&dash.reportDir, "reports", "", "")
+	fs.Var(&dash.open, "open", "")
+	fs.Var(&dash.perm, "perm", "")
 	if err := fs.Parse(args); err != nil {
 		return usageError(err, stdout, stderr, "", func(w io.Writer) { fmt.Fprintf(w, mainHelp, vessels.Default) })
 	}
@@ -100,6 +105,10 @@ func run(args []string, stdout, stderr io.Writer) int {
 	rest := fs.Args()
 	if len(rest) == 0 {
 		return runDashboard(*vessel, dash, stdout, stderr)
+	}
+	if len(dash.open)+len(dash.perm) > 0 {
+		fmt.Fprintf(stderr, "heelwatch: --open and --perm before %q are the dashboard's: give them after the command\n", rest[0])
+		return exitUsage
 	}
 	cmd, rest := rest[0], rest[1:]
 	withVessel := func(a []string) []string {

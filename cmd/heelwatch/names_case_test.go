@@ -30,22 +30,3 @@ func TestCommandLineNamesIgnoreCase(t *testing.T) {
 		t.Errorf("flood --hole in another case: exit %d\n%s%s", code, out, errOut)
 	}
 }
-
-// --perm takes a decimal comma as the dashboard does (issue 10, point 11):
-// "Hold aft=0,85" is 0.85, not "Hold aft=0" and a stray "85"; the comma
-// still separates items.
-func TestPermDecimalComma(t *testing.T) {
-	code, m := solveJSON(t, "--vessel", "barge", "--open", "Hold aft,1 wing void S",
-		"--perm", "Hold aft=0,85,1 wing void S=0,9")
-	if code != 0 {
-		t.Fatalf("exit status %d", code)
-	}
-	got := map[string]float64{}
-	for _, o := range m["open_compartments"].([]any) {
-		om := o.(map[string]any)
-		got[om["name"].(string)] = om["permeability"].(float64)
-	}
-	if got["Hold aft"] != 0.85 || got["1 wing void S"] != 0.9 {
-		t.Errorf("permeabilities %v, want Hold aft 0.85 and 1 wing void S 0.9", got)
-	}
-}

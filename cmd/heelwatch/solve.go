@@ -20,10 +20,11 @@ Usage:
 Flags:
   --vessel FILE|NAME  the vessel file, or a bundled vessel's name (default %q)
   --open A,B          compartments open to the sea (lost buoyancy), by the names
-                      in the vessel file; repeat the flag or separate with commas
+                      in the vessel file (case does not matter); repeat the flag
+                      or separate with commas
   --perm NAME=μ,...   permeability of an open compartment for this solve,
-                      0 < μ ≤ 1, in place of the file's (e.g. --perm "Hold 2=0.85";
-                      a decimal comma or a percentage also: "Hold 2=0,85", "Hold 2=85%%")
+                      0 < μ ≤ 1, in place of the file's (e.g. --perm "Hold 2=0.85",
+                      "Hold 2=0,85" or "Hold 2=85%%")
 ` + connectionHelp + `  --remedies          also work out the righting options: ballast into an intact
                       tank on the high side, a low-side tank pumped out, liquid
                       moved to the mirror tank; with negative upright GM (a loll)
@@ -131,10 +132,11 @@ var writers = map[string]func(io.Writer, report.Report) error{
 // damageOf turns --open and --perm into a damage state of v. It returns a
 // message saying what is wrong when a name or a value cannot be used.
 func damageOf(v *engine.Vessel, open, perm []string) (engine.Damage, string) {
+	index := func(name string) (int, bool) { return compartmentNamed(v, name) } // names ignore case
 	d := v.Intact()
 	for _, name := range open {
-		i := v.CompartmentIndex(name)
-		if i < 0 {
+		i, ok := index(name)
+		if !ok {
 			return nil, unknownName("--open", name, v)
 		}
 		d[i].Open = true
@@ -149,12 +151,12 @@ func damageOf(v *engine.Vessel, open, perm []string) (engine.Damage, string) {
 			return nil, fmt.Sprintf("--perm %q: write NAME=μ, e.g. --perm %q", item, example+"=0.85")
 		}
 		name, val := strings.TrimSpace(item[:eq]), strings.TrimSpace(item[eq+1:])
-		i := v.CompartmentIndex(name)
-		if i < 0 {
+		i, ok := index(name)
+		if !ok {
 			return nil, unknownName("--perm", name, v)
 		}
 		// Read as the dashboard reads it (vessels.ParsePermeability),
-		// decimal comma included (permFlag keeps "0,85" whole).
+		// decimal comma included (permFlag keeps it in the item).
 		mu, err := vessels.ParsePermeability(val)
 		if err != nil {
 			return nil, fmt.Sprintf("--perm %q: permeability %v", name, err)
@@ -167,13 +169,14 @@ func damageOf(v *engine.Vessel, open, perm []string) (engine.Damage, string) {
 	return d, ""
 }
 
-// inOrderGiven returns the compartments named, as the vessel file spells
-// them (names ignore case), in the order first given, once each.
+// inOrderGiven returns the names in the order first given, once each,
+// spelt as in the vessel file (names ignore case; one not in the file is
+// kept as given).
 func inOrderGiven(v *engine.Vessel, names []string) []string {
 	seen := map[string]bool{}
 	var out []string
 	for _, n := range names {
-		if i := v.CompartmentIndex(n); i >= 0 {
+		if i, ok := compartmentNamed(v, n); ok {
 			n = v.Compartments[i].Name
 		}
 		if !seen[n] {
@@ -187,7 +190,7 @@ func inOrderGiven(v *engine.Vessel, names []string) []string {
 // unknownName refuses a compartment name by name and lists the valid ones.
 func unknownName(flagName, name string, v *engine.Vessel) string {
 	var b strings.Builder
-	fmt.Fprintf(&b, "%s: %q is not a compartment of %s.", flagName, name, v.Name)
+	fmt.Fprintf(&b, "%s: %q is not a compartment of %s (names ignore case).", flagName, name, v.Name)
 	if len(v.Compartments) == 0 {
 		b.WriteString(" It has no compartments.")
 		return b.String()
