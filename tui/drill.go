@@ -72,6 +72,8 @@ const (
 	pickMark
 	pickPump
 	pickStop
+	pickCounter
+	pickDoor   // a connection, not a compartment
 	pickBreach // instructor
 	pickFail   // instructor
 )
@@ -89,6 +91,8 @@ type drillModel struct {
 	status  string
 	marks   map[int]bool    // the crew's picture: marked flooded
 	ordered map[int]float64 // pumps the crew ordered on, m³/h
+	inlets  map[int]bool    // sea inlets the crew opened to counter-flood
+	doors   map[int]bool    // connections as the crew believe them: open (true) or shut
 
 	pick     pickFor
 	pickList []int
@@ -129,7 +133,7 @@ func newDrillModel(sc *vessels.Scenario, opts DrillOptions) (*drillModel, error)
 	}
 	in := newTextField()
 	in.CharLimit = 200
-	return &drillModel{sc: sc, d: d, speed: opts.Speed, opts: opts, marks: map[int]bool{}, ordered: map[int]float64{},
+	return &drillModel{sc: sc, d: d, speed: opts.Speed, opts: opts, marks: map[int]bool{}, ordered: map[int]float64{}, inlets: map[int]bool{}, doors: doorsAsFitted(sc),
 		input: in, w: 80, h: 24, debrief: viewport.New(80, 20)}, nil
 }
 
@@ -242,6 +246,18 @@ func (m *drillModel) key(k tea.KeyMsg) (tea.Model, tea.Cmd) {
 		m.startPick(pickMark, all)
 	case s == "p" && m.mode == drillCrew:
 		m.startPick(pickPump, all)
+	case s == "c" && m.mode == drillCrew:
+		m.startPick(pickCounter, all)
+	case s == "d" && m.mode == drillCrew:
+		if len(v.Connections) == 0 {
+			m.status = "This ship has no doors or valves between compartments in her file."
+		} else {
+			conns := make([]int, len(v.Connections))
+			for i := range conns {
+				conns[i] = i
+			}
+			m.startPick(pickDoor, conns)
+		}
 	case s == "g" && m.mode == drillCrew && !m.diagnosing:
 		m.diagnosing = true
 		m.status = "Diagnosing from our readings…"
@@ -308,13 +324,45 @@ func (m *drillModel) picking(s string) (tea.Model, tea.Cmd) {
 		p := m.pick
 		m.pick = pickNone
 		m.chosen(p, i)
+	case "o":
+		if m.pick == pickDoor {
+			m.pick = pickNone
+			m.orderDoor(m.pickList[m.cursor], true)
+		}
 	}
 	return m, nil
 }
 
-// chosen acts on the compartment picked.
+// orderDoor orders connection i open or shut (shut: checked and closed,
+// whatever the crew believed of it).
+func (m *drillModel) orderDoor(i int, open bool) {
+	c := m.d.Vessel().Connections[i]
+	m.doors[i] = open
+	m.decide(engine.DrillEvent{Kind: engine.DrillConnection, By: engine.ByCrew, Compartment: -1, Name: c.Name, Open: open})
+	if open {
+		m.status = c.Name + " ordered open."
+	} else {
+		m.status = c.Name + " ordered checked and shut."
+	}
+}
+
+// doorsAsFitted is the state of each connection as the vessel file gives
+// it: what the crew believe at the start.
+func doorsAsFitted(sc *vessels.Scenario) map[int]bool {
+	out := map[int]bool{}
+	for i, c := range sc.Vessel.Connections {
+		out[i] = c.Open
+	}
+	return out
+}
+
+// chosen acts on the compartment (or connection) picked.
 func (m *drillModel) chosen(p pickFor, i int) {
 	v := m.d.Vessel()
+	if p == pickDoor {
+		m.orderDoor(i, false)
+		return
+	}
 	name := v.Compartments[i].Name
 	switch p {
 	case pickMark:
@@ -336,6 +384,23 @@ func (m *drillModel) chosen(p pickFor, i int) {
 		delete(m.ordered, i)
 		m.decide(engine.DrillEvent{Kind: engine.DrillPump, By: engine.ByCrew, Compartment: i})
 		m.status = "Pumping stopped on " + name + "."
+	case pickCounter:
+		h, err := vessels.CounterfloodInlet(v, i, vessels.CounterfloodAreaM2)
+		if err != nil {
+			m.status = err.Error()
+			return
+		}
+		open := !m.inlets[i]
+		m.inlets[i] = open
+		if !open {
+			delete(m.inlets, i)
+		}
+		m.decide(engine.DrillEvent{Kind: engine.DrillCounterflood, By: engine.ByCrew, Compartment: i, Hole: h, Open: open})
+		if open {
+			m.status = fmt.Sprintf("Sea inlet opened into %s (%.2f m²).", name, h.AreaM2)
+		} else {
+			m.status = "Sea inlet into " + name + " shut."
+		}
 	case pickBreach:
 		m.pickComp = i
 		m.ask("breach", "Breach in "+name+": area m² [height z m]: ")
@@ -501,6 +566,8 @@ func (m *drillModel) footer() string {
 	switch {
 	case m.asking != "":
 		s = m.input.View()
+	case m.pick == pickDoor:
+		s = "↑/↓ choose · enter check and shut · o open · esc cancel"
 	case m.pick != pickNone:
 		s = "↑/↓ choose · enter take · esc cancel"
 	case m.mode == drillDebrief:
@@ -508,7 +575,10 @@ func (m *drillModel) footer() string {
 	case m.mode == drillInstructor:
 		s = "b breach · f pump fails · n note · D debrief · i crew · space pause · +/- speed · q quit"
 	default:
-		s = "m mark · p pump · s stop pump · g diagnose · space pause · +/- speed · i instructor"
+		s = "m mark · p pump · s stop pump · d doors · c counter-flood · g diagnose · space pause · +/- speed · i instructor · q quit"
+		if m.w < 120 {
+			s = "m mark·p pump·s stop·d doors·c cntr-flood·g diag·spc pause·+/-·i instr·q quit"
+		}
 	}
 	if m.status != "" && m.asking == "" && m.pick == pickNone {
 		s = m.status + " · " + s

@@ -86,6 +86,8 @@ type model struct {
 	doors  doorsPanel   // the doors and valves, open or shut (doors.go)
 	find   finder       // the type-to-find of the compartment list (find.go)
 
+	cond conditionPanel // the loading condition: tanks, weights, saving (condition_view.go)
+
 	rend    *lipgloss.Renderer
 	palette int
 	st      Styles
@@ -173,6 +175,7 @@ func newModel(v *engine.Vessel, info *vessels.Info, opts Options) model {
 	if info != nil {
 		m.condition = info.Condition
 	}
+	m = m.withCondition(opts)
 	m.into = leadsInto(v)
 	m.derived = derive(v, m.into, nil)
 	m.spaces = make([]space, len(v.Compartments))
@@ -268,6 +271,9 @@ func (m model) Update(msg tea.Msg) (tea.Model, tea.Cmd) {
 
 // update handles one message.
 func (m model) update(msg tea.Msg) (tea.Model, tea.Cmd) {
+	if mm, cmd, ok := m.conditionMsg(msg); ok {
+		return mm, cmd
+	}
 	if mm, cmd, ok := m.readingMsg(msg); ok {
 		return mm, cmd
 	}

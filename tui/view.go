@@ -115,6 +115,9 @@ func (m model) narrowBody() []string {
 	l := m.lay
 	sep := m.st.Dim.Render("│")
 	list := m.listView(l.listW, l.bodyH)
+	if m.cond.show {
+		return besides(sep, fit(list, l.listW, l.bodyH), fit(m.conditionLines(l.rightW, l.bodyH), l.rightW, l.bodyH))
+	}
 	if m.rd.show {
 		return besides(sep, fit(list, l.listW, l.bodyH), fit(m.readingLines(l.rightW, l.bodyH), l.rightW, l.bodyH))
 	}
@@ -196,6 +199,8 @@ func (m model) wideBody() []string {
 	rule := m.st.Dim.Render(strings.Repeat("─", m.width))
 	var pics []string
 	switch {
+	case m.cond.show:
+		pics = m.conditionLines(m.width, l.picH)
 	case m.rd.show:
 		pics = m.readingLines(m.width, l.picH)
 	case m.girder.show:
