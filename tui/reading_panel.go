@@ -150,6 +150,11 @@ func (m model) readingMsg(msg tea.Msg) (tea.Model, tea.Cmd, bool) {
 			d := m.v.Intact()
 			for _, s := range e.Spaces {
 				d[s.Compartment] = engine.SpaceState{WaterM3: s.WaterM3}
+				if s.Open {
+					// Level with the sea: open to it, so that she shows
+					// the GM of free communication, as solve does.
+					d[s.Compartment] = engine.SpaceState{Open: true}
+				}
 				if s.Permeability != m.v.Compartments[s.Compartment].Permeability {
 					d[s.Compartment].Permeability = s.Permeability
 				}
