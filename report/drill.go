@@ -214,6 +214,8 @@ func DrillLog(w io.Writer, dr Drill) error {
 			fmt.Fprintf(&b, "connection = %s\nopen = %t\n", strconv.Quote(e.Name), e.Open)
 		case engine.DrillMark:
 			fmt.Fprintf(&b, "flooded = %t\n", e.Flooded)
+		case engine.DrillCounterflood:
+			fmt.Fprintf(&b, "area = %s\nopen = %t\n", ftoa(e.Hole.AreaM2), e.Open)
 		}
 		if e.Text != "" {
 			fmt.Fprintf(&b, "text = %s\n", strconv.Quote(e.Text))

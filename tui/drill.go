@@ -29,7 +29,7 @@ import (
 // DrillOptions are the drill dashboard's settings.
 type DrillOptions struct {
 	Speed   float64 // scenario minutes per real minute at the start (1: real time)
-	LogFile string  // the drill's log (a scenario file) is written here after every change
+	LogFile string  // the drill's log (a scenario file) is written here after every change; the debrief beside it (.debrief.md) at the end
 	Version string
 }
 
@@ -72,8 +72,11 @@ const (
 	pickMark
 	pickPump
 	pickStop
-	pickBreach // instructor
-	pickFail   // instructor
+	pickCounter
+	pickDoor      // a connection, not a compartment
+	pickDoorTruth // instructor: a connection's true state
+	pickBreach    // instructor
+	pickFail      // instructor
 )
 
 // drillModel is the drill's root model.
@@ -89,6 +92,8 @@ type drillModel struct {
 	status  string
 	marks   map[int]bool    // the crew's picture: marked flooded
 	ordered map[int]float64 // pumps the crew ordered on, m³/h
+	inlets  map[int]bool    // sea inlets the crew opened to counter-flood
+	doors   map[int]bool    // connections as the crew believe them: open (true) or shut
 
 	pick     pickFor
 	pickList []int
@@ -129,7 +134,7 @@ func newDrillModel(sc *vessels.Scenario, opts DrillOptions) (*drillModel, error)
 	}
 	in := newTextField()
 	in.CharLimit = 200
-	return &drillModel{sc: sc, d: d, speed: opts.Speed, opts: opts, marks: map[int]bool{}, ordered: map[int]float64{},
+	return &drillModel{sc: sc, d: d, speed: opts.Speed, opts: opts, marks: map[int]bool{}, ordered: map[int]float64{}, inlets: map[int]bool{}, doors: doorsAsFitted(sc),
 		input: in, w: 80, h: 24, debrief: viewport.New(80, 20)}, nil
 }
 
@@ -182,6 +187,14 @@ func (m *drillModel) Update(msg tea.Msg) (tea.Model, tea.Cmd) {
 			return m, nil
 		}
 		m.debriefText = msg.text
+		if m.opts.LogFile != "" && m.d.Over() {
+			path := strings.TrimSuffix(m.opts.LogFile, ".toml") + ".debrief.md"
+			if err := os.WriteFile(path, []byte(msg.text), 0o644); err != nil {
+				m.status = "debrief: " + err.Error()
+			} else {
+				m.status = "Debrief written to " + path
+			}
+		}
 		m.debrief.SetContent(lipgloss.NewStyle().Width(m.w).Render(msg.text))
 		m.mode = drillDebrief
 		return m, nil
@@ -242,6 +255,18 @@ func (m *drillModel) key(k tea.KeyMsg) (tea.Model, tea.Cmd) {
 		m.startPick(pickMark, all)
 	case s == "p" && m.mode == drillCrew:
 		m.startPick(pickPump, all)
+	case s == "c" && m.mode == drillCrew:
+		m.startPick(pickCounter, all)
+	case s == "d" && m.mode == drillCrew:
+		if len(v.Connections) == 0 {
+			m.status = "This ship has no doors or valves between compartments in her file."
+		} else {
+			conns := make([]int, len(v.Connections))
+			for i := range conns {
+				conns[i] = i
+			}
+			m.startPick(pickDoor, conns)
+		}
 	case s == "g" && m.mode == drillCrew && !m.diagnosing:
 		m.diagnosing = true
 		m.status = "Diagnosing from our readings…"
@@ -261,6 +286,12 @@ func (m *drillModel) key(k tea.KeyMsg) (tea.Model, tea.Cmd) {
 		m.startPick(pickBreach, all)
 	case s == "f" && m.mode == drillInstructor:
 		m.startPick(pickFail, all)
+	case s == "o" && m.mode == drillInstructor && len(v.Connections) > 0:
+		conns := make([]int, len(v.Connections))
+		for i := range conns {
+			conns[i] = i
+		}
+		m.startPick(pickDoorTruth, conns)
 	case s == "n" && m.mode == drillInstructor:
 		m.ask("note", "Note to the crew: ")
 	case s == "D" && m.mode == drillInstructor:
@@ -308,13 +339,55 @@ func (m *drillModel) picking(s string) (tea.Model, tea.Cmd) {
 		p := m.pick
 		m.pick = pickNone
 		m.chosen(p, i)
+	case "o":
+		if m.pick == pickDoor {
+			m.pick = pickNone
+			m.orderDoor(m.pickList[m.cursor], true)
+		}
 	}
 	return m, nil
 }
 
-// chosen acts on the compartment picked.
+// orderDoor orders connection i open or shut (shut: checked and closed,
+// whatever the crew believed of it).
+func (m *drillModel) orderDoor(i int, open bool) {
+	c := m.d.Vessel().Connections[i]
+	m.doors[i] = open
+	m.decide(engine.DrillEvent{Kind: engine.DrillConnection, By: engine.ByCrew, Compartment: -1, Name: c.Name, Open: open})
+	if open {
+		m.status = c.Name + " ordered open."
+	} else {
+		m.status = c.Name + " ordered checked and shut."
+	}
+}
+
+// doorsAsFitted is the state of each connection as the vessel file gives
+// it: what the crew believe at the start.
+func doorsAsFitted(sc *vessels.Scenario) map[int]bool {
+	out := map[int]bool{}
+	for i, c := range sc.Vessel.Connections {
+		out[i] = c.Open
+	}
+	return out
+}
+
+// chosen acts on the compartment (or connection) picked.
 func (m *drillModel) chosen(p pickFor, i int) {
 	v := m.d.Vessel()
+	if p == pickDoor {
+		m.orderDoor(i, false)
+		return
+	}
+	if p == pickDoorTruth {
+		c := v.Connections[i]
+		m.decide(engine.DrillEvent{Kind: engine.DrillConnection, By: engine.ByInstructor, Compartment: -1, Name: c.Name, Open: !c.Open})
+		if c.Open {
+			m.status = c.Name + " now shut (instructor)."
+		} else {
+			m.status = c.Name + " now open (instructor): found open if the crew look."
+		}
+		return
+	}
 	name := v.Compartments[i].Name
 	switch p {
 	case pickMark:
@@ -336,6 +409,23 @@ func (m *drillModel) chosen(p pickFor, i int) {
 		delete(m.ordered, i)
 		m.decide(engine.DrillEvent{Kind: engine.DrillPump, By: engine.ByCrew, Compartment: i})
 		m.status = "Pumping stopped on " + name + "."
+	case pickCounter:
+		h, err := vessels.CounterfloodInlet(v, i, vessels.CounterfloodAreaM2)
+		if err != nil {
+			m.status = err.Error()
+			return
+		}
+		open := !m.inlets[i]
+		m.inlets[i] = open
+		if !open {
+			delete(m.inlets, i)
+		}
+		m.decide(engine.DrillEvent{Kind: engine.DrillCounterflood, By: engine.ByCrew, Compartment: i, Hole: h, Open: open})
+		if open {
+			m.status = fmt.Sprintf("Sea inlet opened into %s (%.2f m²).", name, h.AreaM2)
+		} else {
+			m.status = "Sea inlet into " + name + " shut."
+		}
 	case pickBreach:
 		m.pickComp = i
 		m.ask("breach", "Breach in "+name+": area m² [height z m]: ")
@@ -501,14 +591,19 @@ func (m *drillModel) footer() string {
 	switch {
 	case m.asking != "":
 		s = m.input.View()
+	case m.pick == pickDoor:
+		s = "↑/↓ choose · enter check and shut · o open · esc cancel"
 	case m.pick != pickNone:
 		s = "↑/↓ choose · enter take · esc cancel"
 	case m.mode == drillDebrief:
 		s = "↑/↓ pgup/pgdn scroll · q quit"
 	case m.mode == drillInstructor:
-		s = "b breach · f pump fails · n note · D debrief · i crew · space pause · +/- speed · q quit"
+		s = "b breach · f pump fails · o door open/shut · n note · D debrief · i crew · space pause · +/- · q quit"
 	default:
-		s = "m mark · p pump · s stop pump · g diagnose · space pause · +/- speed · i instructor"
+		s = "m mark · p pump · s stop pump · d doors · c counter-flood · g diagnose · space pause · +/- speed · i instructor · q quit"
+		if m.w < 120 {
+			s = "m mark·p pump·s stop·d doors·c cntr-flood·g diag·spc pause·+/-·i instr·q quit"
+		}
 	}
 	if m.status != "" && m.asking == "" && m.pick == pickNone {
 		s = m.status + " · " + s

@@ -46,6 +46,18 @@ func (m *drillModel) instructorView(w, h int) string {
 	if !wet {
 		lines = append(lines, "  none")
 	}
+	if len(v.Connections) > 0 {
+		var open []string
+		for _, c := range v.Connections {
+			if c.Open {
+				open = append(open, c.Name)
+			}
+		}
+		if len(open) == 0 {
+			open = []string{"none"}
+		}
+		lines = append(lines, clipText("  Open doors and valves: "+strings.Join(open, ", "), w))
+	}
 	lines = append(lines, "", bold.Render("Events"))
 	for _, e := range m.sc.Setup(m.extra...).Events {
 		done := "  "

@@ -130,7 +130,7 @@ func (s *scanner) document() {
 			s.blank()
 			path := joinPath(table, key)
 			s.note(path, line)
-			s.value(path, 0)
+			s.value(path, 0, line)
 		}
 		if s.i == start {
 			s.next() // always move on
@@ -226,8 +226,10 @@ func (s *scanner) quoted(q byte) string {
 }
 
 // value skips one value, noting the lines of array elements and of the
-// keys of inline tables under path.
-func (s *scanner) value(path string, depth int) {
+// keys of inline tables under path, which starts on line at. An element
+// on the line its array starts on is not noted (its line is found through
+// its parent's), so that a long table of numbers costs little.
+func (s *scanner) value(path string, depth, at int) {
 	switch c := s.peek(); c {
 	case '"', '\'':
 		if strings.HasPrefix(s.src[s.i:], string([]byte{c, c, c})) {
@@ -250,13 +252,20 @@ func (s *scanner) value(path string, depth int) {
 				continue
 			}
 			n++
-			el := path + "[" + itoa(n) + "]"
-			s.note(el, s.line)
 			start := s.i
-			if depth < maxNesting {
-				s.value(el, depth+1)
+			c := s.peek()
+			if s.line == at && c != '[' && c != '{' {
+				s.value("", depth+1, at) // a scalar or a string: nothing to note
 			} else {
-				s.scalar()
+				el := path + "[" + itoa(n) + "]"
+				if s.line != at {
+					s.note(el, s.line)
+				}
+				if depth < maxNesting {
+					s.value(el, depth+1, s.line)
+				} else {
+					s.scalar()
+				}
 			}
 			if s.i == start {
 				s.next()
@@ -287,7 +296,7 @@ func (s *scanner) value(path string, depth int) {
 				p := joinPath(path, k)
 				s.note(p, line)
 				if depth < maxNesting {
-					s.value(p, depth+1)
+					s.value(p, depth+1, line)
 				} else {
 					s.scalar()
 				}

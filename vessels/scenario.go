@@ -46,7 +46,12 @@ type Scenario struct {
 const AlarmLevelM = 0.2
 
 // ScenarioKinds are the kinds of [[event]].
-var ScenarioKinds = []string{"breach", "pump", "connection", "note", "report", "mark"}
+var ScenarioKinds = []string{"breach", "pump", "connection", "note", "report", "mark", "counterflood"}
+
+// CounterfloodAreaM2 is the area of the sea inlet a counter-flooding
+// opens when the scenario or the crew gives none: 0.03 m², about the bore
+// of a 200 mm sea valve (practice).
+const CounterfloodAreaM2 = 0.03
 
 // BundledScenario is one scenario shipped with heelwatch.
 type BundledScenario struct{ Name, Title string }
@@ -263,7 +268,7 @@ func (r *reader) scenarioEvent(t *table, sc *Scenario) (engine.DrillEvent, bool)
 			ok = false
 		}
 	}
-	wantComp := kind == "breach" || kind == "pump" || kind == "mark" || kind == ""
+	wantComp := kind == "breach" || kind == "pump" || kind == "mark" || kind == "counterflood" || kind == ""
 	if cn, has := t.str("compartment", wantComp && kOK, "the compartment's name"); has {
 		e.Compartment = r.compartmentNamed(t.keyPath("compartment"), cn, v)
 		ok = ok && e.Compartment >= 0
@@ -272,6 +277,9 @@ func (r *reader) scenarioEvent(t *table, sc *Scenario) (engine.DrillEvent, bool)
 	}
 	var k eventKeys
 	k.area, k.aOK = t.num("area", "m², the hole's area", kind == "breach")
+	if kind == "counterflood" && !k.aOK && !t.has("area") {
+		k.area, k.aOK = CounterfloodAreaM2, true
+	}
 	k.z, k.zOK = t.num("z", "m, the height of the hole's centre above the baseline", false)
 	k.cd, k.cdOK = t.num("cd", "the hole's discharge coefficient", false)
 	k.state, k.sOK = t.choice("state", kind == "pump", []string{"starts", "fails", "stops"})
@@ -280,15 +288,15 @@ func (r *reader) scenarioEvent(t *table, sc *Scenario) (engine.DrillEvent, bool)
 	k.open, k.openOK = t.boolean("open")
 	k.flooded, k.fOK = t.boolean("flooded")
 	t.finish()
-	for _, key := range []string{"area", "z", "cd"} {
+	need("area", kind == "breach" || kind == "counterflood")
+	for _, key := range []string{"z", "cd"} {
 		need(key, kind == "breach")
 	}
 	for _, key := range []string{"state", "capacity_m3h"} {
 		need(key, kind == "pump")
 	}
-	for _, key := range []string{"connection", "open"} {
-		need(key, kind == "connection")
-	}
+	need("connection", kind == "connection")
+	need("open", kind == "connection" || kind == "counterflood")
 	need("flooded", kind == "mark")
 	if !kOK {
 		return e, false
@@ -386,6 +394,22 @@ func (r *reader) scenarioKind(t *table, sc *Scenario, e *engine.DrillEvent, kind
 			r.addf(t.keyPath("text"), "missing: a %s says something to the crew: give its text", kind)
 			return false
 		}
+	case "counterflood":
+		e.Kind = engine.DrillCounterflood
+		if !k.aOK || e.Compartment < 0 {
+			return false
+		}
+		if !k.openOK {
+			r.addf(t.keyPath("open"), "missing: say open = true (the sea inlet opened) or open = false (shut)")
+			return false
+		}
+		e.Open = k.open
+		h, err := CounterfloodInlet(v, e.Compartment, k.area)
+		if err != nil {
+			r.addf(t.keyPath("area"), "%v", err)
+			return false
+		}
+		e.Hole = h
 	case "mark":
 		e.Kind = engine.DrillMark
 		if e.Compartment < 0 {
@@ -413,4 +437,14 @@ func (sc *Scenario) Setup(extra ...engine.DrillEvent) engine.DrillSetup {
 		}
 	}
 	return engine.DrillSetup{Vessel: sc.Vessel, Events: ev, EndMin: sc.Minutes, Alarms: sc.Alarms, AlarmLevel: AlarmLevelM, PumpM3h: pumps}
+}
+
+// CounterfloodInlet is the sea inlet that counter-floods compartment ci:
+// area m² (above 0, at most MaxHoleM2) at the compartment's lowest point
+// in the shell (engine.ShellHole), C_d that of a sharp-edged orifice.
+func CounterfloodInlet(v *engine.Vessel, ci int, area float64) (engine.Hole, error) {
+	if !(area > 0 && area <= MaxHoleM2) {
+		return engine.Hole{}, fmt.Errorf("a sea inlet's area %g m² must be above zero and at most %d m²", area, MaxHoleM2)
+	}
+	return engine.ShellHole(v, ci, area, math.NaN(), engine.DefaultDischargeCoefficient)
 }

@@ -4,6 +4,7 @@ import (
 	"errors"
 	"strings"
 	"testing"
+	"time"
 
 	"heelwatch/engine"
 	"heelwatch/vessels"
@@ -87,4 +88,43 @@ func TestScenarioRefused(t *testing.T) {
 			t.Errorf("no problem at %s in:\n%v", c.key, err)
 		})
 	}
+}
+
+// FuzzParseScenario: whatever the bytes, the scenario reader returns a
+// scenario or an error, never a panic, and every problem names its file.
+//
+//	go test ./vessels -run '^$' -fuzz FuzzParseScenario -fuzztime 10s
+func FuzzParseScenario(f *testing.F) {
+	for _, b := range vessels.BundledScenarios() {
+		sc, err := vessels.OpenScenario(b.Name)
+		if err != nil {
+			f.Fatal(err)
+		}
+		_ = sc
+	}
+	f.Add([]byte(goodHead + "[[event]]\nminutes = 1\nkind = \"breach\"\ncompartment = \"Hold 1\"\narea = 0.1\nz = 2\n"))
+	f.Add([]byte(goodHead + "alarms = [\"Hold 2\"]\n[[event]]\nminutes = 2\nkind = \"counterflood\"\ncompartment = \"Wing tank 2 P\"\nopen = true\n"))
+	f.Add([]byte(goodHead + "[[event]]\nminutes = 2\nkind = \"connection\"\nconnection = \"WT door ER/stores\"\nopen = true\n"))
+	f.Add([]byte(goodHead + "[[event]]\nminutes = 2\nkind = \"pump\"\ncompartment = \"Hold 2\"\nstate = \"starts\"\n"))
+	f.Fuzz(func(t *testing.T, data []byte) {
+		t0 := time.Now()
+		sc, err := vessels.ParseScenario("fuzz.toml", data, "")
+		if d := time.Since(t0); d > 3*time.Second {
+			t.Fatalf("%v to read %q", d, data)
+		}
+		if err != nil {
+			var ps vessels.Problems
+			if errors.As(err, &ps) {
+				for _, p := range ps {
+					if p.File != "fuzz.toml" && !strings.HasPrefix(p.File, "bundled/") {
+						t.Fatalf("problem without the file: %v", p)
+					}
+				}
+			}
+			return
+		}
+		if sc.Vessel == nil || !(sc.Minutes > 0) {
+			t.Fatalf("a scenario without vessel or length: %+v", sc)
+		}
+	})
 }

@@ -33,7 +33,8 @@ Flags:
   --speed N        dashboard: scenario minutes per real minute at the start
                    (1 = real time, default 10; the instructor changes it)
   --log FILE       dashboard: write the drill's log (a scenario file that replays
-                   it) to FILE after every change, and at the end
+                   it) to FILE after every change, and at the end; the debrief
+                   is written beside it (FILE.debrief.md, .toml dropped)
 
 Exit status: 0 done; 1 bad scenario or vessel file (file, line and key named);
 2 bad usage; 3 she sinks or capsizes in the drill.
