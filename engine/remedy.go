@@ -214,7 +214,7 @@ func FindRemedies(v *Vessel, d Damage) RemedySet {
 		if math.Abs(pos.HeelDeg) < 0.005 {
 			where = "upright"
 		}
-		rs.Summary = fmt.Sprintf("She floats %s with positive GM (%.2f m): no righting action is needed.", where, rs.UprightGMM)
+		rs.Summary = fmt.Sprintf("She floats %s with positive GM (%.2f m): no righting action is needed for list or loll. These options weigh heel and GM only: trim, freeboard and the hull girder are in the flags.", where, rs.UprightGMM)
 		return rs
 	default:
 		rs.Needed = true
