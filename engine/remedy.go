@@ -219,7 +219,7 @@ func FindRemedies(v *Vessel, d Damage) RemedySet {
 	default:
 		rs.Needed = true
 		rs.Summary = fmt.Sprintf("Upright her GM is %.2f m: she lies %s with a list (weight or water off the centreline), not a loll. Weight taken on or moved to the %s side brings her back.",
-			rs.UprightGMM, heelWords(pos.HeelDeg), high)
+			rs.UprightGMM, heelWords(pos.HeelDeg), high) + crossFloodingWords(v, d)
 	}
 
 	now := remedyMeasure(&pos)
