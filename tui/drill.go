@@ -166,10 +166,13 @@ func (m *drillModel) Update(msg tea.Msg) (tea.Model, tea.Cmd) {
 		return m, nil
 	case drillTick:
 		m.advance(drillTickEvery.Seconds())
-		if m.d.Over() && !m.debriefed {
+		if m.d.Over() {
+			if m.debriefed {
+				return m, nil // the clock stops at the end
+			}
 			m.debriefed = true
 			m.writeLog()
-			return m, tea.Batch(m.makeDebrief(), m.tick())
+			return m, m.makeDebrief()
 		}
 		return m, m.tick()
 	case drillDiagnosisMsg:
