@@ -190,8 +190,13 @@ func NetworkText(w io.Writer, rep engine.NetworkReport) error {
 	e.line("Water spreading through the ship")
 	e.line("  (the run above follows the holed compartment alone, as if every connection were shut; here the sea")
 	e.line("  comes in through the hole and goes on through the open connections and the openings that go under)")
+	if len(rep.Paths) > 0 {
+		// The paths the run follows, not the water's: an opening carries
+		// water only while it is under (the events say when one does).
+		e.line("  Paths it follows (an opening only while it is under water; the events say which carried water):")
+	}
 	for _, p := range rep.Paths {
-		e.line("  ", p.Name, " (", p.Kind, "): ", p.From, " → ", p.To)
+		e.line("    ", p.Name, " (", p.Kind, "): ", p.From, " → ", p.To)
 	}
 	e.line("Outcome: ", FloodHeadline(rep.End), " after ", Duration(rep.EndS), ". ", sentence(rep.EndReason), ".")
 	t := table{right: []bool{false, true, true, true, true, true}}

@@ -136,12 +136,13 @@ func StrengthLevelMark(s engine.Severity) string {
 	return strings.ToUpper(s.String())
 }
 
-// PctWords is a share of a permissible value, "—" without one.
+// PctWords is a share of a permissible value as engine.ShareShown rounds
+// it, "—" without one.
 func PctWords(pct, limit float64) string {
 	if !(limit > 0) {
 		return "—"
 	}
-	return num(pct, 0, "%")
+	return num(engine.ShareShown(pct), 0, "%")
 }
 
 // SenseWords says a bending moment's sense: "hogging", "sagging".

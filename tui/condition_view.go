@@ -577,7 +577,8 @@ func (m model) takeCondition(what string) (tea.Model, tea.Cmd) {
 			nv = nv.WithConnection(i, c.Open)
 		}
 	}
-	stop := m.stopFlood() // a run going on is of the old condition
+	var stop tea.Cmd
+	m.flood, stop = m.flood.with(m).stop(&m) // a run going on is of the old condition
 	m.v = nv
 	m.cond.note = what
 	m.cond.gen++

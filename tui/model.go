@@ -79,7 +79,7 @@ type model struct {
 	mode     mode // what the keys work on
 
 	form   floodForm    // the hole-and-pumps form of a flooding run
-	flood  floodState   // the flooding run and its panel
+	flood  floodPanel   // the flooding run and its panel (flood.go)
 	rem    remedyPanel  // the righting options and their panel (remedy.go)
 	girder girderPanel  // the hull girder's shear force and bending moment (strength_view.go)
 	rd     readingPanel // draft marks, readings by hand and their diagnosis (reading_panel.go)
@@ -163,7 +163,7 @@ func newModel(v *engine.Vessel, info *vessels.Info, opts Options) model {
 		rend:    lipgloss.DefaultRenderer(),
 		damage:  v.Intact(),
 		latest:  new(atomic.Int64),
-		flood:   floodState{latest: new(atomic.Int64)},
+		flood:   floodPanel{latest: new(atomic.Int64)},
 		rem:     remedyPanel{latest: new(atomic.Int64)},
 		changes: map[int]change{},
 		results: map[int][2]string{},
@@ -328,19 +328,14 @@ func (m model) update(msg tea.Msg) (tea.Model, tea.Cmd) {
 		m.spin, cmd = m.spin.Update(msg)
 		return m, cmd
 
-	case floodStepMsg:
-		return m.takeFloodStep(msg)
-
-	case floodDoneMsg:
-		return m.takeFloodReport(msg)
+	case floodStepMsg, floodDoneMsg, netDoneMsg:
+		return m.updateFlood(msg)
 
 	case remedyMsg:
 		return m.updateRemedies(msg)
 
 	case doorMsg:
 		return m.takeDoor(msg)
-	case netDoneMsg:
-		return m.takeNet(msg)
 
 	case tea.KeyMsg:
 		msg = plainKey(msg)
@@ -434,14 +429,15 @@ func (m model) key(msg tea.KeyMsg) (tea.Model, tea.Cmd) {
 		var cmd tea.Cmd
 		m.girder, cmd = m.girder.update(msg)
 		return m, cmd
-	case key.Matches(msg, k.RunPanel):
-		return m.runPanelKey()
+	case key.Matches(msg, k.RunPanel) && m.rem.show:
+		// The righting options give way to the run's panel.
+		m.rem.show, m.flood.show = false, true
+	case key.Matches(msg, k.RunPanel), key.Matches(msg, k.RunStage):
+		return m.updateFlood(msg)
 	case n == 0:
 		return m, nil
 	case key.Matches(msg, k.HoleRun):
 		return m.openForm()
-	case key.Matches(msg, k.RunStage):
-		return m.applyStage()
 	case key.Matches(msg, k.Flood):
 		return m.toggleFlooded()
 	case key.Matches(msg, k.MuUp):
@@ -472,23 +468,6 @@ func (m model) key(msg tea.KeyMsg) (tea.Model, tea.Cmd) {
 			return m, nil
 		}
 		return m.apply(m.v.Intact(), "all compartments intact (reset)")
-	}
-	return m, nil
-}
-
-// runPanelKey shows the flooding run's panel in place of the righting
-// options', or hides it (stopping a run in progress).
-func (m model) runPanelKey() (tea.Model, tea.Cmd) {
-	switch {
-	case m.rem.show:
-		// The righting options give way to the run's panel.
-		m.rem.show = false
-		m.flood.show = true
-	case m.flood.show:
-		m.flood.show = false
-		return m, m.stopFlood()
-	default:
-		m.flood.show = true
 	}
 	return m, nil
 }

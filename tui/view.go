@@ -128,7 +128,7 @@ func (m model) narrowBody() []string {
 		return besides(sep, fit(list, l.listW, l.bodyH), fit(m.doorsLines(l.rightW, l.bodyH), l.rightW, l.bodyH))
 	}
 	if m.flood.show {
-		return besides(sep, fit(list, l.listW, l.bodyH), m.floodPanel(l.rightW, l.bodyH))
+		return besides(sep, fit(list, l.listW, l.bodyH), strings.Split(m.flood.with(m).view(l.rightW, l.bodyH), "\n"))
 	}
 	right := fit(m.figuresView(min(l.rightW, maxFigWidth)), l.rightW, figLines)
 	if m.noPosition() {
@@ -153,10 +153,14 @@ func (m model) sheetView(w, h int) []string {
 	return fit(m.pictureView(m.picture, w, h), w, h)
 }
 
+// sectionPicture is the section as View draws it, drawn again only when it
+// changed.
+func (m model) sectionPicture(w, h int) []string { return m.cached(picSection, w, h, m.sectionView) }
+
 func (m model) pictureView(which, w, h int) []string {
 	switch which {
 	case picSection:
-		return m.cached(picSection, w, h, m.sectionView)
+		return m.sectionPicture(w, h)
 	case picProfile:
 		return m.cached(picProfile, w, h, m.profileView)
 	case picGZ:
@@ -204,14 +208,14 @@ func (m model) wideBody() []string {
 	case m.doors.show:
 		pics = m.doorsLines(m.width, l.picH)
 	case m.flood.show:
-		pics = m.floodRow(m.width, l.picH)
+		pics = strings.Split(m.flood.with(m).row(m.width, l.picH, m.sectionPicture), "\n")
 	case m.noPosition():
 		pics = m.bannerView(m.width, l.picH)
 	case m.handShown().hasWorking():
 		pics = m.handShown().view(m.width, l.picH, false)
 	default:
 		pics = besides(sep,
-			fit(m.cached(picSection, l.picW[0], l.picH, m.sectionView), l.picW[0], l.picH),
+			fit(m.sectionPicture(l.picW[0], l.picH), l.picW[0], l.picH),
 			fit(m.cached(picProfile, l.picW[1], l.picH, m.profileView), l.picW[1], l.picH),
 			fit(m.cached(picGZ, l.picW[2], l.picH, m.gzView), l.picW[2], l.picH))
 	}

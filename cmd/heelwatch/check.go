@@ -126,7 +126,11 @@ func summarise(w io.Writer, v *engine.Vessel, info *vessels.Info) int {
 			wt++
 		}
 	}
-	fmt.Fprintf(tw, "  openings\t%d (%d closed weathertight); margin line %.3f m below the deck at side\n", len(v.Openings), wt, v.MarginLineM)
+	margin := "" // a passenger-ship notion: the ferry's, not a cargo ship's
+	if v.Passenger() {
+		margin = fmt.Sprintf("; margin line %.3f m below the deck at side", v.MarginLineM)
+	}
+	fmt.Fprintf(tw, "  openings\t%d (%d closed weathertight)%s\n", len(v.Openings), wt, margin)
 	crit := "none"
 	if len(v.CriteriaSets) > 0 {
 		crit = strings.Join(v.CriteriaSets, ", ")
