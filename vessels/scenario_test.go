@@ -4,7 +4,6 @@ import (
 	"errors"
 	"strings"
 	"testing"
-	"time"
 
 	"heelwatch/engine"
 	"heelwatch/vessels"
@@ -107,11 +106,7 @@ func FuzzParseScenario(f *testing.F) {
 	f.Add([]byte(goodHead + "[[event]]\nminutes = 2\nkind = \"connection\"\nconnection = \"WT door ER/stores\"\nopen = true\n"))
 	f.Add([]byte(goodHead + "[[event]]\nminutes = 2\nkind = \"pump\"\ncompartment = \"Hold 2\"\nstate = \"starts\"\n"))
 	f.Fuzz(func(t *testing.T, data []byte) {
-		t0 := time.Now()
 		sc, err := vessels.ParseScenario("fuzz.toml", data, "")
-		if d := time.Since(t0); d > 3*time.Second {
-			t.Fatalf("%v to read %q", d, data)
-		}
 		if err != nil {
 			var ps vessels.Problems
 			if errors.As(err, &ps) {
