@@ -2,6 +2,8 @@ package vessels_test
 
 import (
 	"errors"
+	"os"
+	"path/filepath"
 	"strings"
 	"testing"
 
@@ -122,4 +124,35 @@ func FuzzParseScenario(f *testing.F) {
 			t.Fatalf("a scenario without vessel or length: %+v", sc)
 		}
 	})
+}
+
+// TestScenarioVesselBesideIt: a vessel file named by a relative path is
+// read from the scenario file's folder, and a problem in that vessel file
+// is reported with the vessel file's own name and line.
+func TestScenarioVesselBesideIt(t *testing.T) {
+	dir := t.TempDir()
+	src, _ := vessels.Source("barge")
+	if err := os.WriteFile(filepath.Join(dir, "ship.toml"), src, 0o644); err != nil {
+		t.Fatal(err)
+	}
+	p := filepath.Join(dir, "drill.toml")
+	if err := os.WriteFile(p, []byte("format = 1\nvessel = \"ship.toml\"\nminutes = 10\n"), 0o644); err != nil {
+		t.Fatal(err)
+	}
+	sc, err := vessels.OpenScenario(p)
+	if err != nil {
+		t.Fatal(err)
+	}
+	if sc.Vessel == nil || sc.VesselRef != "ship.toml" {
+		t.Fatalf("%+v", sc)
+	}
+	bad := strings.Replace(string(src), "format = 1", "format = 1\nwater_density = \"salty\"", 1)
+	if err := os.WriteFile(filepath.Join(dir, "ship.toml"), []byte(bad), 0o644); err != nil {
+		t.Fatal(err)
+	}
+	_, err = vessels.OpenScenario(p)
+	var ps vessels.Problems
+	if !errors.As(err, &ps) || !strings.HasSuffix(ps[0].File, "ship.toml") || ps[0].Key != "water_density" {
+		t.Errorf("got %v", err)
+	}
 }
