@@ -123,12 +123,13 @@ type CrewMessage struct {
 }
 
 // CrewFeed returns what the crew has been told so far: the text of each
-// event that has one, and each alarm that has sounded, in time order.
+// event that has one (not the crew's own notes), and each alarm that has
+// sounded, in time order.
 func CrewFeed(d *engine.Drill) []CrewMessage {
 	v := d.Vessel()
 	var out []CrewMessage
 	for _, e := range d.Log() {
-		if e.Text != "" && e.Kind != engine.DrillMark {
+		if e.Text != "" && e.Kind != engine.DrillMark && e.By != engine.ByCrew {
 			out = append(out, CrewMessage{e.Minutes, e.Text})
 		}
 	}

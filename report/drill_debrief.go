@@ -111,6 +111,16 @@ func DrillDebrief(w io.Writer, dr Drill, a engine.DrillAnalysis) error {
 	for _, m := range CrewFeed(d) {
 		fmt.Fprintf(&b, "- min %s: %s\n", Fixed(m.Minutes, 1, ""), mdCell(m.Text))
 	}
+	var own []string
+	for _, e := range d.Log() {
+		if e.By == engine.ByCrew && e.Text != "" {
+			own = append(own, fmt.Sprintf("- min %s: %s\n", Fixed(e.Minutes, 1, ""), mdCell(e.Text)))
+		}
+	}
+	if len(own) > 0 {
+		b.WriteString("\n## The crew's own notes and diagnoses\n\n")
+		b.WriteString(strings.Join(own, ""))
+	}
 	b.WriteString("\nThe drill replays from its log: `heelwatch drill LOG.toml --run` gives this timeline again, `--debrief` this debrief.\n")
 	_, err := io.WriteString(w, b.String())
 	return err

@@ -183,6 +183,11 @@ func (m *drillModel) Update(msg tea.Msg) (tea.Model, tea.Cmd) {
 		}
 		m.status = ""
 		m.diagnosis = append([]string{fmt.Sprintf("Our diagnosis from the readings at %s:", clock(msg.minutes))}, msg.lines...)
+		if !m.d.Over() && len(msg.lines) > 0 {
+			// Logged as the crew's own note, for the debrief.
+			m.decide(engine.DrillEvent{Kind: engine.DrillNote, By: engine.ByCrew, Compartment: -1,
+				Text: fmt.Sprintf("Our diagnosis from the readings at %s: %s", clock(msg.minutes), strings.TrimSpace(msg.lines[0]))})
+		}
 		return m, nil
 	case drillDebriefMsg:
 		if msg.err != nil {
