@@ -253,33 +253,45 @@ func (m *drillModel) key(k tea.KeyMsg) (tea.Model, tea.Cmd) {
 	if m.d.Over() {
 		return m, nil
 	}
-	v := m.d.Vessel()
-	all := make([]int, len(v.Compartments))
-	for i := range all {
-		all[i] = i
+	if m.mode == drillInstructor {
+		return m, m.instructorKey(s)
 	}
-	switch {
-	case s == "m" && m.mode == drillCrew:
-		m.startPick(pickMark, all)
-	case s == "p" && m.mode == drillCrew:
-		m.startPick(pickPump, all)
-	case s == "c" && m.mode == drillCrew:
-		m.startPick(pickCounter, all)
-	case s == "d" && m.mode == drillCrew:
+	return m, m.crewKey(s)
+}
+
+// indices returns 0, 1, …, n−1.
+func indices(n int) []int {
+	out := make([]int, n)
+	for i := range out {
+		out[i] = i
+	}
+	return out
+}
+
+// crewKey acts on a key of the crew's view.
+func (m *drillModel) crewKey(s string) tea.Cmd {
+	v := m.d.Vessel()
+	switch s {
+	case "m":
+		m.startPick(pickMark, indices(len(v.Compartments)))
+	case "p":
+		m.startPick(pickPump, indices(len(v.Compartments)))
+	case "c":
+		m.startPick(pickCounter, indices(len(v.Compartments)))
+	case "d":
 		if len(v.Connections) == 0 {
 			m.status = "This ship has no doors or valves between compartments in her file."
-		} else {
-			conns := make([]int, len(v.Connections))
-			for i := range conns {
-				conns[i] = i
-			}
-			m.startPick(pickDoor, conns)
+			return nil
 		}
-	case s == "g" && m.mode == drillCrew && !m.diagnosing:
+		m.startPick(pickDoor, indices(len(v.Connections)))
+	case "g":
+		if m.diagnosing {
+			return nil
+		}
 		m.diagnosing = true
 		m.status = "Diagnosing from our readings…"
-		return m, m.diagnose()
-	case s == "s" && m.mode == drillCrew:
+		return m.diagnose()
+	case "s":
 		var on []int
 		for i := range m.ordered {
 			on = append(on, i)
@@ -287,25 +299,31 @@ func (m *drillModel) key(k tea.KeyMsg) (tea.Model, tea.Cmd) {
 		sort.Ints(on)
 		if len(on) == 0 {
 			m.status = "No pump ordered on."
-		} else {
-			m.startPick(pickStop, on)
+			return nil
 		}
-	case s == "b" && m.mode == drillInstructor:
-		m.startPick(pickBreach, all)
-	case s == "f" && m.mode == drillInstructor:
-		m.startPick(pickFail, all)
-	case s == "o" && m.mode == drillInstructor && len(v.Connections) > 0:
-		conns := make([]int, len(v.Connections))
-		for i := range conns {
-			conns[i] = i
-		}
-		m.startPick(pickDoorTruth, conns)
-	case s == "n" && m.mode == drillInstructor:
-		m.ask("note", "Note to the crew: ")
-	case s == "D" && m.mode == drillInstructor:
-		return m, m.makeDebrief()
+		m.startPick(pickStop, on)
 	}
-	return m, nil
+	return nil
+}
+
+// instructorKey acts on a key of the instructor's view.
+func (m *drillModel) instructorKey(s string) tea.Cmd {
+	v := m.d.Vessel()
+	switch s {
+	case "b":
+		m.startPick(pickBreach, indices(len(v.Compartments)))
+	case "f":
+		m.startPick(pickFail, indices(len(v.Compartments)))
+	case "o":
+		if len(v.Connections) > 0 {
+			m.startPick(pickDoorTruth, indices(len(v.Connections)))
+		}
+	case "n":
+		m.ask("note", "Note to the crew: ")
+	case "D":
+		return m.makeDebrief()
+	}
+	return nil
 }
 
 func nextSpeed(cur float64, dir int) float64 {
