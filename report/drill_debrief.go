@@ -56,7 +56,12 @@ func DrillDebrief(w io.Writer, dr Drill, a engine.DrillAnalysis) error {
 		if math.IsNaN(a.AllRightMin) {
 			b.WriteString("The crew's marks never matched the compartments holding water.\n\n")
 		} else {
-			fmt.Fprintf(&b, "The crew's marks first matched the compartments holding water at minute %s.\n\n", Fixed(a.AllRightMin, 1, ""))
+			fmt.Fprintf(&b, "The crew's marks first matched the compartments holding water at minute %s.", Fixed(a.AllRightMin, 1, ""))
+			if a.RightAtEnd {
+				b.WriteString(" They matched them at the end too.\n\n")
+			} else {
+				b.WriteString(" They did not match them at the end.\n\n")
+			}
 		}
 	}
 
