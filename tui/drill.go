@@ -544,7 +544,7 @@ func (m *drillModel) diagnose() tea.Cmd {
 
 // reportDrill is the drill as the report package writes it.
 func (m *drillModel) reportDrill() report.Drill {
-	return report.Drill{Scenario: m.sc.Name, File: m.sc.File, VesselRef: m.sc.VesselRef, About: m.sc.About, Seed: m.sc.Seed,
+	return report.Drill{Scenario: m.sc.Name, File: m.sc.File, VesselRef: m.sc.VesselRef, ConditionRef: m.sc.ConditionRef, About: m.sc.About, Seed: m.sc.Seed,
 		Alarms: m.sc.Alarms, Played: m.d, Version: m.opts.Version, AlarmLevel: vessels.AlarmLevelM,
 		Events: m.sc.Setup(m.extra...).Events}
 }

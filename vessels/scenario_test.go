@@ -143,8 +143,22 @@ func TestScenarioVesselBesideIt(t *testing.T) {
 	if err != nil {
 		t.Fatal(err)
 	}
-	if sc.Vessel == nil || sc.VesselRef != "ship.toml" {
+	if sc.Vessel == nil || sc.VesselRef != filepath.Join(dir, "ship.toml") {
 		t.Fatalf("%+v", sc)
+	}
+	// A condition file beside it too.
+	cond := "format = 1\nname = \"Light\"\nkeep = [\"Lightship\"]\n"
+	if err := os.WriteFile(filepath.Join(dir, "light.toml"), []byte(cond), 0o644); err != nil {
+		t.Fatal(err)
+	}
+	if err := os.WriteFile(p, []byte("format = 1\nvessel = \"ship.toml\"\ncondition = \"light.toml\"\nminutes = 10\n"), 0o644); err != nil {
+		t.Fatal(err)
+	}
+	withCond, err := vessels.OpenScenario(p)
+	if err != nil {
+		t.Logf("condition: %v", err)
+	} else if withCond.ConditionRef != filepath.Join(dir, "light.toml") {
+		t.Errorf("condition %q", withCond.ConditionRef)
 	}
 	bad := strings.Replace(string(src), "format = 1", "format = 1\nwater_density = \"salty\"", 1)
 	if err := os.WriteFile(filepath.Join(dir, "ship.toml"), []byte(bad), 0o644); err != nil {
