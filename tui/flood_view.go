@@ -113,6 +113,11 @@ func (p floodPanel) text(w, h, want int) []string {
 	if f.baseChanged(p.damage) {
 		head = append(head, st.Caution.Render(clip("! the dashboard has changed since: f runs it again", w)))
 	}
+	if p.spreadBeyond() {
+		for _, l := range wrap("! this space alone, its connections shut; through the ship the water spreads further (\"through the ship\")", w) {
+			head = append(head, st.Caution.Render(l))
+		}
+	}
 
 	events := p.events(w)
 	stages := p.stages(w)
