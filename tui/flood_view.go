@@ -206,7 +206,10 @@ func eventWords(e engine.FloodEvent, r *engine.FloodReport) string {
 	case engine.CriterionFails:
 		return e.Name + " fails"
 	}
-	return report.FloodHeadline(r.End)
+	// The outcome's own head words, so the end's line agrees with the
+	// outcome above it ("floods despite the pumps", not "pumps hold").
+	head, _ := report.FloodOutcome(*r)
+	return head
 }
 
 // floodEvents lists the run's events in time order, the end last: mark,
