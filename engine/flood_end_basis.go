@@ -22,7 +22,8 @@ func (r *FloodRun) uprightDamage(w float64) Damage {
 }
 
 // fillUprightAt sets p's upright GM for the run's state at water w (see
-// uprightDamage); at the levels' meeting it replaces the added weight's.
+// uprightDamage); at the levels' meeting it sets both GMs (upright and
+// where she lies) as open to the sea, in place of the added weight's.
 func (r *FloodRun) fillUprightAt(w float64, p *Position) {
 	d := r.uprightDamage(w)
 	if !d[r.ci].Open {
@@ -34,8 +35,12 @@ func (r *FloodRun) fillUprightAt(w float64, p *Position) {
 	pr := NewProblem(r.v, d)
 	if pl, _, err := pr.AtHeel(0, Plane{A: p.Plane.A, B: p.Plane.B}); err == nil {
 		p.GMUprightM = pr.uprightAt(pl)
-		if math.Abs(p.HeelDeg) < 1e-9 {
-			p.GMAtRestM = p.GMUprightM
-		}
+	}
+	// Where she lies too: the GZ slope with the space open to the sea, at
+	// her plane (the lost-buoyancy equilibrium to within the run's
+	// tolerance).
+	p.GMAtRestM = gmAtRest(pr.eval(p.Plane, true), p.GMAtRestM) * pr.shipBasis()
+	if math.Abs(p.HeelDeg) < 1e-9 && !math.IsNaN(p.GMUprightM) {
+		p.GMAtRestM = p.GMUprightM
 	}
 }

@@ -25,14 +25,20 @@ var scenarioFS embed.FS
 
 // Scenario is a drill's scenario as read.
 type Scenario struct {
-	File      string // as given in messages ("scenarios/freighter-night.toml" for a bundled one)
-	Name      string // the name key, or the file's base name
-	About     string // free text: the story, for the instructor
-	VesselRef string // the vessel key as written
-	Vessel    *engine.Vessel
-	Info      *Info
-	Minutes   float64 // the exercise's length in scenario time
-	Seed      int64   // the reading errors' seed (default 1)
+	File  string // as given in messages ("scenarios/freighter-night.toml" for a bundled one)
+	Name  string // the name key, or the file's base name
+	About string // free text: the story, for the instructor
+	// VesselRef is the vessel: a bundled vessel's name, else the vessel
+	// file's path made absolute (so that a drill's log, written anywhere,
+	// names the same file).
+	VesselRef string
+	// ConditionRef is the condition file's path made absolute ("" when
+	// the vessel file's own loading condition is used).
+	ConditionRef string
+	Vessel       *engine.Vessel
+	Info         *Info
+	Minutes      float64 // the exercise's length in scenario time
+	Seed         int64   // the reading errors' seed (default 1)
 	// Alarms are the compartments fitted with a high-level (bilge) alarm:
 	// it sounds when the water there first stands AlarmLevelM above the
 	// compartment's lowest point.
@@ -153,6 +159,7 @@ func ParseScenario(file string, data []byte, dir string) (*Scenario, error) {
 		}
 	}
 	ref, refOK := root.str("vessel", true, `a bundled vessel's name ("freighter") or a vessel file's path`)
+	condRef, condOK := root.str("condition", false, "a condition file's path (the loading condition at the start)")
 	alarmsRaw, hasAlarms := root.get("alarms")
 	evs := root.entries("event", "one event of the exercise")
 	root.finish()
@@ -162,6 +169,9 @@ func ParseScenario(file string, data []byte, dir string) (*Scenario, error) {
 		if _, bundled := Source(ref); !bundled && dir != "" && !filepath.IsAbs(ref) {
 			p = filepath.Join(dir, ref)
 		}
+		if _, bundled := Source(ref); !bundled {
+			sc.VesselRef = absPath(p)
+		}
 		v, info, err := Open(p)
 		if err != nil {
 			if ps, ok := err.(Problems); ok {
@@ -170,6 +180,27 @@ func ParseScenario(file string, data []byte, dir string) (*Scenario, error) {
 			r.addf("vessel", "%v", err)
 		} else {
 			sc.Vessel, sc.Info = v, info
+		}
+	}
+	if sc.Vessel != nil && condOK {
+		p := condRef
+		if dir != "" && !filepath.IsAbs(p) {
+			p = filepath.Join(dir, p)
+		}
+		sc.ConditionRef = absPath(p)
+		c, err := LoadCondition(p, sc.Vessel, sc.Info)
+		if ps, ok := err.(Problems); ok {
+			return nil, append(r.probs, ps...)
+		}
+		if err == nil {
+			var v *engine.Vessel
+			if v, err = c.Apply(sc.Vessel); err == nil {
+				sc.Vessel = v
+			}
+		}
+		if err != nil {
+			r.addf("condition", "%v", err)
+			sc.Vessel = nil
 		}
 	}
 	if sc.Vessel == nil {
@@ -447,4 +478,12 @@ func CounterfloodInlet(v *engine.Vessel, ci int, area float64) (engine.Hole, err
 		return engine.Hole{}, fmt.Errorf("a sea inlet's area %g m² must be above zero and at most %d m²", area, MaxHoleM2)
 	}
 	return engine.ShellHole(v, ci, area, math.NaN(), engine.DefaultDischargeCoefficient)
+}
+
+// absPath returns p made absolute, or p itself if that cannot be done.
+func absPath(p string) string {
+	if a, err := filepath.Abs(p); err == nil {
+		return a
+	}
+	return p
 }
