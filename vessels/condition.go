@@ -109,7 +109,7 @@ func (r *reader) condition(root *table, v *engine.Vessel, info *Info) *Condition
 		for _, w := range c.Weights {
 			seen[strings.ToLower(w.Name)] = "a weight kept from the vessel file"
 		}
-		own := r.conditionWeights(ts, seen, v.Hull)
+		own := r.weightTables(ts, seen, v.Hull) // as in a vessel file
 		c.Weights = append(c.Weights, own...)
 	}
 	if len(ts) == 0 && !root.has("keep") {
@@ -163,31 +163,6 @@ func (r *reader) keptWeights(root *table, v *engine.Vessel) []engine.Weight {
 			taken[idx] = true
 			out = append(out, v.Weights[idx])
 		}
-	}
-	return out
-}
-
-// conditionWeights reads the condition's own [[weight]] tables, each as in
-// a vessel file (name, mass, lcg, tcg, vcg, fsm, x).
-func (r *reader) conditionWeights(ts []*table, seen map[string]string, hull *engine.Hull) []engine.Weight {
-	var out []engine.Weight
-	for _, t := range ts {
-		var w engine.Weight
-		w.Name, _ = r.name(t, seen, "weight")
-		w.MassT, _ = t.positive("mass", "t", true)
-		var lcgOK bool
-		w.LCGM, lcgOK = t.num("lcg", "m from the aft perpendicular", true)
-		w.TCGM, _ = t.num("tcg", "m from the centreline, + to starboard", false)
-		w.VCGM, _ = t.num("vcg", "m above the baseline", true)
-		if f, ok := t.num("fsm", "t·m", false); ok {
-			if f < 0 {
-				r.addf(t.keyPath("fsm"), "%g t·m is negative: a free-surface moment is 0 or more", f)
-			}
-			w.FSMTm = f
-		}
-		w.ExtentM = r.weightExtent(t, w.LCGM, lcgOK, hull)
-		t.finish()
-		out = append(out, w)
 	}
 	return out
 }

@@ -327,11 +327,16 @@ func (r *reader) weights(ts []*table, hull *engine.Hull) []engine.Weight {
 	if len(ts) == 0 {
 		r.addf("weight", "missing: the loading condition needs at least one [[weight]] (lightship at least) with name, mass, lcg, vcg")
 	}
-	names := map[string]string{}
+	return r.weightTables(ts, map[string]string{}, hull)
+}
+
+// weightTables reads [[weight]] tables, each with name (unique ignoring
+// case among those in seen), mass, lcg, tcg, vcg, fsm and the extent x.
+func (r *reader) weightTables(ts []*table, seen map[string]string, hull *engine.Hull) []engine.Weight {
 	var out []engine.Weight
 	for _, t := range ts {
 		var w engine.Weight
-		w.Name, _ = r.name(t, names, "weight")
+		w.Name, _ = r.name(t, seen, "weight")
 		w.MassT, _ = t.positive("mass", "t", true)
 		var lcgOK bool
 		w.LCGM, lcgOK = t.num("lcg", "m from the aft perpendicular", true)
