@@ -107,6 +107,9 @@ type DrillAnalysis struct {
 	// holding water (NaN: never).
 	AllRightMin     float64
 	Identifications []Identification
+	// RightAtEnd says the crew's marks equalled the compartments holding
+	// water at the end of the drill.
+	RightAtEnd bool
 }
 
 // AnalyseDrill plays s and the drills the debrief compares it with.
@@ -142,7 +145,7 @@ func AnalyseDrill(s DrillSetup) (DrillAnalysis, error) {
 		without := append(append([]DrillEvent(nil), s.Events[:k]...), s.Events[k+1:]...)
 		a.Decisions = append(a.Decisions, DecisionEffect{Event: e, Without: play(without)})
 	}
-	a.AllRightMin, a.Identifications = identified(d)
+	a.AllRightMin, a.Identifications, a.RightAtEnd = identified(d)
 	return a, nil
 }
 
@@ -197,7 +200,7 @@ func isDoor(v *Vessel, name string) bool {
 }
 
 // identified compares the crew's marks with the truth along the drill.
-func identified(d *Drill) (float64, []Identification) {
+func identified(d *Drill) (float64, []Identification, bool) {
 	v := d.Vessel()
 	marks := map[int]bool{}
 	log := d.Log()
@@ -205,6 +208,7 @@ func identified(d *Drill) (float64, []Identification) {
 	allRight := math.NaN()
 	ids := map[int]*Identification{}
 	var order []int
+	same := false
 	for _, r := range d.Rows() {
 		for li < len(log) && log[li].Minutes <= r.Minutes+1e-9 {
 			if e := log[li]; e.Kind == DrillMark {
@@ -229,19 +233,17 @@ func identified(d *Drill) (float64, []Identification) {
 				id.MarkedMin = r.Minutes
 			}
 		}
-		if math.IsNaN(allRight) && len(truth) > 0 {
-			same := true
-			for i := range v.Compartments {
-				same = same && truth[i] == marks[i]
-			}
-			if same {
-				allRight = r.Minutes
-			}
+		same = true
+		for i := range v.Compartments {
+			same = same && truth[i] == marks[i]
+		}
+		if math.IsNaN(allRight) && len(truth) > 0 && same {
+			allRight = r.Minutes
 		}
 	}
 	var out []Identification
 	for _, i := range order {
 		out = append(out, *ids[i])
 	}
-	return allRight, out
+	return allRight, out, same
 }

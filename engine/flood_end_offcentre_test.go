@@ -31,6 +31,9 @@ func TestFloodEndGMOffCentre(t *testing.T) {
 	if math.Abs(f.GMUprightM-l.GMUprightM) > 1e-3 {
 		t.Errorf("upright GM at the run's end %.4f m, open to the sea %.4f m; want one basis", f.GMUprightM, l.GMUprightM)
 	}
+	if math.Abs(f.GMAtRestM-l.GMAtRestM) > 1e-3 {
+		t.Errorf("GM where she lies at the run's end %.4f m, open to the sea %.4f m; want one basis", f.GMAtRestM, l.GMAtRestM)
+	}
 	if n := len(rep.Table); n == 0 || rep.Table[n-1].Position == nil || math.Abs(rep.Table[n-1].Position.GMUprightM-l.GMUprightM) > 1e-3 {
 		t.Errorf("the table's end row does not carry the open-to-sea upright GM %.4f m", l.GMUprightM)
 	}

@@ -133,6 +133,13 @@ func (s *Strength) Worst() (r StrengthReading, pct float64, ok bool) {
 	return r, pct, ok
 }
 
+// HasLimits reports whether any read-out point has a permissible value in
+// the set in use.
+func (s *Strength) HasLimits() bool {
+	_, _, ok := s.Worst()
+	return ok
+}
+
 // Against returns the readings checked against the harbour values
 // (harbour) or the sea values.
 func (s *Strength) Against(harbour bool) []StrengthReading {

@@ -56,7 +56,12 @@ func DrillDebrief(w io.Writer, dr Drill, a engine.DrillAnalysis) error {
 		if math.IsNaN(a.AllRightMin) {
 			b.WriteString("The crew's marks never matched the compartments holding water.\n\n")
 		} else {
-			fmt.Fprintf(&b, "The crew's marks first matched the compartments holding water at minute %s.\n\n", Fixed(a.AllRightMin, 1, ""))
+			fmt.Fprintf(&b, "The crew's marks first matched the compartments holding water at minute %s.", Fixed(a.AllRightMin, 1, ""))
+			if a.RightAtEnd {
+				b.WriteString(" They matched them at the end too.\n\n")
+			} else {
+				b.WriteString(" They did not match them at the end.\n\n")
+			}
 		}
 	}
 
@@ -110,6 +115,16 @@ func DrillDebrief(w io.Writer, dr Drill, a engine.DrillAnalysis) error {
 	b.WriteString("\n## What the crew was told\n\n")
 	for _, m := range CrewFeed(d) {
 		fmt.Fprintf(&b, "- min %s: %s\n", Fixed(m.Minutes, 1, ""), mdCell(m.Text))
+	}
+	var own []string
+	for _, e := range d.Log() {
+		if e.By == engine.ByCrew && e.Text != "" {
+			own = append(own, fmt.Sprintf("- min %s: %s\n", Fixed(e.Minutes, 1, ""), mdCell(e.Text)))
+		}
+	}
+	if len(own) > 0 {
+		b.WriteString("\n## The crew's own notes and diagnoses\n\n")
+		b.WriteString(strings.Join(own, ""))
 	}
 	b.WriteString("\nThe drill replays from its log: `heelwatch drill LOG.toml --run` gives this timeline again, `--debrief` this debrief.\n")
 	_, err := io.WriteString(w, b.String())

@@ -166,10 +166,13 @@ func (m *drillModel) Update(msg tea.Msg) (tea.Model, tea.Cmd) {
 		return m, nil
 	case drillTick:
 		m.advance(drillTickEvery.Seconds())
-		if m.d.Over() && !m.debriefed {
+		if m.d.Over() {
+			if m.debriefed {
+				return m, nil // the clock stops at the end
+			}
 			m.debriefed = true
 			m.writeLog()
-			return m, tea.Batch(m.makeDebrief(), m.tick())
+			return m, m.makeDebrief()
 		}
 		return m, m.tick()
 	case drillDiagnosisMsg:
@@ -180,6 +183,11 @@ func (m *drillModel) Update(msg tea.Msg) (tea.Model, tea.Cmd) {
 		}
 		m.status = ""
 		m.diagnosis = append([]string{fmt.Sprintf("Our diagnosis from the readings at %s:", clock(msg.minutes))}, msg.lines...)
+		if !m.d.Over() && len(msg.lines) > 0 {
+			// Logged as the crew's own note, for the debrief.
+			m.decide(engine.DrillEvent{Kind: engine.DrillNote, By: engine.ByCrew, Compartment: -1,
+				Text: fmt.Sprintf("Our diagnosis from the readings at %s: %s", clock(msg.minutes), strings.TrimSpace(msg.lines[0]))})
+		}
 		return m, nil
 	case drillDebriefMsg:
 		if msg.err != nil {
@@ -245,33 +253,45 @@ func (m *drillModel) key(k tea.KeyMsg) (tea.Model, tea.Cmd) {
 	if m.d.Over() {
 		return m, nil
 	}
-	v := m.d.Vessel()
-	all := make([]int, len(v.Compartments))
-	for i := range all {
-		all[i] = i
+	if m.mode == drillInstructor {
+		return m, m.instructorKey(s)
 	}
-	switch {
-	case s == "m" && m.mode == drillCrew:
-		m.startPick(pickMark, all)
-	case s == "p" && m.mode == drillCrew:
-		m.startPick(pickPump, all)
-	case s == "c" && m.mode == drillCrew:
-		m.startPick(pickCounter, all)
-	case s == "d" && m.mode == drillCrew:
+	return m, m.crewKey(s)
+}
+
+// indices returns 0, 1, …, n−1.
+func indices(n int) []int {
+	out := make([]int, n)
+	for i := range out {
+		out[i] = i
+	}
+	return out
+}
+
+// crewKey acts on a key of the crew's view.
+func (m *drillModel) crewKey(s string) tea.Cmd {
+	v := m.d.Vessel()
+	switch s {
+	case "m":
+		m.startPick(pickMark, indices(len(v.Compartments)))
+	case "p":
+		m.startPick(pickPump, indices(len(v.Compartments)))
+	case "c":
+		m.startPick(pickCounter, indices(len(v.Compartments)))
+	case "d":
 		if len(v.Connections) == 0 {
 			m.status = "This ship has no doors or valves between compartments in her file."
-		} else {
-			conns := make([]int, len(v.Connections))
-			for i := range conns {
-				conns[i] = i
-			}
-			m.startPick(pickDoor, conns)
+			return nil
 		}
-	case s == "g" && m.mode == drillCrew && !m.diagnosing:
+		m.startPick(pickDoor, indices(len(v.Connections)))
+	case "g":
+		if m.diagnosing {
+			return nil
+		}
 		m.diagnosing = true
 		m.status = "Diagnosing from our readings…"
-		return m, m.diagnose()
-	case s == "s" && m.mode == drillCrew:
+		return m.diagnose()
+	case "s":
 		var on []int
 		for i := range m.ordered {
 			on = append(on, i)
@@ -279,25 +299,31 @@ func (m *drillModel) key(k tea.KeyMsg) (tea.Model, tea.Cmd) {
 		sort.Ints(on)
 		if len(on) == 0 {
 			m.status = "No pump ordered on."
-		} else {
-			m.startPick(pickStop, on)
+			return nil
 		}
-	case s == "b" && m.mode == drillInstructor:
-		m.startPick(pickBreach, all)
-	case s == "f" && m.mode == drillInstructor:
-		m.startPick(pickFail, all)
-	case s == "o" && m.mode == drillInstructor && len(v.Connections) > 0:
-		conns := make([]int, len(v.Connections))
-		for i := range conns {
-			conns[i] = i
-		}
-		m.startPick(pickDoorTruth, conns)
-	case s == "n" && m.mode == drillInstructor:
-		m.ask("note", "Note to the crew: ")
-	case s == "D" && m.mode == drillInstructor:
-		return m, m.makeDebrief()
+		m.startPick(pickStop, on)
 	}
-	return m, nil
+	return nil
+}
+
+// instructorKey acts on a key of the instructor's view.
+func (m *drillModel) instructorKey(s string) tea.Cmd {
+	v := m.d.Vessel()
+	switch s {
+	case "b":
+		m.startPick(pickBreach, indices(len(v.Compartments)))
+	case "f":
+		m.startPick(pickFail, indices(len(v.Compartments)))
+	case "o":
+		if len(v.Connections) > 0 {
+			m.startPick(pickDoorTruth, indices(len(v.Connections)))
+		}
+	case "n":
+		m.ask("note", "Note to the crew: ")
+	case "D":
+		return m.makeDebrief()
+	}
+	return nil
 }
 
 func nextSpeed(cur float64, dir int) float64 {
@@ -518,7 +544,7 @@ func (m *drillModel) diagnose() tea.Cmd {
 
 // reportDrill is the drill as the report package writes it.
 func (m *drillModel) reportDrill() report.Drill {
-	return report.Drill{Scenario: m.sc.Name, File: m.sc.File, VesselRef: m.sc.VesselRef, About: m.sc.About, Seed: m.sc.Seed,
+	return report.Drill{Scenario: m.sc.Name, File: m.sc.File, VesselRef: m.sc.VesselRef, ConditionRef: m.sc.ConditionRef, About: m.sc.About, Seed: m.sc.Seed,
 		Alarms: m.sc.Alarms, Played: m.d, Version: m.opts.Version, AlarmLevel: vessels.AlarmLevelM,
 		Events: m.sc.Setup(m.extra...).Events}
 }

@@ -198,6 +198,27 @@ func (m *drillModel) pickerView(w, h int) []string {
 	return out
 }
 
+// wrapWords lays words out on lines of at most w, one space apart, each
+// line indented.
+func wrapWords(words []string, w int, indent string) []string {
+	var out []string
+	cur := indent
+	for _, it := range words {
+		if len(cur) > len(indent) && lipgloss.Width(cur)+1+lipgloss.Width(it) > w {
+			out = append(out, cur)
+			cur = indent
+		}
+		if len(cur) > len(indent) {
+			cur += " "
+		}
+		cur += it
+	}
+	if len(cur) > len(indent) {
+		out = append(out, cur)
+	}
+	return out
+}
+
 // wrapItems lays items out on lines of at most w, each line indented.
 func wrapItems(items []string, w int, indent string) []string {
 	var out []string

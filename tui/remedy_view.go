@@ -186,7 +186,7 @@ func (p remedyPanel) lead(rs *engine.RemedySet, w int) []string {
 		if math.Abs(rs.HeelDeg) < 0.005 {
 			where = "upright"
 		}
-		add(st.Value.Render, fmt.Sprintf("NO RIGHTING ACTION NEEDED: %s, upright GM %s m.", where, num(rs.UprightGMM, 2)))
+		add(st.Value.Render, fmt.Sprintf("NO RIGHTING ACTION NEEDED for list or loll: %s, upright GM %s m.", where, num(rs.UprightGMM, 2)))
 	}
 	return out
 }

@@ -25,14 +25,20 @@ var scenarioFS embed.FS
 
 // Scenario is a drill's scenario as read.
 type Scenario struct {
-	File      string // as given in messages ("scenarios/freighter-night.toml" for a bundled one)
-	Name      string // the name key, or the file's base name
-	About     string // free text: the story, for the instructor
-	VesselRef string // the vessel key as written
-	Vessel    *engine.Vessel
-	Info      *Info
-	Minutes   float64 // the exercise's length in scenario time
-	Seed      int64   // the reading errors' seed (default 1)
+	File  string // as given in messages ("scenarios/freighter-night.toml" for a bundled one)
+	Name  string // the name key, or the file's base name
+	About string // free text: the story, for the instructor
+	// VesselRef is the vessel: a bundled vessel's name, else the vessel
+	// file's path made absolute (so that a drill's log, written anywhere,
+	// names the same file).
+	VesselRef string
+	// ConditionRef is the condition file's path made absolute ("" when
+	// the vessel file's own loading condition is used).
+	ConditionRef string
+	Vessel       *engine.Vessel
+	Info         *Info
+	Minutes      float64 // the exercise's length in scenario time
+	Seed         int64   // the reading errors' seed (default 1)
 	// Alarms are the compartments fitted with a high-level (bilge) alarm:
 	// it sounds when the water there first stands AlarmLevelM above the
 	// compartment's lowest point.
@@ -108,27 +114,12 @@ func OpenScenario(nameOrPath string) (*Scenario, error) {
 // an event out of time order or past the end, a compartment, connection or
 // kind the vessel does not have, a breach or pump that cannot be.
 func ParseScenario(file string, data []byte, dir string) (*Scenario, error) {
-	if len(data) > MaxFileBytes {
-		return nil, Problems{{File: file, Line: 1, Key: "syntax", Msg: errTooLarge.Error()}}
+	r, root, err := decode(file, data)
+	if err != nil {
+		return nil, err
 	}
-	if p := tooDeep(file, data); p != nil {
-		return nil, Problems{*p}
-	}
-	var doc map[string]any
-	if _, err := toml.Decode(string(data), &doc); err != nil {
-		return nil, syntaxProblem(file, err)
-	}
-	r := &reader{file: file, lines: indexLines(string(data))}
-	if r.tooMany("", doc) {
-		return nil, r.probs.sorted()
-	}
-	root := r.table("", doc)
 	sc := &Scenario{File: file, Seed: 1}
-	if f, ok := root.get("format"); !ok {
-		r.addf("format", "missing: the file must say format = %d", FormatVersion)
-	} else if n, ok := f.(int64); !ok || n != FormatVersion {
-		r.addf("format", "%v is not a format this heelwatch reads: write format = %d (a whole number)", tomlText(f), FormatVersion)
-	}
+	r.format(root)
 	if s, ok := root.str("name", false, "the scenario's name"); ok && r.checkText("name", s, "the scenario's name") {
 		sc.Name = s
 	}
@@ -153,6 +144,7 @@ func ParseScenario(file string, data []byte, dir string) (*Scenario, error) {
 		}
 	}
 	ref, refOK := root.str("vessel", true, `a bundled vessel's name ("freighter") or a vessel file's path`)
+	condRef, condOK := root.str("condition", false, "a condition file's path (the loading condition at the start)")
 	alarmsRaw, hasAlarms := root.get("alarms")
 	evs := root.entries("event", "one event of the exercise")
 	root.finish()
@@ -162,6 +154,9 @@ func ParseScenario(file string, data []byte, dir string) (*Scenario, error) {
 		if _, bundled := Source(ref); !bundled && dir != "" && !filepath.IsAbs(ref) {
 			p = filepath.Join(dir, ref)
 		}
+		if _, bundled := Source(ref); !bundled {
+			sc.VesselRef = absPath(p)
+		}
 		v, info, err := Open(p)
 		if err != nil {
 			if ps, ok := err.(Problems); ok {
@@ -170,6 +165,27 @@ func ParseScenario(file string, data []byte, dir string) (*Scenario, error) {
 			r.addf("vessel", "%v", err)
 		} else {
 			sc.Vessel, sc.Info = v, info
+		}
+	}
+	if sc.Vessel != nil && condOK {
+		p := condRef
+		if dir != "" && !filepath.IsAbs(p) {
+			p = filepath.Join(dir, p)
+		}
+		sc.ConditionRef = absPath(p)
+		c, err := LoadCondition(p, sc.Vessel, sc.Info)
+		if ps, ok := err.(Problems); ok {
+			return nil, append(r.probs, ps...)
+		}
+		if err == nil {
+			var v *engine.Vessel
+			if v, err = c.Apply(sc.Vessel); err == nil {
+				sc.Vessel = v
+			}
+		}
+		if err != nil {
+			r.addf("condition", "%v", err)
+			sc.Vessel = nil
 		}
 	}
 	if sc.Vessel == nil {
@@ -447,4 +463,12 @@ func CounterfloodInlet(v *engine.Vessel, ci int, area float64) (engine.Hole, err
 		return engine.Hole{}, fmt.Errorf("a sea inlet's area %g m² must be above zero and at most %d m²", area, MaxHoleM2)
 	}
 	return engine.ShellHole(v, ci, area, math.NaN(), engine.DefaultDischargeCoefficient)
+}
+
+// absPath returns p made absolute, or p itself if that cannot be done.
+func absPath(p string) string {
+	if a, err := filepath.Abs(p); err == nil {
+		return a
+	}
+	return p
 }

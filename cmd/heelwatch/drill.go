@@ -81,7 +81,7 @@ func runDrill(args []string, stdout, stderr io.Writer) int {
 		fmt.Fprintln(stderr, err)
 		return exitFailed
 	}
-	dr := report.Drill{Scenario: sc.Name, File: sc.File, VesselRef: sc.VesselRef, About: sc.About, Seed: sc.Seed,
+	dr := report.Drill{Scenario: sc.Name, File: sc.File, VesselRef: sc.VesselRef, ConditionRef: sc.ConditionRef, About: sc.About, Seed: sc.Seed,
 		Alarms: sc.Alarms, Version: version, AlarmLevel: vessels.AlarmLevelM}
 	switch {
 	case *runIt:
