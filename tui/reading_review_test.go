@@ -7,6 +7,8 @@ import (
 	"testing"
 	"time"
 
+	"github.com/charmbracelet/x/ansi"
+
 	"heelwatch/engine"
 )
 
@@ -123,5 +125,32 @@ func TestReadingApplyOpenToSea(t *testing.T) {
 	}
 	if gm := m.cur.Position.GMUprightM; math.Abs(gm-pos.GMUprightM) > 0.01 {
 		t.Errorf("a: GM upright %.3f m on the dashboard; solve with the tank open gives %.3f m", gm, pos.GMUprightM)
+	}
+}
+
+// TestReadingPanelScrolls: at 80×24 the diagnosis is longer than the
+// panel; it says there is more and ] shows the rest down to the apply
+// key's line, [ brings the verdict back. Nothing was shown of the
+// ranking's end, the trend or the apply key before.
+func TestReadingPanelScrolls(t *testing.T) {
+	m := bundledModel(t, "freighter", 80, 24)
+	m = press(t, m, "r")
+	m = typeReading(t, m, knownReading(t, m)...)
+	view := checkFits(t, "diagnosis", m, 80, 24)
+	if !strings.Contains(view, "more lines: ] shows them") {
+		t.Fatalf("the diagnosis does not say there is more:\n%s", view)
+	}
+	for i := 0; i < 20 && !strings.Contains(ansi.Strip(m.View()), "a: Wing tank 2 S onto the dashboard"); i++ {
+		m = press(t, m, "]")
+	}
+	view = checkFits(t, "scrolled", m, 80, 24)
+	if !strings.Contains(view, "a: Wing tank 2 S onto the dashboard") || !strings.Contains(view, "[ back to the top") {
+		t.Errorf("] never showed the apply key's line:\n%s", view)
+	}
+	for i := 0; i < 20; i++ {
+		m = press(t, m, "[")
+	}
+	if view = checkFits(t, "back", m, 80, 24); !strings.Contains(view, "Best explanation: Wing tank 2 S") {
+		t.Errorf("[ did not bring the verdict back:\n%s", view)
 	}
 }
