@@ -49,3 +49,26 @@ func TestConditionPanelNarrowNames(t *testing.T) {
 		seen[shown] = name
 	}
 }
+
+// TestPanelHelpBar: while the loading condition or the readings panel is
+// shown, the help bar gives that panel's keys (it said "+/− μ" while +
+// filled a tank); r from the loading condition opens the readings panel
+// at the first press.
+func TestPanelHelpBar(t *testing.T) {
+	m := bundledModel(t, "freighter", 80, 24)
+	m = press(t, m, "L")
+	if bar := ansi.Strip(strings.Join(m.helpLines(), " ")); !strings.Contains(bar, "fill 5 %") || strings.Contains(bar, "μ") {
+		t.Errorf("loading condition shown, the help bar reads %q", bar)
+	}
+	m = press(t, m, "r")
+	if m.cond.show || !m.rd.show {
+		t.Errorf("r from the loading condition: condition shown %v, readings shown %v", m.cond.show, m.rd.show)
+	}
+	if bar := ansi.Strip(strings.Join(m.helpLines(), " ")); !strings.Contains(bar, "new reading") {
+		t.Errorf("readings shown, the help bar reads %q", bar)
+	}
+	m = press(t, m, "r")
+	if bar := ansi.Strip(strings.Join(m.helpLines(), " ")); !strings.Contains(bar, "μ") {
+		t.Errorf("no panel, the help bar reads %q", bar)
+	}
+}

@@ -310,9 +310,10 @@ func (m model) conditionKey(msg tea.KeyMsg) (tea.Model, tea.Cmd, bool) {
 	case key.Matches(msg, m.keys.Girder), key.Matches(msg, m.keys.RunPanel), key.Matches(msg, m.keys.Remedies),
 		key.Matches(msg, m.keys.Readings), key.Matches(msg, doorsKey):
 		// Another panel takes the place: this one gives way, and the root
-		// answers the key.
+		// answers the key (through update, so that the readings panel,
+		// which takes its key before the root's keys, opens at once).
 		p.show = false
-		mm, cmd := m.key(msg)
+		mm, cmd := m.update(msg)
 		return mm, cmd, true
 	default:
 		return m, nil, false
