@@ -684,7 +684,7 @@ func (p conditionPanel) view(v *engine.Vessel, st Styles, w, h int) []string {
 			}
 		}
 		if k == 0 && r.tank >= 0 {
-			body = append(body, st.Dim.Render("TANKS          fill of capacity, contents"))
+			body = append(body, st.Dim.Render(fitLine(fmt.Sprintf("%-*s %7s %9s  %s", nameW+2, "TANKS", "fill", "mass", "contents (fill: of capacity)"), w)))
 		}
 		if r.weight == 0 && longWeights {
 			body = append(body, st.Dim.Render("WEIGHTS"))
