@@ -6,7 +6,11 @@ import (
 	"strings"
 	"testing"
 
+	tea "github.com/charmbracelet/bubbletea"
 	"github.com/charmbracelet/x/ansi"
+
+	"heelwatch/engine"
+	"heelwatch/vessels"
 )
 
 var nameCol = regexp.MustCompile(`^(.*?)\s+-?\d+\.\d`)
@@ -71,4 +75,35 @@ func TestPanelHelpBar(t *testing.T) {
 	if bar := ansi.Strip(strings.Join(m.helpLines(), " ")); !strings.Contains(bar, "μ") {
 		t.Errorf("no panel, the help bar reads %q", bar)
 	}
+}
+
+// TestResumeLogSaysWhence: a state taken up with --resume is logged as the
+// saved state's, with the water held in a space named too (the log said
+// "from the command line: … open to sea", with a held space not named).
+func TestResumeLogSaysWhence(t *testing.T) {
+	v, info := ship(t)
+	d := v.Intact()
+	d[indexOfVessel(t, v, "Wing tank 2 S")] = engine.SpaceState{Open: true}
+	d[indexOfVessel(t, v, "Hold 2")] = engine.SpaceState{WaterM3: 120}
+	s := &vessels.State{Damage: d}
+	r := newModel(v, info, Options{Palette: "day", Resume: s, Start: d})
+	r.now = fixedClock()
+	r.animate = false
+	r = drive(t, r, tea.WindowSizeMsg{Width: 80, Height: 24})
+	r = drive(t, r, nil, r.Init())
+	log := strings.Join(r.log, "\n")
+	if !strings.Contains(log, "from the saved state: Wing tank 2 S (μ 0.95) open to sea; water in Hold 2 (120 m³ held)") {
+		t.Errorf("the log reads:\n%s", log)
+	}
+}
+
+func indexOfVessel(t *testing.T, v *engine.Vessel, name string) int {
+	t.Helper()
+	for i, c := range v.Compartments {
+		if c.Name == name {
+			return i
+		}
+	}
+	t.Fatalf("no compartment %q", name)
+	return -1
 }
