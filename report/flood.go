@@ -79,7 +79,7 @@ func FloodText(w io.Writer, f Flood) error {
 	tw.Flush()
 
 	head, rest := FloodOutcome(r)
-	fmt.Fprintf(&b, "\nOutcome: %s%s.\n", head, rest)
+	fmt.Fprintf(&b, "\n%s: %s%s.\n", outcomeLabel(f), head, rest)
 	switch r.End {
 	case engine.FloodSinks, engine.FloodCapsizes, engine.FloodFailed:
 		// The outcome has said why already.
@@ -94,6 +94,7 @@ func FloodText(w io.Writer, f Flood) error {
 		fmt.Fprintf(&b, "  Time to equalise: %s (%s s), %s m³ in. The run stops at 1 mm of head (%s);\n  the last millimetre follows the √h law.\n",
 			Duration(r.EqualiseS), num(r.EqualiseS, 0, ""), num(r.FinalWaterM3, 1, ""), Duration(r.EndS))
 	}
+	networkEndLine(&b, f)
 
 	b.WriteString("\nEvents\n")
 	tw = tabwriter.NewWriter(&b, 0, 0, 2, ' ', 0)
