@@ -143,10 +143,10 @@ func (m model) readingMsg(msg tea.Msg) (tea.Model, tea.Cmd, bool) {
 			m.rd.running = false
 			return m, m.addLog(m.now(), "readings cleared"), true
 		case key.Matches(msg, readingApply):
-			if m.rd.result == nil || len(m.rd.result.Explanations) == 0 || len(m.rd.result.Explanations[0].Spaces) == 0 {
+			e, what, ok := m.rd.toApply(m.v)
+			if !ok {
 				return m, nil, true
 			}
-			e := m.rd.result.Explanations[0]
 			d := m.v.Intact()
 			for _, s := range e.Spaces {
 				d[s.Compartment] = engine.SpaceState{WaterM3: s.WaterM3}
@@ -154,7 +154,7 @@ func (m model) readingMsg(msg tea.Msg) (tea.Model, tea.Cmd, bool) {
 					d[s.Compartment].Permeability = s.Permeability
 				}
 			}
-			mm, cmd := m.apply(d, "diagnosis onto the dashboard: "+e.Names(m.v))
+			mm, cmd := m.apply(d, "diagnosis onto the dashboard: "+what)
 			return mm, cmd, true
 		case key.Matches(msg, m.keys.Girder), key.Matches(msg, m.keys.RunPanel), key.Matches(msg, m.keys.Remedies):
 			// Another panel takes the place: this one gives way.
@@ -163,6 +163,36 @@ func (m model) readingMsg(msg tea.Msg) (tea.Model, tea.Cmd, bool) {
 		}
 	}
 	return m, nil, false
+}
+
+// toApply is the explanation the apply key puts onto the dashboard and
+// what the log calls it: the best, when it fits the readings; when nothing
+// fits but something does without the readings that disagree, that one
+// (the officer is told which readings it leaves out); else the best all
+// the same, said not to fit. ok is false when there is nothing to apply.
+func (p readingPanel) toApply(v *engine.Vessel) (e engine.Explanation, what string, ok bool) {
+	res := p.result
+	if res == nil || len(res.Explanations) == 0 {
+		return e, "", false
+	}
+	e, what = res.Explanations[0], res.Explanations[0].Names(v)
+	switch {
+	case res.Fits:
+	case res.Without != nil && len(res.Without.Spaces) > 0:
+		e = *res.Without
+		var left []string
+		for _, g := range res.Disagreements {
+			if g.Reading == res.Reading && g.What == "heel" {
+				left = append(left, "the inclinometer")
+			} else if g.Reading == res.Reading {
+				left = append(left, g.What)
+			}
+		}
+		what = e.Names(v) + " (the fit leaving out " + strings.Join(left, " and ") + ")"
+	default:
+		what += " (which does not fit the readings)"
+	}
+	return e, what, len(e.Spaces) > 0
 }
 
 // takeReading keeps a reading, logs it and starts the diagnosis of all the
@@ -398,8 +428,8 @@ func (p readingPanel) diagnosisLines(w int) []string {
 	if len(res.Tellers) > 0 {
 		lines = append(lines, wrapStyled(st.Caution, res.Tellers[0], w)...)
 	}
-	if len(res.Explanations) > 0 && len(res.Explanations[0].Spaces) > 0 {
-		lines = append(lines, st.Dim.Render(clip("a: the best explanation onto the dashboard", w)))
+	if _, what, ok := p.toApply(p.v); ok {
+		lines = append(lines, wrapStyled(st.Dim, "a: "+what+" onto the dashboard", w)...)
 	}
 	return lines
 }

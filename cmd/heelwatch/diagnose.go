@@ -1,7 +1,6 @@
 package main
 
 import (
-	"errors"
 	"flag"
 	"fmt"
 	"io"
@@ -71,16 +70,7 @@ func runDiagnose(args []string, stdout, stderr io.Writer) int {
 	}
 	rs, err := vessels.LoadReadings(*readings, v)
 	if err != nil {
-		var ps vessels.Problems
-		if errors.As(err, &ps) {
-			for _, p := range ps {
-				fmt.Fprintln(stderr, p.String())
-			}
-			fmt.Fprintf(stderr, "heelwatch diagnose: %s: %s; nothing was diagnosed\n", *readings, plural(len(ps), "problem"))
-		} else {
-			fmt.Fprintln(stderr, "heelwatch diagnose:", err)
-		}
-		return exitInput
+		return refuse(stderr, "heelwatch diagnose", *readings, "nothing was diagnosed", err, "")
 	}
 	d, err := diagnose(v, info, rs)
 	if err != nil {
