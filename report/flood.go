@@ -29,6 +29,9 @@ type Flood struct {
 	// Passenger: the vessel is a passenger ship, whose margin line is
 	// watched; on a cargo ship the line is the deck edge alone.
 	Passenger bool
+	// StrengthWhy says why the hull girder is not worked out
+	// (engine.StrengthMissing); "" when it is.
+	StrengthWhy string
 }
 
 func lowestOpening(p *engine.Position) (engine.OpeningClearance, bool) {
@@ -181,6 +184,7 @@ func FloodText(w io.Writer, f Flood) error {
 	}
 	tw.Flush()
 	writeStageCriteria(&b, r.Stages)
+	writeStageStrength(&b, r.Stages, f.StrengthWhy)
 
 	b.WriteString("\nFinal state beside the lost-buoyancy solution (the compartment open to the sea)\n")
 	if r.LostBuoyancy == nil {
