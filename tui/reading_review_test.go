@@ -1,10 +1,15 @@
 package tui
 
 import (
+	"math"
 	"strconv"
 	"strings"
 	"testing"
 	"time"
+
+	"github.com/charmbracelet/x/ansi"
+
+	"heelwatch/engine"
 )
 
 // TestReadingMinutesTyped: the minutes the clock suggests are only the
@@ -84,5 +89,68 @@ func TestReadingApplyLeavesOutMisread(t *testing.T) {
 	}
 	if log := strings.Join(m.log, "\n"); !strings.Contains(log, "leaving out Fwd S") {
 		t.Errorf("the log does not say the misread mark was left out:\n%s", log)
+	}
+}
+
+// TestReadingApplyOpenToSea: an explanation whose water stands level with
+// the sea goes onto the dashboard as the space open to the sea, so that
+// the upright GM shown is that of free communication with the sea (as
+// solve --open gives it), not that of the same water held as a weight
+// with its own free surface (a third more on the freighter's wing tank).
+func TestReadingApplyOpenToSea(t *testing.T) {
+	m := bundledModel(t, "freighter", 120, 40)
+	wt := indexOf(t, m, "Wing tank 2 S")
+	d := m.v.Intact()
+	d[wt] = engine.SpaceState{Open: true}
+	pos, err := engine.Solve(m.v, d)
+	if err != nil {
+		t.Fatal(err)
+	}
+	r := engine.Reading{HeelDeg: pos.HeelDeg, HasHeel: true}
+	for i, md := range engine.MarkDrafts(m.v.Hull, pos.Plane, m.v.DraftMarks) {
+		r.Drafts = append(r.Drafts, engine.MarkReading{Mark: i, DraftM: md.DraftM})
+	}
+	dg, err := engine.Diagnose(m.v, []engine.Reading{r}, engine.DiagnoseOptions{})
+	if err != nil {
+		t.Fatal(err)
+	}
+	if !dg.Fits || dg.Explanations[0].Names(m.v) != "Wing tank 2 S" || !dg.Explanations[0].Spaces[0].Open {
+		t.Fatalf("want Wing tank 2 S open to the sea first; got %q", dg.Verdict)
+	}
+	m = press(t, m, "r")
+	m.rd.readings, m.rd.result = []engine.Reading{r}, &dg
+	m = press(t, m, "a")
+	if !m.damage[wt].Open {
+		t.Errorf("a: Wing tank 2 S is %+v; want it open to the sea", m.damage[wt])
+	}
+	if gm := m.cur.Position.GMUprightM; math.Abs(gm-pos.GMUprightM) > 0.01 {
+		t.Errorf("a: GM upright %.3f m on the dashboard; solve with the tank open gives %.3f m", gm, pos.GMUprightM)
+	}
+}
+
+// TestReadingPanelScrolls: at 80×24 the diagnosis is longer than the
+// panel; it says there is more and ] shows the rest down to the apply
+// key's line, [ brings the verdict back. Nothing was shown of the
+// ranking's end, the trend or the apply key before.
+func TestReadingPanelScrolls(t *testing.T) {
+	m := bundledModel(t, "freighter", 80, 24)
+	m = press(t, m, "r")
+	m = typeReading(t, m, knownReading(t, m)...)
+	view := checkFits(t, "diagnosis", m, 80, 24)
+	if !strings.Contains(view, "more lines: ] shows them") {
+		t.Fatalf("the diagnosis does not say there is more:\n%s", view)
+	}
+	for i := 0; i < 20 && !strings.Contains(ansi.Strip(m.View()), "a: Wing tank 2 S onto the dashboard"); i++ {
+		m = press(t, m, "]")
+	}
+	view = checkFits(t, "scrolled", m, 80, 24)
+	if !strings.Contains(view, "a: Wing tank 2 S onto the dashboard") || !strings.Contains(view, "[ back to the top") {
+		t.Errorf("] never showed the apply key's line:\n%s", view)
+	}
+	for i := 0; i < 20; i++ {
+		m = press(t, m, "[")
+	}
+	if view = checkFits(t, "back", m, 80, 24); !strings.Contains(view, "Best explanation: Wing tank 2 S") {
+		t.Errorf("[ did not bring the verdict back:\n%s", view)
 	}
 }

@@ -260,6 +260,9 @@ func (m model) footView() []string {
 // helpLines is the help bar, and with the full help the legend of marks.
 func (m model) helpLines() []string {
 	lines := strings.Split(m.help.View(m.keys), "\n")
+	if ks := m.panelHelp(); ks != nil && !m.help.ShowAll {
+		lines = []string{m.help.ShortHelpView(ks)}
+	}
 	if m.help.ShowAll && m.width > 0 {
 		for _, l := range wrap(markLegend(m.v.Passenger()), m.width) {
 			lines = append(lines, m.st.Dim.Render(l))

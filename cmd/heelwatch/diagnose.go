@@ -20,8 +20,8 @@ Flags:
   --condition FILE    a condition file in place of the vessel file's loading
                       condition (weights; tanks by fill, m³, tonnes or sounding)
   --readings FILE     the readings: drafts at the marks, heel, soundings, each
-                      [[reading]] at its minutes (see README, "Readings and
-                      diagnosis")
+                      [[reading]] at its minutes (see README, "Draft marks,
+                      readings and diagnosis")
   --format F          text (default) or json
 
 The latest reading is explained: every single compartment, every pair of
