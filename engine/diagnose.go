@@ -241,6 +241,10 @@ func (dg *Diagnosis) recheck(v *Vessel, rs []Reading, o DiagnoseOptions) {
 	b := alt.Explanations[0]
 	dg.Without = &b
 	dg.Verdict += fmt.Sprintf(" Leaving out %s, %s fits, off by %s.", strings.Join(left, " and "), b.Names(v), misfitWords(b))
+	// What to do first is to read the doubtful mark again, not to sound
+	// tanks to tell apart explanations that do not fit; the soundings that
+	// tell apart what fits without it follow.
+	dg.Tellers = append([]string{fmt.Sprintf("Read %s again first: if it was misread, %s fits the rest.", strings.Join(left, " and "), b.Names(v))}, alt.Tellers...)
 }
 
 // refineCount is how many of the best candidates are refined on the

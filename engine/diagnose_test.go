@@ -113,4 +113,9 @@ func TestDiagnoseWrongMark(t *testing.T) {
 	if dg.Fits || dg.Without == nil || dg.Without.Names(v) != "Wing tank 2 S" || !strings.Contains(dg.Verdict, "Leaving out Fwd S, Wing tank 2 S fits") {
 		t.Errorf("fits %v, verdict %q", dg.Fits, dg.Verdict)
 	}
+	// The first thing to do is to read the doubtful mark again, not to
+	// sound tanks to tell apart explanations that do not fit.
+	if len(dg.Tellers) == 0 || !strings.HasPrefix(dg.Tellers[0], "Read Fwd S again first") {
+		t.Errorf("first advice %q", dg.Tellers)
+	}
 }
