@@ -311,6 +311,8 @@ func handSpaces(v *Vessel, d Damage) (spaces []handSpace, spilt []string, spiltT
 	for i, c := range v.Compartments {
 		s := d.state(i)
 		switch {
+		case s.Open && c.Sections != nil:
+			return nil, nil, 0, &HandNotApplicable{fmt.Sprintf("%s is given by its own outlines, not a box: the box closed forms do not describe it", c.Name)}
 		case s.Open:
 			b := c.Box
 			hs := handSpace{name: c.Name, mu: v.Permeability(d, i),
