@@ -12,12 +12,14 @@ import (
 type DiagnoseOptions struct {
 	MaxGroup int // most compartments in one explanation, 1 to 3; 0 means 3
 	Keep     int // explanations returned; 0 means 5
-	// Joined lists compartments that water can pass between (connections
-	// through doors, ducts, pipes): searched together like neighbours.
+	// Joined lists more compartments that water can pass between, searched
+	// together like neighbours; the vessel's own Connections always are.
 	Joined [][2]int
 	// Progress, when set, is told how many candidate sets are done of how
 	// many (the last call has done == total).
 	Progress func(done, total int)
+
+	noRecheck bool // the diagnosis without the readings that disagree is not run again
 }
 
 // FloodedSpace is the water one explanation puts in one compartment.
@@ -82,8 +84,12 @@ type Diagnosis struct {
 	Verdict       string        // a plain sentence
 	Tellers       []string      // what would tell the best from the next ones
 	Disagreements []Disagreement
-	Searched      int   // candidate sets fitted
-	NotSearched   []int // compartments left out: tanks pressed full of sea water, which a hole below the water does not change
+	// Without is the best explanation of the latest reading without its
+	// readings that disagree with the rest, when nothing fits with them and
+	// something does without; nil otherwise. The verdict says so.
+	Without     *Explanation
+	Searched    int   // candidate sets fitted
+	NotSearched []int // compartments left out: tanks pressed full of sea water, which a hole below the water does not change
 }
 
 // Diagnose finds the flooding states that best explain the latest of the
@@ -91,7 +97,7 @@ type Diagnosis struct {
 //
 // Method: the water surface the marks and inclinometer imply is fitted
 // first (ObservedPlane). Every single compartment, every pair of
-// neighbours (or joined compartments) and every connected triple is a
+// neighbours (or compartments joined by a connection) and every connected triple is a
 // candidate; in each the volume of sea water (0 to the space's moulded
 // volume) is chosen so that the ship, with that water as added weight,
 // would float at the observed plane (mass and the two moments, with the
@@ -130,7 +136,13 @@ func Diagnose(v *Vessel, rs []Reading, o DiagnoseOptions) (Diagnosis, error) {
 		pool = append(pool, i)
 	}
 	sets := candidateSets(v, pool, o)
-	total := len(sets) + refineCount
+	singles := 0
+	for _, s := range sets {
+		if len(s) == 1 {
+			singles++
+		}
+	}
+	total := len(sets) + singles + 2*refineCount
 	var cands []*diagCand
 	for n, s := range sets {
 		c := f.fitToPlane(s)
@@ -143,15 +155,20 @@ func Diagnose(v *Vessel, rs []Reading, o DiagnoseOptions) (Diagnosis, error) {
 	}
 	dg.Searched = len(sets)
 	sort.SliceStable(cands, func(i, j int) bool { return cands[i].score < cands[j].score })
-	// Refine the best few, and every one close enough to the best that
-	// reading noise could have put it behind.
-	for i := 0; i < len(cands) && i < 2*refineCount; i++ {
-		if i >= refineCount && cands[i].score > cands[0].score+refineMargin {
-			break
+	// Refine every single compartment (cheap, and the plane the readings
+	// imply can be a poor start: with the marks at one end under water it
+	// does not know the trim), the best few groups, and every group close
+	// enough to the best that reading noise could have put it behind.
+	done := 0
+	for i, c := range cands {
+		close := i < refineCount || (i < 2*refineCount && c.score <= cands[0].score+refineMargin)
+		if len(c.set) > 1 && !close {
+			continue
 		}
-		f.refine(cands[i])
+		f.refine(c)
+		done++
 		if o.Progress != nil {
-			o.Progress(min(len(sets)+i+1, total-1), total)
+			o.Progress(min(len(sets)+done, total-1), total)
 		}
 	}
 	if o.Progress != nil {
@@ -179,7 +196,51 @@ func Diagnose(v *Vessel, rs []Reading, o DiagnoseOptions) (Diagnosis, error) {
 	}
 	dg.Fits, dg.Verdict = verdict(v, dg.Explanations, nRead)
 	dg.Tellers = tellers(v, dg.Explanations)
+	if !dg.Fits && !o.noRecheck {
+		dg.recheck(v, rs, o)
+	}
 	return dg, nil
+}
+
+// recheck diagnoses the latest reading once more without the readings of
+// it that disagree with the rest, and says what would fit then: the
+// officer sees both, and which reading to take again.
+func (dg *Diagnosis) recheck(v *Vessel, rs []Reading, o DiagnoseOptions) {
+	ri := len(rs) - 1
+	r := rs[ri]
+	drop := map[string]bool{}
+	for _, g := range dg.Disagreements {
+		if g.Reading == ri {
+			drop[g.What] = true
+		}
+	}
+	if len(drop) == 0 {
+		return
+	}
+	var kept Reading
+	kept.Minutes, kept.Levels = r.Minutes, r.Levels
+	if r.HasHeel && !drop["heel"] {
+		kept.HeelDeg, kept.HasHeel = r.HeelDeg, true
+	}
+	var left []string
+	for _, d := range r.Drafts {
+		if n := v.DraftMarks[d.Mark].Name; drop[n] {
+			left = append(left, n)
+		} else {
+			kept.Drafts = append(kept.Drafts, d)
+		}
+	}
+	if drop["heel"] {
+		left = append(left, "the inclinometer")
+	}
+	o.noRecheck, o.Progress = true, nil
+	alt, err := Diagnose(v, append(append([]Reading(nil), rs[:ri]...), kept), o)
+	if err != nil || !alt.Fits || len(alt.Explanations) == 0 {
+		return
+	}
+	b := alt.Explanations[0]
+	dg.Without = &b
+	dg.Verdict += fmt.Sprintf(" Leaving out %s, %s fits, off by %s.", strings.Join(left, " and "), b.Names(v), misfitWords(b))
 }
 
 // refineCount is how many of the best candidates are refined on the
@@ -206,7 +267,13 @@ func candidateSets(v *Vessel, pool []int, o DiagnoseOptions) [][]int {
 			adj[i][j] = true
 		}
 	}
-	for _, p := range o.Joined {
+	// The ship's own connections (doors, ducts, pipes, cross-flooding
+	// fittings, open or shut: a shut door may leak) join their ends too.
+	joined := append([][2]int(nil), o.Joined...)
+	for _, c := range v.Connections {
+		joined = append(joined, [2]int{c.From, c.To})
+	}
+	for _, p := range joined {
 		if p[0] >= 0 && p[1] >= 0 && p[0] < len(adj) && p[1] < len(adj) && p[0] != p[1] {
 			adj[p[0]][p[1]], adj[p[1]][p[0]] = true, true
 		}
@@ -483,31 +550,70 @@ func (f *diagFitter) refine(c *diagCand) {
 	if len(c.set) == 0 || c.pos == nil {
 		return
 	}
+	k := len(c.set)
+	if k == 3 {
+		f.refineVolumes(c)
+		return
+	}
+	// Singles and pairs: the part of each space filled, q ∈ [0, 1], and one
+	// permeability μ for the group, within the range of the trade's values
+	// (SOLAS II-1 Reg. 7-3: 0.60 stores to 0.95, here 0.5 to 1); the water
+	// is q·μ·V. So written the misfit has no kink where a space fills up
+	// (a space full to its top only says q = 1, whatever μ).
+	mu0 := f.v.Compartments[c.set[0]].Permeability
+	water := func(x []float64) []float64 {
+		w := make([]float64, k)
+		for i := range w {
+			w[i] = x[i] * x[k] * c.moul[i]
+		}
+		return w
+	}
+	x0 := make([]float64, k+1)
+	x0[k] = mu0
+	for i := range c.set {
+		x0[i] = math.Min(1, c.vol[i]/(mu0*c.moul[i]))
+	}
+	if k == 1 {
+		// A coarse look along the space first: the misfit can be flat
+		// where the start lies (two effects of the water cancelling at the
+		// marks read) and steep elsewhere (the deck edge going under), so
+		// a start from the plane alone may stall.
+		best := c.misfit
+		for _, q := range []float64{0.05, 0.2, 0.4, 0.6, 0.8, 1} {
+			x := []float64{q, mu0}
+			if res, _, ok := f.readingResiduals(f.damage(c.set, water(x), mu0)); ok && sumSq(res) < best {
+				best, x0 = sumSq(res), x
+			}
+		}
+	}
+	lo, hi, h := make([]float64, k+1), make([]float64, k+1), make([]float64, k+1)
+	for i := 0; i < k; i++ {
+		hi[i], h[i] = 1, math.Max(1e-3, 0.5/c.moul[i])
+	}
+	lo[k], hi[k], h[k] = 0.5, 1, 0.01
+	x, _, ok := boundedLeastSquares(x0, lo, hi, h, 10, 0, func(x []float64) ([]float64, bool) {
+		res, _, ok := f.readingResiduals(f.damage(c.set, water(x), x[k]))
+		return res, ok
+	})
+	if ok {
+		c.vol, c.mu = water(x), x[k]
+		f.forward(c)
+	}
+}
+
+// refineVolumes fits the water of each space of c (triples) on the
+// readings, each at its own permeability.
+func (f *diagFitter) refineVolumes(c *diagCand) {
 	lo, hi, h := make([]float64, len(c.set)), append([]float64(nil), c.moul...), make([]float64, len(c.set))
 	for i := range c.set {
 		h[i] = math.Max(0.5, 1e-3*c.moul[i])
 	}
-	k := len(c.set)
-	x0 := append([]float64(nil), c.vol...)
-	if k < 3 {
-		// The permeability too, one for the group, within the range of
-		// the trade's values (SOLAS II-1 Reg. 7-3: 0.60 stores to 0.95).
-		mu := f.v.Compartments[c.set[0]].Permeability
-		x0, lo, hi, h = append(x0, mu), append(lo, 0.5), append(hi, 1), append(h, 0.01)
-	}
-	x, _, ok := boundedLeastSquares(x0, lo, hi, h, 6, 0, func(x []float64) ([]float64, bool) {
-		mu := 0.0
-		if len(x) > k {
-			mu = x[k]
-		}
-		res, _, ok := f.readingResiduals(f.damage(c.set, x[:k], mu))
+	x, _, ok := boundedLeastSquares(c.vol, lo, hi, h, 6, 0, func(x []float64) ([]float64, bool) {
+		res, _, ok := f.readingResiduals(f.damage(c.set, x, 0))
 		return res, ok
 	})
 	if ok {
-		c.vol = x[:k]
-		if len(x) > k {
-			c.mu = x[k]
-		}
+		c.vol = x
 		f.forward(c)
 	}
 }
@@ -548,11 +654,16 @@ func (f *diagFitter) explain(c *diagCand) Explanation {
 	// The readings hardly tell a space's permeability from its level:
 	// the level and the sea are given at the file's permeability (or the
 	// least that holds the water), the officer's best knowledge of it.
-	d0 := f.damage(c.set, c.vol, 0)
+	// A space that was sounded shows at the fitted permeability: the
+	// sounding and the water together fix it.
+	d0, dFit := f.damage(c.set, c.vol, 0), f.damage(c.set, c.vol, c.mu)
 	sea := p.Plane
 	for i, ci := range c.set {
 		comp := f.v.Compartments[ci]
 		fs := FloodedSpace{Compartment: ci, WaterM3: c.vol[i], Permeability: f.v.Permeability(d0, ci)}
+		if _, sounded := f.levels[ci]; sounded {
+			fs.Permeability = f.v.Permeability(dFit, ci)
+		}
 		V := comp.solid.Volume()
 		in, _ := levelForVolume(comp.solid, math.Min(c.vol[i]/fs.Permeability, V*(1-1e-9)), sea.B, sea.C)
 		fs.LevelM = sounding(comp, in)
@@ -578,20 +689,32 @@ func verdict(v *Vessel, es []Explanation, nRead int) (bool, string) {
 	}
 	b := es[0]
 	if b.Misfit > FitLimit*math.Max(float64(nRead), 1) {
-		return false, fmt.Sprintf("Nothing fits the readings within their errors: the best, %s, is still %s off at the marks. A reading may be wrong, a weight may have shifted (cargo, a tank), or water is where the vessel file has no compartment.",
-			b.Names(v), cmWords(b.DraftRMSM))
+		return false, fmt.Sprintf("Nothing fits the readings within their errors: the best, %s, is still off by %s. A reading may be wrong, a weight may have shifted (cargo, a tank), or water is where the vessel file has no compartment.",
+			b.Names(v), misfitWords(b))
 	}
 	if len(b.Spaces) == 0 {
-		return true, "The readings agree with the ship intact: no flooding that the marks can show."
+		return true, "The readings agree with the ship intact: no flooding that they can show."
 	}
-	return true, fmt.Sprintf("Best explanation: %s (%s at the marks).", b.Names(v), cmWords(b.DraftRMSM))
+	return true, fmt.Sprintf("Best explanation: %s, off by %s.", b.Names(v), misfitWords(b))
 }
 
-func cmWords(m float64) string {
-	if math.IsNaN(m) {
-		return "no marks read,"
+// misfitWords says how far an explanation is from the reading, in what was
+// read: "0.4 cm RMS at the marks", "0.1° of heel", "3 cm RMS in the soundings".
+func misfitWords(e Explanation) string {
+	var parts []string
+	if !math.IsNaN(e.DraftRMSM) {
+		parts = append(parts, fmt.Sprintf("%.1f cm RMS at the marks", 100*e.DraftRMSM))
 	}
-	return fmt.Sprintf("%.1f cm RMS", 100*m)
+	if !math.IsNaN(e.HeelErrDeg) {
+		parts = append(parts, fmt.Sprintf("%.1f° of heel", math.Abs(e.HeelErrDeg)))
+	}
+	if !math.IsNaN(e.LevelRMSM) {
+		parts = append(parts, fmt.Sprintf("%.0f cm RMS in the soundings", 100*e.LevelRMSM))
+	}
+	if len(parts) > 1 {
+		return strings.Join(parts[:len(parts)-1], ", ") + " and " + parts[len(parts)-1]
+	}
+	return strings.Join(parts, "")
 }
 
 // tellers says, for the runners-up, which sounding would tell them from the

@@ -10,7 +10,8 @@ import "math"
 // best x found and its residuals; ok is false if x0 itself has no answer.
 //
 // The method is the textbook one (Levenberg 1944, Marquardt 1963); the
-// damping is scaled by the diagonal of JᵀJ.
+// damping is scaled by the diagonal of JᵀJ, and a variable at a bound that
+// the gradient pushes outward is held there for the step (an active set).
 //
 // It stops early once Σ r² falls to enough (0: only at convergence).
 func boundedLeastSquares(x0, lo, hi, h []float64, maxIt int, enough float64, res func(x []float64) ([]float64, bool)) ([]float64, []float64, bool) {
@@ -58,13 +59,25 @@ func boundedLeastSquares(x0, lo, hi, h []float64, maxIt int, enough float64, res
 				}
 			}
 		}
+		// A variable at a bound that the descent would push further out
+		// is held there (the active set), so that the others can move.
+		var held [3]bool
+		for p := 0; p < k; p++ {
+			held[p] = (x[p] <= lo[p] && g[p] > 0) || (x[p] >= hi[p] && g[p] < 0)
+		}
 		improved := false
 		for try := 0; try < 8; try++ {
 			var m [3][3]float64
 			var b [3]float64
 			for p := 0; p < k; p++ {
+				if held[p] {
+					m[p][p] = 1
+					continue
+				}
 				for q := 0; q < k; q++ {
-					m[p][q] = a[p][q]
+					if !held[q] {
+						m[p][q] = a[p][q]
+					}
 				}
 				m[p][p] += lambda * math.Max(a[p][p], 1e-12)
 				b[p] = -g[p]
@@ -83,14 +96,16 @@ func boundedLeastSquares(x0, lo, hi, h []float64, maxIt int, enough float64, res
 			}
 			clipTo(xn, lo, hi)
 			rn, ok := res(xn)
-			if ok && sumSq(rn) < cost {
-				small := true
+			if cn := sumSq(rn); ok && cn < cost {
+				// Converged: the step is a small part of the difference
+				// step and the misfit hardly fell.
+				small := cost-cn <= 1e-4*cost
 				for p := 0; p < k; p++ {
 					if math.Abs(xn[p]-x[p]) > 1e-3*h[p] {
 						small = false
 					}
 				}
-				x, r, cost = xn, rn, sumSq(rn)
+				x, r, cost = xn, rn, cn
 				lambda = math.Max(lambda/10, 1e-9)
 				improved = true
 				if small {

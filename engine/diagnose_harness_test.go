@@ -198,7 +198,7 @@ func visible(v *engine.Vessel, intact, pos engine.Position) bool {
 // room, a double bottom tank under the engine room) that marks and heel
 // cannot tell apart and only a sounding can (the diagnosis says which).
 func TestDiagnoseHiddenTruth(t *testing.T) {
-	n, need := 6, 0.8
+	n, need := 5, 0.8
 	if *diagnoseCases > 0 {
 		n, need = *diagnoseCases, 0.9
 	} else if testing.Short() {

@@ -88,3 +88,29 @@ func TestDiagnoseIntact(t *testing.T) {
 		t.Errorf("intact readings: %q", dg.Verdict)
 	}
 }
+
+// TestDiagnoseWrongMark: one mark read 30 cm wrong is named, nothing fits
+// with it, and without it the truth fits (said in the verdict).
+func TestDiagnoseWrongMark(t *testing.T) {
+	v, d := refBundledDamaged(t, "Wing tank 2 S")
+	pos, err := engine.Solve(v, d)
+	if err != nil {
+		t.Fatal(err)
+	}
+	r := crewReading(v, pos, 0, rand.New(rand.NewSource(11)))
+	for k := range r.Drafts {
+		if v.DraftMarks[r.Drafts[k].Mark].Name == "Fwd S" {
+			r.Drafts[k].DraftM += 0.3
+		}
+	}
+	dg, err := engine.Diagnose(v, []engine.Reading{r}, engine.DiagnoseOptions{})
+	if err != nil {
+		t.Fatal(err)
+	}
+	if len(dg.Disagreements) != 1 || dg.Disagreements[0].What != "Fwd S" {
+		t.Errorf("disagreements %+v", dg.Disagreements)
+	}
+	if dg.Fits || dg.Without == nil || dg.Without.Names(v) != "Wing tank 2 S" || !strings.Contains(dg.Verdict, "Leaving out Fwd S, Wing tank 2 S fits") {
+		t.Errorf("fits %v, verdict %q", dg.Fits, dg.Verdict)
+	}
+}

@@ -57,8 +57,9 @@
 //     warm_start.go (each solve of a sequence started from the last).
 //   - Readings and exercises: draftmark.go, draftsurvey.go, reading.go,
 //     diagnose.go and diagnose_fit.go (what is flooding, from what the crew
-//     reads), trend.go; drill.go, drill_event.go, drill_reading.go (an
-//     exercise's truth and what the crew would read of it).
+//     reads), trend.go; drill.go, drill_event.go, drill_reading.go,
+//     drill_alarm.go, drill_debrief.go (an exercise's truth on the network
+//     run, what the crew would read and hear of it, and its debrief).
 //   - Water spreading through the ship: connection.go (doors, ducts,
 //     pipes and cross-flooding fittings between compartments), spread.go
 //     (the final state of progressive flooding, to a fixed point),

@@ -115,11 +115,11 @@ func (ms markShell) draft(p Plane) MarkDraft {
 		md.DraftM, md.State = p.Z(m.XM, md.YM), MarkSubmerged
 		return md
 	}
-	// Bisection to a tenth of a micrometre: g rises with z wherever the
+	// Bisection to a nanometre: g rises with z wherever the
 	// shell's slope times tan(heel) is below one, and bisection needs only
 	// the change of sign.
 	a, b := lo, hi
-	for b-a > 1e-7 {
+	for b-a > 1e-9 {
 		c := (a + b) / 2
 		if g(c) < 0 {
 			a = c

@@ -147,3 +147,35 @@ func TestMarkDraftsStates(t *testing.T) {
 		t.Errorf("starboard %.6f, want %.6f (vertical side continued)", got[1].DraftM, want)
 	}
 }
+
+// TestSurveyReadingHeeled: marks read off a heeled, trimmed box (the
+// closed form of TestMarkDraftsHeeledTrimmedBox) come to the same drafts at
+// the perpendiculars as the position's own, with no hog or sag.
+func TestSurveyReadingHeeled(t *testing.T) {
+	const L, B, D = 80.0, 16.0, 8.0
+	w := engine.Weight{Name: "load", MassT: L * B * 4 * engine.SeaWaterDensity, LCGM: 38, TCGM: 0.4, VCGM: 5}
+	h, _ := engine.NewBoxHull(L, B, D)
+	marks := []engine.DraftMark{
+		{Name: "Aft P", XM: 2, Side: engine.Port}, {Name: "Aft S", XM: 2, Side: engine.Starboard},
+		{Name: "Mid S", XM: 41, Side: engine.Starboard},
+		{Name: "Fwd P", XM: 77, Side: engine.Port}, {Name: "Fwd S", XM: 77, Side: engine.Starboard},
+	}
+	v, err := engine.NewVessel(engine.Vessel{Name: "reference box", Hull: h, Weights: []engine.Weight{w}, DraftMarks: marks})
+	if err != nil {
+		t.Fatal(err)
+	}
+	pos, _ := engine.Solve(v, v.Intact())
+	r := engine.Reading{HasHeel: true, HeelDeg: pos.HeelDeg}
+	for i, m := range engine.MarkDrafts(v.Hull, pos.Plane, marks) {
+		r.Drafts = append(r.Drafts, engine.MarkReading{Mark: i, DraftM: m.DraftM})
+	}
+	s, err := engine.SurveyReading(v, r)
+	if err != nil {
+		t.Fatal(err)
+	}
+	// 0.1 mm: the implied plane's weak priors (ObservedPlane) move its
+	// heel by a few millionths.
+	if math.Abs(s.AftM-pos.DraftAftM) > 1e-4 || math.Abs(s.FwdM-pos.DraftFwdM) > 1e-4 || math.Abs(s.DeflectionM) > 1e-4 {
+		t.Errorf("survey %+v; position aft %.6f fwd %.6f", s, pos.DraftAftM, pos.DraftFwdM)
+	}
+}

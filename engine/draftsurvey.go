@@ -76,3 +76,16 @@ func SurveyMarks(lengthM, tanHeel float64, marks []MarkDraft) (MarkSurvey, error
 	}
 	return s, nil
 }
+
+// SurveyReading carries the marks of a reading to the perpendiculars: each
+// read mark placed where the water meets its shell line at the draft read,
+// brought to the centreline at the heel the reading implies (its marks and
+// inclinometer together, FitObservedPlane).
+func SurveyReading(v *Vessel, r Reading) (MarkSurvey, error) {
+	var md []MarkDraft
+	for _, d := range r.Drafts {
+		m := v.DraftMarks[d.Mark]
+		md = append(md, MarkDraft{DraftMark: m, DraftM: d.DraftM, YM: markShellY(v.Hull, m, d.DraftM)})
+	}
+	return SurveyMarks(v.Hull.LengthM, FitObservedPlane(v, r).Plane.C, md)
+}

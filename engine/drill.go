@@ -5,23 +5,15 @@ import (
 	"fmt"
 	"math"
 	"sort"
+	"strings"
 )
 
-// This file runs the truth of an exercise in scenario time: the water in
-// every compartment the sea reaches through the holes the events make,
-// against the pumps the events start and stop, with the ship re-solved at
-// every evaluation. Events come at their minutes; the crew's decisions and
-// the instructor's injections come as events too, at the moment they are
-// made, so that a drill replays exactly from its log.
-
-// Tolerances of the drill's integrator (Bogacki–Shampine 3(2), error
-// control on every compartment's water).
-const (
-	drillRelTol = 1e-7
-	drillAbsTol = 1e-7 // of each compartment's capacity
-	drillMaxDtS = 30.0 // s: the longest step, so that a minute holds at least two
-	drillMinDtS = 0.5  // s: a step whose solve fails below this is the answer
-)
+// This file runs the truth of an exercise in scenario time: the flooding
+// run through the ship (NetworkRun: holes, openings that go under,
+// connections, pumps) from one event that changes the ship to the next.
+// Events come at their minutes; the crew's decisions and the instructor's
+// injections come as events too, at the moment they are made, so that a
+// drill replays from its log.
 
 // DrillRow is one row of a drill's timeline: the truth at a moment.
 type DrillRow struct {
@@ -38,64 +30,53 @@ type DrillRow struct {
 //
 // # Physics
 //
-// Each compartment holds a volume of sea water W_i. Each hole into it
-// lets water in by Torricelli's law as in FloodRun, Q = C_d·a·√(2g|h|)·sign(h),
-// h = max(d_sea, 0) − max(d_in, 0) at the hole along the true vertical; the
-// pumps on it take out their capacity, never water that is not there; W_i
-// stays in [0, μ·V_i]. The ship is solved with every W_i held as an added
-// weight (free surface level with the sea's attitude), warm-started.
+// Between two events that change the ship (a breach, a pump started or
+// stopped, a connection opened or closed, a sea inlet opened or shut) the
+// truth is a flooding run through the ship (NetworkRun: the orifice law
+// with both levels through every hole, opening and open connection, the
+// pumps, the ship re-solved at every evaluation) from the water held at
+// the event. At the next such event the run is stopped there, its water
+// carried over, and a new run started with the ship as she now is. A tank
+// holed with contents starts with them in, counted as sea water of the
+// same mass, as in FloodRun.
 //
-// A compartment whose every hole has come within 1 mm of head
-// (FloodHeadTolM) with no pump running is equalised: from then on it is
-// open to the sea (lost buoyancy, its permeability), which is the state
-// equalisation reaches and follows the sea as the ship moves. When a pump
-// is started on it again, its water is taken as μ × its volume below the
-// sea at that moment and it is followed as a volume once more.
-//
-// A tank holed with contents starts with them in, counted as sea water of
-// the same mass, as in FloodRun.
-//
-// # Integration
-//
-// Bogacki–Shampine 3(2) with error control (relative 1e-7, absolute 1e-7
-// of each compartment's capacity), steps of at most 30 s, landing exactly
-// on every event and every whole minute. A step whose solve fails is
-// halved; below 0.5 s the failure is the answer (she sinks or capsizes)
-// and the drill ends there. Deterministic: the same events give the same
-// timeline.
+// Between events the run's own integrator sets the steps (Rosenbrock 2(3),
+// relative 1e-5); the state at a whole minute or an event inside a step is
+// the step's interpolant, the ship solved there. A drill played from its
+// log stops each run exactly at each event, so it gives the same path to
+// the integrator's tolerance as the drill played live. When she sinks or
+// capsizes the drill ends there.
 type Drill struct {
-	v      *Vessel
+	v      *Vessel // with the connections as the events have set them
 	base   Damage
 	endMin float64
 	events []DrillEvent // scheduled, in time order
 	next   int
 	log    []DrillEvent // every event applied, in order
 
-	t      float64   // s
-	water  []float64 // m³ per compartment
-	inPlay []bool    // holed once, or holding water
-	open   []bool    // equalised: open to the sea
-	holes  [][]Hole
-	pumps  []float64 // m³/s per compartment
-	conns  map[string]bool
+	t     float64   // s
+	water []float64 // m³ of sea water per compartment (a tank's contents as water once holed)
+	wet   []bool    // holed once, or sea water has come in
+	holes [][]Hole
+	inlet []*Hole   // a sea inlet opened to counter-flood, per compartment
+	pumps []float64 // m³/h per compartment
 
-	warm warmStart
+	seg   *NetworkRun // the run since the last physical event; nil: nothing flows
+	segT0 float64     // s, when it started
+
 	pos  *Position
 	noEq *NoEquilibrium
-	dt   float64
 	rows []DrillRow
 	lost bool
-
-	equalisedAny bool // set by equalise: the state changed, the slope must be taken anew
 
 	alarmAt float64
 	alarmOn map[int]bool // fitted → sounded
 	alarms  []DrillAlarm
 }
 
-// NewDrill starts a drill of v from the intact condition base (nil:
-// intact) with the scheduled events (sorted here by minutes, stable),
-// lasting endMin minutes. It fails on an event it cannot apply.
+// NewDrill starts a drill of v from the condition base (nil: intact) with
+// the scheduled events (sorted here by minutes, stable), lasting endMin
+// minutes. It fails on an event it cannot apply.
 func NewDrill(v *Vessel, base Damage, events []DrillEvent, endMin float64) (*Drill, error) {
 	if v == nil {
 		return nil, errors.New("drill: no vessel")
@@ -116,15 +97,17 @@ func NewDrill(v *Vessel, base Damage, events []DrillEvent, endMin float64) (*Dri
 			return nil, err
 		}
 	}
-	d := &Drill{v: v, base: b, endMin: endMin, events: ev,
-		water: make([]float64, n), inPlay: make([]bool, n), open: make([]bool, n),
-		holes: make([][]Hole, n), pumps: make([]float64, n), conns: map[string]bool{}, dt: 5}
+	w := *v
+	w.Connections = append([]Connection(nil), v.Connections...)
+	d := &Drill{v: &w, base: b, endMin: endMin, events: ev,
+		water: make([]float64, n), wet: make([]bool, n),
+		holes: make([][]Hole, n), inlet: make([]*Hole, n), pumps: make([]float64, n)}
 	for i, s := range b {
 		if s.WaterM3 > 0 {
-			d.water[i], d.inPlay[i] = s.WaterM3, true
+			d.water[i], d.wet[i] = s.WaterM3, true
 		}
 	}
-	d.resolve()
+	d.restart()
 	d.record("")
 	d.applyDue()
 	return d, nil
@@ -134,28 +117,45 @@ func checkDrillEvent(v *Vessel, e DrillEvent, endMin float64) error {
 	if !(e.Minutes >= 0 && e.Minutes <= endMin) {
 		return fmt.Errorf("drill: event %s at %v min: outside the drill's 0…%g min", e.Kind, e.Minutes, endMin)
 	}
-	needComp := e.Kind == DrillBreach || e.Kind == DrillPump || e.Kind == DrillMark
+	needComp := e.Kind == DrillBreach || e.Kind == DrillPump || e.Kind == DrillMark || e.Kind == DrillCounterflood
 	if needComp && (e.Compartment < 0 || e.Compartment >= len(v.Compartments)) {
 		return fmt.Errorf("drill: event %s at %v min: no compartment %d", e.Kind, e.Minutes, e.Compartment)
 	}
 	switch e.Kind {
-	case DrillBreach:
+	case DrillBreach, DrillCounterflood:
+		if e.Kind == DrillCounterflood && !e.Open {
+			break
+		}
 		h := e.Hole
 		if !(h.AreaM2 > 0) || math.IsInf(h.AreaM2, 0) || !(h.Cd > 0 && h.Cd <= 1) {
-			return fmt.Errorf("drill: breach at %v min: hole area %v m² and C_d %v must be positive (C_d at most 1)", e.Minutes, h.AreaM2, h.Cd)
+			return fmt.Errorf("drill: %s at %v min: hole area %v m² and C_d %v must be positive (C_d at most 1)", e.Kind, e.Minutes, h.AreaM2, h.Cd)
 		}
 	case DrillPump:
 		if !(e.PumpM3h >= 0) || math.IsInf(e.PumpM3h, 0) {
 			return fmt.Errorf("drill: pump at %v min: capacity %v m³/h must be a finite number, zero or more", e.Minutes, e.PumpM3h)
 		}
-	case DrillConnection, DrillNote, DrillReport, DrillMark:
+	case DrillConnection:
+		if connectionIndex(v, e.Name) < 0 {
+			return fmt.Errorf("drill: connection at %v min: the vessel has no connection %q", e.Minutes, e.Name)
+		}
+	case DrillNote, DrillReport, DrillMark:
 	default:
 		return fmt.Errorf("drill: event of unknown kind %d", e.Kind)
 	}
 	return nil
 }
 
-// Vessel returns the drill's vessel.
+func connectionIndex(v *Vessel, name string) int {
+	for i, c := range v.Connections {
+		if strings.EqualFold(c.Name, name) {
+			return i
+		}
+	}
+	return -1
+}
+
+// Vessel returns the drill's vessel, its connections as the events have
+// set them.
 func (d *Drill) Vessel() *Vessel { return d.v }
 
 // Minutes returns the scenario time now.
@@ -206,7 +206,7 @@ func (d *Drill) AdvanceTo(m float64) {
 		}
 		nextMin := (math.Floor(d.t/60+1e-9) + 1) * 60
 		stop = math.Min(stop, nextMin)
-		d.integrate(stop)
+		d.moveTo(stop)
 		if d.lost {
 			return
 		}
@@ -232,232 +232,169 @@ func (d *Drill) apply(e DrillEvent) {
 	}
 	i := e.Compartment
 	switch e.Kind {
+	case DrillCounterflood:
+		d.inlet[i] = nil
+		if e.Open {
+			h := e.Hole
+			d.inlet[i] = &h
+			d.holed(i)
+		}
 	case DrillBreach:
 		d.holes[i] = append(d.holes[i], e.Hole)
-		if !d.inPlay[i] {
-			d.inPlay[i] = true
-			if m := d.v.tanks[i].massT; m > 0 && d.water[i] == 0 {
-				d.water[i] = math.Min(m/d.v.WaterDensity, d.capacity(i))
-			}
-		}
+		d.holed(i)
 	case DrillPump:
-		d.pumps[i] = e.PumpM3h / 3600
-		if d.open[i] && d.pumps[i] > 0 {
-			d.open[i] = false
-			if d.pos != nil {
-				d.water[i] = d.mu(i) * d.v.Compartments[i].solid.Below(d.pos.Plane).V
-			}
-		}
+		d.pumps[i] = e.PumpM3h
 	case DrillConnection:
-		d.conns[e.Name] = e.Open
+		if k := connectionIndex(d.v, e.Name); k >= 0 {
+			d.v.Connections[k].Open = e.Open
+		}
 	}
 	d.log = append(d.log, e)
 	if e.Physical() {
-		d.resolve()
+		d.restart()
 	}
 	d.record(e.Label(d.v))
+}
+
+// holed marks compartment i holed: a tank's contents count from now as
+// sea water of the same mass (as in FloodRun and NetworkRun).
+func (d *Drill) holed(i int) {
+	if d.wet[i] {
+		return
+	}
+	d.wet[i] = true
+	if m := d.v.tanks[i].massT; m > 0 {
+		d.water[i] = math.Min(m/d.v.WaterDensity, d.capacity(i))
+	}
 }
 
 func (d *Drill) mu(i int) float64       { return d.v.Permeability(d.base, i) }
 func (d *Drill) capacity(i int) float64 { return d.mu(i) * d.v.Compartments[i].solid.Volume() }
 
-// damage returns the state with water w.
-func (d *Drill) damage(w []float64) Damage {
-	dm := append(Damage(nil), d.base...)
-	for i := range dm {
-		switch {
-		case d.open[i]:
-			dm[i].Open, dm[i].WaterM3 = true, 0
-		case d.inPlay[i]:
-			dm[i].WaterM3 = math.Max(w[i], floodFloorFrac*d.capacity(i))
+// restart starts the flooding run anew from the state now (after an event
+// that changes the ship), or solves the ship where nothing can flow.
+func (d *Drill) restart() {
+	if d.lost {
+		return
+	}
+	base := append(Damage(nil), d.base...)
+	for i := range base {
+		if d.wet[i] {
+			base[i].WaterM3 = math.Max(d.water[i], 0)
+			if base[i].WaterM3 == 0 {
+				// Holed but dry: held as a trace, so that a tank's
+				// contents count as sea water (as FloodRun's floor).
+				base[i].WaterM3 = floodFloorFrac * d.capacity(i)
+			}
 		}
 	}
-	return dm
-}
-
-// drillEval is the state at one set of volumes.
-type drillEval struct {
-	pos   Position
-	noEq  *NoEquilibrium
-	rate  []float64 // dW/dt, m³/s
-	heads [][]float64
-}
-
-func (d *Drill) eval(w []float64) drillEval {
-	n := len(w)
-	e := drillEval{rate: make([]float64, n), heads: make([][]float64, n)}
-	pos, noEq := d.warm.solve(d.v, d.damage(w))
-	if noEq != nil {
-		e.noEq = noEq
-		return e
-	}
-	e.pos = pos
-	p := pos.Plane
-	for i := range w {
-		if d.open[i] || !d.inPlay[i] {
-			continue
-		}
-		c := d.v.Compartments[i]
-		wi := math.Max(0, math.Min(w[i], d.capacity(i)))
-		wm := math.Min(math.Max(wi, floodFloorFrac*d.capacity(i))/d.mu(i), c.solid.Volume()*(1-1e-9))
-		pin, _ := levelForVolume(c.solid, wm, p.B, p.C)
-		var q float64
+	var holes []NetHole
+	for i := range d.holes {
 		for _, h := range d.holes[i] {
-			dSea := -p.Height(h.XM, h.YM, h.ZM)
-			dIn := -pin.Height(h.XM, h.YM, h.ZM)
-			if wi <= 0 {
-				dIn = math.Min(dIn, 0)
-			}
-			head := math.Max(dSea, 0) - math.Max(dIn, 0)
-			e.heads[i] = append(e.heads[i], head)
-			qi := math.Copysign(h.Cd*h.AreaM2*math.Sqrt(2*StandardGravity*math.Abs(head)), head)
-			if wi <= 0 && qi < 0 {
-				qi = 0
-			}
-			q += qi
+			holes = append(holes, NetHole{Compartment: i, Hole: h})
 		}
-		r := q - d.pumps[i]
-		if wi <= 0 && r < 0 {
-			r = 0
+		if d.inlet[i] != nil {
+			holes = append(holes, NetHole{Compartment: i, Hole: *d.inlet[i]})
 		}
-		if wi >= d.capacity(i) && r > 0 {
-			r = 0
-		}
-		e.rate[i] = r
 	}
-	return e
+	d.seg = nil
+	if len(holes) > 0 || anyPositive(base) {
+		reach := map[int]bool{}
+		for _, k := range networkNodes(d.v, base, holes) {
+			reach[k] = true
+		}
+		var pumps []NetPump
+		for i, q := range d.pumps {
+			if q > 0 && reach[i] {
+				pumps = append(pumps, NetPump{Compartment: i, CapacityM3h: q})
+			}
+		}
+		limit := math.Max(d.endMin*60-d.t, 1)
+		r, err := NewNetworkRun(NetworkCase{Vessel: d.v, Base: base, Holes: holes, Pumps: pumps, LimitS: limit})
+		if err == nil {
+			d.seg, d.segT0 = r, d.t
+			d.take(r.evals[0], r.start)
+			if r.end == FloodSinks || r.end == FloodCapsizes || r.end == FloodFailed {
+				d.fail(r.endNoEq)
+			}
+			return
+		}
+	}
+	pos, err := NewProblem(d.v, base).Equilibrium()
+	if err != nil {
+		d.fail(asNoEquilibrium(err))
+		return
+	}
+	d.pos, d.noEq = &pos, nil
 }
 
-// resolve solves the ship as she is now.
-func (d *Drill) resolve() {
-	e := d.eval(d.water)
+func anyPositive(d Damage) bool {
+	for _, s := range d {
+		if s.WaterM3 > 0 {
+			return true
+		}
+	}
+	return false
+}
+
+// take sets the state from an evaluation of the run (its volumes per node;
+// start, the volumes the run began with).
+func (d *Drill) take(e netEval, start []float64) {
+	r := d.seg
+	for k, i := range r.nodes {
+		d.water[i] = e.w[k]
+		if e.w[k] > start[k]+1e-6*r.cap[k] {
+			d.wet[i] = true
+		}
+	}
 	if e.ok() {
 		p := e.pos
 		d.pos, d.noEq = &p, nil
-	} else {
-		d.pos, d.noEq = nil, e.noEq
-		d.lost = true
-		d.record("end " + e.noEq.Outcome.String())
 	}
 }
 
-func (e *drillEval) ok() bool { return e.noEq == nil }
-
-// Bogacki–Shampine 3(2) (Bogacki & Shampine 1989).
-var (
-	bsA = [4][3]float64{{}, {1.0 / 2}, {0, 3.0 / 4}, {2.0 / 9, 1.0 / 3, 4.0 / 9}}
-	// bsE is the third-order weights minus the second-order ones.
-	bsE = [4]float64{2.0/9 - 7.0/24, 1.0/3 - 1.0/4, 4.0/9 - 1.0/3, -1.0 / 8}
-)
-
-// integrate moves the water on from d.t to stop (s).
-func (d *Drill) integrate(stop float64) {
-	n := len(d.water)
-	active := false
-	for i := range d.water {
-		active = active || (d.inPlay[i] && !d.open[i])
-	}
-	if !active {
+// moveTo moves the run on to time stop (s), sounding the alarms at every
+// accepted step on the way.
+func (d *Drill) moveTo(stop float64) {
+	r := d.seg
+	if r == nil {
 		d.t = stop
 		return
 	}
-	e0 := d.eval(d.water)
-	if !e0.ok() {
-		d.fail(e0.noEq)
+	for r.end == FloodRunning && d.segT0+r.st.t < stop-1e-9 {
+		r.Step()
+		if n := len(r.recs); n > 0 && r.end == FloodRunning {
+			if t1 := d.segT0 + r.recs[n-1].t1; t1 <= stop+1e-9 {
+				d.t = t1
+				d.take(r.evals[len(r.evals)-1], r.start)
+				d.sound()
+			}
+		}
+	}
+	if r.end == FloodSinks || r.end == FloodCapsizes || r.end == FloodFailed {
+		if d.segT0+r.endS <= stop+1e-9 {
+			d.t = d.segT0 + r.endS
+			d.fail(r.endNoEq)
+			return
+		}
+	}
+	y, _, _ := r.stateAt(stop - d.segT0)
+	g, hg := r.guess, r.haveG
+	e := r.eval(y)
+	r.guess, r.haveG = g, hg
+	d.t = stop
+	if !e.ok() {
+		d.fail(e.noEq)
 		return
 	}
-	for d.t < stop-1e-9 {
-		h := math.Min(math.Min(d.dt, drillMaxDtS), stop-d.t)
-		k := [4][]float64{e0.rate}
-		var e drillEval
-		y := make([]float64, n)
-		bad := false
-		for s := 1; s < 4 && !bad; s++ {
-			for i := range y {
-				y[i] = d.water[i]
-				for j := 0; j < s; j++ {
-					y[i] += h * bsA[s][j] * k[j][i]
-				}
-				y[i] = math.Max(0, math.Min(y[i], d.capacity(i)))
-			}
-			e = d.eval(y)
-			if !e.ok() {
-				bad = true
-				break
-			}
-			k[s] = e.rate
-		}
-		if bad {
-			if h <= drillMinDtS {
-				d.t += h
-				d.fail(e.noEq)
-				return
-			}
-			d.dt = h / 2
-			continue
-		}
-		errN := 0.0
-		for i := range y {
-			if !d.inPlay[i] || d.open[i] {
-				continue
-			}
-			var est float64
-			for s := 0; s < 4; s++ {
-				est += h * bsE[s] * k[s][i]
-			}
-			sc := drillAbsTol*d.capacity(i) + drillRelTol*math.Abs(y[i])
-			errN = math.Max(errN, math.Abs(est)/sc)
-		}
-		if errN > 1 && h > drillMinDtS {
-			d.dt = h * math.Max(0.2, 0.9*math.Pow(errN, -1.0/3))
-			continue
-		}
-		copy(d.water, y)
-		d.t += h
-		if errN > 0 {
-			d.dt = h * math.Min(5, 0.9*math.Pow(errN, -1.0/3))
-		} else {
-			d.dt = h * 5
-		}
-		p := e.pos
-		d.pos, d.noEq = &p, nil
-		d.equalise(e)
-		d.sound()
-		e0 = e
-		if d.equalisedAny {
-			d.equalisedAny = false
-			e0 = d.eval(d.water)
-			if !e0.ok() {
-				d.fail(e0.noEq)
-				return
-			}
-		}
-	}
-}
-
-// equalise marks compartments whose holes are all within 1 mm of head,
-// with no pump running, as open to the sea.
-func (d *Drill) equalise(e drillEval) {
-	for i := range d.water {
-		if !d.inPlay[i] || d.open[i] || d.pumps[i] > 0 || len(d.holes[i]) == 0 {
-			continue
-		}
-		ok := true
-		wet := false
-		for _, h := range e.heads[i] {
-			ok = ok && math.Abs(h) <= FloodHeadTolM
-		}
-		for _, h := range d.holes[i] {
-			wet = wet || -e.pos.Plane.Height(h.XM, h.YM, h.ZM) > 0
-		}
-		if ok && wet && d.water[i] > 0 {
-			d.open[i] = true
-			d.equalisedAny = true
-		}
-	}
+	d.take(e, r.start)
+	d.sound()
 }
 
 func (d *Drill) fail(ne *NoEquilibrium) {
+	if ne == nil {
+		ne = &NoEquilibrium{Outcome: NotConverged, Reason: "the flooding run found no answer"}
+	}
 	d.pos, d.noEq, d.lost = nil, ne, true
 	d.record("end " + ne.Outcome.String())
 }
@@ -469,16 +406,12 @@ func (d *Drill) row(event string) DrillRow {
 		p := *d.pos
 		r.Position = &p
 	}
-	for i := range d.water {
-		w := d.water[i]
-		if d.open[i] && d.pos != nil {
-			w = d.mu(i) * d.v.Compartments[i].solid.Below(d.pos.Plane).V
-		}
-		if !d.inPlay[i] && !d.open[i] {
-			w = 0
+	for i, w := range d.water {
+		if !d.wet[i] {
+			continue
 		}
 		r.WaterM3[i] = w
-		if (d.inPlay[i] && w > 0) || d.open[i] {
+		if w > 1e-6*d.capacity(i) {
 			r.Flooded = append(r.Flooded, d.v.Compartments[i].Name)
 		}
 	}

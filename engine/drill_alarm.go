@@ -37,7 +37,7 @@ func (d *Drill) sound() {
 	}
 	for i := range d.v.Compartments {
 		sounded, fitted := d.alarmOn[i]
-		if !fitted || sounded || !(d.inPlay[i] || d.open[i]) {
+		if !fitted || sounded || !d.wet[i] {
 			continue
 		}
 		if d.LowSideDepth(i) >= d.alarmAt {
@@ -62,10 +62,7 @@ func (d *Drill) Sounding(i int) float64 {
 	xmin, xmax, zmin, _ := c.solid.Extent()
 	xc, yc := (xmin+xmax)/2, (c.Box.Y0+c.Box.Y1)/2
 	p := d.pos.Plane
-	if d.open[i] {
-		return math.Max(0, p.Z(xc, yc)-zmin)
-	}
-	if !d.inPlay[i] || d.water[i] <= 0 {
+	if !d.wet[i] || d.water[i] <= 0 {
 		return 0
 	}
 	wm := math.Min(d.water[i]/d.mu(i), c.solid.Volume()*(1-1e-9))
@@ -78,19 +75,13 @@ func (d *Drill) Sounding(i int) float64 {
 // the water gathers when she heels and trims, and where a bilge well's
 // float switch would feel it first.
 func (d *Drill) LowSideDepth(i int) float64 {
-	if d.pos == nil || !(d.inPlay[i] || d.open[i]) {
+	if d.pos == nil || !d.wet[i] || d.water[i] <= 0 {
 		return 0
 	}
 	c := d.v.Compartments[i]
 	p := d.pos.Plane
-	surf := p
-	if !d.open[i] {
-		if d.water[i] <= 0 {
-			return 0
-		}
-		wm := math.Min(d.water[i]/d.mu(i), c.solid.Volume()*(1-1e-9))
-		surf, _ = levelForVolume(c.solid, wm, p.B, p.C)
-	}
+	wm := math.Min(d.water[i]/d.mu(i), c.solid.Volume()*(1-1e-9))
+	surf, _ := levelForVolume(c.solid, wm, p.B, p.C)
 	_, _, zmin, _ := c.solid.Extent()
 	b := c.Box
 	deep := 0.0

@@ -99,13 +99,17 @@ type DrillAnalysis struct {
 	Best     DrillOutcome // the scenario's events and the best response
 	// BestEvents is the best response: every pump the vessel file gives
 	// started on each breached compartment the minute it is breached (and
-	// again after a pump fails, at once).
+	// again after a pump fails, at once), and every door and hatch shut at
+	// the first breach and whenever the scenario opens one after it.
 	BestEvents []DrillEvent
 	Decisions  []DecisionEffect
 	// AllRightMin is when the crew's marks first equalled the compartments
 	// holding water (NaN: never).
 	AllRightMin     float64
 	Identifications []Identification
+	// RightAtEnd says the crew's marks equalled the compartments holding
+	// water at the end of the drill.
+	RightAtEnd bool
 }
 
 // AnalyseDrill plays s and the drills the debrief compares it with.
@@ -132,7 +136,7 @@ func AnalyseDrill(s DrillSetup) (DrillAnalysis, error) {
 		return OutcomeOf(pd)
 	}
 	a.NoAction = play(scenario)
-	a.BestEvents = bestResponse(scenario, s.PumpM3h)
+	a.BestEvents = bestResponse(s.Vessel, scenario, s.PumpM3h)
 	a.Best = play(a.BestEvents)
 	for k, e := range s.Events {
 		if e.By != ByCrew && e.By != ByInstructor || !e.Physical() {
@@ -141,17 +145,43 @@ func AnalyseDrill(s DrillSetup) (DrillAnalysis, error) {
 		without := append(append([]DrillEvent(nil), s.Events[:k]...), s.Events[k+1:]...)
 		a.Decisions = append(a.Decisions, DecisionEffect{Event: e, Without: play(without)})
 	}
-	a.AllRightMin, a.Identifications = identified(d)
+	a.AllRightMin, a.Identifications, a.RightAtEnd = identified(d)
 	return a, nil
 }
 
 // bestResponse adds to the scenario's events every pump the vessel file
 // gives on each breached compartment, started when it is breached and
-// again whenever the scenario stops it.
-func bestResponse(scenario []DrillEvent, pumps []float64) []DrillEvent {
+// again whenever the scenario stops it; and shuts every door and hatch
+// (never a cross-flooding fitting, a duct or a pipe) at the first breach
+// and again at once whenever the scenario opens one after it.
+func bestResponse(v *Vessel, scenario []DrillEvent, pumps []float64) []DrillEvent {
 	var out []DrillEvent
+	breached := false
+	shut := func(m float64, name string) {
+		out = append(out, DrillEvent{Minutes: m, Kind: DrillConnection, By: ByCrew, Compartment: -1, Name: name, Open: false})
+	}
+	open := map[string]bool{}
+	for _, c := range v.Connections {
+		open[c.Name] = c.Open
+	}
 	for _, e := range scenario {
 		out = append(out, e)
+		if e.Kind == DrillConnection {
+			open[e.Name] = e.Open
+			if breached && e.Open && isDoor(v, e.Name) {
+				shut(e.Minutes, e.Name)
+				open[e.Name] = false
+			}
+		}
+		if e.Kind == DrillBreach && !breached {
+			breached = true
+			for _, c := range v.Connections {
+				if open[c.Name] && isDoor(v, c.Name) {
+					shut(e.Minutes, c.Name)
+					open[c.Name] = false
+				}
+			}
+		}
 		i := e.Compartment
 		if i < 0 || i >= len(pumps) || pumps[i] <= 0 {
 			continue
@@ -163,8 +193,14 @@ func bestResponse(scenario []DrillEvent, pumps []float64) []DrillEvent {
 	return out
 }
 
+// isDoor reports whether the connection called name is a door or a hatch.
+func isDoor(v *Vessel, name string) bool {
+	k := connectionIndex(v, name)
+	return k >= 0 && (v.Connections[k].Kind == "door" || v.Connections[k].Kind == "hatch")
+}
+
 // identified compares the crew's marks with the truth along the drill.
-func identified(d *Drill) (float64, []Identification) {
+func identified(d *Drill) (float64, []Identification, bool) {
 	v := d.Vessel()
 	marks := map[int]bool{}
 	log := d.Log()
@@ -172,6 +208,7 @@ func identified(d *Drill) (float64, []Identification) {
 	allRight := math.NaN()
 	ids := map[int]*Identification{}
 	var order []int
+	same := false
 	for _, r := range d.Rows() {
 		for li < len(log) && log[li].Minutes <= r.Minutes+1e-9 {
 			if e := log[li]; e.Kind == DrillMark {
@@ -196,19 +233,17 @@ func identified(d *Drill) (float64, []Identification) {
 				id.MarkedMin = r.Minutes
 			}
 		}
-		if math.IsNaN(allRight) && len(truth) > 0 {
-			same := true
-			for i := range v.Compartments {
-				same = same && truth[i] == marks[i]
-			}
-			if same {
-				allRight = r.Minutes
-			}
+		same = true
+		for i := range v.Compartments {
+			same = same && truth[i] == marks[i]
+		}
+		if math.IsNaN(allRight) && len(truth) > 0 && same {
+			allRight = r.Minutes
 		}
 	}
 	var out []Identification
 	for _, i := range order {
 		out = append(out, *ids[i])
 	}
-	return allRight, out
+	return allRight, out, same
 }

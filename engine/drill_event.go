@@ -27,6 +27,9 @@ const (
 	// DrillMark is the crew's own picture: they mark Compartment flooded
 	// (Flooded) or dry again. It changes nothing of the truth.
 	DrillMark
+	// DrillCounterflood opens (Open) or closes the sea inlet Hole into
+	// Compartment: flooding a space on purpose, to take off a list.
+	DrillCounterflood
 )
 
 func (k DrillEventKind) String() string {
@@ -43,6 +46,8 @@ func (k DrillEventKind) String() string {
 		return "report"
 	case DrillMark:
 		return "mark"
+	case DrillCounterflood:
+		return "counterflood"
 	}
 	return "unknown"
 }
@@ -61,10 +66,10 @@ type DrillEvent struct {
 	Kind        DrillEventKind
 	By          string // ByScenario, ByCrew or ByInstructor ("" is ByScenario)
 	Compartment int    // index into Vessel.Compartments; −1: none
-	Hole        Hole   // DrillBreach: the hole (C_d filled in)
+	Hole        Hole   // DrillBreach, DrillCounterflood: the hole or inlet (C_d filled in)
 	PumpM3h     float64
 	Name        string // DrillConnection: the connection's name
-	Open        bool   // DrillConnection: open (true) or closed
+	Open        bool   // DrillConnection, DrillCounterflood: open (true) or closed
 	Flooded     bool   // DrillMark: marked flooded (true) or dry
 	// Text is what the crew is told when the event happens; "" tells them
 	// nothing (a breach, a pump that fails unseen).
@@ -96,6 +101,11 @@ func (e DrillEvent) Label(v *Vessel) string {
 			return "mark " + name + " flooded"
 		}
 		return "mark " + name + " dry"
+	case DrillCounterflood:
+		if e.Open {
+			return "counter-flood " + name + " open"
+		}
+		return "counter-flood " + name + " closed"
 	case DrillReport, DrillNote:
 		return e.Kind.String()
 	}
@@ -105,5 +115,5 @@ func (e DrillEvent) Label(v *Vessel) string {
 // Physical reports whether the event changes the truth (a breach, a pump,
 // a connection); notes, reports and marks do not.
 func (e DrillEvent) Physical() bool {
-	return e.Kind == DrillBreach || e.Kind == DrillPump || e.Kind == DrillConnection
+	return e.Kind == DrillBreach || e.Kind == DrillPump || e.Kind == DrillConnection || e.Kind == DrillCounterflood
 }

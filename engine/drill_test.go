@@ -28,9 +28,9 @@ func openDrillShip(t *testing.T, ship, comp string) (*engine.Vessel, *vessels.In
 // TestDrillBreachMatchesFlood: a drill with one breach at minute 2 and
 // nothing else follows the same path as the flooding run of the same hole
 // from time zero, shifted by two minutes. The flooding run is the
-// reference (Dormand–Prince 5(4) at 1e-8, a different integrator from the
-// drill's Bogacki–Shampine 3(2)); it is stopped at each minute by its time
-// limit. Tolerance: 5 mm of draft and 0.02° of heel, far inside the
+// reference (one compartment, Dormand–Prince 5(4) at 1e-8; the drill runs
+// the flooding through the ship, NetworkRun's Rosenbrock 2(3) at 1e-5); it
+// is stopped at each minute by its time limit. Tolerance: 5 mm of draft and 0.02° of heel, far inside the
 // MSC.1/Circ.1229 acceptance tolerances of an onboard program (drafts 1 % /
 // 5 cm, equilibrium angles ±1°; references.md).
 func TestDrillBreachMatchesFlood(t *testing.T) {
@@ -112,8 +112,8 @@ func TestDrillDeterministic(t *testing.T) {
 
 // TestDrillPumpHoldsAndEqualises: pumps started on a holed compartment
 // keep its water below what it takes without them; a breach with no pump
-// ends equalised (the compartment followed as open to the sea), at the
-// lost-buoyancy state of that compartment open (the added-weight and
+// ends equalised, at the lost-buoyancy state of that compartment open
+// (the added-weight and
 // lost-buoyancy methods give the same final waterline: Barrass & Derrett,
 // bilging chapter, references.md, memory).
 func TestDrillPumpHoldsAndEqualises(t *testing.T) {

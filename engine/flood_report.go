@@ -177,7 +177,7 @@ func (r *FloodRun) Report() FloodReport {
 	rep.Start = rep.Trace[0]
 	rep.Final = r.sample(rep.Trace[len(rep.Trace)-1].TimeS, r.evals[len(r.evals)-1], false)
 	if p := rep.Final.Position; p != nil {
-		FillUpright(r.v, r.damageAt(rep.Final.WaterM3), p)
+		r.fillUprightAt(rep.Final.WaterM3, p)
 	}
 	rep.FinalWaterM3 = rep.Final.WaterM3
 	if rep.Final.Position != nil && r.lb != nil {
@@ -211,7 +211,7 @@ func (r *FloodRun) sample(t float64, e floodEval, judge bool) FloodSample {
 		p := e.pos
 		s.Position = &p
 		if judge {
-			FillUpright(r.v, r.damageAt(e.water), &p)
+			r.fillUprightAt(e.water, &p)
 		}
 		if judge && r.c.Criteria != nil {
 			s.Criteria = r.c.Criteria(r.v, r.damageAt(e.water), p)
@@ -309,7 +309,7 @@ func (r *FloodRun) stage(f, of float64) FloodStage {
 	if e.ok() {
 		p := e.pos
 		st.Position = &p
-		FillUpright(r.v, r.damageAt(e.water), &p)
+		r.fillUprightAt(e.water, &p)
 		if r.c.Criteria != nil {
 			st.Criteria = r.c.Criteria(r.v, r.damageAt(e.water), p)
 		}

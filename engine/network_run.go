@@ -177,6 +177,16 @@ type netEval struct {
 
 func (e *netEval) ok() bool { return e.noEq == nil }
 
+// result is the evaluation's floating position (a copy), or why there is
+// none.
+func (e *netEval) result() (*Position, *NoEquilibrium) {
+	if !e.ok() {
+		return nil, e.noEq
+	}
+	p := e.pos
+	return &p, nil
+}
+
 // NetworkRun is a network flooding run in progress: NewNetworkRun, then
 // Step until false, then Report (RunNetwork does all of it).
 //
@@ -800,12 +810,7 @@ func (r *NetworkRun) sample(t float64, e netEval, y []float64) NetSample {
 	for _, q := range e.q {
 		s.FlowM3h = append(s.FlowM3h, q*3600)
 	}
-	if e.ok() {
-		p := e.pos
-		s.Position = &p
-	} else {
-		s.NoEq = e.noEq
-	}
+	s.Position, s.NoEq = e.result()
 	return s
 }
 
@@ -960,21 +965,13 @@ func (r *NetworkRun) stage(f, start, final float64) NetStage {
 		th := r.bisect(rec, func(th float64) bool { return sum(rec.state(th)[:n]) >= target })
 		e := r.eval(rec.state(th))
 		st.TimeS, st.Reached = rec.t0+th*(rec.t1-rec.t0), true
-		if e.ok() {
-			p := e.pos
-			st.Position = &p
-		} else {
-			st.NoEq = e.noEq
-		}
+		st.Position, st.NoEq = e.result()
 		return st
 	}
 	if f == 1 {
 		e := r.evals[len(r.evals)-1]
 		st.TimeS, st.Reached = r.endS, true
-		if e.ok() {
-			p := e.pos
-			st.Position = &p
-		}
+		st.Position, st.NoEq = e.result()
 	}
 	return st
 }

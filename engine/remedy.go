@@ -214,12 +214,12 @@ func FindRemedies(v *Vessel, d Damage) RemedySet {
 		if math.Abs(pos.HeelDeg) < 0.005 {
 			where = "upright"
 		}
-		rs.Summary = fmt.Sprintf("She floats %s with positive GM (%.2f m): no righting action is needed.", where, rs.UprightGMM)
+		rs.Summary = fmt.Sprintf("She floats %s with positive GM (%.2f m): no righting action is needed for list or loll. These options weigh heel and GM only: trim, freeboard and the hull girder are in the flags.", where, rs.UprightGMM)
 		return rs
 	default:
 		rs.Needed = true
 		rs.Summary = fmt.Sprintf("Upright her GM is %.2f m: she lies %s with a list (weight or water off the centreline), not a loll. Weight taken on or moved to the %s side brings her back.",
-			rs.UprightGMM, heelWords(pos.HeelDeg), high)
+			rs.UprightGMM, heelWords(pos.HeelDeg), high) + crossFloodingWords(v, d)
 	}
 
 	now := remedyMeasure(&pos)

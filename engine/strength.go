@@ -51,6 +51,22 @@ const (
 	DangerPct  = 100.0
 )
 
+// ShareShown is a share of a permissible value in whole per cent as it is
+// to be shown: rounded to the nearest, except that a share past DangerPct
+// shows at least DangerPct + 1 and one short of CautionPct at most
+// CautionPct − 1, so the figure never contradicts the level beside it
+// ("100 %" with a danger mark, "90 %" with none).
+func ShareShown(pct float64) float64 {
+	r := math.Round(pct)
+	switch {
+	case pct > DangerPct:
+		return math.Max(r, DangerPct+1)
+	case pct < CautionPct:
+		return math.Min(r, CautionPct-1)
+	}
+	return r
+}
+
 // StrengthReading is the shear force and bending moment at one read-out
 // point, against the permissible values of the set in use.
 type StrengthReading struct {
@@ -115,6 +131,13 @@ func (s *Strength) Worst() (r StrengthReading, pct float64, ok bool) {
 		}
 	}
 	return r, pct, ok
+}
+
+// HasLimits reports whether any read-out point has a permissible value in
+// the set in use.
+func (s *Strength) HasLimits() bool {
+	_, _, ok := s.Worst()
+	return ok
 }
 
 // Against returns the readings checked against the harbour values
@@ -274,7 +297,7 @@ func StrengthMissing(v *Vessel) string {
 // GirderStrength works out the still-water shear force and bending moment
 // of v under d floating at pos. Mass per metre: each weight spread over its
 // extent (weightSpread); each tank's contents over the tank below its level
-// as loaded, upright (as Loading places them); floodwater held in a
+// (μ of the space there) as loaded, upright (as Loading places them); floodwater held in a
 // compartment below its own surface (pos.Held); buoyancy the hull's
 // sections below the water at pos's heel and trim, less μ × the part of
 // each compartment open to the sea below it (lost buoyancy). It returns nil
@@ -306,9 +329,10 @@ func GirderStrength(v *Vessel, d Damage, pos *Position) (*Strength, string) {
 		case s.WaterM3 > 0:
 			// Held water: below its surface in pos.Held.
 		case v.tanks[i].massT > 0:
-			// ρ_liquid × fill × V below the level plane; a full tank's
-			// plane lies above its top.
-			solids = append(solids, solidLoad{c.solid, v.tanks[i].level, c.Liquid.Density})
+			// ρ_liquid × μ × the space below the level plane (a tank's
+			// capacity is μ × its volume, as NewVessel loads it); a full
+			// tank's plane lies at or above its top.
+			solids = append(solids, solidLoad{c.solid, v.tanks[i].level, c.Liquid.Density * c.Permeability})
 		}
 	}
 	for _, h := range pos.Held {
@@ -495,7 +519,7 @@ func StrengthFlags(s *Strength) []Flag {
 	if pct > DangerPct {
 		f = Flag{Code: "girder-over-limit", Severity: Danger}
 	}
-	f.Message = fmt.Sprintf("Still-water %s at %s (x = %.1f m): %.0f %% of the permissible value %s.", what, r.Name, r.XM, pct, set)
+	f.Message = fmt.Sprintf("Still-water %s at %s (x = %.1f m): %.0f %% of the permissible value %s.", what, r.Name, r.XM, ShareShown(pct), set)
 	return []Flag{f}
 }
 

@@ -79,7 +79,6 @@ func EstimateTrend(v *Vessel, rs []Reading, e Explanation, o TrendOptions) (Tren
 	t := Trend{DeckEdgeS: math.NaN(), OpeningS: math.NaN(), LossS: math.NaN(), DeckEdgeRange: [2]float64{math.NaN(), math.NaN()}}
 	per := make([][]float64, len(rs))
 	var positions []*Position
-	var dmg []Damage
 	for i, r := range rs {
 		f, err := newDiagFitter(v, r)
 		if err != nil {
@@ -98,7 +97,6 @@ func EstimateTrend(v *Vessel, rs []Reading, e Explanation, o TrendOptions) (Tren
 		}
 		per[i] = c.vol
 		positions = append(positions, c.pos)
-		dmg = append(dmg, c.d)
 		t.Minutes = append(t.Minutes, r.Minutes)
 		t.WaterM3 = append(t.WaterM3, tot)
 		t.WaterSDM3 = append(t.WaterSDM3, sd)
@@ -135,7 +133,7 @@ func EstimateTrend(v *Vessel, rs []Reading, e Explanation, o TrendOptions) (Tren
 	var integ, span float64
 	heads := make([]float64, len(rs))
 	for i, p := range positions {
-		heads[i] = headAcross(v, dmg[i], ci, p, per[i][best], t.Hole)
+		heads[i] = headAcross(v, ci, p, per[i][best], t.Hole)
 	}
 	for i := 1; i < len(rs); i++ {
 		dt := t.Minutes[i] - t.Minutes[i-1]
@@ -169,8 +167,11 @@ func EstimateTrend(v *Vessel, rs []Reading, e Explanation, o TrendOptions) (Tren
 	if t.Hole.AreaM2 > 0 {
 		base := v.Intact()
 		last := len(rs) - 1
-		for _, c := range set {
-			base[c] = dmg[last][c]
+		for k, c := range set {
+			base[c] = SpaceState{WaterM3: math.Max(per[last][k], 1e-9)}
+			if V := v.Compartments[c].solid.Volume(); per[last][k] > v.Compartments[c].Permeability*V {
+				base[c].Permeability = math.Min(1, per[last][k]/V)
+			}
 		}
 		run := func(area float64) (FloodReport, error) {
 			h := t.Hole
@@ -223,11 +224,13 @@ func projectionTimes(rep FloodReport) (deck, opening float64, name string, loss 
 // water when she floats at pos: the hole's depth below the sea less the
 // height of the water inside above it (the same reckoning as a flooding
 // run), 0 or more.
-func headAcross(v *Vessel, d Damage, ci int, pos *Position, w float64, h Hole) float64 {
+func headAcross(v *Vessel, ci int, pos *Position, w float64, h Hole) float64 {
 	c := v.Compartments[ci]
 	p := pos.Plane
 	dSea := -p.Height(h.XM, h.YM, h.ZM)
-	mu := v.Permeability(d, ci)
+	// The file's permeability (the officer's best knowledge of it, as the
+	// diagnosis gives its levels): the fitted one is known only roughly.
+	mu := c.Permeability
 	if w > mu*c.solid.Volume() {
 		mu = math.Min(1, w/c.solid.Volume())
 	}

@@ -39,7 +39,9 @@ type DiagnosisDoc struct {
 	Tellers       []string          `json:"tell_apart"`
 	Disagreements []DisagreementDoc `json:"disagreements"`
 	Readings      int               `json:"readings"`
-	Explained     Num               `json:"explained_minutes"` // the reading explained: the latest
+	Explained     Num               `json:"explained_minutes"`       // the reading explained: the latest
+	MarksSurvey   *SurveyDoc        `json:"marks_to_perpendiculars"` // the latest reading's marks carried to the perpendiculars; null if they cannot be
+	Without       *ExplanationDoc   `json:"without_disagreeing"`     // the best without the readings that disagree, when nothing fits with them; null otherwise
 	Searched      int               `json:"searched"`
 	NotSearched   []string          `json:"not_searched"`
 	TrendNote     string            `json:"trend_note"`
@@ -114,7 +116,11 @@ func BuildDiagnosis(d Diagnosis) DiagnosisDoc {
 		doc.Made = d.Made.UTC().Format(time.RFC3339)
 	}
 	if res.Reading < len(d.Readings) {
-		doc.Explained = Num(d.Readings[res.Reading].Minutes)
+		r := d.Readings[res.Reading]
+		doc.Explained = Num(r.Minutes)
+		if s, err := engine.SurveyReading(v, r); err == nil {
+			doc.MarksSurvey = &SurveyDoc{Num(s.AftM), Num(s.MidM), Num(s.FwdM), Num(s.TrimM), Num(s.DeflectionM)}
+		}
 	}
 	for _, ci := range res.NotSearched {
 		doc.NotSearched = append(doc.NotSearched, v.Compartments[ci].Name)
@@ -127,29 +133,11 @@ func BuildDiagnosis(d Diagnosis) DiagnosisDoc {
 		doc.Disagreements = append(doc.Disagreements, DisagreementDoc{Num(m), g.What, Num(g.ReadM), Num(g.Expect), g.Message})
 	}
 	for _, e := range res.Explanations {
-		x := ExplanationDoc{Flooded: []string{}, WaterM3: map[string]Num{}, DraftRMSM: Num(e.DraftRMSM),
-			HeelErrorDeg: Num(e.HeelErrDeg), LevelRMSM: Num(e.LevelRMSM), LevelsM: map[string]Num{},
-			OpenToSea: []string{}, Full: []string{}, Misfit: Num(e.Misfit), Score: Num(e.Score),
-			Permeability: Num(math.NaN()), DraftMarks: MarkDocs(e.Marks)}
-		if e.FitPermeability > 0 {
-			x.Permeability = Num(e.FitPermeability)
-		}
-		for _, s := range e.Spaces {
-			n := v.Compartments[s.Compartment].Name
-			x.Flooded = append(x.Flooded, n)
-			x.WaterM3[n] = Num(s.WaterM3)
-			x.LevelsM[n] = Num(s.LevelM)
-			if s.Open {
-				x.OpenToSea = append(x.OpenToSea, n)
-			}
-			if s.Full {
-				x.Full = append(x.Full, n)
-			}
-		}
-		if e.Position != nil {
-			x.Equilibrium = buildEquilibrium(e.Position)
-		}
-		doc.Explanations = append(doc.Explanations, x)
+		doc.Explanations = append(doc.Explanations, explanationDoc(v, e))
+	}
+	if res.Without != nil {
+		w := explanationDoc(v, *res.Without)
+		doc.Without = &w
 	}
 	if t := d.Trend; t != nil {
 		td := &TrendDoc{InflowM3h: Num(t.InflowM3h), HoleAreaM2: Num(t.Hole.AreaM2), TimeToDeckS: Num(t.DeckEdgeS),
@@ -171,6 +159,33 @@ func BuildDiagnosis(d Diagnosis) DiagnosisDoc {
 		doc.Trend = td
 	}
 	return doc
+}
+
+// explanationDoc is the JSON form of one explanation.
+func explanationDoc(v *engine.Vessel, e engine.Explanation) ExplanationDoc {
+	x := ExplanationDoc{Flooded: []string{}, WaterM3: map[string]Num{}, DraftRMSM: Num(e.DraftRMSM),
+		HeelErrorDeg: Num(e.HeelErrDeg), LevelRMSM: Num(e.LevelRMSM), LevelsM: map[string]Num{},
+		OpenToSea: []string{}, Full: []string{}, Misfit: Num(e.Misfit), Score: Num(e.Score),
+		Permeability: Num(math.NaN()), DraftMarks: MarkDocs(e.Marks)}
+	if e.FitPermeability > 0 {
+		x.Permeability = Num(e.FitPermeability)
+	}
+	for _, s := range e.Spaces {
+		n := v.Compartments[s.Compartment].Name
+		x.Flooded = append(x.Flooded, n)
+		x.WaterM3[n] = Num(s.WaterM3)
+		x.LevelsM[n] = Num(s.LevelM)
+		if s.Open {
+			x.OpenToSea = append(x.OpenToSea, n)
+		}
+		if s.Full {
+			x.Full = append(x.Full, n)
+		}
+	}
+	if e.Position != nil {
+		x.Equilibrium = buildEquilibrium(e.Position)
+	}
+	return x
 }
 
 // DiagnosisJSON writes d as one indented JSON object and a newline.
@@ -272,6 +287,10 @@ func DiagnosisText(w io.Writer, d Diagnosis) error {
 				t.add(name, num(m.DraftM, 2, "m"), num(pred, 2, "m"), signed(100*(m.DraftM-pred), 1, "cm"))
 			}
 			writeLines(e, t.lines("  "))
+			if s, err := engine.SurveyReading(v, r); err == nil {
+				e.line("  read, to the perpendiculars: aft ", num(s.AftM, 2, "m"), ", amidships ", num(s.MidM, 2, "m"),
+					", forward ", num(s.FwdM, 2, "m"), "; hog/sag ", HogSagWords(s.DeflectionM))
+			}
 		}
 	}
 	e.line()

@@ -103,18 +103,18 @@ func markLines(r Report) []string {
 
 // markdownMarks writes the marks as a Markdown section (nothing without marks).
 func markdownMarks(e *errWriter, r Report) {
-	md := MarkDrafts(r.Vessel, r.Assessment.Position)
-	if len(md) == 0 {
+	marks := MarkDrafts(r.Vessel, r.Assessment.Position)
+	if len(marks) == 0 {
 		return
 	}
 	e.line("## Draft marks")
 	e.line()
 	e.line("| Mark | x | Side | Draft | State |")
 	e.line("|---|--:|---|--:|---|")
-	for _, m := range md {
-		e.line("| ", m.Name, " | ", num(m.XM, 1, "m"), " | ", MarkSideWord(m.Side), " | ", num(m.DraftM, 2, "m"), " | ", m.State.String(), " |")
+	for _, m := range marks {
+		e.line("| ", md(m.Name), " | ", num(m.XM, 1, "m"), " | ", MarkSideWord(m.Side), " | ", num(m.DraftM, 2, "m"), " | ", m.State.String(), " |")
 	}
-	if s, err := engine.SurveyMarks(r.Vessel.Hull.LengthM, r.Assessment.Position.Plane.C, md); err == nil {
+	if s, err := engine.SurveyMarks(r.Vessel.Hull.LengthM, r.Assessment.Position.Plane.C, marks); err == nil {
 		e.line()
 		e.line("Carried to the perpendiculars (draft survey practice): aft ", num(s.AftM, 2, "m"), ", amidships ", num(s.MidM, 2, "m"),
 			", forward ", num(s.FwdM, 2, "m"), "; hog/sag ", HogSagWords(s.DeflectionM), ".")

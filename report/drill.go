@@ -17,15 +17,17 @@ import (
 
 // Drill is a played drill and what is known of its scenario.
 type Drill struct {
-	Scenario   string // the scenario's name
-	File       string // the scenario file
-	VesselRef  string // its vessel key
-	About      string
-	Seed       int64
-	Alarms     []int
-	Played     *engine.Drill
-	Version    string
-	AlarmLevel float64
+	Scenario  string // the scenario's name
+	File      string // the scenario file
+	VesselRef string // its vessel key
+	// ConditionRef is its condition key ("" for the vessel file's own).
+	ConditionRef string
+	About        string
+	Seed         int64
+	Alarms       []int
+	Played       *engine.Drill
+	Version      string
+	AlarmLevel   float64
 	// Events, when set, are the events the log holds (the scenario's and
 	// those added); else the events the drill has applied.
 	Events []engine.DrillEvent
@@ -123,12 +125,13 @@ type CrewMessage struct {
 }
 
 // CrewFeed returns what the crew has been told so far: the text of each
-// event that has one, and each alarm that has sounded, in time order.
+// event that has one (not the crew's own notes), and each alarm that has
+// sounded, in time order.
 func CrewFeed(d *engine.Drill) []CrewMessage {
 	v := d.Vessel()
 	var out []CrewMessage
 	for _, e := range d.Log() {
-		if e.Text != "" && e.Kind != engine.DrillMark {
+		if e.Text != "" && e.Kind != engine.DrillMark && e.By != engine.ByCrew {
 			out = append(out, CrewMessage{e.Minutes, e.Text})
 		}
 	}
@@ -181,6 +184,9 @@ func DrillLog(w io.Writer, dr Drill) error {
 		fmt.Fprintf(&b, "about = %s\n", strconv.Quote(dr.About))
 	}
 	fmt.Fprintf(&b, "vessel = %s\nminutes = %s\nseed = %d\n", strconv.Quote(dr.VesselRef), ftoa(d.EndMinutes()), dr.Seed)
+	if dr.ConditionRef != "" {
+		fmt.Fprintf(&b, "condition = %s\n", strconv.Quote(dr.ConditionRef))
+	}
 	if len(dr.Alarms) > 0 {
 		var names []string
 		for _, i := range dr.Alarms {
@@ -214,6 +220,8 @@ func DrillLog(w io.Writer, dr Drill) error {
 			fmt.Fprintf(&b, "connection = %s\nopen = %t\n", strconv.Quote(e.Name), e.Open)
 		case engine.DrillMark:
 			fmt.Fprintf(&b, "flooded = %t\n", e.Flooded)
+		case engine.DrillCounterflood:
+			fmt.Fprintf(&b, "area = %s\nopen = %t\n", ftoa(e.Hole.AreaM2), e.Open)
 		}
 		if e.Text != "" {
 			fmt.Fprintf(&b, "text = %s\n", strconv.Quote(e.Text))

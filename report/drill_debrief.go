@@ -33,9 +33,9 @@ func DrillDebrief(w io.Writer, dr Drill, a engine.DrillAnalysis) error {
 	b.WriteString("| | heel | deck edge above water | sea water in her | deck edge under |\n|---|---|---|---|---|\n")
 	outcomeRow(&b, "this drill", a.Actual)
 	outcomeRow(&b, "no action by the crew", a.NoAction)
-	outcomeRow(&b, "best response (below)", a.Best)
+	outcomeRow(&b, "pumps and doors at once (below)", a.Best)
 	b.WriteString("\n")
-	fmt.Fprintf(&b, "The best response taken here: every pump the vessel file gives started on each breached compartment the minute it is breached, and again at once after a pump fails. ")
+	fmt.Fprintf(&b, "The best response heelwatch plays for comparison: every pump the vessel file gives started on each breached compartment the minute it is breached, and again at once after a pump fails; every watertight door and hatch shut at the first breach, and again at once if one is found open (no counter-flooding, no cross-flooding fittings). ")
 	b.WriteString(saved(a.Actual, a.Best))
 	b.WriteString("\n\n")
 
@@ -56,7 +56,12 @@ func DrillDebrief(w io.Writer, dr Drill, a engine.DrillAnalysis) error {
 		if math.IsNaN(a.AllRightMin) {
 			b.WriteString("The crew's marks never matched the compartments holding water.\n\n")
 		} else {
-			fmt.Fprintf(&b, "The crew's marks first matched the compartments holding water at minute %s.\n\n", Fixed(a.AllRightMin, 1, ""))
+			fmt.Fprintf(&b, "The crew's marks first matched the compartments holding water at minute %s.", Fixed(a.AllRightMin, 1, ""))
+			if a.RightAtEnd {
+				b.WriteString(" They matched them at the end too.\n\n")
+			} else {
+				b.WriteString(" They did not match them at the end.\n\n")
+			}
 		}
 	}
 
@@ -65,11 +70,11 @@ func DrillDebrief(w io.Writer, dr Drill, a engine.DrillAnalysis) error {
 		b.WriteString("The crew took no action that changes the ship (pumps, doors).\n\n")
 	} else {
 		b.WriteString("Each decision's effect is this drill against the same drill played without that one decision, at the end (the size of the heel; negative: less heel, less water).\n\n")
-		b.WriteString("| min | by | decision | heel | deck edge above water | sea water in her |\n|---|---|---|---|---|---|\n")
+		b.WriteString("| min | by | decision | heel | deck edge above water | sea water in her | deck edge under: with it / without |\n|---|---|---|---|---|---|---|\n")
 		for _, de := range a.Decisions {
-			fmt.Fprintf(&b, "| %s | %s | %s | %s | %s | %s |\n", Fixed(de.Event.Minutes, 1, ""), de.Event.By, mdCell(de.Event.Label(v)),
+			fmt.Fprintf(&b, "| %s | %s | %s | %s | %s | %s | %s / %s |\n", Fixed(de.Event.Minutes, 1, ""), de.Event.By, mdCell(de.Event.Label(v)),
 				change(math.Abs(a.Actual.HeelDeg), math.Abs(de.Without.HeelDeg), "°"), change(a.Actual.FreeboardM, de.Without.FreeboardM, "m"),
-				change(a.Actual.WaterM3, de.Without.WaterM3, "m³"))
+				change(a.Actual.WaterM3, de.Without.WaterM3, "m³"), underAt(a.Actual), underAt(de.Without))
 		}
 		b.WriteString("\n")
 	}
@@ -111,9 +116,27 @@ func DrillDebrief(w io.Writer, dr Drill, a engine.DrillAnalysis) error {
 	for _, m := range CrewFeed(d) {
 		fmt.Fprintf(&b, "- min %s: %s\n", Fixed(m.Minutes, 1, ""), mdCell(m.Text))
 	}
+	var own []string
+	for _, e := range d.Log() {
+		if e.By == engine.ByCrew && e.Text != "" {
+			own = append(own, fmt.Sprintf("- min %s: %s\n", Fixed(e.Minutes, 1, ""), mdCell(e.Text)))
+		}
+	}
+	if len(own) > 0 {
+		b.WriteString("\n## The crew's own notes and diagnoses\n\n")
+		b.WriteString(strings.Join(own, ""))
+	}
 	b.WriteString("\nThe drill replays from its log: `heelwatch drill LOG.toml --run` gives this timeline again, `--debrief` this debrief.\n")
 	_, err := io.WriteString(w, b.String())
 	return err
+}
+
+// underAt says when the deck edge went under, or that it did not.
+func underAt(o engine.DrillOutcome) string {
+	if math.IsNaN(o.DeckEdgeMin) {
+		return "not in the drill"
+	}
+	return "min " + Fixed(o.DeckEdgeMin, 1, "")
 }
 
 func outcomeRow(b *strings.Builder, what string, o engine.DrillOutcome) {
@@ -121,27 +144,30 @@ func outcomeRow(b *strings.Builder, what string, o engine.DrillOutcome) {
 		fmt.Fprintf(b, "| %s | lost at min %s | — | — | min %s |\n", what, Fixed(o.LostMin, 1, ""), Fixed(o.DeckEdgeMin, 1, ""))
 		return
 	}
-	under := "not in the drill"
-	if !math.IsNaN(o.DeckEdgeMin) {
-		under = "min " + Fixed(o.DeckEdgeMin, 1, "")
-	}
-	fmt.Fprintf(b, "| %s | %s | %s | %s | %s |\n", what, Heel(o.HeelDeg, 1), Fixed(o.FreeboardM, 2, "m"), Fixed(o.WaterM3, 0, "m³"), under)
+	fmt.Fprintf(b, "| %s | %s | %s | %s | %s |\n", what, Heel(o.HeelDeg, 1), Fixed(o.FreeboardM, 2, "m"), Fixed(o.WaterM3, 0, "m³"), underAt(o))
 }
 
-// saved says what the best response would have given beside this drill.
+// saved says what the best response would have saved beside this drill,
+// judged by the freeboard to the deck edge at the end.
 func saved(actual, best engine.DrillOutcome) string {
 	switch {
 	case actual.Lost && !best.Lost:
-		return "She was lost; with the best response she would have stayed afloat."
-	case actual.Lost || best.Lost:
-		return "She is lost even with the best response: the pumps cannot hold this damage."
+		return "She was lost; with pumps and doors at once she would have stayed afloat."
+	case actual.Lost && best.Lost:
+		return "She is lost even with pumps and doors at once: they cannot hold this damage."
+	case best.Lost:
+		return "With pumps and doors alone she would have been lost: this drill's response did better."
 	}
-	dw := actual.WaterM3 - best.WaterM3
-	if math.Abs(dw) < 0.5 {
-		return "This drill's response did as well as the best response."
+	gain := best.FreeboardM - actual.FreeboardM
+	detail := fmt.Sprintf("%s of freeboard to the deck edge, %s of heel and %s of sea water at the end",
+		Signed(gain, 2, "m"), change(math.Abs(best.HeelDeg), math.Abs(actual.HeelDeg), "°"), change(best.WaterM3, actual.WaterM3, "m³"))
+	switch {
+	case gain > 0.005:
+		return "Pumps and doors at once would have saved, beside this drill: " + detail + "."
+	case gain < -0.005:
+		return "This drill's response did better than pumps and doors at once, which give " + detail + " beside it."
 	}
-	return fmt.Sprintf("Beside this drill the best response would have kept %s of sea water out, with %s of heel and %s of freeboard to the deck edge at the end.",
-		Fixed(dw, 0, "m³"), change(math.Abs(best.HeelDeg), math.Abs(actual.HeelDeg), "°"), change(best.FreeboardM, actual.FreeboardM, "m"))
+	return "This drill's response did as well as pumps and doors at once."
 }
 
 // change writes a − b signed, or "—".
@@ -149,7 +175,11 @@ func change(a, b float64, unit string) string {
 	if math.IsNaN(a) || math.IsNaN(b) {
 		return "—"
 	}
-	return Signed(a-b, 2, unit)
+	prec := map[string]int{"m³": 0, "°": 1}[unit]
+	if unit == "m" {
+		prec = 2
+	}
+	return Signed(a-b, prec, unit)
 }
 
 // mdCell makes text safe inside a Markdown table cell.

@@ -132,7 +132,10 @@ func FloodText(w io.Writer, f Flood) error {
 		fmt.Fprintf(tw, "  %s\t%s\n", strings.Join(row, "\t"), tableEvent(s))
 	}
 	tw.Flush()
-	b.WriteString("  (heel + starboard down; deck edge: least height of the deck at side above the water;\n   GM: upright, per the ship's own weight, the floodwater's Δ·GM kept: one basis with the lost-buoyancy solution)\n")
+	b.WriteString("  (heel + starboard down; deck edge: least height of the deck at side above the water;\n" +
+		"   GM: upright, per the ship's own weight, the floodwater's Δ·GM kept: one basis with the lost-buoyancy solution;\n" +
+		"   below the sea's level the water is a held weight; once the levels meet it rises and falls with the sea\n" +
+		"   as she heels (free communication), which costs an off-centre space GM: the end row is the open-to-sea GM)\n")
 
 	fmt.Fprintf(&b, "\nIntermediate stages (of %s m³", num(r.StagesOfM3, 1, ""))
 	switch r.End {

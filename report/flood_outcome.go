@@ -35,6 +35,10 @@ func FloodHeadline(e engine.FloodEnd) string {
 	return "no answer"
 }
 
+// pumpsBarelyHold is the share of the water the space takes open to the
+// sea above which pumps that hold the level are said not to save it.
+const pumpsBarelyHold = 0.9
+
 // FloodOutcome says how run r ended in one sentence, in two parts: head,
 // the words that say it ("levels equal", "pumps hold", "SHE SINKS"; a
 // panel writes them in capitals), and rest, when and with how much water
@@ -47,8 +51,15 @@ func FloodOutcome(r engine.FloodReport) (head, rest string) {
 	case engine.FloodEqualised:
 		return "levels equal", fmt.Sprintf(" after %s, %s", Duration(r.EqualiseS), in)
 	case engine.FloodPumpsHold:
-		return "pumps hold", fmt.Sprintf(" the level %s m below the sea from %s: sounding %s m, %s",
+		held := fmt.Sprintf("the level %s m below the sea from %s: sounding %s m, %s",
 			Fixed(r.SteadyHeadM, 3, ""), at, Fixed(r.Final.SoundingM, 2, ""), in)
+		if lb := r.LostBuoyancyWaterM3; lb > 0 && r.FinalWaterM3 >= pumpsBarelyHold*lb {
+			// Held only just below the sea: the pumps slow the
+			// filling but do not save the space.
+			return "floods despite the pumps", fmt.Sprintf(": they hold %s (%.0f %% of the water it takes open to the sea)",
+				held, 100*r.FinalWaterM3/lb)
+		}
+		return "pumps hold", " " + held
 	case engine.FloodKeptDry:
 		return "pumps keep it dry", ": they take all that the hole lets in"
 	case engine.FloodNoInflow:

@@ -180,6 +180,15 @@ func durationOrDash(s float64) string {
 	return Duration(s)
 }
 
+// heelDraftCells are a position's heel, draft aft and draft forward as
+// table cells, dashes when there is no floating position.
+func heelDraftCells(p *engine.Position) []string {
+	if p == nil {
+		return []string{"—", "—", "—"}
+	}
+	return []string{num(p.HeelDeg, 2, ""), num(p.DraftAftM, 3, ""), num(p.DraftFwdM, 3, "")}
+}
+
 // NetworkText writes the run for a person: the paths, the outcome, each
 // compartment's times, the cross-flooding times against the limits, the
 // events, the water in each compartment against time and the end beside
@@ -190,8 +199,13 @@ func NetworkText(w io.Writer, rep engine.NetworkReport) error {
 	e.line("Water spreading through the ship")
 	e.line("  (the run above follows the holed compartment alone, as if every connection were shut; here the sea")
 	e.line("  comes in through the hole and goes on through the open connections and the openings that go under)")
+	if len(rep.Paths) > 0 {
+		// The paths the run follows, not the water's: an opening carries
+		// water only while it is under (the events say when one does).
+		e.line("  Paths it follows (an opening only while it is under water; the events say which carried water):")
+	}
 	for _, p := range rep.Paths {
-		e.line("  ", p.Name, " (", p.Kind, "): ", p.From, " → ", p.To)
+		e.line("    ", p.Name, " (", p.Kind, "): ", p.From, " → ", p.To)
 	}
 	e.line("Outcome: ", FloodHeadline(rep.End), " after ", Duration(rep.EndS), ". ", sentence(rep.EndReason), ".")
 	t := table{right: []bool{false, true, true, true, true, true}}
@@ -233,12 +247,7 @@ func NetworkText(w io.Writer, rep engine.NetworkReport) error {
 		for _, k := range keep {
 			row = append(row, num(s.WaterM3[k], 1, ""))
 		}
-		if p := s.Position; p != nil {
-			row = append(row, num(p.HeelDeg, 2, ""), num(p.DraftAftM, 3, ""), num(p.DraftFwdM, 3, ""))
-		} else {
-			row = append(row, "—", "—", "—")
-		}
-		t.add(row...)
+		t.add(append(row, heelDraftCells(s.Position)...)...)
 	}
 	writeLines(e, t.lines("  "))
 	e.line("Stages (of the water the ship took in)")
@@ -249,12 +258,7 @@ func NetworkText(w io.Writer, rep engine.NetworkReport) error {
 		if sg.Reached {
 			row[2] = Duration(sg.TimeS)
 		}
-		if p := sg.Position; p != nil {
-			row = append(row, num(p.HeelDeg, 2, ""), num(p.DraftAftM, 3, ""), num(p.DraftFwdM, 3, ""))
-		} else {
-			row = append(row, "—", "—", "—")
-		}
-		t.add(row...)
+		t.add(append(row, heelDraftCells(sg.Position)...)...)
 	}
 	writeLines(e, t.lines("  "))
 	if st := rep.Static; st != nil && st.Position != nil && rep.Final.Position != nil {

@@ -136,12 +136,13 @@ func StrengthLevelMark(s engine.Severity) string {
 	return strings.ToUpper(s.String())
 }
 
-// PctWords is a share of a permissible value, "—" without one.
+// PctWords is a share of a permissible value as engine.ShareShown rounds
+// it, "—" without one.
 func PctWords(pct, limit float64) string {
 	if !(limit > 0) {
 		return "—"
 	}
-	return num(pct, 0, "%")
+	return num(engine.ShareShown(pct), 0, "%")
 }
 
 // SenseWords says a bending moment's sense: "hogging", "sagging".
@@ -190,7 +191,20 @@ func strengthSummary(s *engine.Strength) []string {
 
 // strengthTitle heads the section.
 func strengthTitle(s *engine.Strength) string {
-	return "Hull girder, still water (hogging +; permissible values " + map[bool]string{false: "at sea", true: "in harbour"}[s.Harbour] + ")"
+	return "Hull girder, still water (hogging +; " + LimitsWords(s) + ")"
+}
+
+// LimitsWords names the permissible values the readings are checked
+// against: "permissible values at sea" or "in harbour", or that the vessel
+// file gives none.
+func LimitsWords(s *engine.Strength) string {
+	switch {
+	case !s.HasLimits():
+		return "no permissible values in the vessel file"
+	case s.Harbour:
+		return "permissible values in harbour"
+	}
+	return "permissible values at sea"
 }
 
 // textStrength writes the strength section of the text report.
@@ -226,7 +240,7 @@ func markdownStrength(e *errWriter, r Report) {
 		e.line()
 		return
 	}
-	e.line("Still-water shear force and bending moment, hogging positive; permissible values ", map[bool]string{false: "at sea", true: "in harbour"}[s.Harbour], ".")
+	e.line("Still-water shear force and bending moment, hogging positive; ", LimitsWords(s), ".")
 	e.line()
 	rows := strengthRows(s, r.IntactStrength)
 	for i, row := range rows {

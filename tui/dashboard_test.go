@@ -431,3 +431,11 @@ func dispLabel(p *engine.Position) string {
 	}
 	return "Displacement"
 }
+
+// viewLines is a child panel's view as lines: none for an empty view.
+func viewLines(view string) []string {
+	if view == "" {
+		return nil
+	}
+	return strings.Split(view, "\n")
+}

@@ -157,8 +157,13 @@
 // made by one function, newest (newest.go).
 //
 // Keys go where one mode value sends them: the list and panels, the
-// flooding run's form (a child model with its own update and view), or a
-// typed permeability. View draws only: the screen is divided once at the
+// flooding run's form, or a typed permeability. The form, the flooding
+// run's panel (floodPanel), the righting options' panel (remedyPanel) and
+// the hand working are child models with their own update and view; the
+// root routes their keys and messages to them and keeps only what they
+// share (the vessel, the damage state, the log, the styles). A panel asks
+// the root for a line in the log or a change of the damage state through
+// host (host.go), during its update and in order. View draws only: the screen is divided once at the
 // end of every Update (resize); the pictures are drawn again only when
 // their data, the selection, the palette or their size changed
 // (picture_cache.go); every scroll is kept within its text by bubbles'

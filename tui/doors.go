@@ -53,7 +53,7 @@ func (p doorsPanel) update(msg tea.KeyMsg, conns []engine.Connection) (doorsPane
 	return p, nil
 }
 
-// view draws the panel: one line per connection, then the spread.
+// view draws the panel: each connection and what it joins, then the spread.
 func (p doorsPanel) view(v *engine.Vessel, a *engine.Assessment, st Styles, w, h int) string {
 	lines := []string{st.Heading.Render(titleFit(w, "DOORS AND VALVES", "↑↓ choose", "space open/shut", "d closes"))}
 	if len(v.Connections) == 0 {
@@ -68,14 +68,21 @@ func (p doorsPanel) view(v *engine.Vessel, a *engine.Assessment, st Styles, w, h
 		if i == p.sel {
 			mark = "▸ "
 		}
-		line := fitLine(fmt.Sprintf("%s%-5s %s (%s): %s ↔ %s", mark, state, c.Name, c.Kind, v.Compartments[c.From].Name, v.Compartments[c.To].Name), w)
-		switch {
-		case i == p.sel:
-			line = st.Selected.Render(line)
-		case c.Open:
-			line = st.Open.Render(line)
+		// Two lines each: the fitting, then what it joins in full,
+		// wrapped rather than cut (the officer must read both spaces).
+		entry := []string{fitLine(fmt.Sprintf("%s%-5s %s (%s)", mark, state, c.Name, c.Kind), w)}
+		for _, l := range wrap(v.Compartments[c.From].Name+" ↔ "+v.Compartments[c.To].Name, w-8) {
+			entry = append(entry, fitLine("        "+l, w))
 		}
-		lines = append(lines, line)
+		for _, line := range entry {
+			switch {
+			case i == p.sel:
+				line = st.Selected.Render(line)
+			case c.Open:
+				line = st.Open.Render(line)
+			}
+			lines = append(lines, line)
+		}
 	}
 	lines = append(lines, "")
 	spread := false
@@ -91,7 +98,9 @@ func (p doorsPanel) view(v *engine.Vessel, a *engine.Assessment, st Styles, w, h
 		}
 	}
 	if !spread {
-		lines = append(lines, st.Dim.Render(fitLine("The water goes no further than the compartments opened.", w)))
+		for _, l := range wrap("The water goes no further than the compartments opened.", w) {
+			lines = append(lines, st.Dim.Render(l))
+		}
 	}
 	return strings.Join(fit(lines, w, h), "\n")
 }

@@ -29,7 +29,7 @@ import (
 // DrillOptions are the drill dashboard's settings.
 type DrillOptions struct {
 	Speed   float64 // scenario minutes per real minute at the start (1: real time)
-	LogFile string  // the drill's log (a scenario file) is written here after every change
+	LogFile string  // the drill's log (a scenario file) is written here after every change; the debrief beside it (.debrief.md) at the end
 	Version string
 }
 
@@ -72,8 +72,11 @@ const (
 	pickMark
 	pickPump
 	pickStop
-	pickBreach // instructor
-	pickFail   // instructor
+	pickCounter
+	pickDoor      // a connection, not a compartment
+	pickDoorTruth // instructor: a connection's true state
+	pickBreach    // instructor
+	pickFail      // instructor
 )
 
 // drillModel is the drill's root model.
@@ -89,6 +92,8 @@ type drillModel struct {
 	status  string
 	marks   map[int]bool    // the crew's picture: marked flooded
 	ordered map[int]float64 // pumps the crew ordered on, m³/h
+	inlets  map[int]bool    // sea inlets the crew opened to counter-flood
+	doors   map[int]bool    // connections as the crew believe them: open (true) or shut
 
 	pick     pickFor
 	pickList []int
@@ -129,7 +134,7 @@ func newDrillModel(sc *vessels.Scenario, opts DrillOptions) (*drillModel, error)
 	}
 	in := newTextField()
 	in.CharLimit = 200
-	return &drillModel{sc: sc, d: d, speed: opts.Speed, opts: opts, marks: map[int]bool{}, ordered: map[int]float64{},
+	return &drillModel{sc: sc, d: d, speed: opts.Speed, opts: opts, marks: map[int]bool{}, ordered: map[int]float64{}, inlets: map[int]bool{}, doors: doorsAsFitted(sc),
 		input: in, w: 80, h: 24, debrief: viewport.New(80, 20)}, nil
 }
 
@@ -161,10 +166,13 @@ func (m *drillModel) Update(msg tea.Msg) (tea.Model, tea.Cmd) {
 		return m, nil
 	case drillTick:
 		m.advance(drillTickEvery.Seconds())
-		if m.d.Over() && !m.debriefed {
+		if m.d.Over() {
+			if m.debriefed {
+				return m, nil // the clock stops at the end
+			}
 			m.debriefed = true
 			m.writeLog()
-			return m, tea.Batch(m.makeDebrief(), m.tick())
+			return m, m.makeDebrief()
 		}
 		return m, m.tick()
 	case drillDiagnosisMsg:
@@ -175,6 +183,11 @@ func (m *drillModel) Update(msg tea.Msg) (tea.Model, tea.Cmd) {
 		}
 		m.status = ""
 		m.diagnosis = append([]string{fmt.Sprintf("Our diagnosis from the readings at %s:", clock(msg.minutes))}, msg.lines...)
+		if !m.d.Over() && len(msg.lines) > 0 {
+			// Logged as the crew's own note, for the debrief.
+			m.decide(engine.DrillEvent{Kind: engine.DrillNote, By: engine.ByCrew, Compartment: -1,
+				Text: fmt.Sprintf("Our diagnosis from the readings at %s: %s", clock(msg.minutes), strings.TrimSpace(msg.lines[0]))})
+		}
 		return m, nil
 	case drillDebriefMsg:
 		if msg.err != nil {
@@ -182,6 +195,14 @@ func (m *drillModel) Update(msg tea.Msg) (tea.Model, tea.Cmd) {
 			return m, nil
 		}
 		m.debriefText = msg.text
+		if m.opts.LogFile != "" && m.d.Over() {
+			path := strings.TrimSuffix(m.opts.LogFile, ".toml") + ".debrief.md"
+			if err := os.WriteFile(path, []byte(msg.text), 0o644); err != nil {
+				m.status = "debrief: " + err.Error()
+			} else {
+				m.status = "Debrief written to " + path
+			}
+		}
 		m.debrief.SetContent(lipgloss.NewStyle().Width(m.w).Render(msg.text))
 		m.mode = drillDebrief
 		return m, nil
@@ -232,21 +253,45 @@ func (m *drillModel) key(k tea.KeyMsg) (tea.Model, tea.Cmd) {
 	if m.d.Over() {
 		return m, nil
 	}
-	v := m.d.Vessel()
-	all := make([]int, len(v.Compartments))
-	for i := range all {
-		all[i] = i
+	if m.mode == drillInstructor {
+		return m, m.instructorKey(s)
 	}
-	switch {
-	case s == "m" && m.mode == drillCrew:
-		m.startPick(pickMark, all)
-	case s == "p" && m.mode == drillCrew:
-		m.startPick(pickPump, all)
-	case s == "g" && m.mode == drillCrew && !m.diagnosing:
+	return m, m.crewKey(s)
+}
+
+// indices returns 0, 1, …, n−1.
+func indices(n int) []int {
+	out := make([]int, n)
+	for i := range out {
+		out[i] = i
+	}
+	return out
+}
+
+// crewKey acts on a key of the crew's view.
+func (m *drillModel) crewKey(s string) tea.Cmd {
+	v := m.d.Vessel()
+	switch s {
+	case "m":
+		m.startPick(pickMark, indices(len(v.Compartments)))
+	case "p":
+		m.startPick(pickPump, indices(len(v.Compartments)))
+	case "c":
+		m.startPick(pickCounter, indices(len(v.Compartments)))
+	case "d":
+		if len(v.Connections) == 0 {
+			m.status = "This ship has no doors or valves between compartments in her file."
+			return nil
+		}
+		m.startPick(pickDoor, indices(len(v.Connections)))
+	case "g":
+		if m.diagnosing {
+			return nil
+		}
 		m.diagnosing = true
 		m.status = "Diagnosing from our readings…"
-		return m, m.diagnose()
-	case s == "s" && m.mode == drillCrew:
+		return m.diagnose()
+	case "s":
 		var on []int
 		for i := range m.ordered {
 			on = append(on, i)
@@ -254,19 +299,31 @@ func (m *drillModel) key(k tea.KeyMsg) (tea.Model, tea.Cmd) {
 		sort.Ints(on)
 		if len(on) == 0 {
 			m.status = "No pump ordered on."
-		} else {
-			m.startPick(pickStop, on)
+			return nil
 		}
-	case s == "b" && m.mode == drillInstructor:
-		m.startPick(pickBreach, all)
-	case s == "f" && m.mode == drillInstructor:
-		m.startPick(pickFail, all)
-	case s == "n" && m.mode == drillInstructor:
-		m.ask("note", "Note to the crew: ")
-	case s == "D" && m.mode == drillInstructor:
-		return m, m.makeDebrief()
+		m.startPick(pickStop, on)
 	}
-	return m, nil
+	return nil
+}
+
+// instructorKey acts on a key of the instructor's view.
+func (m *drillModel) instructorKey(s string) tea.Cmd {
+	v := m.d.Vessel()
+	switch s {
+	case "b":
+		m.startPick(pickBreach, indices(len(v.Compartments)))
+	case "f":
+		m.startPick(pickFail, indices(len(v.Compartments)))
+	case "o":
+		if len(v.Connections) > 0 {
+			m.startPick(pickDoorTruth, indices(len(v.Connections)))
+		}
+	case "n":
+		m.ask("note", "Note to the crew: ")
+	case "D":
+		return m.makeDebrief()
+	}
+	return nil
 }
 
 func nextSpeed(cur float64, dir int) float64 {
@@ -308,13 +365,55 @@ func (m *drillModel) picking(s string) (tea.Model, tea.Cmd) {
 		p := m.pick
 		m.pick = pickNone
 		m.chosen(p, i)
+	case "o":
+		if m.pick == pickDoor {
+			m.pick = pickNone
+			m.orderDoor(m.pickList[m.cursor], true)
+		}
 	}
 	return m, nil
 }
 
-// chosen acts on the compartment picked.
+// orderDoor orders connection i open or shut (shut: checked and closed,
+// whatever the crew believed of it).
+func (m *drillModel) orderDoor(i int, open bool) {
+	c := m.d.Vessel().Connections[i]
+	m.doors[i] = open
+	m.decide(engine.DrillEvent{Kind: engine.DrillConnection, By: engine.ByCrew, Compartment: -1, Name: c.Name, Open: open})
+	if open {
+		m.status = c.Name + " ordered open."
+	} else {
+		m.status = c.Name + " ordered checked and shut."
+	}
+}
+
+// doorsAsFitted is the state of each connection as the vessel file gives
+// it: what the crew believe at the start.
+func doorsAsFitted(sc *vessels.Scenario) map[int]bool {
+	out := map[int]bool{}
+	for i, c := range sc.Vessel.Connections {
+		out[i] = c.Open
+	}
+	return out
+}
+
+// chosen acts on the compartment (or connection) picked.
 func (m *drillModel) chosen(p pickFor, i int) {
 	v := m.d.Vessel()
+	if p == pickDoor {
+		m.orderDoor(i, false)
+		return
+	}
+	if p == pickDoorTruth {
+		c := v.Connections[i]
+		m.decide(engine.DrillEvent{Kind: engine.DrillConnection, By: engine.ByInstructor, Compartment: -1, Name: c.Name, Open: !c.Open})
+		if c.Open {
+			m.status = c.Name + " now shut (instructor)."
+		} else {
+			m.status = c.Name + " now open (instructor): found open if the crew look."
+		}
+		return
+	}
 	name := v.Compartments[i].Name
 	switch p {
 	case pickMark:
@@ -336,6 +435,23 @@ func (m *drillModel) chosen(p pickFor, i int) {
 		delete(m.ordered, i)
 		m.decide(engine.DrillEvent{Kind: engine.DrillPump, By: engine.ByCrew, Compartment: i})
 		m.status = "Pumping stopped on " + name + "."
+	case pickCounter:
+		h, err := vessels.CounterfloodInlet(v, i, vessels.CounterfloodAreaM2)
+		if err != nil {
+			m.status = err.Error()
+			return
+		}
+		open := !m.inlets[i]
+		m.inlets[i] = open
+		if !open {
+			delete(m.inlets, i)
+		}
+		m.decide(engine.DrillEvent{Kind: engine.DrillCounterflood, By: engine.ByCrew, Compartment: i, Hole: h, Open: open})
+		if open {
+			m.status = fmt.Sprintf("Sea inlet opened into %s (%.2f m²).", name, h.AreaM2)
+		} else {
+			m.status = "Sea inlet into " + name + " shut."
+		}
 	case pickBreach:
 		m.pickComp = i
 		m.ask("breach", "Breach in "+name+": area m² [height z m]: ")
@@ -428,7 +544,7 @@ func (m *drillModel) diagnose() tea.Cmd {
 
 // reportDrill is the drill as the report package writes it.
 func (m *drillModel) reportDrill() report.Drill {
-	return report.Drill{Scenario: m.sc.Name, File: m.sc.File, VesselRef: m.sc.VesselRef, About: m.sc.About, Seed: m.sc.Seed,
+	return report.Drill{Scenario: m.sc.Name, File: m.sc.File, VesselRef: m.sc.VesselRef, ConditionRef: m.sc.ConditionRef, About: m.sc.About, Seed: m.sc.Seed,
 		Alarms: m.sc.Alarms, Played: m.d, Version: m.opts.Version, AlarmLevel: vessels.AlarmLevelM,
 		Events: m.sc.Setup(m.extra...).Events}
 }
@@ -501,14 +617,19 @@ func (m *drillModel) footer() string {
 	switch {
 	case m.asking != "":
 		s = m.input.View()
+	case m.pick == pickDoor:
+		s = "↑/↓ choose · enter check and shut · o open · esc cancel"
 	case m.pick != pickNone:
 		s = "↑/↓ choose · enter take · esc cancel"
 	case m.mode == drillDebrief:
 		s = "↑/↓ pgup/pgdn scroll · q quit"
 	case m.mode == drillInstructor:
-		s = "b breach · f pump fails · n note · D debrief · i crew · space pause · +/- speed · q quit"
+		s = "b breach · f pump fails · o door open/shut · n note · D debrief · i crew · space pause · +/- · q quit"
 	default:
-		s = "m mark · p pump · s stop pump · g diagnose · space pause · +/- speed · i instructor"
+		s = "m mark · p pump · s stop pump · d doors · c counter-flood · g diagnose · space pause · +/- speed · i instructor · q quit"
+		if m.w < 120 {
+			s = "m mark·p pump·s stop·d doors·c cntr-flood·g diag·spc pause·+/-·i instr·q quit"
+		}
 	}
 	if m.status != "" && m.asking == "" && m.pick == pickNone {
 		s = m.status + " · " + s

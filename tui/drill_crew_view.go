@@ -129,6 +129,27 @@ func (m *drillModel) crewPicture(w int) []string {
 	}
 	out = append(out, clipText("  Marked flooded: "+strings.Join(marked, ", "), w))
 	out = append(out, clipText("  Pumps ordered:  "+strings.Join(pumps, ", "), w))
+	var inl []string
+	for i, c := range v.Compartments {
+		if m.inlets[i] {
+			inl = append(inl, c.Name)
+		}
+	}
+	if len(inl) > 0 {
+		out = append(out, clipText("  Counter-flooding: "+strings.Join(inl, ", "), w))
+	}
+	var open []string
+	for i, c := range v.Connections {
+		if m.doors[i] {
+			open = append(open, c.Name)
+		}
+	}
+	if len(v.Connections) > 0 {
+		if len(open) == 0 {
+			open = []string{"none"}
+		}
+		out = append(out, clipText("  Open as we believe: "+strings.Join(open, ", "), w))
+	}
 	return out
 }
 
@@ -137,21 +158,63 @@ func (m *drillModel) crewPicture(w int) []string {
 func (m *drillModel) pickerView(w, h int) []string {
 	v := m.d.Vessel()
 	title := map[pickFor]string{pickMark: "Mark flooded / dry", pickPump: "Start pumping on", pickStop: "Stop pumping on",
-		pickBreach: "Breach in (instructor)", pickFail: "Pump fails on (instructor)"}[m.pick]
+		pickCounter: "Counter-flood: open / shut the sea inlet into", pickDoor: "Doors and valves: order open / shut",
+		pickDoorTruth: "Doors and valves (instructor): open / shut in truth",
+		pickBreach:    "Breach in (instructor)", pickFail: "Pump fails on (instructor)"}[m.pick]
 	out := []string{lipgloss.NewStyle().Bold(true).Render(title)}
 	rows := max(1, h-1)
 	top := max(0, min(m.cursor-rows/2, len(m.pickList)-rows))
 	for k := top; k < len(m.pickList) && k < top+rows; k++ {
 		i := m.pickList[k]
 		mark := " "
-		if m.pick == pickMark && m.marks[i] {
+		if (m.pick == pickMark && m.marks[i]) || (m.pick == pickCounter && m.inlets[i]) {
 			mark = "✓"
 		}
-		line := fmt.Sprintf("  %s %s", mark, v.Compartments[i].Name)
+		name := ""
+		switch m.pick {
+		case pickDoor:
+			c := v.Connections[i]
+			state := "shut"
+			if m.doors[i] {
+				state = "open"
+			}
+			name = fmt.Sprintf("%s (%s, %s–%s): we believe it %s", c.Name, c.Kind, v.Compartments[c.From].Name, v.Compartments[c.To].Name, state)
+		case pickDoorTruth:
+			c := v.Connections[i]
+			state := "shut"
+			if c.Open {
+				state = "open"
+			}
+			name = fmt.Sprintf("%s: %s", c.Name, state)
+		default:
+			name = v.Compartments[i].Name
+		}
+		line := fmt.Sprintf("  %s %s", mark, name)
 		if k == m.cursor {
-			line = lipgloss.NewStyle().Reverse(true).Render(fmt.Sprintf("> %s %s", mark, v.Compartments[i].Name))
+			line = lipgloss.NewStyle().Reverse(true).Render(fmt.Sprintf("> %s %s", mark, name))
 		}
 		out = append(out, clipText(line, w))
+	}
+	return out
+}
+
+// wrapWords lays words out on lines of at most w, one space apart, each
+// line indented.
+func wrapWords(words []string, w int, indent string) []string {
+	var out []string
+	cur := indent
+	for _, it := range words {
+		if len(cur) > len(indent) && lipgloss.Width(cur)+1+lipgloss.Width(it) > w {
+			out = append(out, cur)
+			cur = indent
+		}
+		if len(cur) > len(indent) {
+			cur += " "
+		}
+		cur += it
+	}
+	if len(cur) > len(indent) {
+		out = append(out, cur)
 	}
 	return out
 }

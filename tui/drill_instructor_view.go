@@ -20,7 +20,7 @@ func (m *drillModel) instructorView(w, h int) string {
 	var lines []string
 	lines = append(lines, bold.Render("The truth (hidden from the crew)"))
 	if p := now.Position; p != nil {
-		lines = append(lines, fmt.Sprintf("  heel %s   draft aft %s  fwd %s   trim %s   deck edge %s above water",
+		lines = append(lines, fmt.Sprintf("  heel: %s   draft aft %s  fwd %s   trim %s   deck edge %s above water",
 			report.Heel(p.HeelDeg, 1), report.Fixed(p.DraftAftM, 2, "m"), report.Fixed(p.DraftFwdM, 2, "m"),
 			report.Trim(p.TrimM, 2), report.Fixed(p.DeckEdge.HeightM, 2, "m")))
 		lines = append(lines, fmt.Sprintf("  GM %s", report.Fixed(p.GMM, 2, "m")))
@@ -46,6 +46,18 @@ func (m *drillModel) instructorView(w, h int) string {
 	if !wet {
 		lines = append(lines, "  none")
 	}
+	if len(v.Connections) > 0 {
+		var open []string
+		for _, c := range v.Connections {
+			if c.Open {
+				open = append(open, c.Name)
+			}
+		}
+		if len(open) == 0 {
+			open = []string{"none"}
+		}
+		lines = append(lines, clipText("  Open doors and valves: "+strings.Join(open, ", "), w))
+	}
 	lines = append(lines, "", bold.Render("Events"))
 	for _, e := range m.sc.Setup(m.extra...).Events {
 		done := "  "
@@ -61,6 +73,10 @@ func (m *drillModel) instructorView(w, h int) string {
 			text += ": " + e.Text
 		}
 		lines = append(lines, clipText(fmt.Sprintf("%s%s  %s", done, clock(e.Minutes), text), w))
+	}
+	if about := strings.Fields(m.sc.About); len(about) > 0 && h-len(lines) >= 4 {
+		lines = append(lines, "", bold.Render("The story"))
+		lines = append(lines, wrapWords(about, w-2, "  ")...)
 	}
 	if len(lines) > h {
 		lines = lines[:h]

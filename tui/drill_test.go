@@ -6,6 +6,7 @@ import (
 	"testing"
 
 	tea "github.com/charmbracelet/bubbletea"
+	"github.com/charmbracelet/lipgloss"
 
 	"heelwatch/engine"
 	"heelwatch/vessels"
@@ -53,6 +54,15 @@ func TestDrillCrewViewHidesTruth(t *testing.T) {
 			check := func(where string) {
 				s := m.View()
 				screens++
+				lines := strings.Split(s, "\n")
+				if len(lines) > size[1] {
+					t.Errorf("%s: %d lines on a screen of %d", where, len(lines), size[1])
+				}
+				for _, l := range lines {
+					if lipgloss.Width(l) > size[0] {
+						t.Errorf("%s: a line of %d columns on a screen of %d: %q", where, lipgloss.Width(l), size[0], l)
+					}
+				}
 				if m.mode != drillCrew {
 					t.Fatalf("%s: not the crew's view", where)
 				}
@@ -60,7 +70,9 @@ func TestDrillCrewViewHidesTruth(t *testing.T) {
 					t.Errorf("%s: a volume of water on the crew's screen:\n%s", where, s)
 				}
 				if m.pick != pickNone {
-					pickerLists = append(pickerLists, s[strings.Index(s, "Mark flooded")+0:])
+					if i := strings.Index(s, "Mark flooded"); i >= 0 {
+						pickerLists = append(pickerLists, s[i:])
+					}
 					return
 				}
 				// The crew's own diagnosis is worked out from their readings
@@ -72,9 +84,12 @@ func TestDrillCrewViewHidesTruth(t *testing.T) {
 				if strings.Contains(s, hidden) {
 					t.Errorf("%s: the hidden compartment is named:\n%s", where, s)
 				}
+				// Its water, to a tenth or a hundredth of a m³ (a whole
+				// number would meet a pump's capacity or a draft by chance;
+				// no m³ at all is shown, above).
 				w := m.d.Now().WaterM3[hi]
-				for _, f := range []string{"%.1f", "%.0f", "%.2f"} {
-					if w > 1 && strings.Contains(s, fmt.Sprintf(f+" m", w)) {
+				for _, f := range []string{"%.1f", "%.2f"} {
+					if w > 1 && strings.Contains(s, fmt.Sprintf(f, w)) {
 						t.Errorf("%s: the hidden water %s is shown", where, fmt.Sprintf(f, w))
 					}
 				}
@@ -107,6 +122,19 @@ func TestDrillCrewViewHidesTruth(t *testing.T) {
 						t.Errorf("no diagnosis: %q", m.status)
 					}
 					check("diagnosed")
+				case 35: // the crew checks and shuts the engine-room door, opens and shuts the next
+					m.Update(drillKey("d"))
+					check("door picker")
+					m.Update(drillKey("enter"))
+					check("door shut")
+					m.Update(drillKey("d"))
+					m.Update(drillKey("down"))
+					m.Update(drillKey("o"))
+					check("door opened")
+					m.Update(drillKey("d"))
+					m.Update(drillKey("down"))
+					m.Update(drillKey("enter"))
+					check("door shut again")
 				case 40:
 					m.Update(drillKey(" "))
 					check("paused")
@@ -176,6 +204,15 @@ func TestDrillInstructorInjects(t *testing.T) {
 	m.Update(drillKey("enter"))
 	if len(m.extra) != 1 || m.extra[0].Kind != engine.DrillBreach || m.extra[0].By != engine.ByInstructor {
 		t.Fatalf("no breach injected: %v (%s)", m.extra, m.status)
+	}
+	// A door found open: the first of the freighter's, shut in her file.
+	m.Update(drillKey("o"))
+	m.Update(drillKey("enter"))
+	if len(m.extra) != 2 || m.extra[1].Kind != engine.DrillConnection || !m.extra[1].Open || !m.d.Vessel().Connections[0].Open {
+		t.Fatalf("no door opened: %v (%s)", m.extra, m.status)
+	}
+	if s := m.View(); !strings.Contains(s, "Open doors and valves: "+m.d.Vessel().Connections[0].Name) {
+		t.Errorf("the instructor does not see the door open:\n%s", s)
 	}
 	for !m.d.Over() {
 		m.Update(drillTick{})

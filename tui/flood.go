@@ -5,6 +5,7 @@ import (
 	"strings"
 	"sync/atomic"
 
+	"github.com/charmbracelet/bubbles/key"
 	"github.com/charmbracelet/bubbles/progress"
 	tea "github.com/charmbracelet/bubbletea"
 	"github.com/charmbracelet/lipgloss"
@@ -46,9 +47,11 @@ type floodRequest struct {
 // floodPoint is one moment of a run in progress, for the plot.
 type floodPoint struct{ timeS, waterM3 float64 }
 
-// floodState is the flooding run and its panel: a child of the dashboard
-// whose view (flood_view.go) draws with what with gives it.
-type floodState struct {
+// floodPanel is the flooding run and its panel: a child of the dashboard
+// with its own update (the run-panel and stage keys, a run asked for by the
+// form, and the run's messages) and view (flood_view.go). It is given what
+// it works and draws with by with.
+type floodPanel struct {
 	show      bool // the panel is on screen
 	seq       int  // the newest request's number
 	latest    *atomic.Int64
@@ -60,17 +63,19 @@ type floodState struct {
 	track     []floodPoint // the progress so far
 	rep       *engine.FloodReport
 	err       string
-	stage     int                   // the stage the stage key shows nex
+	stage     int                   // the stage the stage key shows next
 	net       *engine.NetworkReport // the run through the ship, once it has ended (flood_network.go); nil if none
 
-	// What the panel draws with, given by with before each use.
-	v          *engine.Vessel
-	sel        int
-	damage     engine.Damage
-	st         Styles
-	inks       map[ink]lipgloss.Style
-	bar        progress.Model
-	cachedPlot func(w, h int) []string // the plot, drawn again only when it changed
+	// What the panel works and draws with, given by with before each use.
+	v       *engine.Vessel
+	sel     int
+	damage  engine.Damage
+	keys    keyMap
+	st      Styles
+	inks    map[ink]lipgloss.Style
+	bar     progress.Model
+	pics    *pictureCache // the plot, drawn again only when it changed
+	plotKey pictureKey    // the plot's key but for the run and the size
 }
 
 // Messages of a flooding run.
@@ -135,25 +140,62 @@ func floodFailed(seq int) func(string) tea.Msg {
 	return func(why string) tea.Msg { return floodStepMsg{seq: seq, err: "engine failure: " + why} }
 }
 
-// with returns the panel drawing for m's vessel, selection, damage state
+// with returns the panel for m's vessel, selection, damage state, keys
 // and styles.
-func (f floodState) with(m model) floodState {
-	f.v, f.sel, f.damage, f.st, f.inks, f.bar = m.v, m.sel, m.damage, m.st, m.inks, m.bar
-	g := f
-	f.cachedPlot = func(w, h int) []string { return m.cached(picFloodPlot, w, h, g.plot) }
+func (f floodPanel) with(m model) floodPanel {
+	f.v, f.sel, f.damage, f.keys, f.st, f.inks, f.bar = m.v, m.sel, m.damage, m.keys, m.st, m.inks, m.bar
+	f.pics, f.plotKey = m.pics, m.pictureKey(picFloodPlot)
 	return f
 }
 
-// startFlood starts a run for q, cancelling any older one.
-func (m model) startFlood(q floodRequest) (tea.Model, tea.Cmd) {
-	f := &m.flood
+// update takes a run asked for by the form (a floodRequest), the run's
+// messages, and the panel's keys: the run-panel key shows the panel or
+// hides it (stopping a run in progress), the stage key puts the run's next
+// stage on the dashboard. What the dashboard does besides (the log, a
+// change of the damage state) it asks of h.
+func (f floodPanel) update(msg tea.Msg, h host) (floodPanel, tea.Cmd) {
+	switch msg := msg.(type) {
+	case floodRequest:
+		return f.start(msg, h)
+	case floodStepMsg:
+		return f.takeStep(msg, h)
+	case floodDoneMsg:
+		return f.takeReport(msg, h)
+	case netDoneMsg:
+		return f.takeNet(msg, h)
+	case tea.KeyMsg:
+		switch {
+		case key.Matches(msg, f.keys.RunPanel) && f.show:
+			f.show = false
+			return f.stop(h)
+		case key.Matches(msg, f.keys.RunPanel):
+			f.show = true
+		case key.Matches(msg, f.keys.RunStage):
+			return f.nextStage(h)
+		}
+	}
+	return f, nil
+}
+
+// hasStages reports whether the run shown has stages for the stage key.
+func (f floodPanel) hasStages() bool { return f.rep != nil && len(f.rep.Stages) > 0 }
+
+// updateFlood passes msg to the flooding run's panel; the stage key
+// answers only while the run shown has stages.
+func (m model) updateFlood(msg tea.Msg) (tea.Model, tea.Cmd) {
+	var cmd tea.Cmd
+	m.flood, cmd = m.flood.with(m).update(msg, &m)
+	m.keys.RunStage.SetEnabled(m.flood.hasStages())
+	return m, cmd
+}
+
+// start starts a run for q, cancelling any older one.
+func (f floodPanel) start(q floodRequest, h host) (floodPanel, tea.Cmd) {
 	f.seq++
 	f.latest.Store(int64(f.seq))
 	f.show, f.running, f.finishing = true, true, false
-	m.rem.show = false // the run's panel in its place
 	f.req, f.hole, f.prog, f.track, f.rep, f.err, f.stage, f.net = q, engine.Hole{}, engine.FloodProgress{}, nil, nil, "", 0, nil
-	m.keys.RunStage.SetEnabled(false)
-	name := m.v.Compartments[q.ci].Name
+	name := f.v.Compartments[q.ci].Name
 	what := fmt.Sprintf("flooding run: %s through %s m² at z %s m, C_d %s, pumps %s m³/h",
 		name, num(q.areaM2, 3), num(q.zM, 2), num(q.cd, 2), num(q.pumpM3h, 0))
 	if q.wasOpen {
@@ -161,32 +203,30 @@ func (m model) startFlood(q floodRequest) (tea.Model, tea.Cmd) {
 	} else if w := q.base[q.ci].WaterM3; w > 0 {
 		what += fmt.Sprintf(" (%s m³ in at the start)", num(w, 1))
 	}
-	log := m.addLog(m.now(), what)
-	return m, tea.Batch(floodStartCmd(q.flood.Case, f.seq, f.latest), log)
+	log := h.say(what)
+	return f, tea.Batch(floodStartCmd(q.flood.Case, f.seq, f.latest), log)
 }
 
-// stopFlood abandons a run in progress; a finished run's report stays.
-func (m *model) stopFlood() tea.Cmd {
-	f := &m.flood
+// stop abandons a run in progress; a finished run's report stays.
+func (f floodPanel) stop(h host) (floodPanel, tea.Cmd) {
 	if !f.running {
-		return nil
+		return f, nil
 	}
 	f.seq++
 	f.latest.Store(int64(f.seq))
 	f.running, f.finishing = false, false
-	return m.addLog(m.now(), "flooding run of "+m.v.Compartments[f.req.ci].Name+" stopped before its end")
+	return f, h.say("flooding run of " + f.v.Compartments[f.req.ci].Name + " stopped before its end")
 }
 
-// takeFloodStep handles a step's message: the newest run's progress is
-// kept and its next step issued; any other is dropped.
-func (m model) takeFloodStep(msg floodStepMsg) (tea.Model, tea.Cmd) {
-	f := &m.flood
+// takeStep handles a step's message: the newest run's progress is kept
+// and its next step issued; any other is dropped.
+func (f floodPanel) takeStep(msg floodStepMsg, h host) (floodPanel, tea.Cmd) {
 	if msg.stale || msg.seq != f.seq || !f.running {
-		return m, nil
+		return f, nil
 	}
 	if msg.err != "" {
 		f.running, f.finishing, f.err = false, false, msg.err
-		return m, m.addLog(m.now(), "flooding run of "+m.v.Compartments[f.req.ci].Name+" could not go on: "+msg.err)
+		return f, h.say("flooding run of " + f.v.Compartments[f.req.ci].Name + " could not go on: " + msg.err)
 	}
 	if msg.started {
 		f.hole = msg.hole
@@ -196,39 +236,36 @@ func (m model) takeFloodStep(msg floodStepMsg) (tea.Model, tea.Cmd) {
 		f.track = append(f.track, floodPoint{msg.prog.TimeS, msg.prog.WaterM3})
 	}
 	if msg.more {
-		return m, floodStepCmd(msg.run, f.seq, f.latest)
+		return f, floodStepCmd(msg.run, f.seq, f.latest)
 	}
 	f.finishing = true
-	return m, floodReportCmd(msg.run, f.seq, f.latest)
+	return f, floodReportCmd(msg.run, f.seq, f.latest)
 }
 
-// takeFloodReport handles a finished run's report.
-func (m model) takeFloodReport(msg floodDoneMsg) (tea.Model, tea.Cmd) {
-	f := &m.flood
+// takeReport handles a finished run's report.
+func (f floodPanel) takeReport(msg floodDoneMsg, h host) (floodPanel, tea.Cmd) {
 	if msg.stale || msg.seq != f.seq || !f.running {
-		return m, nil
+		return f, nil
 	}
 	f.running, f.finishing = false, false
-	name := m.v.Compartments[f.req.ci].Name
+	name := f.v.Compartments[f.req.ci].Name
 	if msg.err != "" {
 		f.err = msg.err
-		return m, m.addLog(m.now(), "flooding run of "+name+" failed: "+msg.err)
+		return f, h.say("flooding run of " + name + " failed: " + msg.err)
 	}
 	rep := msg.rep
 	f.rep = &rep
 	f.hole = rep.Hole
-	m.keys.RunStage.SetEnabled(len(rep.Stages) > 0)
-	return m, tea.Batch(m.addLog(m.now(), "flooding run of "+name+" → "+outcomeText(rep)), netCmd(f.req.flood.Case, rep, f.seq, f.latest))
+	return f, tea.Batch(h.say("flooding run of "+name+" → "+outcomeText(rep)), netCmd(f.req.flood.Case, rep, f.seq, f.latest))
 }
 
-// applyStage puts the run's next stage on the dashboard: the flooded
+// nextStage puts the run's next stage on the dashboard: the flooded
 // compartment holding that stage's water (added weight), the rest as the
 // dashboard has it; the end of a run whose levels met puts the space open
 // to the sea. It is an ordinary change, undone by undo.
-func (m model) applyStage() (tea.Model, tea.Cmd) {
-	f := &m.flood
-	if f.rep == nil || len(f.rep.Stages) == 0 {
-		return m, nil
+func (f floodPanel) nextStage(h host) (floodPanel, tea.Cmd) {
+	if !f.hasStages() {
+		return f, nil
 	}
 	n := len(f.rep.Stages)
 	var st engine.FloodStage
@@ -242,21 +279,21 @@ func (m model) applyStage() (tea.Model, tea.Cmd) {
 		}
 	}
 	if !found {
-		return m, m.addLog(m.now(), "the run's stages hold no water: nothing to show")
+		return f, h.say("the run's stages hold no water: nothing to show")
 	}
 	ci := f.req.ci
-	d := cloneDamage(m.damage)
+	d := cloneDamage(f.damage)
 	d[ci] = engine.SpaceState{Permeability: f.req.base[ci].Permeability, WaterM3: st.WaterM3}
 	what := fmt.Sprintf("%s flooded to a level: %s stage of the flooding run, %s m³ held",
-		m.v.Compartments[ci].Name, stageName(st.Fraction), num(st.WaterM3, 1))
+		f.v.Compartments[ci].Name, stageName(st.Fraction), num(st.WaterM3, 1))
 	if st.Fraction >= 1 && f.rep.End == engine.FloodEqualised {
 		// Once the levels have met, the space is open to the sea: the water
 		// in it rises and falls with her as she heels (lost buoyancy), not a
 		// weight of fixed volume.
 		d[ci] = engine.SpaceState{Open: true, Permeability: f.req.base[ci].Permeability}
-		what = fmt.Sprintf("%s open to the sea: the levels have met at the end of the flooding run", m.v.Compartments[ci].Name)
+		what = fmt.Sprintf("%s open to the sea: the levels have met at the end of the flooding run", f.v.Compartments[ci].Name)
 	}
-	return m.apply(d, what)
+	return f, h.change(d, what)
 }
 
 // stageName names a stage: "25 %", …, "end" for the final one.
@@ -270,7 +307,7 @@ func stageName(f float64) string {
 // baseChanged reports whether the dashboard's damage state d differs from
 // the run's base in any compartment but the flooded one (whose water a
 // stage may have set).
-func (f floodState) baseChanged(d engine.Damage) bool {
+func (f floodPanel) baseChanged(d engine.Damage) bool {
 	b := f.req.base
 	if len(b) != len(d) {
 		return true

@@ -160,7 +160,8 @@ func (m model) formKey(msg tea.KeyMsg) (tea.Model, tea.Cmd) {
 			return m, cmd
 		}
 		m.mode = modeBrowse
-		return m.startFlood(q)
+		m.rem.show = false // the run's panel in the options' place
+		return m.updateFlood(q)
 	}
 	return m, cmd
 }

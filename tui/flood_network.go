@@ -56,13 +56,12 @@ func netCmd(c engine.FloodCase, single engine.FloodReport, seq int, latest *atom
 }
 
 // takeNet keeps the newest network run and logs how it ended.
-func (m model) takeNet(msg netDoneMsg) (tea.Model, tea.Cmd) {
-	f := &m.flood
+func (f floodPanel) takeNet(msg netDoneMsg, h host) (floodPanel, tea.Cmd) {
 	if msg.stale || msg.seq != f.seq {
-		return m, nil
+		return f, nil
 	}
 	if msg.err != "" {
-		return m, m.addLog(m.now(), "flooding run through the ship failed: "+msg.err)
+		return f, h.say("flooding run through the ship failed: " + msg.err)
 	}
 	rep := msg.rep
 	f.net = &rep
@@ -79,12 +78,12 @@ func (m model) takeNet(msg netDoneMsg) (tea.Model, tea.Cmd) {
 			line += fmt.Sprintf("; %s equalises in %s, %s", c.Name, report.Duration(c.EqualiseS), engine.CrossFloodingVerdict(c.EqualiseS))
 		}
 	}
-	return m, m.addLog(m.now(), line)
+	return f, h.say(line)
 }
 
 // netPlot draws the water in each compartment the run through the ship
 // reached against time, one letter per compartment, with the legend.
-func (p floodState) netPlot(w, h int) []string {
+func (p floodPanel) netPlot(w, h int) []string {
 	st := p.st
 	r := p.net
 	var keep []int

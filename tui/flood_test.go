@@ -455,7 +455,8 @@ func TestFloodSmallSizes(t *testing.T) {
 		// Panel parts at widths and heights down to nothing.
 		for w := 0; w <= 50; w += 5 {
 			for h := 0; h <= 20; h += 4 {
-				for _, part := range [][]string{mm.floodPanel(w, h), mm.floodText(w, h, h), mm.floodPlot(w, h), mm.floodRow(w, h)} {
+				f := mm.flood.with(mm)
+				for _, part := range [][]string{viewLines(f.view(w, h)), f.text(w, h, h), f.plot(w, h), viewLines(f.row(w, h, mm.sectionPicture))} {
 					for _, l := range part {
 						if lw := lipgloss.Width(l); lw > max(w, 0) {
 							t.Errorf("%s: a panel part of %dx%d has a line %d wide", name, w, h, lw)

@@ -12,21 +12,47 @@ import (
 // view is the flooding run on a narrow screen, in w × h: the times
 // and the stages on top, the plot against time under them when it has
 // room.
-func (p floodState) view(w, h int) []string {
+func (p floodPanel) view(w, h int) string {
 	const minPlot = 7
 	text := p.text(w, h, h-minPlot)
 	if len(text)+minPlot > h {
-		return fit(p.text(w, h, h), w, h)
+		return strings.Join(fit(p.text(w, h, h), w, h), "\n")
 	}
 	out := append(text, p.cachedPlot(w, h-len(text))...)
-	return fit(out, w, h)
+	return strings.Join(fit(out, w, h), "\n")
+}
+
+// row is the wide screen's row of pictures while the panel is shown, in
+// w × h: the section (drawn by section), the run's times and stages, and
+// its plot.
+func (p floodPanel) row(w, h int, section func(w, h int) []string) string {
+	if w < 3 {
+		return strings.Join(fit(nil, w, h), "\n")
+	}
+	sep := p.st.Dim.Render("│")
+	tw := max((w-2)/3, min(46, w-2))
+	sw := (w - 2 - tw) / 2
+	pw := w - 2 - tw - sw
+	return strings.Join(besides(sep,
+		fit(section(sw, h), sw, h),
+		fit(p.text(tw, h, h), tw, h),
+		fit(p.cachedPlot(pw, h), pw, h)), "\n")
+}
+
+// cachedPlot is plot, drawn again only when the run, the dashboard's
+// state or the size changed since it was last drawn.
+func (p floodPanel) cachedPlot(w, h int) []string {
+	k := p.plotKey
+	k.w, k.h = w, h
+	k.floodSeq, k.floodN, k.floodRep, k.running, k.floodNet = p.seq, len(p.track), p.rep, p.running, p.net
+	return p.pics.drawn(k, p.plot)
 }
 
 // text is the panel's text in width w: what is flooding and through
 // what, then the progress while the run computes, or its outcome, the
 // times to each event and the intermediate stages. It takes at most h
 // lines, and tries to keep within want by shortening the list of events.
-func (p floodState) text(w, h, want int) []string {
+func (p floodPanel) text(w, h, want int) []string {
 	st := p.st
 	f := p
 	head := []string{st.Heading.Render(clip("FLOODING RUN", w))}
@@ -110,7 +136,7 @@ func (p floodState) text(w, h, want int) []string {
 }
 
 // progress is the progress bar and the figures of a run in progress.
-func (f floodState) progress(w int) []string {
+func (f floodPanel) progress(w int) []string {
 	st := f.st
 	p := f.prog
 	bar := f.bar
@@ -180,7 +206,7 @@ func eventWords(e engine.FloodEvent, r *engine.FloodReport) string {
 
 // floodEvents lists the run's events in time order, the end last: mark,
 // time from the start, water in, what happened.
-func (p floodState) events(w int) []string {
+func (p floodPanel) events(w int) []string {
 	st := p.st
 	r := p.rep
 	var lines []string
@@ -231,7 +257,7 @@ func clearLine(r *engine.FloodReport, passenger bool) string {
 // floodStages is the table of the intermediate stages: the fraction of the
 // final water, the water, when the run reached it, heel, GM, (on a wider
 // panel) the deck edge's freeboard, and the criteria.
-func (p floodState) stages(w int) []string {
+func (p floodPanel) stages(w int) []string {
 	st := p.st
 	r := p.rep
 	if len(r.Stages) == 0 {
@@ -283,7 +309,7 @@ func (p floodState) stages(w int) []string {
 
 // stageShown reports whether the dashboard holds stage s now: the run's
 // compartment not open and holding that stage's water.
-func (p floodState) stageShown(s engine.FloodStage) bool {
+func (p floodPanel) stageShown(s engine.FloodStage) bool {
 	ci := p.req.ci
 	if ci >= len(p.damage) || s.WaterM3 <= 0 {
 		return false
@@ -332,7 +358,7 @@ func timeUnit(T float64) (scale float64, unit string) {
 // compartment (dotted, scale on the right) against time since the hole
 // was made, with the events marked by their letters; while the run
 // computes, the water so far.
-func (p floodState) plot(w, h int) []string {
+func (p floodPanel) plot(w, h int) []string {
 	if p.net != nil {
 		return p.netPlot(w, h)
 	}
@@ -462,25 +488,3 @@ func (p floodState) plot(w, h int) []string {
 	lines = append(lines, st.Axis.Render(scaleLine(c, ticks, unit)))
 	return fit(lines, w, h)
 }
-
-// floodRow is the wide screen's row of pictures while the run's panel is
-// shown: the section, the run's times and stages, and its plot.
-func (m model) floodRow(w, h int) []string {
-	if w < 3 {
-		return fit(nil, w, h)
-	}
-	sep := m.st.Dim.Render("│")
-	tw := max((w-2)/3, min(46, w-2))
-	sw := (w - 2 - tw) / 2
-	pw := w - 2 - tw - sw
-	return besides(sep,
-		fit(m.cached(picSection, sw, h, m.sectionView), sw, h),
-		fit(m.flood.with(m).text(tw, h, h), tw, h),
-		fit(m.cached(picFloodPlot, pw, h, m.flood.with(m).plot), pw, h))
-}
-
-// floodPanel, floodText and floodPlot are the run's panel, its text and its
-// plot as the dashboard draws them (floodState.view, text and plot).
-func (m model) floodPanel(w, h int) []string      { return m.flood.with(m).view(w, h) }
-func (m model) floodText(w, h, want int) []string { return m.flood.with(m).text(w, h, want) }
-func (m model) floodPlot(w, h int) []string       { return m.flood.with(m).plot(w, h) }

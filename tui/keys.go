@@ -89,7 +89,8 @@ func (k keyMap) FullHelp() [][]key.Binding {
 			say(k.Readings, "r", "draft readings, n new")},
 		{say(k.RunPanel, "t", "run panel"), doorsKey, say(k.Hand, "h", "hand working on/off"),
 			say(k.WorkUp, "[ ]", "scroll working/criteria"), k.Report,
-			say(k.Palette, "c", "day / night / mono"), say(k.Help, "?", "close this help"),
+			say(k.Palette, "c", "day / night / mono"), say(conditionKey, "L", "loading condition, save"),
+			say(k.Help, "?", "close this help"),
 			say(k.Quit, "q", "quit (also ctrl+c)")},
 	}
 }

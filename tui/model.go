@@ -79,12 +79,14 @@ type model struct {
 	mode     mode // what the keys work on
 
 	form   floodForm    // the hole-and-pumps form of a flooding run
-	flood  floodState   // the flooding run and its panel
-	rem    remedyState  // the righting options and their panel
+	flood  floodPanel   // the flooding run and its panel (flood.go)
+	rem    remedyPanel  // the righting options and their panel (remedy.go)
 	girder girderPanel  // the hull girder's shear force and bending moment (strength_view.go)
 	rd     readingPanel // draft marks, readings by hand and their diagnosis (reading_panel.go)
 	doors  doorsPanel   // the doors and valves, open or shut (doors.go)
 	find   finder       // the type-to-find of the compartment list (find.go)
+
+	cond conditionPanel // the loading condition: tanks, weights, saving (condition_view.go)
 
 	rend    *lipgloss.Renderer
 	palette int
@@ -161,8 +163,8 @@ func newModel(v *engine.Vessel, info *vessels.Info, opts Options) model {
 		rend:    lipgloss.DefaultRenderer(),
 		damage:  v.Intact(),
 		latest:  new(atomic.Int64),
-		flood:   floodState{latest: new(atomic.Int64)},
-		rem:     remedyState{latest: new(atomic.Int64)},
+		flood:   floodPanel{latest: new(atomic.Int64)},
+		rem:     remedyPanel{latest: new(atomic.Int64)},
 		changes: map[int]change{},
 		results: map[int][2]string{},
 		logNext: 1,
@@ -173,6 +175,7 @@ func newModel(v *engine.Vessel, info *vessels.Info, opts Options) model {
 	if info != nil {
 		m.condition = info.Condition
 	}
+	m = m.withCondition(opts)
 	m.into = leadsInto(v)
 	m.derived = derive(v, m.into, nil)
 	m.spaces = make([]space, len(v.Compartments))
@@ -268,6 +271,9 @@ func (m model) Update(msg tea.Msg) (tea.Model, tea.Cmd) {
 
 // update handles one message.
 func (m model) update(msg tea.Msg) (tea.Model, tea.Cmd) {
+	if mm, cmd, ok := m.conditionMsg(msg); ok {
+		return mm, cmd
+	}
 	if mm, cmd, ok := m.readingMsg(msg); ok {
 		return mm, cmd
 	}
@@ -322,19 +328,14 @@ func (m model) update(msg tea.Msg) (tea.Model, tea.Cmd) {
 		m.spin, cmd = m.spin.Update(msg)
 		return m, cmd
 
-	case floodStepMsg:
-		return m.takeFloodStep(msg)
-
-	case floodDoneMsg:
-		return m.takeFloodReport(msg)
+	case floodStepMsg, floodDoneMsg, netDoneMsg:
+		return m.updateFlood(msg)
 
 	case remedyMsg:
-		return m.takeRemedies(msg)
+		return m.updateRemedies(msg)
 
 	case doorMsg:
 		return m.takeDoor(msg)
-	case netDoneMsg:
-		return m.takeNet(msg)
 
 	case tea.KeyMsg:
 		msg = plainKey(msg)
@@ -369,13 +370,14 @@ func (m model) update(msg tea.Msg) (tea.Model, tea.Cmd) {
 
 func (m model) key(msg tea.KeyMsg) (tea.Model, tea.Cmd) {
 	k := m.keys
-	if !m.rem.show || key.Matches(msg, k.Hand) {
-		// The hand panel's own keys (the righting options' panel, when
-		// shown, takes the scroll keys first).
-		var took bool
-		if m.hand, took = m.hand.with(m.cur, m.st).update(msg, k); took {
-			return m, nil
-		}
+	if m.rem.with(m).handles(msg) {
+		// The righting options' own keys (while shown, the scroll keys
+		// before the hand panel's).
+		return m.updateRemedies(msg)
+	}
+	var took bool
+	if m.hand, took = m.hand.with(m.cur, m.st).update(msg, k); took {
+		return m, nil
 	}
 	n := len(m.v.Compartments)
 	switch {
@@ -421,22 +423,21 @@ func (m model) key(msg tea.KeyMsg) (tea.Model, tea.Cmd) {
 			return m, m.addLog(m.now(), "report not written: there are no figures to report")
 		}
 		return m, m.writeReport()
-	case key.Matches(msg, k.Remedies):
-		return m.remedyKey()
 	case key.Matches(msg, k.Girder):
 		return m.girderKey()
 	case m.girder.handles(msg):
 		var cmd tea.Cmd
 		m.girder, cmd = m.girder.update(msg)
 		return m, cmd
-	case key.Matches(msg, k.RunPanel):
-		return m.runPanelKey()
+	case key.Matches(msg, k.RunPanel) && m.rem.show:
+		// The righting options give way to the run's panel.
+		m.rem.show, m.flood.show = false, true
+	case key.Matches(msg, k.RunPanel), key.Matches(msg, k.RunStage):
+		return m.updateFlood(msg)
 	case n == 0:
 		return m, nil
 	case key.Matches(msg, k.HoleRun):
 		return m.openForm()
-	case key.Matches(msg, k.RunStage):
-		return m.applyStage()
 	case key.Matches(msg, k.Flood):
 		return m.toggleFlooded()
 	case key.Matches(msg, k.MuUp):
@@ -471,23 +472,6 @@ func (m model) key(msg tea.KeyMsg) (tea.Model, tea.Cmd) {
 	return m, nil
 }
 
-// runPanelKey shows the flooding run's panel in place of the righting
-// options', or hides it (stopping a run in progress).
-func (m model) runPanelKey() (tea.Model, tea.Cmd) {
-	switch {
-	case m.rem.show:
-		// The righting options give way to the run's panel.
-		m.rem.show = false
-		m.flood.show = true
-	case m.flood.show:
-		m.flood.show = false
-		return m, m.stopFlood()
-	default:
-		m.flood.show = true
-	}
-	return m, nil
-}
-
 // toggleFlooded opens the selected compartment to the sea, or closes it up
 // (intact) when it is open or holds water.
 func (m model) toggleFlooded() (tea.Model, tea.Cmd) {
@@ -513,16 +497,11 @@ func (m model) stepMu(step float64) (tea.Model, tea.Cmd) {
 	return m.setMu(mu)
 }
 
-// scroll moves by step lines (up when negative) the text the scroll keys
-// work on: the righting options while their panel is shown, else the hand
-// working while it is shown (a step at a time), else the flags and
-// criteria where they are on screen.
+// scroll moves the flags and criteria, where they are on screen, by step
+// lines (up when negative); the righting options and the hand working
+// scroll in their own panels.
 func (m *model) scroll(step int) {
-	switch {
-	case m.rem.show:
-		head, body, foot := m.rem.with(*m).parts(m.width, m.lay.bodyH)
-		m.rem.scroll = scrolled(m.rem.scroll, body, m.lay.bodyH-len(head)-len(foot), step)
-	case m.cur != nil:
+	if m.cur != nil {
 		w, h := m.criteriaBox()
 		m.textScroll = scrolled(m.textScroll, m.criteriaLines(w, true), h-1, step)
 	}

@@ -38,18 +38,27 @@ type pictureCache struct {
 // cached returns picture kind drawn in w × h by draw, drawing it only when
 // its key has changed since the last time.
 func (m model) cached(kind, w, h int, draw func(w, h int) []string) []string {
-	if m.pics == nil {
-		return draw(w, h)
+	k := m.pictureKey(kind)
+	k.w, k.h = w, h
+	return m.pics.drawn(k, draw)
+}
+
+// pictureKey is what the dashboard's state gives of picture kind's key;
+// the flooding run's panel adds its run (floodPanel.cachedPlot) and the
+// size.
+func (m model) pictureKey(kind int) pictureKey {
+	return pictureKey{kind: kind, palette: m.palette, sel: m.sel, seq: m.seq, cur: m.cur}
+}
+
+// drawn returns the picture of key k, drawn by draw only when k differs
+// from the last key of its kind; without a cache (nil) it always draws.
+func (c *pictureCache) drawn(k pictureKey, draw func(w, h int) []string) []string {
+	if c == nil {
+		return draw(k.w, k.h)
 	}
-	k := pictureKey{kind: kind, w: w, h: h, palette: m.palette, sel: m.sel, seq: m.seq, cur: m.cur}
-	if kind == picFloodPlot {
-		f := m.flood
-		k.floodSeq, k.floodN, k.floodRep, k.running = f.seq, len(f.track), f.rep, f.running
-		k.floodNet = f.net
-	}
-	e := &m.pics.entries[kind]
+	e := &c.entries[k.kind]
 	if !e.ok || e.key != k {
-		e.key, e.lines, e.ok = k, draw(w, h), true
+		e.key, e.lines, e.ok = k, draw(k.w, k.h), true
 	}
 	return append([]string(nil), e.lines...)
 }

@@ -83,7 +83,9 @@ func (m model) readingMsg(msg tea.Msg) (tea.Model, tea.Cmd, bool) {
 	switch msg := msg.(type) {
 	case diagProgressMsg:
 		if msg.seq != m.rd.seq {
-			return m, nil, true
+			// An older diagnosis: read it to its end so that its goroutine
+			// can finish, and show none of it.
+			return m, waitDiagnosis(msg.ch), true
 		}
 		m.rd.done, m.rd.total = msg.done, msg.total
 		return m, waitDiagnosis(msg.ch), true
@@ -211,9 +213,11 @@ func startDiagnosis(v *engine.Vessel, rs []engine.Reading, opts engine.TrendOpti
 		out := diagDoneMsg{seq: seq, res: &res}
 		switch {
 		case len(rs) < 2:
-			out.trendNote = "the trend needs readings at two or more times"
+			out.trendNote = "trend: needs two readings or more"
 		case len(res.Explanations) == 0 || len(res.Explanations[0].Spaces) == 0:
 			out.trendNote = "no trend: the best explanation floods nothing"
+		case !res.Fits:
+			out.trendNote = "no trend: nothing fits the latest reading"
 		default:
 			opts.LimitS = 6 * 3600
 			if t, err := engine.EstimateTrend(v, rs, res.Explanations[0], opts); err != nil {

@@ -4,6 +4,7 @@ import (
 	"fmt"
 	"sync/atomic"
 
+	"github.com/charmbracelet/bubbles/key"
 	tea "github.com/charmbracelet/bubbletea"
 
 	"heelwatch/engine"
@@ -21,9 +22,11 @@ import (
 // date and that the key works them out again. Undoing back to the state
 // they were worked out for makes them current again.
 
-// remedyState is the righting options and their panel: a child of the
-// dashboard whose view (remedy_view.go) draws with what with gives it.
-type remedyState struct {
+// remedyPanel is the righting options and their panel: a child of the
+// dashboard with its own update (the righting-options key, the scroll keys
+// while it is shown, and the options' message) and view (remedy_view.go).
+// It is given what it works and draws with by with.
+type remedyPanel struct {
 	show    bool // the panel is on screen
 	seq     int  // the newest request's number
 	latest  *atomic.Int64
@@ -33,11 +36,13 @@ type remedyState struct {
 	err     string // the newest request failed (a recovered panic)
 	scroll  int    // the first line of the panel's scrolling part shown
 
-	// What the panel draws with, given by with before each use.
+	// What the panel works and draws with, given by with before each use.
 	v      *engine.Vessel
 	damage engine.Damage // the damage state shown
+	keys   keyMap
 	st     Styles
 	spin   string // the computing mark
+	w, h   int    // the body of the screen, which the panel takes
 }
 
 // remedyMsg carries the righting options of request seq. Stale is set when
@@ -60,15 +65,45 @@ func remediesCmd(v *engine.Vessel, d engine.Damage, seq int, latest *atomic.Int6
 		func() tea.Msg { return remedyMsg{seq: seq, set: engine.FindRemedies(v, d)} })
 }
 
-// with returns the panel drawing for m's vessel, damage state and styles.
-func (r remedyState) with(m model) remedyState {
-	r.v, r.damage, r.st, r.spin = m.v, m.damage, m.st, m.spinView()
+// with returns the panel for m's vessel, damage state, keys, styles and
+// screen.
+func (r remedyPanel) with(m model) remedyPanel {
+	r.v, r.damage, r.keys, r.st, r.spin = m.v, m.damage, m.keys, m.st, m.spinView()
+	r.w, r.h = m.width, m.lay.bodyH
 	return r
+}
+
+// handles reports whether key msg is the panel's: the righting-options
+// key, and the scroll keys while the panel is shown.
+func (r remedyPanel) handles(msg tea.KeyMsg) bool {
+	return key.Matches(msg, r.keys.Remedies) || r.show && key.Matches(msg, r.keys.WorkUp, r.keys.WorkDown)
+}
+
+// update takes the panel's keys and the options' message; what the
+// dashboard does besides (the log, the computing mark) it asks of h.
+func (r remedyPanel) update(msg tea.Msg, h host) (remedyPanel, tea.Cmd) {
+	switch msg := msg.(type) {
+	case remedyMsg:
+		return r.take(msg, h)
+	case tea.KeyMsg:
+		switch {
+		case key.Matches(msg, r.keys.Remedies):
+			return r.ask(h)
+		case r.show && key.Matches(msg, r.keys.WorkUp, r.keys.WorkDown):
+			step := scrollStep
+			if key.Matches(msg, r.keys.WorkUp) {
+				step = -scrollStep
+			}
+			head, body, foot := r.parts(r.w, r.h)
+			r.scroll = scrolled(r.scroll, body, r.h-len(head)-len(foot), step)
+		}
+	}
+	return r, nil
 }
 
 // current reports whether the options held were worked out for damage
 // state d.
-func (r remedyState) current(d engine.Damage) bool {
+func (r remedyPanel) current(d engine.Damage) bool {
 	return r.set != nil && sameDamage(r.set.Damage, d)
 }
 
@@ -86,52 +121,45 @@ func sameDamage(a, b engine.Damage) bool {
 	return true
 }
 
-// remedyKey handles the righting-options key: it shows the panel and works
-// the options out for the state now when they are not already (or being)
+// ask answers the righting-options key: it shows the panel and works the
+// options out for the state now when they are not already (or being)
 // worked out for it; pressed again on current options, it hides the panel.
-func (m model) remedyKey() (tea.Model, tea.Cmd) {
-	r := &m.rem
+func (r remedyPanel) ask(h host) (remedyPanel, tea.Cmd) {
 	switch {
-	case r.show && r.running && sameDamage(r.asked, m.damage):
-		return m, nil
-	case r.show && r.current(m.damage) && !r.running:
+	case r.show && r.workingOn(r.damage):
+		return r, nil
+	case r.show && r.current(r.damage) && !r.running:
 		r.show = false
-		return m, nil
-	case !r.show && (r.current(m.damage) || r.running && sameDamage(r.asked, m.damage)):
+		return r, nil
+	case !r.show && (r.current(r.damage) || r.workingOn(r.damage)):
 		r.show, r.scroll = true, 0
-		return m, nil
+		return r, nil
 	}
 	r.show, r.scroll = true, 0
 	r.seq++
 	r.latest.Store(int64(r.seq))
 	r.running, r.err = true, ""
-	r.asked = cloneDamage(m.damage)
-	spin := m.startSpinner() // before m is copied out
-	return m, tea.Batch(remediesCmd(m.v, cloneDamage(m.damage), r.seq, r.latest), spin)
+	r.asked = cloneDamage(r.damage)
+	return r, tea.Batch(remediesCmd(r.v, cloneDamage(r.damage), r.seq, r.latest), h.busy())
 }
 
-// takeRemedies keeps the newest request's options and logs them; any
-// other message is dropped.
-func (m model) takeRemedies(msg remedyMsg) (tea.Model, tea.Cmd) {
-	r := &m.rem
+// take keeps the newest request's options and logs them; any other
+// message is dropped.
+func (r remedyPanel) take(msg remedyMsg, h host) (remedyPanel, tea.Cmd) {
 	if msg.stale || msg.seq != r.seq || !r.running {
-		return m, nil
+		return r, nil
 	}
 	r.running = false
-	var cmds []tea.Cmd
+	var logged tea.Cmd
 	if msg.err != "" {
 		r.err = msg.err
-		cmds = append(cmds, m.addLog(m.now(), "righting options could not be worked out: engine failure: "+msg.err))
+		logged = h.say("righting options could not be worked out: engine failure: " + msg.err)
 	} else {
 		rs := msg.set
 		r.set, r.scroll = &rs, 0
-		cmds = append(cmds, m.addLog(m.now(), "righting options worked out: "+remedyLogLine(rs)))
+		logged = h.say("righting options worked out: " + remedyLogLine(rs))
 	}
-	if m.wantRep && m.reportReady() {
-		m.wantRep = false
-		cmds = append(cmds, m.writeReport())
-	}
-	return m, tea.Batch(cmds...)
+	return r, logged
 }
 
 // remedyLogLine sums the options up in a line for the event log.
@@ -162,23 +190,40 @@ func remedyLogLine(rs engine.RemedySet) string {
 	return s
 }
 
+// workingOn reports whether options are being worked out for damage
+// state d.
+func (r remedyPanel) workingOn(d engine.Damage) bool {
+	return r.running && sameDamage(r.asked, d)
+}
+
+// forReport returns the righting options for the report of assessment a:
+// those held, when they were worked out for its damage state; nil
+// otherwise.
+func (r remedyPanel) forReport(a *engine.Assessment) *engine.RemedySet {
+	if a == nil || !r.current(a.Damage) {
+		return nil
+	}
+	rs := *r.set
+	return &rs
+}
+
+// updateRemedies passes msg to the righting options' panel; once their
+// options are in, a report the report key left waiting for them is
+// written.
+func (m model) updateRemedies(msg tea.Msg) (tea.Model, tea.Cmd) {
+	was := m.rem.running
+	var cmd tea.Cmd
+	m.rem, cmd = m.rem.with(m).update(msg, &m)
+	if was && !m.rem.running && m.wantRep && m.reportReady() {
+		m.wantRep = false
+		cmd = tea.Batch(cmd, m.writeReport())
+	}
+	return m, cmd
+}
+
 // reportReady reports whether the report key can write now: the figures
 // shown are the newest, and no righting options are still being worked
 // out for that state (they go into the report once they are in).
 func (m model) reportReady() bool {
-	if m.pending() {
-		return false
-	}
-	return !(m.rem.running && sameDamage(m.rem.asked, m.damage))
-}
-
-// reportRemedies returns the righting options for the report of
-// assessment a: those held, when they were worked out for its damage
-// state; nil otherwise.
-func (m model) reportRemedies(a *engine.Assessment) *engine.RemedySet {
-	if a == nil || !m.rem.current(a.Damage) {
-		return nil
-	}
-	rs := *m.rem.set
-	return &rs
+	return !m.pending() && !m.rem.workingOn(m.damage)
 }

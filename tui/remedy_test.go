@@ -343,7 +343,7 @@ func TestRemedySmallSizes(t *testing.T) {
 		}
 		for w := 0; w <= 60; w += 5 {
 			for h := 0; h <= 20; h += 3 {
-				part := m.remedyPanel(w, h)
+				part := viewLines(m.rem.with(m).view(w, h))
 				if len(part) != h {
 					t.Errorf("%s: panel of %dx%d has %d lines", name, w, h, len(part))
 				}
@@ -356,8 +356,8 @@ func TestRemedySmallSizes(t *testing.T) {
 		}
 		// Scrolling past either end stays within the panel.
 		s := press(t, m, "]", "]", "]", "]", "]", "]", "]", "]", "]", "]")
-		if s.rem.scroll > s.remedyScrollMax() {
-			t.Errorf("%s: scrolled to %d, past %d", name, s.rem.scroll, s.remedyScrollMax())
+		if most := s.rem.with(s).scrollMax(); s.rem.scroll > most {
+			t.Errorf("%s: scrolled to %d, past %d", name, s.rem.scroll, most)
 		}
 		s = press(t, s, "[", "[", "[", "[", "[", "[", "[", "[", "[", "[", "[")
 		if s.rem.scroll != 0 {

@@ -28,15 +28,15 @@ const (
 // lowest opening as well, and the engine's summary stands above it.
 const remedyWideW = 110
 
-// remedyPanel draws the panel in w × h.
-func (p remedyState) view(w, h int) []string {
+// view draws the panel in w × h.
+func (p remedyPanel) view(w, h int) string {
 	head, body, foot := p.parts(w, h)
 	room := h - len(head) - len(foot)
 	if room < 1 {
 		// Too little room for a scrolling part: the head and the foot
 		// share it, the foot (the caution) kept.
 		keep := max(0, h-len(foot))
-		return fit(append(fit(head, w, keep), foot...), w, h)
+		return strings.Join(fit(append(fit(head, w, keep), foot...), w, h), "\n")
 	}
 	if len(body) > room {
 		first := min(p.scroll, len(body)-room)
@@ -45,27 +45,20 @@ func (p remedyState) view(w, h int) []string {
 		body = body[first:last]
 	}
 	out := append(append(head, body...), fit(nil, w, room-len(body))...)
-	return fit(append(out, foot...), w, h)
+	return strings.Join(fit(append(out, foot...), w, h), "\n")
 }
 
-// remedyScrollMax is how far the panel's scrolling part can be scrolled.
-func (m model) remedyScrollMax() int {
-	return m.rem.with(m).scrollMax(m.width, m.lay.bodyH)
-}
-
-// remedyPanel draws the righting options' panel in w × h.
-func (m model) remedyPanel(w, h int) []string { return m.rem.with(m).view(w, h) }
-
-// scrollMax is how far the panel's scrolling part can be scrolled in w × h.
-func (p remedyState) scrollMax(w, h int) int {
-	head, body, foot := p.parts(w, h)
-	return scrolled(len(body), body, h-len(head)-len(foot), 0)
+// scrollMax is how far the panel's scrolling part can be scrolled on the
+// screen's body.
+func (p remedyPanel) scrollMax() int {
+	head, body, foot := p.parts(p.w, p.h)
+	return scrolled(len(body), body, p.h-len(head)-len(foot), 0)
 }
 
 // remedyParts is the panel's fixed head, its scrolling body and its fixed
 // foot, for width w (h only decides how much of the summary stands in the
 // head).
-func (p remedyState) parts(w, h int) (head, body, foot []string) {
+func (p remedyPanel) parts(w, h int) (head, body, foot []string) {
 	st := p.st
 	r := p
 	title := []string{"RIGHTING OPTIONS"}
@@ -156,7 +149,7 @@ func (p remedyState) parts(w, h int) (head, body, foot []string) {
 // remedyLead says plainly what kind of heel it is, from the engine's
 // figures: a list, a loll (with the warning not to ballast the high side,
 // in the danger style), no action needed, or no floating position.
-func (p remedyState) lead(rs *engine.RemedySet, w int) []string {
+func (p remedyPanel) lead(rs *engine.RemedySet, w int) []string {
 	st := p.st
 	var out []string
 	add := func(s func(...string) string, text string) {
@@ -193,7 +186,7 @@ func (p remedyState) lead(rs *engine.RemedySet, w int) []string {
 		if math.Abs(rs.HeelDeg) < 0.005 {
 			where = "upright"
 		}
-		add(st.Value.Render, fmt.Sprintf("NO RIGHTING ACTION NEEDED: %s, upright GM %s m.", where, num(rs.UprightGMM, 2)))
+		add(st.Value.Render, fmt.Sprintf("NO RIGHTING ACTION NEEDED for list or loll: %s, upright GM %s m.", where, num(rs.UprightGMM, 2)))
 	}
 	return out
 }
@@ -201,7 +194,7 @@ func (p remedyState) lead(rs *engine.RemedySet, w int) []string {
 // remedyFoot is the caution, always on screen under the options: in full
 // (the report's words after a line of the panel's own) on a panel of 30
 // lines or more when it takes at most three lines, else in short.
-func (p remedyState) foot(w, h int) []string {
+func (p remedyPanel) foot(w, h int) []string {
 	var lines []string
 	if h >= 30 {
 		lines = append(wrap(remedyCautionLead, w), wrap(report.RemediesCaution, w)...)
@@ -248,7 +241,7 @@ func (c remedyCols) header() string {
 // comes to with its side, GM, the least freeboard to the deck edge (and
 // on a wide screen the upright GM and the lowest unprotected opening's
 // height), and whether it is advisable.
-func (p remedyState) row(c remedyCols, rank int, o engine.Remedy) []string {
+func (p remedyPanel) row(c remedyCols, rank int, o engine.Remedy) []string {
 	st := p.st
 	text := st.Text
 	if !o.Advisable {
@@ -319,7 +312,7 @@ func firstOf(s []string) string {
 
 // damageWords names a damage state for the panel's title: the
 // compartments open to the sea or holding water, or "intact".
-func (p remedyState) damageWords(d engine.Damage) string {
+func (p remedyPanel) damageWords(d engine.Damage) string {
 	var open []string
 	for i := range p.v.Compartments {
 		if i < len(d) && (d[i].Open || d[i].WaterM3 > 0) {

@@ -34,6 +34,14 @@ type Options struct {
 	// Start is the damage state the dashboard opens with (--open and
 	// --perm on the command line), undone with the undo key; nil: intact.
 	Start engine.Damage
+	// Base is the ship as her vessel file gives her, when the vessel shown
+	// is loaded with Condition over it; nil: the vessel shown is both.
+	Base      *engine.Vessel
+	Condition *vessels.Condition
+	// Resume is a saved state to take up at start (--resume): its
+	// readings (its condition and connections are on the vessel, its
+	// damage is Start).
+	Resume *vessels.State
 }
 
 // Run shows the dashboard for v until the officer quits. info, which may be
@@ -84,7 +92,7 @@ func (m model) writeReport() tea.Cmd {
 	made := m.now()
 	r := report.New(m.v, m.opts.VesselFile, *m.cur, made, m.opts.Version)
 	r.Condition = m.condition
-	r.Remedies = m.reportRemedies(m.cur)
+	r.Remedies = m.rem.forReport(m.cur)
 	if m.opts.VesselName != "" {
 		r.VesselName = m.opts.VesselName
 	}

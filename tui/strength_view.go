@@ -82,11 +82,14 @@ func (p girderPanel) intact() *engine.Strength {
 func (p girderPanel) view(w, h int) string {
 	st := p.st
 	s, why := p.strength()
-	set := "at sea"
-	if s != nil && s.Harbour {
-		set = "in harbour"
+	set := "limits at sea (l)"
+	switch {
+	case s != nil && !s.HasLimits():
+		set = "no limits in the file"
+	case s != nil && s.Harbour:
+		set = "limits in harbour (l)"
 	}
-	head := st.Heading.Render(titleFit(w, "HULL GIRDER", "limits "+set+" (l)", "still water, hogging +", "b closes"))
+	head := st.Heading.Render(titleFit(w, "HULL GIRDER", set, "still water, hogging +", "b closes"))
 	lines := []string{head}
 	if s == nil {
 		for _, l := range wrap("Shear force and bending moment: "+why+".", w) {

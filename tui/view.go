@@ -24,7 +24,7 @@ func (m model) View() string {
 	var lines []string
 	lines = append(lines, m.headerView(m.width))
 	if m.rem.show {
-		lines = append(lines, m.remedyPanel(m.width, l.bodyH)...)
+		lines = append(lines, strings.Split(m.rem.with(m).view(m.width, l.bodyH), "\n")...)
 	} else if l.wide {
 		lines = append(lines, m.wideBody()...)
 	} else {
@@ -115,6 +115,9 @@ func (m model) narrowBody() []string {
 	l := m.lay
 	sep := m.st.Dim.Render("│")
 	list := m.listView(l.listW, l.bodyH)
+	if m.cond.show {
+		return besides(sep, fit(list, l.listW, l.bodyH), fit(m.conditionLines(l.rightW, l.bodyH), l.rightW, l.bodyH))
+	}
 	if m.rd.show {
 		return besides(sep, fit(list, l.listW, l.bodyH), fit(m.readingLines(l.rightW, l.bodyH), l.rightW, l.bodyH))
 	}
@@ -125,7 +128,7 @@ func (m model) narrowBody() []string {
 		return besides(sep, fit(list, l.listW, l.bodyH), fit(m.doorsLines(l.rightW, l.bodyH), l.rightW, l.bodyH))
 	}
 	if m.flood.show {
-		return besides(sep, fit(list, l.listW, l.bodyH), m.floodPanel(l.rightW, l.bodyH))
+		return besides(sep, fit(list, l.listW, l.bodyH), strings.Split(m.flood.with(m).view(l.rightW, l.bodyH), "\n"))
 	}
 	right := fit(m.figuresView(min(l.rightW, maxFigWidth)), l.rightW, figLines)
 	if m.noPosition() {
@@ -150,10 +153,14 @@ func (m model) sheetView(w, h int) []string {
 	return fit(m.pictureView(m.picture, w, h), w, h)
 }
 
+// sectionPicture is the section as View draws it, drawn again only when it
+// changed.
+func (m model) sectionPicture(w, h int) []string { return m.cached(picSection, w, h, m.sectionView) }
+
 func (m model) pictureView(which, w, h int) []string {
 	switch which {
 	case picSection:
-		return m.cached(picSection, w, h, m.sectionView)
+		return m.sectionPicture(w, h)
 	case picProfile:
 		return m.cached(picProfile, w, h, m.profileView)
 	case picGZ:
@@ -192,6 +199,8 @@ func (m model) wideBody() []string {
 	rule := m.st.Dim.Render(strings.Repeat("─", m.width))
 	var pics []string
 	switch {
+	case m.cond.show:
+		pics = m.conditionLines(m.width, l.picH)
 	case m.rd.show:
 		pics = m.readingLines(m.width, l.picH)
 	case m.girder.show:
@@ -199,14 +208,14 @@ func (m model) wideBody() []string {
 	case m.doors.show:
 		pics = m.doorsLines(m.width, l.picH)
 	case m.flood.show:
-		pics = m.floodRow(m.width, l.picH)
+		pics = strings.Split(m.flood.with(m).row(m.width, l.picH, m.sectionPicture), "\n")
 	case m.noPosition():
 		pics = m.bannerView(m.width, l.picH)
 	case m.handShown().hasWorking():
 		pics = m.handShown().view(m.width, l.picH, false)
 	default:
 		pics = besides(sep,
-			fit(m.cached(picSection, l.picW[0], l.picH, m.sectionView), l.picW[0], l.picH),
+			fit(m.sectionPicture(l.picW[0], l.picH), l.picW[0], l.picH),
 			fit(m.cached(picProfile, l.picW[1], l.picH, m.profileView), l.picW[1], l.picH),
 			fit(m.cached(picGZ, l.picW[2], l.picH, m.gzView), l.picW[2], l.picH))
 	}

@@ -40,6 +40,9 @@ type CompartmentInfo struct {
 	Hole  *engine.Hole // a hole in the shell into this compartment (C_d filled in), nil if none
 	// PumpM3h is the pumping capacity that can be put on the compartment, m³/h.
 	PumpM3h float64
+	// SoundingPipe is where the tank is sounded (sounding_pipe), nil for
+	// its middle (engine.DefaultSoundingPipe).
+	SoundingPipe *engine.SoundingPipe
 	// DefaultPermeabilityFromUse is true when the file gave no permeability
 	// and the compartment's μ is the default of its use.
 	DefaultPermeabilityFromUse bool
@@ -441,6 +444,7 @@ func (r *reader) compartments(ts []*table, hull *engine.Hull) ([]*engine.Compart
 			}
 			ci.PumpM3h = p
 		}
+		ci.SoundingPipe = r.soundingPipe(t, box, xOK && yOK && zOK)
 		t.finish()
 		if hull == nil || !(xOK && yOK && zOK) {
 			continue

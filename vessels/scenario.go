@@ -25,14 +25,20 @@ var scenarioFS embed.FS
 
 // Scenario is a drill's scenario as read.
 type Scenario struct {
-	File      string // as given in messages ("scenarios/freighter-night.toml" for a bundled one)
-	Name      string // the name key, or the file's base name
-	About     string // free text: the story, for the instructor
-	VesselRef string // the vessel key as written
-	Vessel    *engine.Vessel
-	Info      *Info
-	Minutes   float64 // the exercise's length in scenario time
-	Seed      int64   // the reading errors' seed (default 1)
+	File  string // as given in messages ("scenarios/freighter-night.toml" for a bundled one)
+	Name  string // the name key, or the file's base name
+	About string // free text: the story, for the instructor
+	// VesselRef is the vessel: a bundled vessel's name, else the vessel
+	// file's path made absolute (so that a drill's log, written anywhere,
+	// names the same file).
+	VesselRef string
+	// ConditionRef is the condition file's path made absolute ("" when
+	// the vessel file's own loading condition is used).
+	ConditionRef string
+	Vessel       *engine.Vessel
+	Info         *Info
+	Minutes      float64 // the exercise's length in scenario time
+	Seed         int64   // the reading errors' seed (default 1)
 	// Alarms are the compartments fitted with a high-level (bilge) alarm:
 	// it sounds when the water there first stands AlarmLevelM above the
 	// compartment's lowest point.
@@ -46,7 +52,12 @@ type Scenario struct {
 const AlarmLevelM = 0.2
 
 // ScenarioKinds are the kinds of [[event]].
-var ScenarioKinds = []string{"breach", "pump", "connection", "note", "report", "mark"}
+var ScenarioKinds = []string{"breach", "pump", "connection", "note", "report", "mark", "counterflood"}
+
+// CounterfloodAreaM2 is the area of the sea inlet a counter-flooding
+// opens when the scenario or the crew gives none: 0.03 m², about the bore
+// of a 200 mm sea valve (practice).
+const CounterfloodAreaM2 = 0.03
 
 // BundledScenario is one scenario shipped with heelwatch.
 type BundledScenario struct{ Name, Title string }
@@ -148,6 +159,7 @@ func ParseScenario(file string, data []byte, dir string) (*Scenario, error) {
 		}
 	}
 	ref, refOK := root.str("vessel", true, `a bundled vessel's name ("freighter") or a vessel file's path`)
+	condRef, condOK := root.str("condition", false, "a condition file's path (the loading condition at the start)")
 	alarmsRaw, hasAlarms := root.get("alarms")
 	evs := root.entries("event", "one event of the exercise")
 	root.finish()
@@ -157,6 +169,9 @@ func ParseScenario(file string, data []byte, dir string) (*Scenario, error) {
 		if _, bundled := Source(ref); !bundled && dir != "" && !filepath.IsAbs(ref) {
 			p = filepath.Join(dir, ref)
 		}
+		if _, bundled := Source(ref); !bundled {
+			sc.VesselRef = absPath(p)
+		}
 		v, info, err := Open(p)
 		if err != nil {
 			if ps, ok := err.(Problems); ok {
@@ -165,6 +180,27 @@ func ParseScenario(file string, data []byte, dir string) (*Scenario, error) {
 			r.addf("vessel", "%v", err)
 		} else {
 			sc.Vessel, sc.Info = v, info
+		}
+	}
+	if sc.Vessel != nil && condOK {
+		p := condRef
+		if dir != "" && !filepath.IsAbs(p) {
+			p = filepath.Join(dir, p)
+		}
+		sc.ConditionRef = absPath(p)
+		c, err := LoadCondition(p, sc.Vessel, sc.Info)
+		if ps, ok := err.(Problems); ok {
+			return nil, append(r.probs, ps...)
+		}
+		if err == nil {
+			var v *engine.Vessel
+			if v, err = c.Apply(sc.Vessel); err == nil {
+				sc.Vessel = v
+			}
+		}
+		if err != nil {
+			r.addf("condition", "%v", err)
+			sc.Vessel = nil
 		}
 	}
 	if sc.Vessel == nil {
@@ -263,7 +299,7 @@ func (r *reader) scenarioEvent(t *table, sc *Scenario) (engine.DrillEvent, bool)
 			ok = false
 		}
 	}
-	wantComp := kind == "breach" || kind == "pump" || kind == "mark" || kind == ""
+	wantComp := kind == "breach" || kind == "pump" || kind == "mark" || kind == "counterflood" || kind == ""
 	if cn, has := t.str("compartment", wantComp && kOK, "the compartment's name"); has {
 		e.Compartment = r.compartmentNamed(t.keyPath("compartment"), cn, v)
 		ok = ok && e.Compartment >= 0
@@ -272,6 +308,9 @@ func (r *reader) scenarioEvent(t *table, sc *Scenario) (engine.DrillEvent, bool)
 	}
 	var k eventKeys
 	k.area, k.aOK = t.num("area", "m², the hole's area", kind == "breach")
+	if kind == "counterflood" && !k.aOK && !t.has("area") {
+		k.area, k.aOK = CounterfloodAreaM2, true
+	}
 	k.z, k.zOK = t.num("z", "m, the height of the hole's centre above the baseline", false)
 	k.cd, k.cdOK = t.num("cd", "the hole's discharge coefficient", false)
 	k.state, k.sOK = t.choice("state", kind == "pump", []string{"starts", "fails", "stops"})
@@ -280,15 +319,15 @@ func (r *reader) scenarioEvent(t *table, sc *Scenario) (engine.DrillEvent, bool)
 	k.open, k.openOK = t.boolean("open")
 	k.flooded, k.fOK = t.boolean("flooded")
 	t.finish()
-	for _, key := range []string{"area", "z", "cd"} {
+	need("area", kind == "breach" || kind == "counterflood")
+	for _, key := range []string{"z", "cd"} {
 		need(key, kind == "breach")
 	}
 	for _, key := range []string{"state", "capacity_m3h"} {
 		need(key, kind == "pump")
 	}
-	for _, key := range []string{"connection", "open"} {
-		need(key, kind == "connection")
-	}
+	need("connection", kind == "connection")
+	need("open", kind == "connection" || kind == "counterflood")
 	need("flooded", kind == "mark")
 	if !kOK {
 		return e, false
@@ -386,6 +425,22 @@ func (r *reader) scenarioKind(t *table, sc *Scenario, e *engine.DrillEvent, kind
 			r.addf(t.keyPath("text"), "missing: a %s says something to the crew: give its text", kind)
 			return false
 		}
+	case "counterflood":
+		e.Kind = engine.DrillCounterflood
+		if !k.aOK || e.Compartment < 0 {
+			return false
+		}
+		if !k.openOK {
+			r.addf(t.keyPath("open"), "missing: say open = true (the sea inlet opened) or open = false (shut)")
+			return false
+		}
+		e.Open = k.open
+		h, err := CounterfloodInlet(v, e.Compartment, k.area)
+		if err != nil {
+			r.addf(t.keyPath("area"), "%v", err)
+			return false
+		}
+		e.Hole = h
 	case "mark":
 		e.Kind = engine.DrillMark
 		if e.Compartment < 0 {
@@ -413,4 +468,22 @@ func (sc *Scenario) Setup(extra ...engine.DrillEvent) engine.DrillSetup {
 		}
 	}
 	return engine.DrillSetup{Vessel: sc.Vessel, Events: ev, EndMin: sc.Minutes, Alarms: sc.Alarms, AlarmLevel: AlarmLevelM, PumpM3h: pumps}
+}
+
+// CounterfloodInlet is the sea inlet that counter-floods compartment ci:
+// area m² (above 0, at most MaxHoleM2) at the compartment's lowest point
+// in the shell (engine.ShellHole), C_d that of a sharp-edged orifice.
+func CounterfloodInlet(v *engine.Vessel, ci int, area float64) (engine.Hole, error) {
+	if !(area > 0 && area <= MaxHoleM2) {
+		return engine.Hole{}, fmt.Errorf("a sea inlet's area %g m² must be above zero and at most %d m²", area, MaxHoleM2)
+	}
+	return engine.ShellHole(v, ci, area, math.NaN(), engine.DefaultDischargeCoefficient)
+}
+
+// absPath returns p made absolute, or p itself if that cannot be done.
+func absPath(p string) string {
+	if a, err := filepath.Abs(p); err == nil {
+		return a
+	}
+	return p
 }

@@ -1,15 +1,34 @@
 package vessels
 
-import "heelwatch/engine"
+import (
+	"fmt"
+	"strings"
+
+	"heelwatch/engine"
+)
 
 // This file is where a scenario meets the vessel's connections between
-// compartments. This vessel model has none yet, so a connection event
-// names nothing; it is kept apart so that it changes in one place when
-// connections arrive.
+// compartments ([[connection]]): a connection event names one.
 
-// connectionNamed returns the vessel's connection called name (ignoring
-// case) and whether there is one.
-func connectionNamed(v *engine.Vessel, name string) (string, bool) { return "", false }
+// connectionNamed returns the name of the vessel's connection called name
+// (ignoring case) and whether there is one.
+func connectionNamed(v *engine.Vessel, name string) (string, bool) {
+	for _, c := range v.Connections {
+		if strings.EqualFold(strings.TrimSpace(c.Name), strings.TrimSpace(name)) {
+			return c.Name, true
+		}
+	}
+	return "", false
+}
 
 // connectionList says which connections the vessel has, for a message.
-func connectionList(v *engine.Vessel) string { return " (it has no connections)" }
+func connectionList(v *engine.Vessel) string {
+	if len(v.Connections) == 0 {
+		return " (it has no connections)"
+	}
+	var names []string
+	for _, c := range v.Connections {
+		names = append(names, c.Name)
+	}
+	return fmt.Sprintf(": %s", quotedList(names))
+}

@@ -2,6 +2,8 @@ package vessels_test
 
 import (
 	"errors"
+	"os"
+	"path/filepath"
 	"strings"
 	"testing"
 
@@ -86,5 +88,85 @@ func TestScenarioRefused(t *testing.T) {
 			}
 			t.Errorf("no problem at %s in:\n%v", c.key, err)
 		})
+	}
+}
+
+// FuzzParseScenario: whatever the bytes, the scenario reader returns a
+// scenario or an error, never a panic, and every problem names its file.
+//
+//	go test ./vessels -run '^$' -fuzz FuzzParseScenario -fuzztime 10s
+func FuzzParseScenario(f *testing.F) {
+	for _, b := range vessels.BundledScenarios() {
+		sc, err := vessels.OpenScenario(b.Name)
+		if err != nil {
+			f.Fatal(err)
+		}
+		_ = sc
+	}
+	f.Add([]byte(goodHead + "[[event]]\nminutes = 1\nkind = \"breach\"\ncompartment = \"Hold 1\"\narea = 0.1\nz = 2\n"))
+	f.Add([]byte(goodHead + "alarms = [\"Hold 2\"]\n[[event]]\nminutes = 2\nkind = \"counterflood\"\ncompartment = \"Wing tank 2 P\"\nopen = true\n"))
+	f.Add([]byte(goodHead + "[[event]]\nminutes = 2\nkind = \"connection\"\nconnection = \"WT door ER/stores\"\nopen = true\n"))
+	f.Add([]byte(goodHead + "[[event]]\nminutes = 2\nkind = \"pump\"\ncompartment = \"Hold 2\"\nstate = \"starts\"\n"))
+	f.Fuzz(func(t *testing.T, data []byte) {
+		sc, err := vessels.ParseScenario("fuzz.toml", data, "")
+		if err != nil {
+			var ps vessels.Problems
+			if errors.As(err, &ps) {
+				for _, p := range ps {
+					if p.File != "fuzz.toml" && !strings.HasPrefix(p.File, "bundled/") {
+						t.Fatalf("problem without the file: %v", p)
+					}
+				}
+			}
+			return
+		}
+		if sc.Vessel == nil || !(sc.Minutes > 0) {
+			t.Fatalf("a scenario without vessel or length: %+v", sc)
+		}
+	})
+}
+
+// TestScenarioVesselBesideIt: a vessel file named by a relative path is
+// read from the scenario file's folder, and a problem in that vessel file
+// is reported with the vessel file's own name and line.
+func TestScenarioVesselBesideIt(t *testing.T) {
+	dir := t.TempDir()
+	src, _ := vessels.Source("barge")
+	if err := os.WriteFile(filepath.Join(dir, "ship.toml"), src, 0o644); err != nil {
+		t.Fatal(err)
+	}
+	p := filepath.Join(dir, "drill.toml")
+	if err := os.WriteFile(p, []byte("format = 1\nvessel = \"ship.toml\"\nminutes = 10\n"), 0o644); err != nil {
+		t.Fatal(err)
+	}
+	sc, err := vessels.OpenScenario(p)
+	if err != nil {
+		t.Fatal(err)
+	}
+	if sc.Vessel == nil || sc.VesselRef != filepath.Join(dir, "ship.toml") {
+		t.Fatalf("%+v", sc)
+	}
+	// A condition file beside it too.
+	cond := "format = 1\nname = \"Light\"\nkeep = [\"Lightship\"]\n"
+	if err := os.WriteFile(filepath.Join(dir, "light.toml"), []byte(cond), 0o644); err != nil {
+		t.Fatal(err)
+	}
+	if err := os.WriteFile(p, []byte("format = 1\nvessel = \"ship.toml\"\ncondition = \"light.toml\"\nminutes = 10\n"), 0o644); err != nil {
+		t.Fatal(err)
+	}
+	withCond, err := vessels.OpenScenario(p)
+	if err != nil {
+		t.Logf("condition: %v", err)
+	} else if withCond.ConditionRef != filepath.Join(dir, "light.toml") {
+		t.Errorf("condition %q", withCond.ConditionRef)
+	}
+	bad := strings.Replace(string(src), "format = 1", "format = 1\nwater_density = \"salty\"", 1)
+	if err := os.WriteFile(filepath.Join(dir, "ship.toml"), []byte(bad), 0o644); err != nil {
+		t.Fatal(err)
+	}
+	_, err = vessels.OpenScenario(p)
+	var ps vessels.Problems
+	if !errors.As(err, &ps) || !strings.HasSuffix(ps[0].File, "ship.toml") || ps[0].Key != "water_density" {
+		t.Errorf("got %v", err)
 	}
 }

@@ -26,6 +26,7 @@ the intact criteria (pass or FAIL, figure and margin), the hull volume
 below the deck that no compartment holds (a warning above 1 %%), and holes
 that are not on the shell (more than 0.05 m from it) or not in their
 compartment; and the openings that lead to no compartment (no leads_to).
+With --condition FILE each ship is checked loaded to that condition file.
 
 Exit status: 0 every file is good and floats intact; 1 a file has problems;
 2 bad usage; 3 a good file whose loading condition does not float intact.
@@ -36,6 +37,7 @@ func runCheck(args []string, stdout, stderr io.Writer) int {
 	fs.SetOutput(stderr)
 	fs.Usage = func() {}
 	vessel := fs.String("vessel", "", "")
+	condition := fs.String("condition", "", "")
 	help := func(w io.Writer) { fmt.Fprintf(w, checkHelp, vessels.Default) }
 	files, err := parseInterleaved(fs, args)
 	if err != nil {
@@ -50,6 +52,9 @@ func runCheck(args []string, stdout, stderr io.Writer) int {
 			fmt.Fprintln(stdout)
 		}
 		v, info, status := openVessel(f, stderr)
+		if status == exitOK {
+			v, _, status = withCondition(v, info, *condition, stderr)
+		}
 		if status == exitOK {
 			status = summarise(stdout, v, info)
 		}
@@ -121,7 +126,11 @@ func summarise(w io.Writer, v *engine.Vessel, info *vessels.Info) int {
 			wt++
 		}
 	}
-	fmt.Fprintf(tw, "  openings\t%d (%d closed weathertight); margin line %.3f m below the deck at side\n", len(v.Openings), wt, v.MarginLineM)
+	margin := "" // a passenger-ship notion: the ferry's, not a cargo ship's
+	if v.Passenger() {
+		margin = fmt.Sprintf("; margin line %.3f m below the deck at side", v.MarginLineM)
+	}
+	fmt.Fprintf(tw, "  openings\t%d (%d closed weathertight)%s\n", len(v.Openings), wt, margin)
 	crit := "none"
 	if len(v.CriteriaSets) > 0 {
 		crit = strings.Join(v.CriteriaSets, ", ")

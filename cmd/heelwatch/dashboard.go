@@ -10,6 +10,7 @@ import (
 	"heelwatch/engine"
 	"heelwatch/report"
 	"heelwatch/tui"
+	"heelwatch/vessels"
 )
 
 // dashboardOptions are the top-level flags that only the dashboard uses.
@@ -19,6 +20,8 @@ type dashboardOptions struct {
 	reportDir string
 	open      listFlag // compartments open to the sea at start
 	perm      permFlag // their permeabilities
+	condition string   // --condition FILE
+	resume    string   // --resume FILE: a state saved from the dashboard
 }
 
 // interactive reports whether the dashboard can run: standard input and
@@ -47,18 +50,44 @@ func runDashboard(vessel string, o dashboardOptions, stdout, stderr io.Writer) i
 			return exitFailed
 		}
 	}
-	v, info, status := openVessel(vessel, stderr)
+	if o.resume != "" && (o.condition != "" || len(o.open) > 0) {
+		fmt.Fprintln(stderr, "heelwatch: --resume takes up a saved state with its own condition and damage: give --resume alone, or --condition and --open")
+		return exitUsage
+	}
+	if o.resume != "" && vessel == "" {
+		var err error
+		if vessel, err = vessels.StateVessel(o.resume); err != nil {
+			fmt.Fprintln(stderr, "heelwatch:", err)
+			return exitInput
+		}
+	}
+	base, info, status := openVessel(vessel, stderr)
 	if status != exitOK {
 		return status
+	}
+	v, cond, status := withCondition(base, info, o.condition, stderr)
+	if status != exitOK {
+		return status
+	}
+	var resume *vessels.State
+	if o.resume != "" {
+		if v, resume, status = resumeState(base, info, o.resume, stderr); status != exitOK {
+			return status
+		}
+		cond = resume.Condition
 	}
 	start, msg := damageOf(v, o.open, o.perm)
 	if msg != "" {
 		fmt.Fprintln(stderr, "heelwatch:", msg)
 		return exitUsage
 	}
+	if resume != nil {
+		start = resume.Damage
+	}
 	if interactive(stdout) {
 		err := tui.Run(v, info, tui.Options{LogFile: o.logFile, Palette: o.palette,
-			VesselFile: source(info), ReportDir: o.reportDir, Version: version, Start: start})
+			VesselFile: source(info), ReportDir: o.reportDir, Version: version, Start: start,
+			Base: base, Condition: cond, Resume: resume})
 		if err != nil {
 			fmt.Fprintln(stderr, "heelwatch:", err)
 			return exitFailed
@@ -69,10 +98,15 @@ func runDashboard(vessel string, o dashboardOptions, stdout, stderr io.Writer) i
 	r := report.New(v, source(info), a, now(), version)
 	r.Condition = info.Condition
 	r.Open = inOrderGiven(v, o.open)
+	if resume != nil {
+		r.Open = openIn(v, start)
+	}
 	if err := report.Text(stdout, r); err != nil {
 		return exitFailed
 	}
-	if len(o.open) > 0 {
+	if resume != nil {
+		fmt.Fprintln(stdout, "\nNot a terminal, so no dashboard: this is the state taken up with --resume.")
+	} else if len(o.open) > 0 {
 		fmt.Fprintln(stdout, "\nNot a terminal, so no dashboard: this is the damage case given with --open.")
 	} else {
 		fmt.Fprintln(stdout, "\nNot a terminal, so no dashboard: this is the intact condition. 'heelwatch solve --open NAME' solves a damage case.")

@@ -18,6 +18,8 @@ Usage:
 
 Flags:
   --vessel FILE|NAME  the vessel file, or a bundled vessel's name (default %q)
+  --condition FILE    a condition file in place of the vessel file's loading
+                      condition (weights; tanks by fill, m³, tonnes or sounding)
   --readings FILE     the readings: drafts at the marks, heel, soundings, each
                       [[reading]] at its minutes (see README, "Readings and
                       diagnosis")
@@ -39,6 +41,7 @@ func runDiagnose(args []string, stdout, stderr io.Writer) int {
 	fs.SetOutput(stderr)
 	fs.Usage = func() {}
 	vessel := fs.String("vessel", vessels.Default, "")
+	condition := fs.String("condition", "", "")
 	readings := fs.String("readings", "", "")
 	format := fs.String("format", "text", "")
 	help := func(w io.Writer) { fmt.Fprintf(w, diagnoseHelp, vessels.Default) }
@@ -61,6 +64,9 @@ func runDiagnose(args []string, stdout, stderr io.Writer) int {
 	}
 	v, info, status := openVessel(*vessel, stderr)
 	if status != exitOK {
+		return status
+	}
+	if v, _, status = withCondition(v, info, *condition, stderr); status != exitOK {
 		return status
 	}
 	rs, err := vessels.LoadReadings(*readings, v)
@@ -102,6 +108,8 @@ func diagnose(v *engine.Vessel, info *vessels.Info, rs []engine.Reading) (report
 		d.TrendNote = "needs readings at two or more times"
 	case len(res.Explanations) == 0 || len(res.Explanations[0].Spaces) == 0:
 		d.TrendNote = "the best explanation floods nothing"
+	case !res.Fits:
+		d.TrendNote = "nothing fits the latest reading, so there is no rate to trust"
 	default:
 		t, err := engine.EstimateTrend(v, rs, res.Explanations[0], info.TrendOptions())
 		if err != nil {

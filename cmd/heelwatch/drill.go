@@ -33,7 +33,8 @@ Flags:
   --speed N        dashboard: scenario minutes per real minute at the start
                    (1 = real time, default 10; the instructor changes it)
   --log FILE       dashboard: write the drill's log (a scenario file that replays
-                   it) to FILE after every change, and at the end
+                   it) to FILE after every change, and at the end; the debrief
+                   is written beside it (FILE.debrief.md, .toml dropped)
 
 Exit status: 0 done; 1 bad scenario or vessel file (file, line and key named);
 2 bad usage; 3 she sinks or capsizes in the drill.
@@ -80,7 +81,7 @@ func runDrill(args []string, stdout, stderr io.Writer) int {
 		fmt.Fprintln(stderr, err)
 		return exitFailed
 	}
-	dr := report.Drill{Scenario: sc.Name, File: sc.File, VesselRef: sc.VesselRef, About: sc.About, Seed: sc.Seed,
+	dr := report.Drill{Scenario: sc.Name, File: sc.File, VesselRef: sc.VesselRef, ConditionRef: sc.ConditionRef, About: sc.About, Seed: sc.Seed,
 		Alarms: sc.Alarms, Version: version, AlarmLevel: vessels.AlarmLevelM}
 	switch {
 	case *runIt:

@@ -127,3 +127,39 @@ func TestDrillBadScenario(t *testing.T) {
 		t.Errorf("exit %d, stderr %q", code, errb.String())
 	}
 }
+
+// TestDrillDebriefAndLoss: --debrief prints the Markdown debrief of a
+// bundled scenario; a drill in which she is lost ends "capsizes" or
+// "sinks" with exit 3, its last row without figures (null).
+func TestDrillDebriefAndLoss(t *testing.T) {
+	var out, errb bytes.Buffer
+	if code := run([]string{"drill", "ferry-collision", "--debrief"}, &out, &errb); code != exitOK {
+		t.Fatalf("exit %d: %s", code, errb.String())
+	}
+	for _, want := range []string{"# Drill debrief: ", "## How it ended", "## What was flooding", "## Decisions and their effect", "## Timeline", "Wing void S"} {
+		if !strings.Contains(out.String(), want) {
+			t.Errorf("debrief lacks %q", want)
+		}
+	}
+	dir := t.TempDir()
+	p := filepath.Join(dir, "lost.toml")
+	src := "format = 1\nvessel = \"freighter\"\nminutes = 30\n"
+	for _, c := range []string{"Hold 1", "Hold 2", "Engine room"} {
+		src += "[[event]]\nminutes = 1\nkind = \"breach\"\narea = 3\ncompartment = \"" + c + "\"\n"
+	}
+	if err := os.WriteFile(p, []byte(src), 0o644); err != nil {
+		t.Fatal(err)
+	}
+	out.Reset()
+	if code := run([]string{"drill", p, "--run", "--format", "json"}, &out, &errb); code != exitNoEq {
+		t.Fatalf("exit %d, want %d: %s", code, exitNoEq, errb.String())
+	}
+	var tl drillTimeline
+	if err := json.Unmarshal(out.Bytes(), &tl); err != nil {
+		t.Fatal(err)
+	}
+	last := tl.Timeline[len(tl.Timeline)-1]
+	if (tl.End != "capsizes" && tl.End != "sinks") || last.HeelDeg != nil || !strings.HasPrefix(last.Event, "end ") {
+		t.Errorf("end %q, last row %+v", tl.End, last)
+	}
+}

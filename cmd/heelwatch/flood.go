@@ -22,6 +22,8 @@ Usage:
 
 Flags:
   --vessel FILE|NAME   the vessel file, or a bundled vessel's name (default %q)
+  --condition FILE     a condition file in place of the vessel file's loading
+                       condition (weights; tanks by fill, m³, tonnes or sounding)
   --hole NAME[:AREA[:Z]]
                        the compartment that floods and its hole: AREA in m², Z the
                        height of its centre above the baseline in m. The hole is in
@@ -67,6 +69,7 @@ func runFlood(args []string, stdout, stderr io.Writer) int {
 	fs.SetOutput(stderr)
 	fs.Usage = func() {}
 	vessel := fs.String("vessel", vessels.Default, "")
+	condition := fs.String("condition", "", "")
 	var holes, pumps pumpFlag
 	fs.Var(&holes, "hole", "")
 	fs.Var(&pumps, "pump", "")
@@ -109,6 +112,9 @@ func runFlood(args []string, stdout, stderr io.Writer) int {
 
 	v, info, status := openVessel(*vessel, stderr)
 	if status != exitOK {
+		return status
+	}
+	if v, _, status = withCondition(v, info, *condition, stderr); status != exitOK {
 		return status
 	}
 	v, msg := applyConnections(v, conns)

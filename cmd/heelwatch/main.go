@@ -64,6 +64,11 @@ Usage:
 Flags:
   --vessel FILE|NAME   the vessel: a TOML vessel file, or a bundled vessel's
                        name (default %q; see 'heelwatch vessels')
+  --condition FILE     a condition file (weights; tanks by fill, m³, tonnes or
+                       sounding) in place of the vessel file's loading condition,
+                       for the dashboard and every command that reads a ship
+  --resume FILE        dashboard: take up a state saved with its S key (condition,
+                       damage, doors, readings); --vessel defaults to the state's
   --log FILE           dashboard: append every change (time, heel, drafts) to
                        FILE as it happens, synced, so nothing is lost
   --palette NAME       dashboard: day (default), night (dim red, keeps night
@@ -95,6 +100,8 @@ func run(args []string, stdout, stderr io.Writer) int {
 	fs.StringVar(&dash.logFile, "log", "", "")
 	fs.StringVar(&dash.palette, "palette", "day", "")
 	fs.StringVar(&dash.reportDir, "reports", "", "")
+	fs.StringVar(&dash.condition, "condition", "", "")
+	fs.StringVar(&dash.resume, "resume", "", "")
 	fs.Var(&dash.open, "open", "")
 	fs.Var(&dash.perm, "perm", "")
 	if err := fs.Parse(args); err != nil {
@@ -113,11 +120,17 @@ func run(args []string, stdout, stderr io.Writer) int {
 		return exitUsage
 	}
 	cmd, rest := rest[0], rest[1:]
-	withVessel := func(a []string) []string {
-		if *vessel == "" {
+	withCondition := func(a []string) []string {
+		if dash.condition == "" {
 			return a
 		}
-		return append([]string{"--vessel", *vessel}, a...)
+		return append([]string{"--condition", dash.condition}, a...)
+	}
+	withVessel := func(a []string) []string {
+		if *vessel == "" {
+			return withCondition(a)
+		}
+		return append([]string{"--vessel", *vessel}, withCondition(a)...)
 	}
 	switch cmd {
 	case "solve":

@@ -19,6 +19,8 @@ Usage:
 
 Flags:
   --vessel FILE|NAME  the vessel file, or a bundled vessel's name (default %q)
+  --condition FILE    a condition file in place of the vessel file's loading
+                      condition (weights; tanks by fill, m³, tonnes or sounding)
   --open A,B          compartments open to the sea (lost buoyancy), by the names
                       in the vessel file (case does not matter); repeat the flag
                       or separate with commas
@@ -61,6 +63,7 @@ func runSolve(args []string, stdout, stderr io.Writer) int {
 	fs.SetOutput(stderr)
 	fs.Usage = func() {}
 	vessel := fs.String("vessel", vessels.Default, "")
+	condition := fs.String("condition", "", "")
 	var open, conns listFlag
 	var perm permFlag
 	fs.Var(&open, "open", "")
@@ -85,6 +88,9 @@ func runSolve(args []string, stdout, stderr io.Writer) int {
 
 	v, info, status := openVessel(*vessel, stderr)
 	if status != exitOK {
+		return status
+	}
+	if v, _, status = withCondition(v, info, *condition, stderr); status != exitOK {
 		return status
 	}
 	v, msg := applyConnections(v, conns)

@@ -254,4 +254,3 @@ func runTables(args []string, stdout, stderr io.Writer) int {
 	}
 	return exitOK
 }
-

@@ -1,0 +1,91 @@
+package main
+
+import (
+	"errors"
+	"fmt"
+	"io"
+	"path/filepath"
+	"strings"
+
+	"heelwatch/engine"
+	"heelwatch/vessels"
+)
+
+// withCondition loads the ship v with the condition file at path ("" for
+// none: v as it is). On failure it prints every problem to stderr and
+// returns the exit status to end with. The condition's name (else its
+// file's name) becomes info's condition.
+func withCondition(v *engine.Vessel, info *vessels.Info, path string, stderr io.Writer) (*engine.Vessel, *vessels.Condition, int) {
+	if path == "" {
+		return v, nil, exitOK
+	}
+	c, err := vessels.LoadCondition(path, v, info)
+	var nv *engine.Vessel
+	if err == nil {
+		nv, err = c.Apply(v)
+	}
+	if err != nil {
+		var ps vessels.Problems
+		if errors.As(err, &ps) {
+			for _, p := range ps {
+				fmt.Fprintln(stderr, p.String())
+			}
+			fmt.Fprintf(stderr, "heelwatch: %s: %s; nothing was computed\n", path, plural(len(ps), "problem"))
+		} else {
+			fmt.Fprintf(stderr, "heelwatch: condition %s: %v; nothing was computed\n", path, err)
+		}
+		return nil, nil, exitInput
+	}
+	if info != nil {
+		info.Condition = c.Name
+		if info.Condition == "" {
+			info.Condition = strings.TrimSuffix(filepath.Base(path), filepath.Ext(path))
+		}
+	}
+	return nv, c, exitOK
+}
+
+// resumeState loads the ship base with the state file at path (its
+// condition and its connections' states) for the dashboard to take up.
+func resumeState(base *engine.Vessel, info *vessels.Info, path string, stderr io.Writer) (*engine.Vessel, *vessels.State, int) {
+	s, err := vessels.LoadState(path, base, info)
+	var v *engine.Vessel
+	if err == nil {
+		v, err = s.Condition.Apply(base)
+	}
+	if err != nil {
+		var ps vessels.Problems
+		if errors.As(err, &ps) {
+			for _, p := range ps {
+				fmt.Fprintln(stderr, p.String())
+			}
+			fmt.Fprintf(stderr, "heelwatch: %s: %s; nothing was taken up\n", path, plural(len(ps), "problem"))
+		} else {
+			fmt.Fprintf(stderr, "heelwatch: --resume %s: %v\n", path, err)
+		}
+		return nil, nil, exitInput
+	}
+	for i, open := range s.ConnectionsOpen {
+		if v.Connections[i].Open != open {
+			v = v.WithConnection(i, open)
+		}
+	}
+	if info != nil {
+		info.Condition = s.Condition.Name
+		if info.Condition == "" {
+			info.Condition = strings.TrimSuffix(filepath.Base(path), filepath.Ext(path))
+		}
+	}
+	return v, s, exitOK
+}
+
+// openIn names the compartments open to the sea in d, in the ship's order.
+func openIn(v *engine.Vessel, d engine.Damage) []string {
+	out := []string{}
+	for i, s := range d {
+		if s.Open {
+			out = append(out, v.Compartments[i].Name)
+		}
+	}
+	return out
+}
