@@ -123,7 +123,7 @@ func HandMethod(v *Vessel, d Damage) (*HandWorking, error) {
 	}
 	h := v.Hull
 	if !h.Box {
-		return nil, &HandNotApplicable{"the hand method is for box-shaped vessels; this hull is from station offsets"}
+		return handShip(v, d) // hand_ship.go
 	}
 	L, B, D := h.LengthM, h.BreadthM, h.DepthM
 	spaces, spilt, spiltT, err := handSpaces(v, d)
