@@ -674,7 +674,34 @@ func (f *diagFitter) explain(c *diagCand) Explanation {
 		fs.Open = math.Abs(fs.BelowSeaM) <= OpenToSeaM && !fs.Full
 		e.Spaces = append(e.Spaces, fs)
 	}
+	e.Position = f.withUprightGM(e)
 	return e
+}
+
+// withUprightGM returns e's position with its upright GM filled in (the GM
+// every report shows; the fit's free solves leave it out), worked out as
+// the flooding run does (FloodRun.uprightDamage): a space whose water
+// stands level with the sea is in free communication with it, so brought
+// upright it is the space open to the sea (lost buoyancy); a space still
+// filling holds its water as an added weight.
+func (f *diagFitter) withUprightGM(e Explanation) *Position {
+	if e.Position == nil || !math.IsNaN(e.Position.GMUprightM) {
+		return e.Position
+	}
+	up := *e.Position
+	d := f.v.Intact()
+	for _, s := range e.Spaces {
+		if s.Open {
+			d[s.Compartment] = SpaceState{Open: true, Permeability: s.Permeability}
+		} else {
+			d[s.Compartment] = SpaceState{WaterM3: s.WaterM3, Permeability: s.Permeability}
+		}
+	}
+	pr := NewProblem(f.v, d)
+	if pl, _, err := pr.AtHeel(0, Plane{A: up.Plane.A, B: up.Plane.B}); err == nil {
+		up.GMUprightM = pr.uprightAt(pl)
+	}
+	return &up
 }
 
 // FitLimit is the misfit per reading, in units of χ², beyond which the

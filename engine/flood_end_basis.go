@@ -30,15 +30,21 @@ func (r *FloodRun) fillUprightAt(w float64, p *Position) {
 		FillUpright(r.v, d, p)
 		return
 	}
-	// As UprightGM, from her own draft and trim brought upright, but
-	// always solved: the position's own GM is the added weight's.
-	pr := NewProblem(r.v, d)
+	openBasisGMs(r.v, d, p)
+}
+
+// openBasisGMs sets both GMs of p (upright, and where she lies) as worked
+// out for damage state d with its flooded spaces open to the sea, at p's own
+// plane: for a run's end that has become that state (the levels met), in
+// place of the added weight's. As UprightGM, from her own draft and trim
+// brought upright, but always solved: the position's own GM is the added
+// weight's. The slope is taken at p's plane, the lost-buoyancy equilibrium
+// to within the run's tolerance.
+func openBasisGMs(v *Vessel, d Damage, p *Position) {
+	pr := NewProblem(v, d)
 	if pl, _, err := pr.AtHeel(0, Plane{A: p.Plane.A, B: p.Plane.B}); err == nil {
 		p.GMUprightM = pr.uprightAt(pl)
 	}
-	// Where she lies too: the GZ slope with the space open to the sea, at
-	// her plane (the lost-buoyancy equilibrium to within the run's
-	// tolerance).
 	p.GMAtRestM = gmAtRest(pr.eval(p.Plane, true), p.GMAtRestM) * pr.shipBasis()
 	if math.Abs(p.HeelDeg) < 1e-9 && !math.IsNaN(p.GMUprightM) {
 		p.GMAtRestM = p.GMUprightM

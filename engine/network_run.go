@@ -886,6 +886,7 @@ func (r *NetworkRun) Report() NetworkReport {
 	if f, s := rep.Final.Position, sp.Position; f != nil && s != nil && r.end != FloodTimeLimit {
 		rep.FinalDiffM = math.Max(math.Abs(f.DraftAftM-s.DraftAftM), math.Max(math.Abs(f.DraftMidM-s.DraftMidM), math.Abs(f.DraftFwdM-s.DraftFwdM)))
 	}
+	r.endGMs(&rep, &sp)
 	rep.Table = r.table()
 	final := sum(rep.Final.WaterM3)
 	start := sum(rep.Start.WaterM3)

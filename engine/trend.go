@@ -49,15 +49,26 @@ type Trend struct {
 	HoleAssumed            bool    // no hole in the file: placed at the lowest point of the shell
 	HoleAreaSDM2           float64 // standard error of the area
 	PumpsM3h               float64 // capacity that can be put on the filling space
-	PumpsHold              string  // "yes", "no" or "uncertain": can the pumps take the inflow at the present head
-	Projection             FloodReport
-	DeckEdgeS              float64 // from the latest reading; NaN if not within the projection
-	DeckEdgeRange          [2]float64
-	OpeningS               float64 // first non-weathertight opening under; NaN if none
-	Opening                string
-	LossS                  float64 // she sinks or capsizes; NaN if she does not within the projection
-	Final                  *Position
-	Words                  []string // the trend in plain sentences
+	PumpsHold              string  // "yes", "no" or "uncertain": can the pumps take the present inflow
+	// InflowNowM3h is the present inflow: the larger of Torricelli's at
+	// the latest head and the rise between the last two readings (net of
+	// any pumping then); InflowNowSDM3h its standard error.
+	InflowNowM3h, InflowNowSDM3h float64
+	// BalanceHeadM is the head at which the hole passes just the pumps'
+	// capacity, by Torricelli h = (Q/(C_d·A))²/(2 g): the water inside
+	// that far below the sea at the hole; NaN with no hole or no pumps.
+	BalanceHeadM float64
+	// BalanceS is the time from the latest reading, without pumping, until
+	// the head falls to BalanceHeadM; NaN if not within the projection.
+	BalanceS      float64
+	Projection    FloodReport
+	DeckEdgeS     float64 // from the latest reading; NaN if not within the projection
+	DeckEdgeRange [2]float64
+	OpeningS      float64 // first non-weathertight opening under; NaN if none
+	Opening       string
+	LossS         float64 // she sinks or capsizes; NaN if she does not within the projection
+	Final         *Position
+	Words         []string // the trend in plain sentences
 }
 
 // EstimateTrend works out the trend of explanation e over readings rs (two
@@ -76,7 +87,7 @@ func EstimateTrend(v *Vessel, rs []Reading, e Explanation, o TrendOptions) (Tren
 	for i, s := range e.Spaces {
 		set[i] = s.Compartment
 	}
-	t := Trend{DeckEdgeS: math.NaN(), OpeningS: math.NaN(), LossS: math.NaN(), DeckEdgeRange: [2]float64{math.NaN(), math.NaN()}}
+	t := Trend{BalanceHeadM: math.NaN(), BalanceS: math.NaN(), DeckEdgeS: math.NaN(), OpeningS: math.NaN(), LossS: math.NaN(), DeckEdgeRange: [2]float64{math.NaN(), math.NaN()}}
 	per := make([][]float64, len(rs))
 	var positions []*Position
 	for i, r := range rs {
@@ -151,9 +162,20 @@ func EstimateTrend(v *Vessel, rs []Reading, e Explanation, o TrendOptions) (Tren
 		t.Hole.AreaM2 = q / (t.Hole.Cd * math.Sqrt(2*StandardGravity) * meanRoot)
 		t.HoleAreaSDM2 = t.Hole.AreaM2 * t.InflowSDM3h / t.InflowM3h
 	}
-	// Can the pumps take it? The inflow now, at the latest head.
-	qNow := t.Hole.Cd * t.Hole.AreaM2 * math.Sqrt(2*StandardGravity*heads[len(heads)-1]) * 3600
+	// Can the pumps take it? The inflow now: Torricelli at the latest head,
+	// or the rise between the last two readings if that is more (the
+	// water seen rising faster than the pumps take it is not held).
+	n := len(rs) - 1
+	qNow := t.Hole.Cd * t.Hole.AreaM2 * math.Sqrt(2*StandardGravity*heads[n]) * 3600
 	qNowSD := qNow * t.InflowSDM3h / math.Max(t.InflowM3h, 1e-9)
+	if dt := t.Minutes[n] - t.Minutes[n-1]; dt > 0 {
+		rise := (t.WaterM3[n] - t.WaterM3[n-1]) / dt * 60
+		riseSD := math.Hypot(t.WaterSDM3[n], t.WaterSDM3[n-1]) / dt * 60
+		if rise > qNow {
+			qNow, qNowSD = rise, riseSD
+		}
+	}
+	t.InflowNowM3h, t.InflowNowSDM3h = qNow, qNowSD
 	switch {
 	case t.PumpsM3h <= 0:
 		t.PumpsHold = "no"
@@ -163,6 +185,10 @@ func EstimateTrend(v *Vessel, rs []Reading, e Explanation, o TrendOptions) (Tren
 		t.PumpsHold = "no"
 	default:
 		t.PumpsHold = "uncertain"
+	}
+	if t.PumpsM3h > 0 && t.Hole.AreaM2 > 0 {
+		q := t.PumpsM3h / 3600 / (t.Hole.Cd * t.Hole.AreaM2)
+		t.BalanceHeadM = q * q / (2 * StandardGravity)
 	}
 	if t.Hole.AreaM2 > 0 {
 		base := v.Intact()
@@ -184,6 +210,7 @@ func EstimateTrend(v *Vessel, rs []Reading, e Explanation, o TrendOptions) (Tren
 		}
 		t.Projection = rep
 		t.DeckEdgeS, t.OpeningS, t.Opening, t.LossS = projectionTimes(rep)
+		t.BalanceS = timeToHead(rep, t.BalanceHeadM)
 		if rep.Final.Position != nil {
 			t.Final = rep.Final.Position
 		}
@@ -218,6 +245,26 @@ func projectionTimes(rep FloodReport) (deck, opening float64, name string, loss 
 		loss = rep.EndS
 	}
 	return deck, opening, name, loss
+}
+
+// timeToHead is the first time in run rep at which the head across the hole
+// is h or less (linear between samples); NaN if never or h is NaN.
+func timeToHead(rep FloodReport, h float64) float64 {
+	if math.IsNaN(h) {
+		return math.NaN()
+	}
+	tr := rep.Trace
+	for i, s := range tr {
+		if s.HeadM > h {
+			continue
+		}
+		if i == 0 {
+			return s.TimeS
+		}
+		a := tr[i-1]
+		return a.TimeS + (s.TimeS-a.TimeS)*(a.HeadM-h)/(a.HeadM-s.HeadM)
+	}
+	return math.NaN()
 }
 
 // headAcross is the head across hole h into compartment c holding w m³ of

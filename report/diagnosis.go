@@ -101,7 +101,10 @@ type TrendDoc struct {
 	TimeToLossS   Num          `json:"time_to_loss_s"`
 	Outcome       string       `json:"projection_end"`
 	PumpsM3h      Num          `json:"pumps_m3h"`
-	PumpsHold     string       `json:"pumps_hold"` // yes | no | uncertain
+	PumpsHold     string       `json:"pumps_hold"`        // yes | no | uncertain
+	InflowNowM3h  Num          `json:"inflow_now_m3h"`    // the present inflow the pumps are weighed against
+	BalanceHeadM  Num          `json:"balance_head_m"`    // Torricelli head at which the hole passes just the pumps' capacity
+	TimeToBalance Num          `json:"time_to_balance_s"` // until the level gets there without pumping; null: not within the projection
 	Words         []string     `json:"words"`
 }
 
@@ -147,6 +150,7 @@ func BuildDiagnosis(d Diagnosis) DiagnosisDoc {
 			DeckRangeS:    [2]Num{Num(t.DeckEdgeRange[0]), Num(t.DeckEdgeRange[1])},
 			TimeToOpening: Num(t.OpeningS), Opening: t.Opening, TimeToLossS: Num(t.LossS),
 			Outcome: t.Projection.End.String(), PumpsM3h: Num(t.PumpsM3h), PumpsHold: t.PumpsHold,
+			InflowNowM3h: Num(t.InflowNowM3h), BalanceHeadM: Num(t.BalanceHeadM), TimeToBalance: Num(t.BalanceS),
 			Words: TrendWords(v, *t)}
 		for i := range t.Minutes {
 			td.Minutes = append(td.Minutes, Num(t.Minutes[i]))
@@ -329,12 +333,12 @@ func TrendWords(v *engine.Vessel, t engine.Trend) []string {
 	}
 	switch t.PumpsHold {
 	case "yes":
-		out = append(out, fmt.Sprintf("The pumps on it (%.0f m³/h) can hold it.", t.PumpsM3h))
+		out = append(out, fmt.Sprintf("The pumps on it (%.0f m³/h) can hold it: they take more than the present inflow (%.0f ± %.0f m³/h).", t.PumpsM3h, t.InflowNowM3h, t.InflowNowSDM3h))
 	case "uncertain":
 		out = append(out, fmt.Sprintf("The pumps on it (%.0f m³/h) may or may not hold it: the inflow is too uncertain to say.", t.PumpsM3h))
 	default:
 		if t.PumpsM3h > 0 {
-			out = append(out, fmt.Sprintf("The pumps on it (%.0f m³/h) cannot hold it.", t.PumpsM3h))
+			out = append(out, pumpsCannotWords(t))
 		} else {
 			out = append(out, "The vessel file puts no pumps on it.")
 		}
@@ -354,6 +358,20 @@ func TrendWords(v *engine.Vessel, t engine.Trend) []string {
 		out = append(out, "Left as it is, without pumping: "+deck+"; "+open+"; "+lossWords(t)+".")
 	}
 	return out
+}
+
+// pumpsCannotWords says plainly that the pumps cannot hold the present
+// inflow, and where they would only balance it (Torricelli).
+func pumpsCannotWords(t engine.Trend) string {
+	s := fmt.Sprintf("The pumps on it (%.0f m³/h) cannot hold it: the present inflow is about %.0f m³/h.", t.PumpsM3h, t.InflowNowM3h)
+	if math.IsNaN(t.BalanceHeadM) {
+		return s
+	}
+	s += fmt.Sprintf(" They would only balance it when the water inside is %s below the sea at the hole (Torricelli head %.3f m)", num(t.BalanceHeadM*100, 1, "cm"), t.BalanceHeadM)
+	if math.IsNaN(t.BalanceS) {
+		return s + ", which the level does not reach within the projection."
+	}
+	return s + ", which the level reaches in about " + Duration(t.BalanceS) + " if nothing is done."
 }
 
 func openingName(n string) string {

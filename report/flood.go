@@ -29,6 +29,9 @@ type Flood struct {
 	// Passenger: the vessel is a passenger ship, whose margin line is
 	// watched; on a cargo ship the line is the deck edge alone.
 	Passenger bool
+	// StrengthWhy says why the hull girder is not worked out
+	// (engine.StrengthMissing); "" when it is.
+	StrengthWhy string
 }
 
 func lowestOpening(p *engine.Position) (engine.OpeningClearance, bool) {
@@ -79,7 +82,7 @@ func FloodText(w io.Writer, f Flood) error {
 	tw.Flush()
 
 	head, rest := FloodOutcome(r)
-	fmt.Fprintf(&b, "\nOutcome: %s%s.\n", head, rest)
+	fmt.Fprintf(&b, "\n%s: %s%s.\n", outcomeLabel(f), head, rest)
 	switch r.End {
 	case engine.FloodSinks, engine.FloodCapsizes, engine.FloodFailed:
 		// The outcome has said why already.
@@ -94,6 +97,7 @@ func FloodText(w io.Writer, f Flood) error {
 		fmt.Fprintf(&b, "  Time to equalise: %s (%s s), %s m³ in. The run stops at 1 mm of head (%s);\n  the last millimetre follows the √h law.\n",
 			Duration(r.EqualiseS), num(r.EqualiseS, 0, ""), num(r.FinalWaterM3, 1, ""), Duration(r.EndS))
 	}
+	networkEndLine(&b, f)
 
 	b.WriteString("\nEvents\n")
 	tw = tabwriter.NewWriter(&b, 0, 0, 2, ' ', 0)
@@ -180,6 +184,7 @@ func FloodText(w io.Writer, f Flood) error {
 	}
 	tw.Flush()
 	writeStageCriteria(&b, r.Stages)
+	writeStageStrength(&b, r.Stages, f.StrengthWhy)
 
 	b.WriteString("\nFinal state beside the lost-buoyancy solution (the compartment open to the sea)\n")
 	if r.LostBuoyancy == nil {

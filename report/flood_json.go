@@ -42,8 +42,9 @@ type floodDoc struct {
 	Solver       floodSolver   `json:"solver"`
 	Version      string        `json:"heelwatch_version"`
 	// Compartments: each compartment that took water (network.go).
-	Compartments []NetCompDoc `json:"compartments"`
-	Network      *NetworkDoc  `json:"network"` // the run through the ship; null when the water goes nowhere else
+	Compartments []NetCompDoc    `json:"compartments"`
+	Network      *NetworkDoc     `json:"network"` // the run through the ship; null when the water goes nowhere else
+	Single       *floodSingleDoc `json:"single"`  // the compartment's own run's end when the network run is made (flood_json_end.go); else null
 }
 
 type floodHoleDoc struct {
@@ -196,6 +197,7 @@ func FloodJSON(w io.Writer, f Flood) error {
 		doc.Stages = append(doc.Stages, st)
 	}
 	doc.Compartments, doc.Network = networkKeys(f)
+	networkEnd(&doc, f)
 	enc := json.NewEncoder(w)
 	enc.SetIndent("", "  ")
 	return enc.Encode(doc)

@@ -310,9 +310,10 @@ func (m model) conditionKey(msg tea.KeyMsg) (tea.Model, tea.Cmd, bool) {
 	case key.Matches(msg, m.keys.Girder), key.Matches(msg, m.keys.RunPanel), key.Matches(msg, m.keys.Remedies),
 		key.Matches(msg, m.keys.Readings), key.Matches(msg, doorsKey):
 		// Another panel takes the place: this one gives way, and the root
-		// answers the key.
+		// answers the key (through update, so that the readings panel,
+		// which takes its key before the root's keys, opens at once).
 		p.show = false
-		mm, cmd := m.key(msg)
+		mm, cmd := m.update(msg)
 		return mm, cmd, true
 	default:
 		return m, nil, false
@@ -635,12 +636,30 @@ func (p conditionPanel) view(v *engine.Vessel, st Styles, w, h int) []string {
 		title += ": " + p.cond.Name
 	}
 	lines := []string{st.Heading.Render(titleFit(w, title, "L closes"))}
-	nameW := min(22, max(8, w-30))
+	// The names as long as they are (up to 22) where the line has room,
+	// then cut keeping a side letter (clipName); a tank row's liquid and
+	// a weight row's numbers take the rest.
+	rows := p.rows()
+	longest := 0
+	for _, r := range rows {
+		if r.tank >= 0 {
+			longest = max(longest, len([]rune(v.Compartments[r.tank].Name)))
+		} else {
+			longest = max(longest, len([]rune(p.cond.Weights[r.weight].Name)))
+		}
+	}
+	nameW := min(22, longest, max(8, w-2-18-6))
+	// A weight's figures in full words when they fit, else in columns
+	// under a heading that names them.
+	longWeights := w-2 >= nameW+38
+	wNameW := nameW
+	if !longWeights {
+		wNameW = max(6, min(longest, 22, w-2-27))
+	}
 	var total, fsm float64
 	for _, wt := range v.Weights {
 		total += wt.MassT
 	}
-	rows := p.rows()
 	var body []string
 	sel := 0
 	for k, r := range rows {
@@ -655,16 +674,22 @@ func (p conditionPanel) view(v *engine.Vessel, st Styles, w, h int) []string {
 			if c.Liquid != nil {
 				fill, liquid = c.Liquid.Fill, c.Liquid.Name
 			}
-			line = fmt.Sprintf("%-*s %5.1f %% %7.1f t  %s", nameW, clip(c.Name, nameW), fill*100, mass, liquid)
+			line = fmt.Sprintf("%-*s %5.1f %% %7.1f t  %s", nameW, clipName(c.Name, nameW), fill*100, mass, liquid)
 		} else {
 			wt := p.cond.Weights[r.weight]
-			line = fmt.Sprintf("%-*s %7.1f t lcg %5.1f tcg %4.1f vcg %4.1f", nameW, clip(wt.Name, nameW), wt.MassT, wt.LCGM, wt.TCGM, wt.VCGM)
+			if longWeights {
+				line = fmt.Sprintf("%-*s %7.1f t lcg %5.1f tcg %4.1f vcg %4.1f", nameW, clipName(wt.Name, nameW), wt.MassT, wt.LCGM, wt.TCGM, wt.VCGM)
+			} else {
+				line = fmt.Sprintf("%-*s %7.1f %5.1f %5.1f %5.1f", wNameW, clipName(wt.Name, wNameW), wt.MassT, wt.LCGM, wt.TCGM, wt.VCGM)
+			}
 		}
 		if k == 0 && r.tank >= 0 {
-			body = append(body, st.Dim.Render("TANKS          fill of capacity, contents"))
+			body = append(body, st.Dim.Render(fitLine(fmt.Sprintf("%-*s %7s %9s  %s", nameW+2, "TANKS", "fill", "mass", "contents (fill: of capacity)"), w)))
 		}
-		if r.weight == 0 {
+		if r.weight == 0 && longWeights {
 			body = append(body, st.Dim.Render("WEIGHTS"))
+		} else if r.weight == 0 {
+			body = append(body, st.Dim.Render(fitLine(fmt.Sprintf("%-*s %7s %5s %5s %5s", wNameW+2, "WEIGHTS", "t", "lcg m", "tcg m", "vcg m"), w)))
 		}
 		line = fitLine(line, w-2)
 		if k == p.sel {

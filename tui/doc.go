@@ -52,7 +52,8 @@
 //     and the water plotted so far. When it is done: the end in a sentence
 //     (levels equal, pumps holding and at what level and sounding, full,
 //     she sinks or capsizes, time limit), every event with its time from
-//     the hole and the water in then (d deck edge, m margin line, o an
+//     the hole and the water in then (d deck edge, m margin line on a
+//     passenger ship only, o an
 //     opening, c a criterion failing, » the end), which of the deck edge
 //     and the margin line stayed clear, the stages at 25, 50 and 75 % of
 //     the final water and the end (when reached, heel, GM, the deck edge's

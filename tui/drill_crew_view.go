@@ -198,38 +198,31 @@ func (m *drillModel) pickerView(w, h int) []string {
 	return out
 }
 
-// wrapWords lays words out on lines of at most w, one space apart, each
-// line indented.
+// wrapWords lays words out on lines of at most w cells, one space apart,
+// each line indented.
 func wrapWords(words []string, w int, indent string) []string {
-	var out []string
-	cur := indent
-	for _, it := range words {
-		if len(cur) > len(indent) && lipgloss.Width(cur)+1+lipgloss.Width(it) > w {
-			out = append(out, cur)
-			cur = indent
-		}
-		if len(cur) > len(indent) {
-			cur += " "
-		}
-		cur += it
-	}
-	if len(cur) > len(indent) {
-		out = append(out, cur)
-	}
-	return out
+	return wrapJoined(words, w, indent, " ")
 }
 
-// wrapItems lays items out on lines of at most w, each line indented.
+// wrapItems lays items out on lines of at most w cells, two spaces apart,
+// each line indented.
 func wrapItems(items []string, w int, indent string) []string {
+	return wrapJoined(items, w, indent, "  ")
+}
+
+// wrapJoined lays parts out on lines of at most w cells (measured as the
+// terminal shows them), sep between them, each line indented; a part
+// wider than a line stands alone on its line.
+func wrapJoined(parts []string, w int, indent, sep string) []string {
 	var out []string
 	cur := indent
-	for _, it := range items {
-		if len(cur) > len(indent) && len(cur)+2+len(it) > w {
+	for _, it := range parts {
+		if len(cur) > len(indent) && lipgloss.Width(cur)+lipgloss.Width(sep)+lipgloss.Width(it) > w {
 			out = append(out, cur)
 			cur = indent
 		}
 		if len(cur) > len(indent) {
-			cur += "  "
+			cur += sep
 		}
 		cur += it
 	}

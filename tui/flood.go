@@ -70,7 +70,6 @@ type floodPanel struct {
 	v       *engine.Vessel
 	sel     int
 	damage  engine.Damage
-	keys    keyMap
 	st      Styles
 	inks    map[ink]lipgloss.Style
 	bar     progress.Model
@@ -140,10 +139,10 @@ func floodFailed(seq int) func(string) tea.Msg {
 	return func(why string) tea.Msg { return floodStepMsg{seq: seq, err: "engine failure: " + why} }
 }
 
-// with returns the panel for m's vessel, selection, damage state, keys
-// and styles.
+// with returns the panel for m's vessel, selection, damage state and
+// styles.
 func (f floodPanel) with(m model) floodPanel {
-	f.v, f.sel, f.damage, f.keys, f.st, f.inks, f.bar = m.v, m.sel, m.damage, m.keys, m.st, m.inks, m.bar
+	f.v, f.sel, f.damage, f.st, f.inks, f.bar = m.v, m.sel, m.damage, m.st, m.inks, m.bar
 	f.pics, f.plotKey = m.pics, m.pictureKey(picFloodPlot)
 	return f
 }
@@ -164,13 +163,14 @@ func (f floodPanel) update(msg tea.Msg, h host) (floodPanel, tea.Cmd) {
 	case netDoneMsg:
 		return f.takeNet(msg, h)
 	case tea.KeyMsg:
+		k := h.bindings()
 		switch {
-		case key.Matches(msg, f.keys.RunPanel) && f.show:
+		case key.Matches(msg, k.RunPanel) && f.show:
 			f.show = false
 			return f.stop(h)
-		case key.Matches(msg, f.keys.RunPanel):
+		case key.Matches(msg, k.RunPanel):
 			f.show = true
-		case key.Matches(msg, f.keys.RunStage):
+		case key.Matches(msg, k.RunStage):
 			return f.nextStage(h)
 		}
 	}

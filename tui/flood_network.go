@@ -143,3 +143,19 @@ func (p floodPanel) netPlot(w, h int) []string {
 	lines = append(lines, st.Dim.Render(clip(fmt.Sprintf("m³    └ 0 … %s %s since the hole was made", num(T/scale, 0), unit), w)))
 	return fit(lines, w, h)
 }
+
+// spreadBeyond reports whether the run through the ship took water into
+// more than the holed space: the single run above it, which keeps every
+// connection shut, then ends elsewhere than the ship does.
+func (p floodPanel) spreadBeyond() bool {
+	if p.net == nil {
+		return false
+	}
+	n := 0
+	for _, c := range p.net.Compartments {
+		if !math.IsNaN(c.FirstWaterS) {
+			n++
+		}
+	}
+	return n > 1
+}

@@ -113,6 +113,11 @@ func (p floodPanel) text(w, h, want int) []string {
 	if f.baseChanged(p.damage) {
 		head = append(head, st.Caution.Render(clip("! the dashboard has changed since: f runs it again", w)))
 	}
+	if p.spreadBeyond() {
+		for _, l := range wrap("! this space alone, its connections shut; through the ship the water spreads further (\"through the ship\")", w) {
+			head = append(head, st.Caution.Render(l))
+		}
+	}
 
 	events := p.events(w)
 	stages := p.stages(w)
@@ -201,7 +206,10 @@ func eventWords(e engine.FloodEvent, r *engine.FloodReport) string {
 	case engine.CriterionFails:
 		return e.Name + " fails"
 	}
-	return report.FloodHeadline(r.End)
+	// The outcome's own head words, so the end's line agrees with the
+	// outcome above it ("floods despite the pumps", not "pumps hold").
+	head, _ := report.FloodOutcome(*r)
+	return head
 }
 
 // floodEvents lists the run's events in time order, the end last: mark,

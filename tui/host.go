@@ -21,6 +21,8 @@ type host interface {
 	change(d engine.Damage, what string) tea.Cmd
 	// busy starts the computing mark (the spinner) if it is not turning.
 	busy() tea.Cmd
+	// bindings is the dashboard's keys, which the panels' keys are among.
+	bindings() keyMap
 }
 
 // The root model is the children's host.
@@ -35,3 +37,5 @@ func (m *model) change(d engine.Damage, what string) tea.Cmd {
 }
 
 func (m *model) busy() tea.Cmd { return m.startSpinner() }
+
+func (m *model) bindings() keyMap { return m.keys }

@@ -370,7 +370,7 @@ func (m model) update(msg tea.Msg) (tea.Model, tea.Cmd) {
 
 func (m model) key(msg tea.KeyMsg) (tea.Model, tea.Cmd) {
 	k := m.keys
-	if m.rem.with(m).handles(msg) {
+	if m.rem.handles(msg, k) {
 		// The righting options' own keys (while shown, the scroll keys
 		// before the hand panel's).
 		return m.updateRemedies(msg)

@@ -45,8 +45,9 @@ func (m model) cached(kind, w, h int, draw func(w, h int) []string) []string {
 
 // pictureKey is what the dashboard's state gives of picture kind's key;
 // the flooding run's panel adds its run (floodPanel.cachedPlot) and the
-// size.
-func (m model) pictureKey(kind int) pictureKey {
+// size. (A pointer receiver: the model is large, and View calls it for
+// every picture.)
+func (m *model) pictureKey(kind int) pictureKey {
 	return pictureKey{kind: kind, palette: m.palette, sel: m.sel, seq: m.seq, cur: m.cur}
 }
 

@@ -36,8 +36,11 @@ const (
 	rfMarks   = 1
 )
 
-// newReadingForm returns the form for v, minutes filled in, each mark's
-// field with the draft of the state shown as its placeholder.
+// newReadingForm returns the form for v: the minutes since the first
+// reading by the clock as the minutes field's placeholder (taken when the
+// field is left empty, so that typing "3" gives 3, not the clock's value
+// with a 3 after it), each mark's field with the draft of the state shown
+// as its placeholder.
 func newReadingForm(v *engine.Vessel, minutes float64, shown []engine.MarkDraft, st Styles, animate bool) readingForm {
 	f := readingForm{on: true}
 	add := func(label, unit, value, hint string, limit int) {
@@ -46,13 +49,13 @@ func newReadingForm(v *engine.Vessel, minutes float64, shown []engine.MarkDraft,
 		in.CharLimit = limit
 		in.SetValue(value)
 		in.Placeholder = hint
-		in.PromptStyle, in.TextStyle = st.Prompt, st.Value
+		in.PromptStyle, in.TextStyle, in.PlaceholderStyle = st.Prompt, st.Value, st.Dim
 		if !animate {
 			in.Cursor.SetMode(cursor.CursorStatic)
 		}
 		f.labels, f.units, f.fields = append(f.labels, label), append(f.units, unit), append(f.fields, in)
 	}
-	add("minutes", "min", strconv.FormatFloat(minutes, 'f', -1, 64), "", 8)
+	add("minutes", "min (empty: now)", "", strconv.FormatFloat(minutes, 'f', -1, 64), 8)
 	for i, m := range v.DraftMarks {
 		hint := ""
 		if i < len(shown) {
@@ -116,7 +119,11 @@ func (f readingForm) read(v *engine.Vessel) (engine.Reading, int, error) {
 	var b strings.Builder
 	b.WriteString("format = 1\n[[reading]]\n")
 	val := func(k int) string { return strings.TrimSpace(f.fields[k].Value()) }
-	minutes, err := parseNumber(val(rfMinutes))
+	ms := val(rfMinutes)
+	if ms == "" {
+		ms = f.fields[rfMinutes].Placeholder
+	}
+	minutes, err := parseNumber(ms)
 	if err != nil {
 		return engine.Reading{}, rfMinutes, fmt.Errorf("minutes: %v", err)
 	}

@@ -33,6 +33,7 @@ type readingPanel struct {
 	trend       *engine.Trend
 	trendNote   string
 	failure     string
+	off         int // the diagnosis scrolled on by this many lines ([ ])
 
 	// What to draw with, handed in by the root model (with).
 	v     *engine.Vessel
@@ -93,7 +94,7 @@ func (m model) readingMsg(msg tea.Msg) (tea.Model, tea.Cmd, bool) {
 		if msg.seq != m.rd.seq {
 			return m, nil, true
 		}
-		m.rd.running = false
+		m.rd.running, m.rd.off = false, 0
 		m.rd.result, m.rd.trend, m.rd.trendNote, m.rd.failure = msg.res, msg.trend, msg.trendNote, msg.failure
 		return m, m.addLog(m.now(), m.diagnosisLine()), true
 	case tea.KeyMsg:
@@ -143,19 +144,32 @@ func (m model) readingMsg(msg tea.Msg) (tea.Model, tea.Cmd, bool) {
 			m.rd.running = false
 			return m, m.addLog(m.now(), "readings cleared"), true
 		case key.Matches(msg, readingApply):
-			if m.rd.result == nil || len(m.rd.result.Explanations) == 0 || len(m.rd.result.Explanations[0].Spaces) == 0 {
+			e, what, ok := m.rd.toApply(m.v)
+			if !ok {
 				return m, nil, true
 			}
-			e := m.rd.result.Explanations[0]
 			d := m.v.Intact()
 			for _, s := range e.Spaces {
 				d[s.Compartment] = engine.SpaceState{WaterM3: s.WaterM3}
+				if s.Open {
+					// Level with the sea: open to it, so that she shows
+					// the GM of free communication, as solve does.
+					d[s.Compartment] = engine.SpaceState{Open: true}
+				}
 				if s.Permeability != m.v.Compartments[s.Compartment].Permeability {
 					d[s.Compartment].Permeability = s.Permeability
 				}
 			}
-			mm, cmd := m.apply(d, "diagnosis onto the dashboard: "+e.Names(m.v))
+			mm, cmd := m.apply(d, "diagnosis onto the dashboard: "+what)
 			return mm, cmd, true
+		case key.Matches(msg, m.keys.WorkUp), key.Matches(msg, m.keys.WorkDown):
+			step := 3
+			if key.Matches(msg, m.keys.WorkUp) {
+				step = -3
+			}
+			w, h := m.readingSize()
+			m.rd.off = min(max(0, m.rd.off+step), m.rd.with(m.v, m.curPosition(), m.st, m.bar, m.lay.wide).maxOff(w, h))
+			return m, nil, true
 		case key.Matches(msg, m.keys.Girder), key.Matches(msg, m.keys.RunPanel), key.Matches(msg, m.keys.Remedies):
 			// Another panel takes the place: this one gives way.
 			m.rd.show = false
@@ -163,6 +177,36 @@ func (m model) readingMsg(msg tea.Msg) (tea.Model, tea.Cmd, bool) {
 		}
 	}
 	return m, nil, false
+}
+
+// toApply is the explanation the apply key puts onto the dashboard and
+// what the log calls it: the best, when it fits the readings; when nothing
+// fits but something does without the readings that disagree, that one
+// (the officer is told which readings it leaves out); else the best all
+// the same, said not to fit. ok is false when there is nothing to apply.
+func (p readingPanel) toApply(v *engine.Vessel) (e engine.Explanation, what string, ok bool) {
+	res := p.result
+	if res == nil || len(res.Explanations) == 0 {
+		return e, "", false
+	}
+	e, what = res.Explanations[0], res.Explanations[0].Names(v)
+	switch {
+	case res.Fits:
+	case res.Without != nil && len(res.Without.Spaces) > 0:
+		e = *res.Without
+		var left []string
+		for _, g := range res.Disagreements {
+			if g.Reading == res.Reading && g.What == "heel" {
+				left = append(left, "the inclinometer")
+			} else if g.Reading == res.Reading {
+				left = append(left, g.What)
+			}
+		}
+		what = e.Names(v) + " (the fit leaving out " + strings.Join(left, " and ") + ")"
+	default:
+		what += " (which does not fit the readings)"
+	}
+	return e, what, len(e.Spaces) > 0
 }
 
 // takeReading keeps a reading, logs it and starts the diagnosis of all the
@@ -283,14 +327,60 @@ func (p readingPanel) view(w, h int) string {
 		return strings.Join(p.form.view(p.st, w, h), "\n")
 	}
 	marks := p.marksLines()
-	diag := p.diagnosisLines(w)
+	diag, room := p.diagnosisLines(w), h-len(marks)-1
 	if p.wide && w >= 90 {
 		lw := min(46, w/2)
 		rw := w - lw - 1
-		diag = p.diagnosisLines(rw)
+		diag = p.scrolled(p.diagnosisLines(rw), h)
 		return strings.Join(besides(p.st.Dim.Render("│"), fit(marks, lw, h), fit(diag, rw, h)), "\n")
 	}
-	return strings.Join(fit(append(append(marks, ""), diag...), w, h), "\n")
+	return strings.Join(fit(append(append(marks, ""), p.scrolled(diag, room)...), w, h), "\n")
+}
+
+// diagRoom is the diagnosis's lines and the room they have in w × h, as
+// view lays them out.
+func (p readingPanel) diagRoom(w, h int) ([]string, int) {
+	if p.form.on {
+		return nil, h
+	}
+	if p.wide && w >= 90 {
+		return p.diagnosisLines(w - min(46, w/2) - 1), h
+	}
+	return p.diagnosisLines(w), h - len(p.marksLines()) - 1
+}
+
+// maxOff is how far the diagnosis can be scrolled on in w × h.
+func (p readingPanel) maxOff(w, h int) int {
+	lines, room := p.diagRoom(w, h)
+	if len(lines) <= room || room < 4 {
+		return 0
+	}
+	return len(lines) - 1 - (room - 2)
+}
+
+// scrolled fits the diagnosis's lines into room: its heading always, the
+// lines from the scroll offset on, and, when they do not all fit, a last
+// line that says there is more and which key shows it, so that nothing is
+// cut off unseen (at 80×24 the ranking, the trend and the apply key's
+// line fell below the panel's foot).
+func (p readingPanel) scrolled(lines []string, room int) []string {
+	if len(lines) <= room || room < 4 {
+		return lines
+	}
+	body := lines[1:]
+	n := room - 2
+	off := min(max(0, p.off), len(body)-n)
+	out := append([]string{lines[0]}, body[off:off+n]...)
+	var hint string
+	switch {
+	case off+n < len(body) && off > 0:
+		hint = fmt.Sprintf("▼ %d more lines: ] on, [ back", len(body)-off-n)
+	case off+n < len(body):
+		hint = fmt.Sprintf("▼ %d more lines: ] shows them", len(body)-off-n)
+	default:
+		hint = "▲ [ back to the top"
+	}
+	return append(out, p.st.Dim.Render(hint))
 }
 
 // marksLines is the table of the marks: the draft the crew will read in
@@ -398,8 +488,8 @@ func (p readingPanel) diagnosisLines(w int) []string {
 	if len(res.Tellers) > 0 {
 		lines = append(lines, wrapStyled(st.Caution, res.Tellers[0], w)...)
 	}
-	if len(res.Explanations) > 0 && len(res.Explanations[0].Spaces) > 0 {
-		lines = append(lines, st.Dim.Render(clip("a: the best explanation onto the dashboard", w)))
+	if _, what, ok := p.toApply(p.v); ok {
+		lines = append(lines, wrapStyled(st.Dim, "a: "+what+" onto the dashboard", w)...)
 	}
 	return lines
 }
@@ -410,6 +500,16 @@ func wrapStyled(s interface{ Render(...string) string }, text string, w int) []s
 		out = append(out, s.Render(l))
 	}
 	return out
+}
+
+// readingSize is the panel's size on the screen as the root lays it out
+// (view.go: beside the list on a narrow screen, under the figures on a
+// wide one).
+func (m model) readingSize() (int, int) {
+	if m.lay.wide {
+		return m.width, m.lay.picH
+	}
+	return m.lay.rightW, m.lay.bodyH
 }
 
 // readingLines draws the panel for the root model.

@@ -39,7 +39,6 @@ type remedyPanel struct {
 	// What the panel works and draws with, given by with before each use.
 	v      *engine.Vessel
 	damage engine.Damage // the damage state shown
-	keys   keyMap
 	st     Styles
 	spin   string // the computing mark
 	w, h   int    // the body of the screen, which the panel takes
@@ -65,18 +64,18 @@ func remediesCmd(v *engine.Vessel, d engine.Damage, seq int, latest *atomic.Int6
 		func() tea.Msg { return remedyMsg{seq: seq, set: engine.FindRemedies(v, d)} })
 }
 
-// with returns the panel for m's vessel, damage state, keys, styles and
-// screen.
+// with returns the panel for m's vessel, damage state, styles and screen.
 func (r remedyPanel) with(m model) remedyPanel {
-	r.v, r.damage, r.keys, r.st, r.spin = m.v, m.damage, m.keys, m.st, m.spinView()
+	r.v, r.damage, r.st, r.spin = m.v, m.damage, m.st, m.spinView()
 	r.w, r.h = m.width, m.lay.bodyH
 	return r
 }
 
-// handles reports whether key msg is the panel's: the righting-options
-// key, and the scroll keys while the panel is shown.
-func (r remedyPanel) handles(msg tea.KeyMsg) bool {
-	return key.Matches(msg, r.keys.Remedies) || r.show && key.Matches(msg, r.keys.WorkUp, r.keys.WorkDown)
+// handles reports whether key msg is the panel's among the dashboard's
+// keys k: the righting-options key, and the scroll keys while the panel is
+// shown.
+func (r remedyPanel) handles(msg tea.KeyMsg, k keyMap) bool {
+	return key.Matches(msg, k.Remedies) || r.show && key.Matches(msg, k.WorkUp, k.WorkDown)
 }
 
 // update takes the panel's keys and the options' message; what the
@@ -86,12 +85,13 @@ func (r remedyPanel) update(msg tea.Msg, h host) (remedyPanel, tea.Cmd) {
 	case remedyMsg:
 		return r.take(msg, h)
 	case tea.KeyMsg:
+		k := h.bindings()
 		switch {
-		case key.Matches(msg, r.keys.Remedies):
+		case key.Matches(msg, k.Remedies):
 			return r.ask(h)
-		case r.show && key.Matches(msg, r.keys.WorkUp, r.keys.WorkDown):
+		case r.show && key.Matches(msg, k.WorkUp, k.WorkDown):
 			step := scrollStep
-			if key.Matches(msg, r.keys.WorkUp) {
+			if key.Matches(msg, k.WorkUp) {
 				step = -scrollStep
 			}
 			head, body, foot := r.parts(r.w, r.h)

@@ -35,12 +35,28 @@ func (m model) startCase() (model, tea.Cmd) {
 	if m.seq > 0 {
 		return m, m.addLog(m.now(), "the case from the command line was not applied: a change came first")
 	}
-	var open []string
+	var open, held []string
 	for i, s := range d {
-		if s.Open {
+		switch {
+		case s.Open:
 			open = append(open, m.v.Compartments[i].Name+" (μ "+muText(m.mu(d, i))+")")
+		case s.WaterM3 > 0:
+			held = append(held, m.v.Compartments[i].Name+" ("+num(s.WaterM3, 0)+" m³ held)")
 		}
 	}
-	mm, cmd := m.apply(cloneDamage(d), "from the command line: "+strings.Join(open, ", ")+" open to sea")
+	// Where the case came from: --open/--perm, or a state saved with the
+	// loading condition panel and taken up with --resume.
+	what := "from the command line: "
+	if m.opts.Resume != nil {
+		what = "from the saved state: "
+	}
+	var parts []string
+	if len(open) > 0 {
+		parts = append(parts, strings.Join(open, ", ")+" open to sea")
+	}
+	if len(held) > 0 {
+		parts = append(parts, "water in "+strings.Join(held, ", "))
+	}
+	mm, cmd := m.apply(cloneDamage(d), what+strings.Join(parts, "; "))
 	return mm.(model), cmd
 }

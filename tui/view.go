@@ -257,16 +257,14 @@ func (m model) footView() []string {
 	return m.helpLines()
 }
 
-// markLegend says what the dashboard's marks mean; the full help shows it.
-const markLegend = "marks: ■ open to the sea · ▲ next at risk · ‼ danger · ! caution · · for the record · " +
-	"░ flooded · ○ opening clear, ● under water, ◇ weathertight · GZ: e where she lies, f downflooding, v vanishing · " +
-	"flooding run: d deck edge, m margin line, o opening, c criterion, » end"
-
 // helpLines is the help bar, and with the full help the legend of marks.
 func (m model) helpLines() []string {
 	lines := strings.Split(m.help.View(m.keys), "\n")
+	if ks := m.panelHelp(); ks != nil && !m.help.ShowAll {
+		lines = []string{m.help.ShortHelpView(ks)}
+	}
 	if m.help.ShowAll && m.width > 0 {
-		for _, l := range wrap(markLegend, m.width) {
+		for _, l := range wrap(markLegend(m.v.Passenger()), m.width) {
 			lines = append(lines, m.st.Dim.Render(l))
 		}
 	}

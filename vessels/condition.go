@@ -5,8 +5,6 @@ import (
 	"math"
 	"strings"
 
-	"github.com/BurntSushi/toml"
-
 	"heelwatch/engine"
 )
 
@@ -68,21 +66,10 @@ func LoadCondition(path string, v *engine.Vessel, info *Info) (*Condition, error
 // or none, more than the tank holds (its capacity is μ × its volume inside
 // the hull), a sounding above the tank's top at its pipe.
 func ParseCondition(file string, data []byte, v *engine.Vessel, info *Info) (*Condition, error) {
-	if len(data) > MaxFileBytes {
-		return nil, Problems{{File: file, Line: 1, Key: "syntax", Msg: errTooLarge.Error()}}
+	r, root, err := decode(file, data)
+	if err != nil {
+		return nil, err
 	}
-	if p := tooDeep(file, data); p != nil {
-		return nil, Problems{*p}
-	}
-	var doc map[string]any
-	if _, err := toml.Decode(string(data), &doc); err != nil {
-		return nil, syntaxProblem(file, err)
-	}
-	r := &reader{file: file, lines: indexLines(string(data))}
-	if r.tooMany("", doc) {
-		return nil, r.probs.sorted()
-	}
-	root := r.table("", doc)
 	c := r.condition(root, v, info)
 	root.finish()
 	if len(r.probs) > 0 {
@@ -96,11 +83,7 @@ func ParseCondition(file string, data []byte, v *engine.Vessel, info *Info) (*Co
 // saved state file, which holds more).
 func (r *reader) condition(root *table, v *engine.Vessel, info *Info) *Condition {
 	c := &Condition{}
-	if f, ok := root.get("format"); !ok {
-		r.addf("format", "missing: the file must say format = %d", FormatVersion)
-	} else if n, ok := f.(int64); !ok || n != FormatVersion {
-		r.addf("format", "%v is not a format this heelwatch reads: write format = %d (a whole number)", tomlText(f), FormatVersion)
-	}
+	r.format(root)
 	if n, ok := root.str("name", false, "the condition's name in quotes"); ok && r.checkName("name", n, "condition's name") {
 		c.Name = n
 	}
@@ -126,7 +109,7 @@ func (r *reader) condition(root *table, v *engine.Vessel, info *Info) *Condition
 		for _, w := range c.Weights {
 			seen[strings.ToLower(w.Name)] = "a weight kept from the vessel file"
 		}
-		own := r.conditionWeights(ts, seen, v.Hull)
+		own := r.weightTables(ts, seen, v.Hull) // as in a vessel file
 		c.Weights = append(c.Weights, own...)
 	}
 	if len(ts) == 0 && !root.has("keep") {
@@ -180,31 +163,6 @@ func (r *reader) keptWeights(root *table, v *engine.Vessel) []engine.Weight {
 			taken[idx] = true
 			out = append(out, v.Weights[idx])
 		}
-	}
-	return out
-}
-
-// conditionWeights reads the condition's own [[weight]] tables, each as in
-// a vessel file (name, mass, lcg, tcg, vcg, fsm, x).
-func (r *reader) conditionWeights(ts []*table, seen map[string]string, hull *engine.Hull) []engine.Weight {
-	var out []engine.Weight
-	for _, t := range ts {
-		var w engine.Weight
-		w.Name, _ = r.name(t, seen, "weight")
-		w.MassT, _ = t.positive("mass", "t", true)
-		var lcgOK bool
-		w.LCGM, lcgOK = t.num("lcg", "m from the aft perpendicular", true)
-		w.TCGM, _ = t.num("tcg", "m from the centreline, + to starboard", false)
-		w.VCGM, _ = t.num("vcg", "m above the baseline", true)
-		if f, ok := t.num("fsm", "t·m", false); ok {
-			if f < 0 {
-				r.addf(t.keyPath("fsm"), "%g t·m is negative: a free-surface moment is 0 or more", f)
-			}
-			w.FSMTm = f
-		}
-		w.ExtentM = r.weightExtent(t, w.LCGM, lcgOK, hull)
-		t.finish()
-		out = append(out, w)
 	}
 	return out
 }

@@ -51,21 +51,11 @@ type CompartmentInfo struct {
 // Parse reads a vessel file. file is the name used in messages. Any problem
 // in the file is returned as Problems, all of them at once.
 func Parse(file string, data []byte) (*engine.Vessel, *Info, error) {
-	if len(data) > MaxFileBytes {
-		return nil, nil, Problems{{File: file, Line: 1, Key: "syntax", Msg: errTooLarge.Error()}}
+	r, root, err := decode(file, data)
+	if err != nil {
+		return nil, nil, err
 	}
-	if p := tooDeep(file, data); p != nil {
-		return nil, nil, Problems{*p}
-	}
-	var doc map[string]any
-	if _, err := toml.Decode(string(data), &doc); err != nil {
-		return nil, nil, syntaxProblem(file, err)
-	}
-	r := &reader{file: file, lines: indexLines(string(data))}
-	if r.tooMany("", doc) {
-		return nil, nil, r.probs.sorted()
-	}
-	v, info := r.vessel(r.table("", doc))
+	v, info := r.vessel(root)
 	if len(r.probs) > 0 {
 		return nil, nil, r.probs.sorted()
 	}
@@ -92,11 +82,7 @@ func syntaxProblem(file string, err error) error {
 // vessel reads the whole document.
 func (r *reader) vessel(root *table) (*engine.Vessel, *Info) {
 	info := &Info{}
-	if f, ok := root.get("format"); !ok {
-		r.addf("format", "missing: the file must say format = %d", FormatVersion)
-	} else if n, ok := f.(int64); !ok || n != FormatVersion {
-		r.addf("format", "%v is not a format this heelwatch reads: write format = %d (a whole number)", tomlText(f), FormatVersion)
-	}
+	r.format(root)
 	name, ok := root.str("name", true, "the vessel's name in quotes")
 	if ok && strings.TrimSpace(name) == "" {
 		r.addf("name", "is empty: give the vessel's name")
@@ -341,11 +327,16 @@ func (r *reader) weights(ts []*table, hull *engine.Hull) []engine.Weight {
 	if len(ts) == 0 {
 		r.addf("weight", "missing: the loading condition needs at least one [[weight]] (lightship at least) with name, mass, lcg, vcg")
 	}
-	names := map[string]string{}
+	return r.weightTables(ts, map[string]string{}, hull)
+}
+
+// weightTables reads [[weight]] tables, each with name (unique ignoring
+// case among those in seen), mass, lcg, tcg, vcg, fsm and the extent x.
+func (r *reader) weightTables(ts []*table, seen map[string]string, hull *engine.Hull) []engine.Weight {
 	var out []engine.Weight
 	for _, t := range ts {
 		var w engine.Weight
-		w.Name, _ = r.name(t, names, "weight")
+		w.Name, _ = r.name(t, seen, "weight")
 		w.MassT, _ = t.positive("mass", "t", true)
 		var lcgOK bool
 		w.LCGM, lcgOK = t.num("lcg", "m from the aft perpendicular", true)

@@ -7,8 +7,6 @@ import (
 	"sort"
 	"strings"
 
-	"github.com/BurntSushi/toml"
-
 	"heelwatch/engine"
 )
 
@@ -30,17 +28,11 @@ func LoadReadings(path string, v *engine.Vessel) ([]engine.Reading, error) {
 // compartment, readings out of time order. The readings come back in the
 // file's order.
 func ParseReadings(file string, data []byte, v *engine.Vessel) ([]engine.Reading, error) {
-	var doc map[string]any
-	if _, err := toml.Decode(string(data), &doc); err != nil {
-		return nil, syntaxProblem(file, err)
+	r, root, err := decode(file, data)
+	if err != nil {
+		return nil, err
 	}
-	r := &reader{file: file, lines: indexLines(string(data))}
-	root := r.table("", doc)
-	if f, ok := root.get("format"); !ok {
-		r.addf("format", "missing: the file must say format = %d", FormatVersion)
-	} else if n, ok := f.(int64); !ok || n != FormatVersion {
-		r.addf("format", "%v is not a format this heelwatch reads: write format = %d (a whole number)", tomlText(f), FormatVersion)
-	}
+	r.format(root)
 	ts := root.entries("reading", "what the crew read at one moment")
 	root.finish()
 	if len(ts) == 0 && len(r.probs) == 0 {

@@ -114,27 +114,12 @@ func OpenScenario(nameOrPath string) (*Scenario, error) {
 // an event out of time order or past the end, a compartment, connection or
 // kind the vessel does not have, a breach or pump that cannot be.
 func ParseScenario(file string, data []byte, dir string) (*Scenario, error) {
-	if len(data) > MaxFileBytes {
-		return nil, Problems{{File: file, Line: 1, Key: "syntax", Msg: errTooLarge.Error()}}
+	r, root, err := decode(file, data)
+	if err != nil {
+		return nil, err
 	}
-	if p := tooDeep(file, data); p != nil {
-		return nil, Problems{*p}
-	}
-	var doc map[string]any
-	if _, err := toml.Decode(string(data), &doc); err != nil {
-		return nil, syntaxProblem(file, err)
-	}
-	r := &reader{file: file, lines: indexLines(string(data))}
-	if r.tooMany("", doc) {
-		return nil, r.probs.sorted()
-	}
-	root := r.table("", doc)
 	sc := &Scenario{File: file, Seed: 1}
-	if f, ok := root.get("format"); !ok {
-		r.addf("format", "missing: the file must say format = %d", FormatVersion)
-	} else if n, ok := f.(int64); !ok || n != FormatVersion {
-		r.addf("format", "%v is not a format this heelwatch reads: write format = %d (a whole number)", tomlText(f), FormatVersion)
-	}
+	r.format(root)
 	if s, ok := root.str("name", false, "the scenario's name"); ok && r.checkText("name", s, "the scenario's name") {
 		sc.Name = s
 	}

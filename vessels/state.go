@@ -57,21 +57,10 @@ func StateVessel(path string) (string, error) {
 // and vessel, [[space]], [[connection_state]] and [[reading]] tables.
 // Every problem comes back at once as Problems with file, line and key.
 func ParseState(file string, data []byte, v *engine.Vessel, info *Info) (*State, error) {
-	if len(data) > MaxFileBytes {
-		return nil, Problems{{File: file, Line: 1, Key: "syntax", Msg: errTooLarge.Error()}}
+	r, root, err := decode(file, data)
+	if err != nil {
+		return nil, err
 	}
-	if p := tooDeep(file, data); p != nil {
-		return nil, Problems{*p}
-	}
-	var doc map[string]any
-	if _, err := toml.Decode(string(data), &doc); err != nil {
-		return nil, syntaxProblem(file, err)
-	}
-	r := &reader{file: file, lines: indexLines(string(data))}
-	if r.tooMany("", doc) {
-		return nil, r.probs.sorted()
-	}
-	root := r.table("", doc)
 	s := &State{Damage: v.Intact(), ConnectionsOpen: make([]bool, len(v.Connections))}
 	for i, c := range v.Connections {
 		s.ConnectionsOpen[i] = c.Open

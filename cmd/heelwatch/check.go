@@ -136,6 +136,7 @@ func summarise(w io.Writer, v *engine.Vessel, info *vessels.Info) int {
 		crit = strings.Join(v.CriteriaSets, ", ")
 	}
 	fmt.Fprintf(tw, "  criteria\t%s\n", crit)
+	fmt.Fprintf(tw, "  strength\t%s\n", strengthWords(v))
 	tw.Flush()
 	practice(w, v, info)
 

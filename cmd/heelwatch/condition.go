@@ -1,8 +1,6 @@
 package main
 
 import (
-	"errors"
-	"fmt"
 	"io"
 	"path/filepath"
 	"strings"
@@ -25,16 +23,7 @@ func withCondition(v *engine.Vessel, info *vessels.Info, path string, stderr io.
 		nv, err = c.Apply(v)
 	}
 	if err != nil {
-		var ps vessels.Problems
-		if errors.As(err, &ps) {
-			for _, p := range ps {
-				fmt.Fprintln(stderr, p.String())
-			}
-			fmt.Fprintf(stderr, "heelwatch: %s: %s; nothing was computed\n", path, plural(len(ps), "problem"))
-		} else {
-			fmt.Fprintf(stderr, "heelwatch: condition %s: %v; nothing was computed\n", path, err)
-		}
-		return nil, nil, exitInput
+		return nil, nil, refuse(stderr, "heelwatch", path, "nothing was computed", err, "condition "+path)
 	}
 	if info != nil {
 		info.Condition = c.Name
@@ -54,16 +43,7 @@ func resumeState(base *engine.Vessel, info *vessels.Info, path string, stderr io
 		v, err = s.Condition.Apply(base)
 	}
 	if err != nil {
-		var ps vessels.Problems
-		if errors.As(err, &ps) {
-			for _, p := range ps {
-				fmt.Fprintln(stderr, p.String())
-			}
-			fmt.Fprintf(stderr, "heelwatch: %s: %s; nothing was taken up\n", path, plural(len(ps), "problem"))
-		} else {
-			fmt.Fprintf(stderr, "heelwatch: --resume %s: %v\n", path, err)
-		}
-		return nil, nil, exitInput
+		return nil, nil, refuse(stderr, "heelwatch", path, "nothing was taken up", err, "--resume "+path)
 	}
 	for i, open := range s.ConnectionsOpen {
 		if v.Connections[i].Open != open {

@@ -1,7 +1,6 @@
 package main
 
 import (
-	"errors"
 	"flag"
 	"fmt"
 	"io"
@@ -21,8 +20,8 @@ Flags:
   --condition FILE    a condition file in place of the vessel file's loading
                       condition (weights; tanks by fill, m³, tonnes or sounding)
   --readings FILE     the readings: drafts at the marks, heel, soundings, each
-                      [[reading]] at its minutes (see README, "Readings and
-                      diagnosis")
+                      [[reading]] at its minutes (see README, "Draft marks,
+                      readings and diagnosis")
   --format F          text (default) or json
 
 The latest reading is explained: every single compartment, every pair of
@@ -71,16 +70,7 @@ func runDiagnose(args []string, stdout, stderr io.Writer) int {
 	}
 	rs, err := vessels.LoadReadings(*readings, v)
 	if err != nil {
-		var ps vessels.Problems
-		if errors.As(err, &ps) {
-			for _, p := range ps {
-				fmt.Fprintln(stderr, p.String())
-			}
-			fmt.Fprintf(stderr, "heelwatch diagnose: %s: %s; nothing was diagnosed\n", *readings, plural(len(ps), "problem"))
-		} else {
-			fmt.Fprintln(stderr, "heelwatch diagnose:", err)
-		}
-		return exitInput
+		return refuse(stderr, "heelwatch diagnose", *readings, "nothing was diagnosed", err, "")
 	}
 	d, err := diagnose(v, info, rs)
 	if err != nil {

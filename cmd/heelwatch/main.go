@@ -225,16 +225,7 @@ func openVessel(nameOrPath string, stderr io.Writer) (*engine.Vessel, *vessels.I
 	}
 	v, info, err := vessels.Open(nameOrPath)
 	if err != nil {
-		var ps vessels.Problems
-		if errors.As(err, &ps) {
-			for _, p := range ps {
-				fmt.Fprintln(stderr, p.String())
-			}
-			fmt.Fprintf(stderr, "heelwatch: %s: %s; nothing was computed\n", nameOrPath, plural(len(ps), "problem"))
-		} else {
-			fmt.Fprintln(stderr, "heelwatch:", err)
-		}
-		return nil, nil, exitInput
+		return nil, nil, refuse(stderr, "heelwatch", nameOrPath, "nothing was computed", err, "")
 	}
 	if info == nil {
 		info = &vessels.Info{File: nameOrPath}
