@@ -122,6 +122,9 @@ func handShip(v *Vessel, d Damage) (*HandWorking, error) {
 		return nil, &HandNotApplicable{"no waterplane is left at the new draft"}
 	}
 	xF, yF := e.SX/A1, e.SY/A1
+	if math.Abs(yF) < 1e-9*h.BreadthM {
+		yF = 0 // round-off of a symmetric waterplane
+	}
 	w.IntactDraftM, w.VolumeM3, w.LostVolumeM3 = T0, V, v0
 	w.SinkageM, w.DraftM = s, T1
 	w.LostAreaM2, w.WaterplaneM2 = lost.AW, A1
