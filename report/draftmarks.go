@@ -85,13 +85,13 @@ func markLines(r Report) []string {
 	if len(md) == 0 {
 		return nil
 	}
-	t := table{right: []bool{false, true, false, true, false}}
+	t := table{right: []bool{false, false, true, false, true, false}}
 	for _, m := range md {
 		note := ""
 		if m.State != engine.MarkReads {
 			note = m.State.String()
 		}
-		t.add(m.Name, num(m.XM, 1, "m"), MarkSideWord(m.Side), num(m.DraftM, 2, "m"), note)
+		t.add(m.Name, "at x", num(m.XM, 1, "m"), MarkSideWord(m.Side), num(m.DraftM, 2, "m"), note)
 	}
 	lines := append([]string{"Draft marks (what the crew will read)"}, t.lines("  ")...)
 	if s, err := engine.SurveyMarks(r.Vessel.Hull.LengthM, r.Assessment.Position.Plane.C, md); err == nil {

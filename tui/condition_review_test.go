@@ -107,3 +107,17 @@ func indexOfVessel(t *testing.T, v *engine.Vessel, name string) int {
 	t.Fatalf("no compartment %q", name)
 	return -1
 }
+
+// TestPanelHelpBarWhileTyping: while a value or a reading is typed the
+// help bar gives the keys that answer then (q is typed, not quit).
+func TestPanelHelpBarWhileTyping(t *testing.T) {
+	m := bundledModel(t, "freighter", 80, 24)
+	m = press(t, m, "L", "e")
+	if bar := ansi.Strip(strings.Join(m.helpLines(), " ")); !strings.Contains(bar, "enter take it") || strings.Contains(bar, "q quit") {
+		t.Errorf("typing a tank's contents, the help bar reads %q", bar)
+	}
+	m = press(t, m, "esc", "r", "n")
+	if bar := ansi.Strip(strings.Join(m.helpLines(), " ")); !strings.Contains(bar, "enter take the reading") || strings.Contains(bar, "q quit") {
+		t.Errorf("typing a reading, the help bar reads %q", bar)
+	}
+}

@@ -82,14 +82,38 @@ func (m *drillModel) crewView(w, h int) string {
 	if len(feed) == 0 {
 		lines = append(lines, "  nothing yet")
 	}
-	if room > 0 && len(feed) > room {
-		feed = feed[len(feed)-room:]
-	}
-	for _, f := range feed {
-		lines = append(lines, clipText(fmt.Sprintf("  %s  %s", clock(f.Minutes), f.Text), w))
-	}
+	lines = append(lines, toldLines(feed, w, room)...)
 	lines = append(lines, picture...)
 	return strings.Join(lines, "\n")
+}
+
+// toldLines lays out what the crew has been told, each message whole
+// (wrapped under its time, not cut: a report from a party is read to its
+// end), the newest that fit in room lines (all of them when room ≤ 0).
+func toldLines(feed []report.CrewMessage, w, room int) []string {
+	var entries [][]string
+	for _, f := range feed {
+		stamp := fmt.Sprintf("  %s  ", clock(f.Minutes))
+		e := wrapWords(strings.Fields(f.Text), w, strings.Repeat(" ", lipgloss.Width(stamp)))
+		if len(e) == 0 {
+			e = []string{stamp}
+		}
+		e[0] = stamp + strings.TrimLeft(e[0], " ")
+		for i := range e {
+			e[i] = clipText(e[i], w)
+		}
+		entries = append(entries, e)
+	}
+	n, start := 0, len(entries)
+	for start > 0 && (room <= 0 || n == 0 || n+len(entries[start-1]) <= room) {
+		start--
+		n += len(entries[start])
+	}
+	var out []string
+	for _, e := range entries[start:] {
+		out = append(out, e...)
+	}
+	return out
 }
 
 // crewPicture is what the crew has marked and ordered.

@@ -238,6 +238,7 @@ func (m *model) setStyles() {
 	m.spin.Style = m.st.Busy
 	m.input.PromptStyle = m.st.Prompt
 	m.input.TextStyle = m.st.Value
+	m.input.PlaceholderStyle = m.st.Dim // bubbles' own grey is not red at night
 	m.bar = progress.New(progress.WithSolidFill(m.st.BarColor), progress.WithColorProfile(m.rend.ColorProfile()))
 	m.bar.EmptyColor = ""
 	m.form.st = m.st

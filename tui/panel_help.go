@@ -11,6 +11,10 @@ func (m model) panelHelp() []key.Binding {
 		return key.NewBinding(key.WithKeys(keys), key.WithHelp(keys, desc))
 	}
 	switch {
+	case m.cond.typing != condNone:
+		return []key.Binding{say("enter", "take it"), say("esc", "drop it"), say("ctrl+c", "quit")}
+	case m.rd.show && m.rd.form.on:
+		return []key.Binding{say("tab/↑↓", "field"), say("enter", "take the reading"), say("esc", "cancel"), say("ctrl+c", "quit")}
 	case m.cond.show && m.cond.base != nil:
 		return []key.Binding{say("↑↓", "tank/weight"), say("+/−", "fill 5 %"), say("e", "type"),
 			say("n", "new weight"), say("x", "remove"), say("←→", "move 1 m"), say("W", "save"),

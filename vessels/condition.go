@@ -302,7 +302,7 @@ func (r *reader) tankFill(t *table, v *engine.Vessel, info *Info, seen map[int]s
 			return tf, false
 		}
 		if f > top-datum+1e-9 {
-			r.addf(p, "%g m is above the top of %q at its sounding pipe (%.3f m from the tank's bottom at x = %g, y = %g): the tank cannot hold more", f, c.Name, top-datum, tf.Pipe.X, tf.Pipe.Y)
+			r.addf(p, "%g m is above the top of %q at its sounding pipe (%.3f m from the tank's bottom at x = %.2f m, y = %.2f m): the tank cannot hold more", f, c.Name, top-datum, tf.Pipe.X, tf.Pipe.Y)
 			return tf, false
 		}
 		tf.SoundingM = f
