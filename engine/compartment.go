@@ -22,10 +22,12 @@ type Liquid struct {
 type Compartment struct {
 	Name         string
 	Use          string
-	Permeability float64 // μ, 0 < μ ≤ 1: the fraction of the space that water can fill
-	Box          Box
-	Liquid       *Liquid // nil for a dry space
-	PumpM3h      float64 // pumping capacity on the compartment, m³/h (0: none given); the righting options' times
+	Permeability float64              // μ, 0 < μ ≤ 1: the fraction of the space that water can fill
+	Box          Box                  // the box clipped by the hull; for a compartment given by sections, the box that holds its outlines
+	Liquid       *Liquid              // nil for a dry space
+	Sections     []CompartmentSection // nil for a box; else its outlines (compartment_sections.go)
+	pieces       []prismPiece         // the region of a compartment given by sections
+	PumpM3h      float64              // pumping capacity on the compartment, m³/h (0: none given); the righting options' times
 
 	solid *Solid
 }
@@ -67,10 +69,16 @@ func NewCompartment(h *Hull, name string, b Box) (*Compartment, error) {
 // for vertex.
 func clipSolid(s *Solid, b Box) *Solid {
 	planes := []halfPlane{{-1, 0, -b.Y0}, {1, 0, b.Y1}, {0, -1, -b.Z0}, {0, 1, b.Z1}}
-	var out []slab
+	return newSolid(clipSlabs(nil, s, b.X0, b.X1, planes))
+}
+
+// clipSlabs appends to out the slabs of the part of s between x0 and x1
+// inside every one of planes (a convex region of the section, the same
+// all along).
+func clipSlabs(out []slab, s *Solid, x0, x1 float64, planes []halfPlane) []slab {
 	for i := range s.slabs {
 		sl := &s.slabs[i]
-		xa, xb := math.Max(sl.x0, b.X0), math.Min(sl.x1, b.X1)
+		xa, xb := math.Max(sl.x0, x0), math.Min(sl.x1, x1)
 		if !(xb > xa) {
 			continue
 		}
@@ -90,7 +98,7 @@ func clipSolid(s *Solid, b Box) *Solid {
 			out = appendClipped(out, sl, planes, cuts[j-1], cuts[j], 0)
 		}
 	}
-	return newSolid(out)
+	return out
 }
 
 func clipSection(p []Point, planes []halfPlane) ([]Point, uint64) {

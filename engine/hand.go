@@ -123,7 +123,7 @@ func HandMethod(v *Vessel, d Damage) (*HandWorking, error) {
 	}
 	h := v.Hull
 	if !h.Box {
-		return nil, &HandNotApplicable{"the hand method is for box-shaped vessels; this hull is from station offsets"}
+		return handShip(v, d) // hand_ship.go
 	}
 	L, B, D := h.LengthM, h.BreadthM, h.DepthM
 	spaces, spilt, spiltT, err := handSpaces(v, d)
@@ -311,6 +311,8 @@ func handSpaces(v *Vessel, d Damage) (spaces []handSpace, spilt []string, spiltT
 	for i, c := range v.Compartments {
 		s := d.state(i)
 		switch {
+		case s.Open && c.Sections != nil:
+			return nil, nil, 0, &HandNotApplicable{fmt.Sprintf("%s is given by its own outlines, not a box: the box closed forms do not describe it", c.Name)}
 		case s.Open:
 			b := c.Box
 			hs := handSpace{name: c.Name, mu: v.Permeability(d, i),

@@ -339,7 +339,7 @@ func TestHandNotApplicable(t *testing.T) {
 	wing := handSpec{"wing", engine.Box{X0: 20, X1: 40, Y0: 2, Y1: 6, Z0: 0, Z1: 6}, 1, nil}
 	hold := handSpec{"hold", engine.Box{X0: 10, X1: 50, Y0: -6, Y1: 6, Z0: 0, Z1: 6}, 1, nil}
 	mass := engine.SeaWaterDensity * 60 * 12 * 3
-	sv := handVessel(t, sh, handWeight(mass, 30, 0, 4), wing)
+	_ = sh // a hull from offsets has the ship's working (hand_ship_test.go)
 	bv := handBox(t, 60, 12, 6, handWeight(mass, 30, 0, 4), wing, hold)
 	heldOnly := bv.Intact()
 	heldOnly[0].WaterM3 = 50
@@ -351,7 +351,6 @@ func TestHandNotApplicable(t *testing.T) {
 		d    engine.Damage
 		want string // part of the reason
 	}{
-		{"hull from offsets", sv, handOpen(sv, 0), "the hand method is for box-shaped vessels; this hull is from station offsets"},
 		{"nothing open", bv, bv.Intact(), "no compartment is open to the sea"},
 		{"only added-weight water", bv, heldOnly, "the only floodwater is held as an added weight (wing)"},
 		{"added weight beside an open space", bv, mixed, "held as an added weight in wing"},

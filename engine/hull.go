@@ -133,8 +133,8 @@ func NewSectionHull(length float64, stations []Station) (*Hull, error) {
 		// body) is one prismatic slab: the same body, integrated in one
 		// piece instead of one per station.
 		j := i
-		for j+1 < len(h.stations) && sameOffsets(h.stations[i-1].Offsets, h.stations[j].Offsets) &&
-			sameOffsets(h.stations[j].Offsets, h.stations[j+1].Offsets) {
+		for j+1 < len(h.stations) && samePoints(h.stations[i-1].Offsets, h.stations[j].Offsets) &&
+			samePoints(h.stations[j].Offsets, h.stations[j+1].Offsets) {
 			j++
 		}
 		a, b := matchStations(h.stations[i-1].Offsets, h.stations[j].Offsets)
@@ -153,19 +153,6 @@ func NewSectionHull(length float64, stations []Station) (*Hull, error) {
 		h.levelV = append(h.levelV, h.solid.Below(Plane{A: a}).V)
 	}
 	return h, nil
-}
-
-// sameOffsets reports whether two stations have the same offsets.
-func sameOffsets(a, b []Point) bool {
-	if len(a) != len(b) {
-		return false
-	}
-	for k := range a {
-		if a[k] != b[k] {
-			return false
-		}
-	}
-	return true
 }
 
 func maxHalfBreadth(off []Point) float64 {

@@ -407,10 +407,18 @@ func (r *reader) compartments(ts []*table, hull *engine.Hull) ([]*engine.Compart
 			mu = uses[use].permeability
 			ci.DefaultPermeabilityFromUse = true
 		}
-		bx, xOK := t.bounds("x", "aft and forward bounds")
-		by, yOK := t.bounds("y", "port and starboard bounds")
-		bz, zOK := t.bounds("z", "bottom and top")
+		secs, secBox, secsOK := r.sectionOutlines(t)
+		var bx, by, bz [2]float64
+		xOK, yOK, zOK := secsOK, secsOK, secsOK
+		if secs == nil {
+			bx, xOK = t.bounds("x", "aft and forward bounds")
+			by, yOK = t.bounds("y", "port and starboard bounds")
+			bz, zOK = t.bounds("z", "bottom and top")
+		}
 		box := engine.Box{X0: bx[0], X1: bx[1], Y0: by[0], Y1: by[1], Z0: bz[0], Z1: bz[1]}
+		if secs != nil {
+			box = secBox
+		}
 		ci.Group = uses[use].group
 		if g, ok := t.str("group", false, "the compartment's group, e.g. \"double bottom\""); ok {
 			if strings.TrimSpace(g) == "" {
@@ -435,7 +443,15 @@ func (r *reader) compartments(ts []*table, hull *engine.Hull) ([]*engine.Compart
 		if !r.insideHull(t, hull, box) {
 			continue
 		}
-		c, err := engine.NewCompartment(hull, name, box)
+		var c *engine.Compartment
+		var err error
+		if secs != nil {
+			if c = r.sectionCompartment(t, hull, name, secs); c == nil {
+				continue
+			}
+		} else {
+			c, err = engine.NewCompartment(hull, name, box)
+		}
 		if err != nil {
 			r.addf(t.path, "%q holds no part of the hull: its box x [%g, %g], y [%g, %g], z [%g, %g] lies outside the shell", name, bx[0], bx[1], by[0], by[1], bz[0], bz[1])
 			continue
@@ -454,7 +470,7 @@ func (r *reader) compartments(ts []*table, hull *engine.Hull) ([]*engine.Compart
 			c.Liquid = &liquid.Liquid
 		}
 		for j, o := range out {
-			if v := overlap(hull, o.Box, box); v > 0 {
+			if v := overlapM3(hull, o, c); v > 0 {
 				r.addf(t.path, "%q overlaps %s %q by %.3g m³ inside the hull: compartments may touch but not overlap", name, paths[j], o.Name, v)
 			}
 		}

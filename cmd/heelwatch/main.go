@@ -57,6 +57,8 @@ Usage:
   heelwatch flood [flags]            flooding through a hole over time
   heelwatch diagnose --readings FILE what is flooding, from the crew's readings
   heelwatch drill SCENARIO           a damage-control exercise (--run: headless)
+  heelwatch tables                   the hydrostatic and tank tables from the hull
+  heelwatch verify --hydrostatics H  the model against the booklet's tables
   heelwatch help [COMMAND]           help on a command
 
 Flags:
@@ -80,7 +82,7 @@ Flags:
   --help               this help
 
 Exit status: 0 done; 1 bad input (the vessel file); 2 bad usage;
-3 no equilibrium (she sinks or capsizes).
+3 no equilibrium (she sinks or capsizes); 4 verify: values beyond tolerance.
 
 heelwatch is decision support only: the ship's approved stability
 information, the master, class and flag state govern.
@@ -143,6 +145,10 @@ func run(args []string, stdout, stderr io.Writer) int {
 		return runDiagnose(withVessel(rest), stdout, stderr)
 	case "drill":
 		return runDrill(rest, stdout, stderr)
+	case "tables":
+		return runTables(withVessel(rest), stdout, stderr)
+	case "verify":
+		return runVerify(withVessel(rest), stdout, stderr)
 	case "help":
 		if len(rest) == 0 {
 			fmt.Fprintf(stdout, mainHelp, vessels.Default)

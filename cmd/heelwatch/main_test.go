@@ -49,12 +49,12 @@ func TestSolveJSONContract(t *testing.T) {
 	tests := []struct {
 		name     string
 		args     []string
-		wantHand bool // the hand method applies: a box hull with a compartment open
+		wantHand bool // the hand method applies: a compartment open to the sea
 	}{
 		{"barge intact", []string{"--vessel", "barge"}, false},
 		{"barge two open", []string{"--vessel", "barge", "--open", "1 wing void S,Hold aft"}, true},
 		{"default ship intact", nil, false},
-		{"default ship two open", []string{"--open", "Wing tank 2 S,DB 2 S"}, false},
+		{"default ship two open", []string{"--open", "Wing tank 2 S,DB 2 S"}, true},
 	}
 	for _, tc := range tests {
 		t.Run(tc.name, func(t *testing.T) {

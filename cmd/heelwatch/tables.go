@@ -1,0 +1,256 @@
+package main
+
+import (
+	"encoding/csv"
+	"encoding/json"
+	"flag"
+	"fmt"
+	"io"
+	"math"
+	"strconv"
+	"text/tabwriter"
+
+	"heelwatch/engine"
+)
+
+const tablesHelp = `heelwatch tables: the ship's hydrostatic and tank tables, from her hull.
+
+Usage:
+  heelwatch tables [--vessel FILE|NAME] [--table T] [--step M] [--format F]
+
+  --table T    hydrostatics, tanks or capacity (csv: one table, default
+               hydrostatics; text and json: all three unless one is named)
+  --step M     the drafts' step, m (default 0.25, from one step above the
+               keel to the deck at side); the tanks' soundings step M/2.5
+  --format F   text (default), csv or json
+
+hydrostatics: at even keel and upright, per draft: displacement, LCB, VCB
+(KB), LCF, TPC, MCTC, KMT, KML (columns as heelwatch verify reads them).
+tanks: each tank full (μ × its volume) and its centre. capacity: each tank
+level by level from empty to full: sounding above its lowest point, volume,
+centre, free-surface moment (its own liquid's density; sea water if none).
+`
+
+// tanksOf returns the indices of v's tanks (use "tank").
+func tanksOf(v *engine.Vessel) []int {
+	var out []int
+	for i, c := range v.Compartments {
+		if c.Use == "tank" {
+			out = append(out, i)
+		}
+	}
+	return out
+}
+
+// hydroTable returns the hydrostatic table of v from step to the deck at
+// side (the least depth at side, so that every draft has a waterplane).
+func hydroTable(v *engine.Vessel, step float64) []engine.HydroRow {
+	h := v.Hull
+	top := h.DepthM
+	for i := range h.Stations() {
+		_, _, z := h.DeckEdge(i)
+		top = math.Min(top, z)
+	}
+	var rows []engine.HydroRow
+	for k := 1; ; k++ {
+		T := math.Round(float64(k)*step*1e6) / 1e6
+		if T >= top-1e-9 {
+			return rows
+		}
+		if r, err := engine.Hydrostatics(h, v.WaterDensity, T); err == nil {
+			rows = append(rows, r)
+		}
+	}
+}
+
+// tankFull is one line of the tanks table: a tank full.
+type tankFull struct {
+	Name     string  `json:"name"`
+	VolumeM3 float64 `json:"volume_m3"`
+	LCGM     float64 `json:"lcg_m"`
+	TCGM     float64 `json:"tcg_m"`
+	VCGM     float64 `json:"vcg_m"`
+}
+
+func fullTanks(v *engine.Vessel) []tankFull {
+	var out []tankFull
+	for _, i := range tanksOf(v) {
+		c := v.Compartments[i]
+		x, y, z := c.Solid().Whole().Centroid()
+		out = append(out, tankFull{c.Name, c.Permeability * c.Volume(), x, y, z})
+	}
+	return out
+}
+
+func liquidDensity(c *engine.Compartment, water float64) float64 {
+	if c.Liquid != nil && c.Liquid.Density > 0 {
+		return c.Liquid.Density
+	}
+	return water
+}
+
+var hydroColumns = []string{"draft_m", "displacement_t", "lcb_m", "vcb_m", "lcf_m", "tpc_t", "mct_tm", "kmt_m", "kml_m"}
+
+func hydroValues(r engine.HydroRow) []float64 {
+	return []float64{r.DraftM, r.DisplacementT, r.LCBM, r.VCBM, r.LCFM, r.TPCt, r.MCTCtm, r.KMTM, r.KMLM}
+}
+
+func runTables(args []string, stdout, stderr io.Writer) int {
+	fs := flag.NewFlagSet("heelwatch tables", flag.ContinueOnError)
+	fs.SetOutput(stderr)
+	fs.Usage = func() {}
+	vessel := fs.String("vessel", "", "")
+	table := fs.String("table", "", "")
+	step := fs.Float64("step", 0.25, "")
+	format := fs.String("format", "text", "")
+	help := func(w io.Writer) { fmt.Fprint(w, tablesHelp) }
+	rest, err := parseInterleaved(fs, args)
+	if err != nil {
+		return usageError(err, stdout, stderr, "tables", help)
+	}
+	switch {
+	case len(rest) > 0:
+		fmt.Fprintf(stderr, "heelwatch tables: unexpected argument %q (the vessel is --vessel)\n", rest[0])
+		return exitUsage
+	case *table != "" && *table != "hydrostatics" && *table != "tanks" && *table != "capacity":
+		fmt.Fprintf(stderr, "heelwatch tables: --table %q: give hydrostatics, tanks or capacity\n", *table)
+		return exitUsage
+	case !(*step >= 0.01 && *step <= 5):
+		fmt.Fprintf(stderr, "heelwatch tables: --step %g: give a step in metres from 0.01 to 5\n", *step)
+		return exitUsage
+	case *format != "text" && *format != "csv" && *format != "json":
+		fmt.Fprintf(stderr, "heelwatch tables: --format %q: give text, csv or json\n", *format)
+		return exitUsage
+	}
+	v, info, status := openVessel(*vessel, stderr)
+	if status != exitOK {
+		return status
+	}
+	want := func(t string) bool { return *table == "" || *table == t }
+	if *format == "csv" && *table == "" {
+		*table = "hydrostatics"
+	}
+	hyd := hydroTable(v, *step)
+	tanks := fullTanks(v)
+	sstep := *step / 2.5
+	var werr error
+	switch *format {
+	case "csv":
+		cw := csv.NewWriter(stdout)
+		f := func(x float64) string {
+			s := strconv.FormatFloat(x, 'f', 4, 64)
+			if s == "-0.0000" {
+				s = "0.0000"
+			}
+			return s
+		}
+		switch *table {
+		case "hydrostatics":
+			cw.Write(hydroColumns)
+			for _, r := range hyd {
+				var rec []string
+				for _, x := range hydroValues(r) {
+					rec = append(rec, f(x))
+				}
+				cw.Write(rec)
+			}
+		case "tanks":
+			cw.Write([]string{"name", "volume_m3", "lcg_m", "tcg_m", "vcg_m"})
+			for _, t := range tanks {
+				cw.Write([]string{t.Name, f(t.VolumeM3), f(t.LCGM), f(t.TCGM), f(t.VCGM)})
+			}
+		case "capacity":
+			cw.Write([]string{"name", "sounding_m", "volume_m3", "lcg_m", "tcg_m", "vcg_m", "fsm_tm"})
+			for _, i := range tanksOf(v) {
+				c := v.Compartments[i]
+				for _, r := range engine.CapacityTable(c, liquidDensity(c, v.WaterDensity), sstep) {
+					cw.Write([]string{c.Name, f(r.SoundingM), f(r.VolumeM3), f(r.LCGM), f(r.TCGM), f(r.VCGM), f(r.FSMTm)})
+				}
+			}
+		}
+		cw.Flush()
+		werr = cw.Error()
+	case "json":
+		type hrow struct {
+			DraftM        float64 `json:"draft_m"`
+			DisplacementT float64 `json:"displacement_t"`
+			LCBM          float64 `json:"lcb_m"`
+			VCBM          float64 `json:"vcb_m"`
+			LCFM          float64 `json:"lcf_m"`
+			TPCt          float64 `json:"tpc_t"`
+			MCTtm         float64 `json:"mct_tm"`
+			KMTM          float64 `json:"kmt_m"`
+			KMLM          float64 `json:"kml_m"`
+		}
+		type crow struct {
+			SoundingM float64 `json:"sounding_m"`
+			VolumeM3  float64 `json:"volume_m3"`
+			LCGM      float64 `json:"lcg_m"`
+			TCGM      float64 `json:"tcg_m"`
+			VCGM      float64 `json:"vcg_m"`
+			FSMtm     float64 `json:"fsm_tm"`
+		}
+		type tank struct {
+			tankFull
+			Capacity []crow `json:"capacity,omitempty"`
+		}
+		doc := struct {
+			Vessel       string `json:"vessel"`
+			Hydrostatics []hrow `json:"hydrostatics,omitempty"`
+			Tanks        []tank `json:"tanks,omitempty"`
+		}{Vessel: v.Name}
+		if want("hydrostatics") {
+			for _, r := range hyd {
+				doc.Hydrostatics = append(doc.Hydrostatics, hrow{r.DraftM, r.DisplacementT, r.LCBM, r.VCBM, r.LCFM, r.TPCt, r.MCTCtm, r.KMTM, r.KMLM})
+			}
+		}
+		if want("tanks") || want("capacity") {
+			for k, i := range tanksOf(v) {
+				t := tank{tankFull: tanks[k]}
+				if want("capacity") {
+					c := v.Compartments[i]
+					for _, r := range engine.CapacityTable(c, liquidDensity(c, v.WaterDensity), sstep) {
+						t.Capacity = append(t.Capacity, crow{r.SoundingM, r.VolumeM3, r.LCGM, r.TCGM, r.VCGM, r.FSMTm})
+					}
+				}
+				doc.Tanks = append(doc.Tanks, t)
+			}
+		}
+		enc := json.NewEncoder(stdout)
+		enc.SetIndent("", "  ")
+		werr = enc.Encode(doc)
+	default:
+		tw := tabwriter.NewWriter(stdout, 0, 0, 2, ' ', tabwriter.AlignRight)
+		fmt.Fprintf(tw, "%s — %s\n", v.Name, source(info))
+		if want("hydrostatics") {
+			fmt.Fprintf(tw, "\nHydrostatics, even keel, upright, water %.3f t/m³\n", v.WaterDensity)
+			fmt.Fprintln(tw, "draft m\tΔ t\tLCB m\tKB m\tLCF m\tTPC t\tMCTC t·m\tKMT m\tKML m\t")
+			for _, r := range hyd {
+				fmt.Fprintf(tw, "%.3f\t%.1f\t%.3f\t%.3f\t%.3f\t%.2f\t%.1f\t%.3f\t%.1f\t\n", r.DraftM, r.DisplacementT, r.LCBM, r.VCBM, r.LCFM, r.TPCt, r.MCTCtm, r.KMTM, r.KMLM)
+			}
+		}
+		if want("tanks") {
+			fmt.Fprintln(tw, "\nTanks full (μ × volume)")
+			fmt.Fprintln(tw, "tank\tm³\tLCG m\tTCG m\tVCG m\t")
+			for _, t := range tanks {
+				fmt.Fprintf(tw, "%s\t%.1f\t%.3f\t%.3f\t%.3f\t\n", t.Name, t.VolumeM3, t.LCGM, t.TCGM, t.VCGM)
+			}
+		}
+		if want("capacity") {
+			for _, i := range tanksOf(v) {
+				c := v.Compartments[i]
+				fmt.Fprintf(tw, "\nCapacity: %s (%.3f t/m³)\n", c.Name, liquidDensity(c, v.WaterDensity))
+				fmt.Fprintln(tw, "sounding m\tm³\tLCG m\tTCG m\tVCG m\tFSM t·m\t")
+				for _, r := range engine.CapacityTable(c, liquidDensity(c, v.WaterDensity), sstep) {
+					fmt.Fprintf(tw, "%.3f\t%.1f\t%.3f\t%.3f\t%.3f\t%.1f\t\n", r.SoundingM, r.VolumeM3, r.LCGM, r.TCGM, r.VCGM, r.FSMTm)
+				}
+			}
+		}
+		werr = tw.Flush()
+	}
+	if werr != nil {
+		fmt.Fprintln(stderr, "heelwatch tables: writing the tables:", werr)
+		return exitFailed
+	}
+	return exitOK
+}
