@@ -178,11 +178,11 @@ func Assess(v *Vessel, d Damage) Assessment {
 	up := uprightUnknown
 	var upPtr *float64
 	if a.Position != nil {
-		gz, err := RightingLevers(pr, pos)
+		gz, err := pr.leversBothSides(pos)
 		if err != nil {
 			a.Notes = append(a.Notes, "GZ curve not computed: "+err.Error())
 		} else {
-			a.GZ = pr.withOtherSide(gz, pos)
+			a.GZ = gz
 		}
 		// The upright GM: from the curve's solved 0° sample where there is
 		// one (no further solve), else solved upright on its own.

@@ -407,11 +407,10 @@ func FloodCriteria(shipType string) func(v *Vessel, d Damage, pos Position) []Cr
 			return nil
 		}
 		pr := NewProblem(v, d)
-		curve, err := RightingLevers(pr, pos)
+		curve, err := pr.leversBothSides(pos)
 		if err != nil {
 			return nil
 		}
-		curve = pr.withOtherSide(curve, pos)
 		res, err := JudgeCriteria(v.CriteriaSets, CriteriaCase{Curve: curve, Eq: pos, Damaged: IsDamaged(d), ShipType: shipType})
 		if err != nil {
 			return nil
