@@ -100,7 +100,7 @@ type GZCurve struct {
 	Downflooding    string  // that opening's name, "" if none
 
 	Note  string   // why the curve ends early, "" when it runs its full span
-	Other *GZCurve // within NearUprightDeg of upright (Assess, FloodCriteria): the curve towards the other side (upright: this one is the worse); nil otherwise
+	Other *GZCurve // within NearUprightDeg of upright (Assess, FloodCriteria): the curve towards the other side (upright: this one is the worse; near upright, sampled every 3°, for criteria only); nil otherwise
 
 	upright    Plane // the solved 0° sample (free trim, same displacement)
 	hasUpright bool

@@ -118,6 +118,11 @@ type solvedHeel struct {
 // leverCurve computes the curve towards side, and returns the solved
 // samples (index-aligned with the curve's heels).
 func (pr *Problem) leverCurve(side Side, eq Position) (*GZCurve, []solvedHeel, error) {
+	return pr.leverCurveStep(side, eq, gzStepDeg)
+}
+
+// leverCurveStep is leverCurve with samples every stepDeg of heel.
+func (pr *Problem) leverCurveStep(side Side, eq Position, stepDeg float64) (*GZCurve, []solvedHeel, error) {
 	sgn := float64(side)
 	c := &GZCurve{Toward: side}
 	if eq.HeelDeg*sgn > 0 {
@@ -139,7 +144,7 @@ func (pr *Problem) leverCurve(side Side, eq Position) (*GZCurve, []solvedHeel, e
 	}
 	found := false
 	for k := 0; ; k++ {
-		deg := math.Min(float64(k)*gzStepDeg, gzEndDeg)
+		deg := math.Min(float64(k)*stepDeg, gzEndDeg)
 		guess := start
 		if n := len(sol); n > 0 {
 			guess = hermitePlane(c.HeelDeg, sol, max(0, n-2), deg)
@@ -192,21 +197,26 @@ func (pr *Problem) leverCurve(side Side, eq Position) (*GZCurve, []solvedHeel, e
 		x, hb, z := h.DeckEdge(i)
 		deck = append(deck, immersionPoint{x: x, y: hb, z: z}, immersionPoint{x: x, y: -hb, z: z})
 	}
-	c.DeckEdgeDeg, _ = firstImmersion(sgn, c.HeelDeg, sol, deck)
-	pr.downflooding(c, sol)
+	c.DeckEdgeDeg, _ = pr.firstImmersionStep(sgn, c.HeelDeg, sol, deck, stepDeg)
+	pr.downfloodingStep(c, sol, stepDeg)
 	return c, sol, nil
 }
 
 // downflooding sets the curve's downflooding angle and opening from its
 // solved samples.
 func (pr *Problem) downflooding(c *GZCurve, sol []solvedHeel) {
+	pr.downfloodingStep(c, sol, gzStepDeg)
+}
+
+// downfloodingStep is downflooding for a curve sampled every stepDeg.
+func (pr *Problem) downfloodingStep(c *GZCurve, sol []solvedHeel, stepDeg float64) {
 	var open []immersionPoint
 	for _, o := range pr.v.Openings {
 		if !o.Weathertight && !pr.v.intoFlooded(o, pr.d) {
 			open = append(open, immersionPoint{o.X, o.Y, o.Z, o.Name})
 		}
 	}
-	c.DownfloodingDeg, c.Downflooding = firstImmersion(float64(c.Toward), c.HeelDeg, sol, open)
+	c.DownfloodingDeg, c.Downflooding = pr.firstImmersionStep(float64(c.Toward), c.HeelDeg, sol, open, stepDeg)
 }
 
 // mirrored returns the curve towards the other side of a problem that is

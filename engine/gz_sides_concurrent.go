@@ -46,7 +46,7 @@ func (pr *Problem) leversBothSides(eq Position) (*GZCurve, error) {
 	done := make(chan result, 1)
 	f := pr.fork()
 	go func() {
-		c, _, err := f.leverCurve(-toward, eq)
+		c, _, err := f.leverCurveStep(-toward, eq, otherSideStepDeg)
 		done <- result{c, err}
 	}()
 	gz, err := RightingLevers(pr, eq)
