@@ -260,18 +260,8 @@ func HandMethod(v *Vessel, d Damage) (*HandWorking, error) {
 		kl = lz / lv
 	}
 	step("KB of the remaining buoyant body", fmt.Sprintf("(L·B·T₁²/2 − v·kv)/V = (%s − %s×%s)/%s", n(LB*T1*T1/2), n(lv), n(kl), n(V)), w.KBM, "m")
-	w.KMM = w.KBM + w.BMM
-	step("KM", fmt.Sprintf("KB + BM = %s + %s", n(w.KBM), n(w.BMM)), w.KMM, "m")
-	W := ld.MassT
-	w.KGM = ld.VCGM
-	w.FSCM = ld.FSMTm / W
-	step("free-surface correction", fmt.Sprintf("ΣFSM/Δ = %s/%s", n(ld.FSMTm), n(W)), w.FSCM, "m")
-	w.GMM = w.KMM - w.KGM - w.FSCM
-	step("GM", fmt.Sprintf("KM − KG − FSC = %s − %s − %s", n(w.KMM), n(w.KGM), n(w.FSCM)), w.GMM, "m")
-	w.GMLM = w.KBM + w.BMLM - w.KGM - w.FSCM
-	step("GML", fmt.Sprintf("KB + BML − KG − FSC = %s + %s − %s − %s", n(w.KBM), n(w.BMLM), n(w.KGM), n(w.FSCM)), w.GMLM, "m")
-	if !(w.GMLM > 0) {
-		return nil, &HandNotApplicable{fmt.Sprintf("the longitudinal metacentric height is %s m: she has no trim stability for the method to work with", n(w.GMLM))}
+	if err := w.metacentre(ld, "BML"); err != nil {
+		return nil, err
 	}
 
 	// The list.
@@ -340,6 +330,28 @@ func handSpaces(v *Vessel, d Damage) (spaces []handSpace, spilt []string, spiltT
 }
 
 // step adds one line to the working.
+// metacentre works, from the working's KB, BM and BML and the load: KM =
+// KB + BM, the free-surface correction ΣFSM/Δ, GM = KM − KG − FSC and
+// GML = KB + BML − KG − FSC (bml names BML in the working's words). A GML
+// of zero or less leaves the method nothing to trim with: an error.
+func (w *HandWorking) metacentre(ld Load, bml string) error {
+	n := handNum
+	w.KMM = w.KBM + w.BMM
+	w.step("KM", fmt.Sprintf("KB + BM = %s + %s", n(w.KBM), n(w.BMM)), w.KMM, "m")
+	W := ld.MassT
+	w.KGM = ld.VCGM
+	w.FSCM = ld.FSMTm / W
+	w.step("free-surface correction", fmt.Sprintf("ΣFSM/Δ = %s/%s", n(ld.FSMTm), n(W)), w.FSCM, "m")
+	w.GMM = w.KMM - w.KGM - w.FSCM
+	w.step("GM", fmt.Sprintf("KM − KG − FSC = %s − %s − %s", n(w.KMM), n(w.KGM), n(w.FSCM)), w.GMM, "m")
+	w.GMLM = w.KBM + w.BMLM - w.KGM - w.FSCM
+	w.step("GML", fmt.Sprintf("KB + %s − KG − FSC = %s + %s − %s − %s", bml, n(w.KBM), n(w.BMLM), n(w.KGM), n(w.FSCM)), w.GMLM, "m")
+	if !(w.GMLM > 0) {
+		return &HandNotApplicable{fmt.Sprintf("the longitudinal metacentric height is %s m: she has no trim stability for the method to work with", n(w.GMLM))}
+	}
+	return nil
+}
+
 func (w *HandWorking) step(label, formula string, value float64, unit string) {
 	w.Steps = append(w.Steps, HandStep{label, formula, value, unit})
 }
