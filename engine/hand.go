@@ -279,12 +279,7 @@ func HandMethod(v *Vessel, d Damage) (*HandWorking, error) {
 	step("trim", fmt.Sprintf("(LCB − LCG)·L/GML = (%s − %s)×%s/%s (%s)", n(w.LCBM), n(ld.LCGM), n(L), n(w.GMLM), signWords(w.TrimM, "by the stern", "by the head", "even keel")), w.TrimM, "m")
 
 	// Drafts on the centreline, the waterline turning about F.
-	w.DraftAftM = T1 + w.TrimM*xF/L - tanT*yF
-	w.DraftFwdM = T1 - w.TrimM*(L-xF)/L - tanT*yF
-	w.DraftMidM = (w.DraftAftM + w.DraftFwdM) / 2
-	step("draft aft", fmt.Sprintf("T₁ + trim·xF/L − tan θ·yF = %s + %s×%s/%s − %s×%s", n(T1), n(w.TrimM), n(xF), n(L), n(tanT), n(yF)), w.DraftAftM, "m")
-	step("draft forward", fmt.Sprintf("T₁ − trim·(L − xF)/L − tan θ·yF = %s − %s×%s/%s − %s×%s", n(T1), n(w.TrimM), n(L-xF), n(L), n(tanT), n(yF)), w.DraftFwdM, "m")
-	w.Waterline = Plane{A: w.DraftAftM, B: -w.TrimM / L, C: tanT}
+	w.drafts(T1, xF, yF, L, tanT)
 
 	// Heel and trim solved together (I_xy kept): for the record.
 	w.handCoupled(iXY, V, L, lever, ld.LCGM)
@@ -330,6 +325,20 @@ func handSpaces(v *Vessel, d Damage) (spaces []handSpace, spilt []string, spiltT
 }
 
 // step adds one line to the working.
+// drafts reads the drafts on the centreline at the perpendiculars after
+// heeling and trimming about the new centre of flotation (xF, yF): the
+// waterline through (xF, yF) at the mean draft T1, falling by trim/L
+// forward and tan θ to port. They are the working's last steps.
+func (w *HandWorking) drafts(T1, xF, yF, L, tanT float64) {
+	n := handNum
+	w.DraftAftM = T1 + w.TrimM*xF/L - tanT*yF
+	w.DraftFwdM = T1 - w.TrimM*(L-xF)/L - tanT*yF
+	w.DraftMidM = (w.DraftAftM + w.DraftFwdM) / 2
+	w.step("draft aft", fmt.Sprintf("T₁ + trim·xF/L − tan θ·yF = %s + %s×%s/%s − %s×%s", n(T1), n(w.TrimM), n(xF), n(L), n(tanT), n(yF)), w.DraftAftM, "m")
+	w.step("draft forward", fmt.Sprintf("T₁ − trim·(L − xF)/L − tan θ·yF = %s − %s×%s/%s − %s×%s", n(T1), n(w.TrimM), n(L-xF), n(L), n(tanT), n(yF)), w.DraftFwdM, "m")
+	w.Waterline = Plane{A: w.DraftAftM, B: -w.TrimM / L, C: tanT}
+}
+
 // metacentre works, from the working's KB, BM and BML and the load: KM =
 // KB + BM, the free-surface correction ΣFSM/Δ, GM = KM − KG − FSC and
 // GML = KB + BML − KG − FSC (bml names BML in the working's words). A GML

@@ -172,12 +172,7 @@ func handShip(v *Vessel, d Damage) (*HandWorking, error) {
 	step("trim", fmt.Sprintf("Δ·(LCB − LCG)/(100·MCTC) = %s×(%s − %s)/(100×%s) (%s)", n(W), n(w.LCBM), n(ld.LCGM), n(mctc), signWords(w.TrimM, "by the stern", "by the head", "even keel")), w.TrimM, "m")
 
 	// Drafts on the centreline, the waterline turning about F.
-	w.DraftAftM = T1 + w.TrimM*xF/L - tanT*yF
-	w.DraftFwdM = T1 - w.TrimM*(L-xF)/L - tanT*yF
-	w.DraftMidM = (w.DraftAftM + w.DraftFwdM) / 2
-	step("draft aft", fmt.Sprintf("T₁ + trim·xF/L − tan θ·yF = %s + %s×%s/%s − %s×%s", n(T1), n(w.TrimM), n(xF), n(L), n(tanT), n(yF)), w.DraftAftM, "m")
-	step("draft forward", fmt.Sprintf("T₁ − trim·(L − xF)/L − tan θ·yF = %s − %s×%s/%s − %s×%s", n(T1), n(w.TrimM), n(L-xF), n(L), n(tanT), n(yF)), w.DraftFwdM, "m")
-	w.Waterline = Plane{A: w.DraftAftM, B: -w.TrimM / L, C: tanT}
+	w.drafts(T1, xF, yF, L, tanT)
 	w.handCoupled(iXY, V, L, lever, ld.LCGM)
 	return w, nil
 }
