@@ -122,7 +122,10 @@ func HandMethod(v *Vessel, d Damage) (*HandWorking, error) {
 		panic("engine: HandMethod needs a vessel made by NewVessel")
 	}
 	h := v.Hull
-	if !h.Box {
+	if !h.Box || openOutlined(v, d) {
+		// A ship-shaped hull, or a space given by its own outlines (a
+		// hopper tank on a box barge): the working from the hull's own
+		// hydrostatics, which on a box with box spaces is the same.
 		return handShip(v, d) // hand_ship.go
 	}
 	L, B, D := h.LengthM, h.BreadthM, h.DepthM
@@ -284,6 +287,17 @@ func HandMethod(v *Vessel, d Damage) (*HandWorking, error) {
 	// Heel and trim solved together (I_xy kept): for the record.
 	w.handCoupled(iXY, V, L, lever, ld.LCGM)
 	return w, nil
+}
+
+// openOutlined reports whether a compartment given by its own outlines is
+// open to the sea in d.
+func openOutlined(v *Vessel, d Damage) bool {
+	for i, c := range v.Compartments {
+		if d.state(i).Open && c.Sections != nil {
+			return true
+		}
+	}
+	return false
 }
 
 // handSpaces returns the compartments open to the sea as the hand method's
