@@ -172,6 +172,18 @@ func TestSectionCompartmentOpenOnBox(t *testing.T) {
 	if !(A+B*30+C*7 > 4.5) || !(wantFwd < D) {
 		t.Fatalf("the closed form's conditions do not hold: A %v B %v C %v", A, B, C)
 	}
+	// The hand method is worked for an outlined space too (from the hull's
+	// own hydrostatics): the prism lies wholly under the water, so it takes
+	// nothing from the waterplane and the sinkage is μ·v/(L·B), the box's
+	// closed form.
+	hw, err := engine.HandMethod(v, d)
+	if err != nil {
+		t.Fatalf("hand method on a box with an outlined space: %v", err)
+	}
+	mu := v.Permeability(d, 0)
+	if want := mu * pv / (L * Bm); math.Abs(hw.SinkageM-want) > 1e-9 {
+		t.Errorf("sinkage %.12f m, closed form μ·v/(L·B) = %.12f m", hw.SinkageM, want)
+	}
 }
 
 // solve3 solves a 3×3 linear system by Cramer's rule.

@@ -122,7 +122,10 @@ func HandMethod(v *Vessel, d Damage) (*HandWorking, error) {
 		panic("engine: HandMethod needs a vessel made by NewVessel")
 	}
 	h := v.Hull
-	if !h.Box {
+	if !h.Box || openOutlined(v, d) {
+		// A ship-shaped hull, or a space given by its own outlines (a
+		// hopper tank on a box barge): the working from the hull's own
+		// hydrostatics, which on a box with box spaces is the same.
 		return handShip(v, d) // hand_ship.go
 	}
 	L, B, D := h.LengthM, h.BreadthM, h.DepthM
@@ -260,18 +263,8 @@ func HandMethod(v *Vessel, d Damage) (*HandWorking, error) {
 		kl = lz / lv
 	}
 	step("KB of the remaining buoyant body", fmt.Sprintf("(L·B·T₁²/2 − v·kv)/V = (%s − %s×%s)/%s", n(LB*T1*T1/2), n(lv), n(kl), n(V)), w.KBM, "m")
-	w.KMM = w.KBM + w.BMM
-	step("KM", fmt.Sprintf("KB + BM = %s + %s", n(w.KBM), n(w.BMM)), w.KMM, "m")
-	W := ld.MassT
-	w.KGM = ld.VCGM
-	w.FSCM = ld.FSMTm / W
-	step("free-surface correction", fmt.Sprintf("ΣFSM/Δ = %s/%s", n(ld.FSMTm), n(W)), w.FSCM, "m")
-	w.GMM = w.KMM - w.KGM - w.FSCM
-	step("GM", fmt.Sprintf("KM − KG − FSC = %s − %s − %s", n(w.KMM), n(w.KGM), n(w.FSCM)), w.GMM, "m")
-	w.GMLM = w.KBM + w.BMLM - w.KGM - w.FSCM
-	step("GML", fmt.Sprintf("KB + BML − KG − FSC = %s + %s − %s − %s", n(w.KBM), n(w.BMLM), n(w.KGM), n(w.FSCM)), w.GMLM, "m")
-	if !(w.GMLM > 0) {
-		return nil, &HandNotApplicable{fmt.Sprintf("the longitudinal metacentric height is %s m: she has no trim stability for the method to work with", n(w.GMLM))}
+	if err := w.metacentre(ld, "BML"); err != nil {
+		return nil, err
 	}
 
 	// The list.
@@ -289,16 +282,22 @@ func HandMethod(v *Vessel, d Damage) (*HandWorking, error) {
 	step("trim", fmt.Sprintf("(LCB − LCG)·L/GML = (%s − %s)×%s/%s (%s)", n(w.LCBM), n(ld.LCGM), n(L), n(w.GMLM), signWords(w.TrimM, "by the stern", "by the head", "even keel")), w.TrimM, "m")
 
 	// Drafts on the centreline, the waterline turning about F.
-	w.DraftAftM = T1 + w.TrimM*xF/L - tanT*yF
-	w.DraftFwdM = T1 - w.TrimM*(L-xF)/L - tanT*yF
-	w.DraftMidM = (w.DraftAftM + w.DraftFwdM) / 2
-	step("draft aft", fmt.Sprintf("T₁ + trim·xF/L − tan θ·yF = %s + %s×%s/%s − %s×%s", n(T1), n(w.TrimM), n(xF), n(L), n(tanT), n(yF)), w.DraftAftM, "m")
-	step("draft forward", fmt.Sprintf("T₁ − trim·(L − xF)/L − tan θ·yF = %s − %s×%s/%s − %s×%s", n(T1), n(w.TrimM), n(L-xF), n(L), n(tanT), n(yF)), w.DraftFwdM, "m")
-	w.Waterline = Plane{A: w.DraftAftM, B: -w.TrimM / L, C: tanT}
+	w.drafts(T1, xF, yF, L, tanT)
 
 	// Heel and trim solved together (I_xy kept): for the record.
 	w.handCoupled(iXY, V, L, lever, ld.LCGM)
 	return w, nil
+}
+
+// openOutlined reports whether a compartment given by its own outlines is
+// open to the sea in d.
+func openOutlined(v *Vessel, d Damage) bool {
+	for i, c := range v.Compartments {
+		if d.state(i).Open && c.Sections != nil {
+			return true
+		}
+	}
+	return false
 }
 
 // handSpaces returns the compartments open to the sea as the hand method's
@@ -340,6 +339,42 @@ func handSpaces(v *Vessel, d Damage) (spaces []handSpace, spilt []string, spiltT
 }
 
 // step adds one line to the working.
+// drafts reads the drafts on the centreline at the perpendiculars after
+// heeling and trimming about the new centre of flotation (xF, yF): the
+// waterline through (xF, yF) at the mean draft T1, falling by trim/L
+// forward and tan θ to port. They are the working's last steps.
+func (w *HandWorking) drafts(T1, xF, yF, L, tanT float64) {
+	n := handNum
+	w.DraftAftM = T1 + w.TrimM*xF/L - tanT*yF
+	w.DraftFwdM = T1 - w.TrimM*(L-xF)/L - tanT*yF
+	w.DraftMidM = (w.DraftAftM + w.DraftFwdM) / 2
+	w.step("draft aft", fmt.Sprintf("T₁ + trim·xF/L − tan θ·yF = %s + %s×%s/%s − %s×%s", n(T1), n(w.TrimM), n(xF), n(L), n(tanT), n(yF)), w.DraftAftM, "m")
+	w.step("draft forward", fmt.Sprintf("T₁ − trim·(L − xF)/L − tan θ·yF = %s − %s×%s/%s − %s×%s", n(T1), n(w.TrimM), n(L-xF), n(L), n(tanT), n(yF)), w.DraftFwdM, "m")
+	w.Waterline = Plane{A: w.DraftAftM, B: -w.TrimM / L, C: tanT}
+}
+
+// metacentre works, from the working's KB, BM and BML and the load: KM =
+// KB + BM, the free-surface correction ΣFSM/Δ, GM = KM − KG − FSC and
+// GML = KB + BML − KG − FSC (bml names BML in the working's words). A GML
+// of zero or less leaves the method nothing to trim with: an error.
+func (w *HandWorking) metacentre(ld Load, bml string) error {
+	n := handNum
+	w.KMM = w.KBM + w.BMM
+	w.step("KM", fmt.Sprintf("KB + BM = %s + %s", n(w.KBM), n(w.BMM)), w.KMM, "m")
+	W := ld.MassT
+	w.KGM = ld.VCGM
+	w.FSCM = ld.FSMTm / W
+	w.step("free-surface correction", fmt.Sprintf("ΣFSM/Δ = %s/%s", n(ld.FSMTm), n(W)), w.FSCM, "m")
+	w.GMM = w.KMM - w.KGM - w.FSCM
+	w.step("GM", fmt.Sprintf("KM − KG − FSC = %s − %s − %s", n(w.KMM), n(w.KGM), n(w.FSCM)), w.GMM, "m")
+	w.GMLM = w.KBM + w.BMLM - w.KGM - w.FSCM
+	w.step("GML", fmt.Sprintf("KB + %s − KG − FSC = %s + %s − %s − %s", bml, n(w.KBM), n(w.BMLM), n(w.KGM), n(w.FSCM)), w.GMLM, "m")
+	if !(w.GMLM > 0) {
+		return &HandNotApplicable{fmt.Sprintf("the longitudinal metacentric height is %s m: she has no trim stability for the method to work with", n(w.GMLM))}
+	}
+	return nil
+}
+
 func (w *HandWorking) step(label, formula string, value float64, unit string) {
 	w.Steps = append(w.Steps, HandStep{label, formula, value, unit})
 }

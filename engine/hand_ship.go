@@ -147,19 +147,10 @@ func handShip(v *Vessel, d Damage) (*HandWorking, error) {
 	w.BMM = iT / V
 	w.BMLM = iL / V
 	step("BM", fmt.Sprintf("I_T/V = %s/%s", n(iT), n(V)), w.BMM, "m")
-	w.KMM = w.KBM + w.BMM
-	step("KM", fmt.Sprintf("KB + BM = %s + %s", n(w.KBM), n(w.BMM)), w.KMM, "m")
-	W := ld.MassT
-	w.KGM = ld.VCGM
-	w.FSCM = ld.FSMTm / W
-	step("free-surface correction", fmt.Sprintf("ΣFSM/Δ = %s/%s", n(ld.FSMTm), n(W)), w.FSCM, "m")
-	w.GMM = w.KMM - w.KGM - w.FSCM
-	step("GM", fmt.Sprintf("KM − KG − FSC = %s − %s − %s", n(w.KMM), n(w.KGM), n(w.FSCM)), w.GMM, "m")
-	w.GMLM = w.KBM + w.BMLM - w.KGM - w.FSCM
-	step("GML", fmt.Sprintf("KB + I_L/V − KG − FSC = %s + %s − %s − %s", n(w.KBM), n(w.BMLM), n(w.KGM), n(w.FSCM)), w.GMLM, "m")
-	if !(w.GMLM > 0) {
-		return nil, &HandNotApplicable{fmt.Sprintf("the longitudinal metacentric height is %s m: she has no trim stability for the method to work with", n(w.GMLM))}
+	if err := w.metacentre(ld, "I_L/V"); err != nil {
+		return nil, err
 	}
+	W := ld.MassT
 	mctc := W * w.GMLM / (100 * L)
 	step("MCTC", fmt.Sprintf("Δ·GML/(100·L) = %s×%s/(100×%s)", n(W), n(w.GMLM), n(L)), mctc, "t·m/cm")
 
@@ -181,12 +172,7 @@ func handShip(v *Vessel, d Damage) (*HandWorking, error) {
 	step("trim", fmt.Sprintf("Δ·(LCB − LCG)/(100·MCTC) = %s×(%s − %s)/(100×%s) (%s)", n(W), n(w.LCBM), n(ld.LCGM), n(mctc), signWords(w.TrimM, "by the stern", "by the head", "even keel")), w.TrimM, "m")
 
 	// Drafts on the centreline, the waterline turning about F.
-	w.DraftAftM = T1 + w.TrimM*xF/L - tanT*yF
-	w.DraftFwdM = T1 - w.TrimM*(L-xF)/L - tanT*yF
-	w.DraftMidM = (w.DraftAftM + w.DraftFwdM) / 2
-	step("draft aft", fmt.Sprintf("T₁ + trim·xF/L − tan θ·yF = %s + %s×%s/%s − %s×%s", n(T1), n(w.TrimM), n(xF), n(L), n(tanT), n(yF)), w.DraftAftM, "m")
-	step("draft forward", fmt.Sprintf("T₁ − trim·(L − xF)/L − tan θ·yF = %s − %s×%s/%s − %s×%s", n(T1), n(w.TrimM), n(L-xF), n(L), n(tanT), n(yF)), w.DraftFwdM, "m")
-	w.Waterline = Plane{A: w.DraftAftM, B: -w.TrimM / L, C: tanT}
+	w.drafts(T1, xF, yF, L, tanT)
 	w.handCoupled(iXY, V, L, lever, ld.LCGM)
 	return w, nil
 }

@@ -1,7 +1,6 @@
 package vessels
 
 import (
-	"fmt"
 	"math"
 
 	"heelwatch/engine"
@@ -57,38 +56,16 @@ func (r *reader) sectionOutlines(t *table) ([]engine.CompartmentSection, engine.
 // outline reads a section's outline: a closed polygon of [y, z] pairs in
 // metres, y to starboard.
 func (r *reader) outline(s *table) ([]engine.Point, bool) {
-	v, present := s.get("outline")
-	p := s.keyPath("outline")
-	if !present {
-		r.addf(p, "missing: give the section's outline as [[y, z], …] around the space (y positive to starboard)")
+	pts, ok := r.pointPairs(s, "outline", "y, z", "give the section's outline as [[y, z], …] around the space (y positive to starboard)")
+	if pts == nil {
 		return nil, false
 	}
-	a, isArr := v.([]any)
-	if !isArr {
-		r.addf(p, "must be an array of [y, z] pairs in metres, not %s", typeName(v))
-		return nil, false
-	}
-	ok := true
-	var out []engine.Point
-	for j, e := range a {
-		ep := fmt.Sprintf("%s[%d]", p, j+1)
-		pair, isPair := e.([]any)
-		if !isPair || len(pair) != 2 {
-			r.addf(ep, "must be a pair [y, z] in metres, not %s", describe(e))
-			ok = false
-			continue
-		}
-		y, yOK := number(pair[0])
-		z, zOK := number(pair[1])
-		if !yOK || !zOK || math.IsNaN(y) || math.IsInf(y, 0) || math.IsNaN(z) || math.IsInf(z, 0) || math.Abs(y) > maxMagnitude || math.Abs(z) > maxMagnitude {
-			r.addf(ep, "must be two finite numbers [y, z] in metres (at most %g in size)", maxMagnitude)
-			ok = false
-			continue
-		}
-		out = append(out, engine.Point{Y: y, Z: z})
+	out := make([]engine.Point, len(pts))
+	for i, q := range pts {
+		out[i] = q.Point
 	}
 	if ok && len(out) < 3 {
-		r.addf(p, "has %d point(s): an outline needs at least three [y, z] pairs", len(out))
+		r.addf(s.keyPath("outline"), "has %d point(s): an outline needs at least three [y, z] pairs", len(out))
 		ok = false
 	}
 	return out, ok

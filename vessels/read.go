@@ -261,43 +261,17 @@ func (r *reader) stations(t *table, sections []*table) ([]engine.Station, bool) 
 }
 
 func (r *reader) offsets(s *table) ([]engine.Point, bool) {
-	v, present := s.get("offsets")
-	p := s.keyPath("offsets")
-	if !present {
-		r.addf(p, "missing: give the starboard half outline as [[half_breadth, z], …] from the keel up to the deck at side")
+	pts, ok := r.pointPairs(s, "offsets", "half_breadth, z", "give the starboard half outline as [[half_breadth, z], …] from the keel up to the deck at side")
+	if pts == nil {
 		return nil, false
 	}
-	a, isArr := v.([]any)
-	if !isArr {
-		r.addf(p, "must be an array of [half_breadth, z] pairs in metres, not %s", typeName(v))
+	if ok && len(pts) < 2 {
+		r.addf(s.keyPath("offsets"), "has %d point(s): an outline needs at least two [half_breadth, z] pairs, keel to deck", len(pts))
 		return nil, false
 	}
-	if len(a) < 2 {
-		r.addf(p, "has %d point(s): an outline needs at least two [half_breadth, z] pairs, keel to deck", len(a))
-		return nil, false
-	}
-	ok := true
 	var out []engine.Point
-	for j, e := range a {
-		ep := fmt.Sprintf("%s[%d]", p, j+1)
-		pair, isPair := e.([]any)
-		if !isPair || len(pair) != 2 {
-			r.addf(ep, "must be a pair [half_breadth, z] in metres, not %s", describe(e))
-			ok = false
-			continue
-		}
-		y, yOK := number(pair[0])
-		z, zOK := number(pair[1])
-		switch {
-		case !yOK || !zOK:
-			r.addf(ep, "must be two numbers [half_breadth, z] in metres")
-			ok = false
-			continue
-		case math.IsNaN(y) || math.IsInf(y, 0) || math.IsNaN(z) || math.IsInf(z, 0) || math.Abs(y) > maxMagnitude || math.Abs(z) > maxMagnitude:
-			r.addf(ep, "[%v, %v] is not a pair of finite metres (at most %g in size)", y, z, maxMagnitude)
-			ok = false
-			continue
-		}
+	for _, q := range pts {
+		ep, y, z := q.path, q.Y, q.Z
 		if r.pointTooFar(ep, y, z) {
 			ok = false
 		}
@@ -313,11 +287,60 @@ func (r *reader) offsets(s *table) ([]engine.Point, bool) {
 			r.addf(ep, "height %g m is below the point before (%g m): heights must ascend from the keel to the deck", z, out[len(out)-1].Z)
 			ok = false
 		}
-		out = append(out, engine.Point{Y: y, Z: z})
+		out = append(out, q.Point)
 	}
 	if ok && !(out[len(out)-1].Z > out[0].Z) {
-		r.addf(p, "the last point (the deck at side) is not above the first (the keel)")
+		r.addf(s.keyPath("offsets"), "the last point (the deck at side) is not above the first (the keel)")
 		ok = false
+	}
+	return out, ok
+}
+
+// pointAt is a point read from a file with the key path it was read at.
+type pointAt struct {
+	engine.Point
+	path string
+}
+
+// pointPairs reads the array key of s as [a, b] pairs of finite metres
+// (names says what a and b are, as "y, z"), each with its key path. A
+// missing key says missing; nil means nothing could be read; ok is false
+// if any pair was refused (the others are still returned).
+func (r *reader) pointPairs(s *table, key, names, missing string) ([]pointAt, bool) {
+	v, present := s.get(key)
+	p := s.keyPath(key)
+	if !present {
+		r.addf(p, "missing: %s", missing)
+		return nil, false
+	}
+	a, isArr := v.([]any)
+	if !isArr {
+		r.addf(p, "must be an array of [%s] pairs in metres, not %s", names, typeName(v))
+		return nil, false
+	}
+	ok := true
+	out := make([]pointAt, 0, len(a))
+	for j, e := range a {
+		ep := fmt.Sprintf("%s[%d]", p, j+1)
+		pair, isPair := e.([]any)
+		if !isPair || len(pair) != 2 {
+			r.addf(ep, "must be a pair [%s] in metres, not %s", names, describe(e))
+			ok = false
+			continue
+		}
+		y, yOK := number(pair[0])
+		z, zOK := number(pair[1])
+		switch {
+		case !yOK || !zOK:
+			r.addf(ep, "must be two numbers [%s] in metres", names)
+			ok = false
+			continue
+		case math.IsNaN(y) || math.IsInf(y, 0) || math.IsNaN(z) || math.IsInf(z, 0) || math.Abs(y) > maxMagnitude || math.Abs(z) > maxMagnitude:
+			r.addf(ep, "[%v, %v] is not a pair of finite metres (at most %g in size)", y, z, maxMagnitude)
+			ok = false
+			continue
+		}
+		out = append(out, pointAt{engine.Point{Y: y, Z: z}, ep})
 	}
 	return out, ok
 }

@@ -9,6 +9,19 @@ import (
 	"heelwatch/vessels"
 )
 
+// openShip opens a vessel (a bundled name or a file; "" for the default)
+// with the condition file at condition ("" for the file's own loading
+// condition). On failure it prints why to stderr and returns the exit
+// status to end with.
+func openShip(vessel, condition string, stderr io.Writer) (*engine.Vessel, *vessels.Info, int) {
+	v, info, status := openVessel(vessel, stderr)
+	if status != exitOK {
+		return nil, nil, status
+	}
+	v, _, status = withCondition(v, info, condition, stderr)
+	return v, info, status
+}
+
 // withCondition loads the ship v with the condition file at path ("" for
 // none: v as it is). On failure it prints every problem to stderr and
 // returns the exit status to end with. The condition's name (else its

@@ -61,11 +61,8 @@ func runDiagnose(args []string, stdout, stderr io.Writer) int {
 		fmt.Fprintf(stderr, "heelwatch diagnose: --format %q: use text or json\n", *format)
 		return exitUsage
 	}
-	v, info, status := openVessel(*vessel, stderr)
+	v, info, status := openShip(*vessel, *condition, stderr)
 	if status != exitOK {
-		return status
-	}
-	if v, _, status = withCondition(v, info, *condition, stderr); status != exitOK {
 		return status
 	}
 	rs, err := vessels.LoadReadings(*readings, v)

@@ -110,11 +110,8 @@ func runFlood(args []string, stdout, stderr io.Writer) int {
 		cd = c
 	}
 
-	v, info, status := openVessel(*vessel, stderr)
+	v, info, status := openShip(*vessel, *condition, stderr)
 	if status != exitOK {
-		return status
-	}
-	if v, _, status = withCondition(v, info, *condition, stderr); status != exitOK {
 		return status
 	}
 	v, msg := applyConnections(v, conns)

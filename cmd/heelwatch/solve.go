@@ -86,11 +86,8 @@ func runSolve(args []string, stdout, stderr io.Writer) int {
 		return exitUsage
 	}
 
-	v, info, status := openVessel(*vessel, stderr)
+	v, info, status := openShip(*vessel, *condition, stderr)
 	if status != exitOK {
-		return status
-	}
-	if v, _, status = withCondition(v, info, *condition, stderr); status != exitOK {
 		return status
 	}
 	v, msg := applyConnections(v, conns)
