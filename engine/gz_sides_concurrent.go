@@ -35,6 +35,13 @@ func (pr *Problem) leversBothSides(eq Position) (*GZCurve, error) {
 		}
 		return pr.withOtherSide(gz, eq), nil
 	}
+	return pr.leversBeside(eq)
+}
+
+// leversBeside is leversBothSides for a ship heeled within
+// NearUprightDeg (kept apart so that only this path pays for the
+// goroutine).
+func (pr *Problem) leversBeside(eq Position) (*GZCurve, error) {
 	toward := Starboard
 	if eq.HeelDeg < 0 {
 		toward = Port
