@@ -261,11 +261,7 @@ func (s *slab) belowConvex(p Plane, im *Immersion, g arc, roots []cutRoot) (a0, 
 			}
 		}
 	}
-	for i := 1; i < len(roots); i++ {
-		for j := i; j > 0 && roots[j].x < roots[j-1].x; j-- {
-			roots[j], roots[j-1] = roots[j-1], roots[j]
-		}
-	}
+	sortRoots(roots)
 	var part Immersion
 	cur := a0
 	var ch [1]chain

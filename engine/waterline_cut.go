@@ -299,11 +299,7 @@ func (s *slab) belowChains(p Plane, im *Immersion, sc *cutScratch) bool {
 			return true
 		}
 	}
-	for i := 1; i < len(roots); i++ {
-		for j := i; j > 0 && roots[j].x < roots[j-1].x; j-- {
-			roots[j], roots[j-1] = roots[j-1], roots[j]
-		}
-	}
+	sortRoots(roots)
 	if !st.ok {
 		return false
 	}
@@ -458,5 +454,16 @@ func (s *slab) pieceChains(p Plane, xa, xb float64, nin int, chains []chain, im 
 		im.IXX += w * x * x * W
 		im.IXY += w * x * WY
 		im.IYY += w * WYY
+	}
+}
+
+// sortRoots puts the waterline's crossings of a slab in order along x:
+// an insertion sort, since there are a handful at most and they come
+// nearly in order.
+func sortRoots(roots []cutRoot) {
+	for i := 1; i < len(roots); i++ {
+		for j := i; j > 0 && roots[j].x < roots[j-1].x; j-- {
+			roots[j], roots[j-1] = roots[j-1], roots[j]
+		}
 	}
 }
