@@ -45,7 +45,7 @@ func ParsePermeability(s string) (float64, error) {
 	}
 	v = math.Round(v*permeabilitySteps) / permeabilitySteps
 	if !(v > 0 && v <= 1) {
-		return 0, fmt.Errorf("%s is outside 0 < μ ≤ 1 (the fraction of the space that water can fill): write e.g. 0.85 or 85%%", strings.TrimSpace(s))
+		return 0, fmt.Errorf("%q is outside 0 < μ ≤ 1 (the fraction of the space that water can fill): write e.g. 0.85 or 85%%", strings.TrimSpace(s))
 	}
 	return v, nil
 }
