@@ -116,6 +116,9 @@ func (r *reader) condition(root *table, v *engine.Vessel, info *Info) *Condition
 		r.addf("weight", "missing: a condition needs its weights: [[weight]] tables (lightship included), or keep = [names] of the vessel file's")
 	}
 	c.Tanks = r.tankFills(root.entries("tank", "one tank's contents"), v, info)
+	if n := r.named; n.unknown >= 3 && n.unknown > n.known {
+		r.addf("name", "%d of the %d weights and tanks named here are not %s's: is this condition written for another ship?", n.unknown, n.unknown+n.known, v.Name)
+	}
 	return c
 }
 
@@ -149,6 +152,11 @@ func (r *reader) keptWeights(root *table, v *engine.Vessel) []engine.Weight {
 			if strings.EqualFold(strings.TrimSpace(w.Name), strings.TrimSpace(s)) {
 				idx = j
 			}
+		}
+		if idx < 0 {
+			r.named.unknown++
+		} else {
+			r.named.known++
 		}
 		switch {
 		case idx < 0:
@@ -210,6 +218,11 @@ func (r *reader) tankFill(t *table, v *engine.Vessel, info *Info, seen map[int]s
 		if strings.EqualFold(strings.TrimSpace(c.Name), strings.TrimSpace(name)) {
 			idx = i
 		}
+	}
+	if idx < 0 {
+		r.named.unknown++
+	} else {
+		r.named.known++
 	}
 	if idx < 0 {
 		msg := fmt.Sprintf("%q is not a compartment of the vessel", name)

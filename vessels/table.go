@@ -11,6 +11,10 @@ type reader struct {
 	file  string
 	lines *lineIndex
 	probs Problems
+	// named counts the names of the ship's weights and tanks a condition
+	// file gives that she has (known) and has not (unknown): most of them
+	// unknown means the file was written for another ship.
+	named struct{ known, unknown int }
 }
 
 // addf records a problem at the line of path.
