@@ -10,7 +10,10 @@ import (
 // none (the upright GM was left unset, null in the JSON) nor the added
 // weight's (the free-communication loss unseen: see flood_end_basis.go).
 // Both voids lie on the starboard side, so she lists and the two bases
-// differ.
+// differ. The reference is the static lost-buoyancy solve, itself held to
+// the box's closed forms (box_test.go, wallsided_test.go); added weight and
+// lost buoyancy agree in Δ·GM (references.md, Barrass & Derrett, memory),
+// so a GM that differs here is a basis mixed up, not the physics.
 func TestNetworkEndGMIsTheStaticOne(t *testing.T) {
 	v, c := spDuctBarge(t, true)
 	rep, err := RunNetwork(c, nil)
