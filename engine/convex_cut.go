@@ -16,14 +16,22 @@ import "math"
 // known (no guess).
 type arc struct{ lo, cnt int }
 
-// dent is a vertex where a slab's section turns right somewhere along the
-// slab (round-off in the offsets, or a hollow): the directions its two
-// edges take along the slab lie within half of mid (radians, atan2 of
-// (dz, dy)).
-type dent struct{ mid, half float64 }
+// dent is a range of directions of a line in the (y, z) plane, lo to hi
+// (radians, taken modulo π into [−π/2, π/2], lo ≤ hi), that a slab's
+// section passes more than once: about a vertex where it turns right
+// somewhere along the slab (round-off in the offsets, or a hollow), the
+// directions its two edges take along the slab. A plane whose direction
+// lies in one is left to the general method.
+type dent struct{ lo, hi float64 }
 
-// maxDents bounds the dents a slab may have and still use the arc walk.
+// maxDents bounds the dents a slab may have and still use the arc walk:
+// ranges that overlap are counted once, so the many round-off dents of a
+// long flat side, all about one direction, count as one.
 const maxDents = 8
+
+// dentMargin widens every dent (radians) so that round-off in the plane's
+// direction does not carry it out of one.
+const dentMargin = 1e-9
 
 // arcSection reports whether the vertices of the slab's polygon (p0 at one
 // end, p1 at the other) below any plane are one arc, except for planes
@@ -86,9 +94,6 @@ func arcSection(p0, p1 []Point) (bool, []dent) {
 		if !right {
 			continue
 		}
-		if len(dents) == maxDents {
-			return false, nil
-		}
 		// The directions of both edges at both ends, unwrapped about the
 		// first.
 		e := edge(0, (k+n-1)%n)
@@ -101,27 +106,58 @@ func arcSection(p0, p1 []Point) (bool, []dent) {
 		if hi-lo > 0.5 {
 			return false, nil
 		}
-		dents = append(dents, dent{(lo + hi) / 2, (hi - lo) / 2})
+		dents = addDent(dents, lo-dentMargin, hi+dentMargin)
+		if len(dents) > maxDents {
+			return false, nil
+		}
 	}
 	return true, dents
 }
 
+// addDent adds the directions lo … hi (radians, hi − lo < π) to the
+// ranges ds, kept sorted and apart: the range is taken modulo π into
+// [−π/2, π/2] (split in two where it passes π/2) and merged with those
+// it overlaps.
+func addDent(ds []dent, lo, hi float64) []dent {
+	l := math.Remainder(lo, math.Pi)
+	h := l + (hi - lo)
+	if h > math.Pi/2 {
+		ds = mergeDent(ds, dent{-math.Pi / 2, h - math.Pi})
+		h = math.Pi / 2
+	}
+	return mergeDent(ds, dent{l, h})
+}
+
+// mergeDent adds d to the sorted, disjoint ranges ds.
+func mergeDent(ds []dent, d dent) []dent {
+	var out []dent
+	placed := false
+	for _, e := range ds {
+		switch {
+		case e.hi < d.lo:
+			out = append(out, e)
+		case d.hi < e.lo:
+			if !placed {
+				out, placed = append(out, d), true
+			}
+			out = append(out, e)
+		default: // overlap: d takes e in
+			d = dent{math.Min(d.lo, e.lo), math.Max(d.hi, e.hi)}
+		}
+	}
+	if !placed {
+		out = append(out, d)
+	}
+	return out
+}
+
 // dentsHit reports whether a plane at heel phi (radians, atan of its
-// slope C) runs in a direction that one of the dents passes more than once.
+// slope C, in (−π/2, π/2)) runs in a direction that one of the dents
+// passes more than once.
 func dentsHit(dents []dent, phi float64) bool {
 	for _, d := range dents {
-		for _, f := range [2]float64{phi, phi + math.Pi} {
-			// f − mid, brought within [−π, π]: both lie within 2π of 0.
-			a := f - d.mid
-			for a > math.Pi {
-				a -= 2 * math.Pi
-			}
-			for a < -math.Pi {
-				a += 2 * math.Pi
-			}
-			if math.Abs(a) <= d.half+1e-9 {
-				return true
-			}
+		if phi >= d.lo && phi <= d.hi {
+			return true
 		}
 	}
 	return false
@@ -138,13 +174,49 @@ type side struct {
 	atEnd  bool
 }
 
+// heights returns the heights of vertex k above the plane at x0 and x1.
+func (sd *side) heights(k int) (d0, d1 float64) {
+	return sd.p0[k].Z - sd.c*sd.p0[k].Y - sd.h0, sd.p1[k].Z - sd.c*sd.p1[k].Y - sd.h1
+}
+
 func (sd *side) below(k int) bool {
-	d0 := sd.p0[k].Z - sd.c*sd.p0[k].Y - sd.h0
-	d1 := sd.p1[k].Z - sd.c*sd.p1[k].Y - sd.h1
+	p, h, q, g := &sd.p0[k], sd.h0, &sd.p1[k], sd.h1
 	if sd.atEnd {
-		d0, d1 = d1, d0
+		p, h, q, g = q, g, p, h
 	}
-	return d0 < 0 || d0 == 0 && d1 < 0
+	if d := p.Z - sd.c*p.Y - h; d != 0 {
+		return d < 0
+	}
+	return q.Z-sd.c*q.Y-g < 0
+}
+
+// holds reports whether the arc g (0 < g.cnt < n) is the arc below at both
+// ends of the slab: its end vertices below and their outer neighbours not,
+// just forward of x0 and just aft of x1. Then no vertex crosses the plane
+// inside the slab (the vertices below are one arc at each end: see
+// arcSection). A vertex is below at both ends when its heights there are
+// d0, d1 ≤ 0, not both 0; above at both when d0, d1 ≥ 0.
+func (sd *side) holds(g arc, n int) bool {
+	lo, hi := g.lo, g.lo+g.cnt-1
+	if hi >= n {
+		hi -= n
+	}
+	before, after := lo-1, hi+1
+	if before < 0 {
+		before = n - 1
+	}
+	if after == n {
+		after = 0
+	}
+	below := func(k int) bool {
+		d0, d1 := sd.heights(k)
+		return d0 <= 0 && d1 <= 0 && (d0 < 0 || d1 < 0)
+	}
+	above := func(k int) bool {
+		d0, d1 := sd.heights(k)
+		return d0 >= 0 && d1 >= 0
+	}
+	return below(lo) && above(before) && below(hi) && above(after)
 }
 
 // findArc returns the arc of vertices below (see side), walking from the
@@ -201,18 +273,44 @@ func findArc(sd *side, n int, g arc) arc {
 	return arc{lo, (hi-lo+n)%n + 1}
 }
 
+// crossings appends to roots the vertices k, k+1, …, k+m−1 (mod n, with
+// 0 ≤ k < n) that cross the plane inside the slab: those whose heights at
+// the two ends, d0 and d1, have strictly opposite signs, at
+// x = x0 + (x1 − x0)·d0/(d0 − d1).
+func (s *slab) crossings(sd *side, k, m int, roots []cutRoot) []cutRoot {
+	n := len(s.p0)
+	dx := s.x1 - s.x0
+	for i := 0; i < m; i++ {
+		d0, d1 := sd.heights(k)
+		if (d0 < 0 && d1 > 0) || (d0 > 0 && d1 < 0) {
+			roots = append(roots, cutRoot{s.x0 + dx*d0/(d0-d1), k, d0 < 0})
+		}
+		if k++; k == n {
+			k = 0
+		}
+	}
+	return roots
+}
+
 // belowConvex is belowChains for a convex slab, from the guess g of the
 // arc at x0; it returns the arcs found at x0 and x1 (the next guesses for
 // this slab and the one forward of it), and false
 // (nothing added) when the vertices' crossings do not keep one arc, which
 // convexity rules out but round-off might not.
+//
+// Most often the guess is the arc at both ends (holds: four vertices
+// looked at) and the slab is one piece.
 func (s *slab) belowConvex(p Plane, im *Immersion, g arc, roots []cutRoot) (a0, a1 arc, ok bool) {
 	n := len(s.p0)
-	dx := s.x1 - s.x0
 	h0, h1 := p.A+p.B*s.x0, p.A+p.B*s.x1
-	p0, p1 := s.p0[:n], s.p1[:n]
 	// Sides just forward of x0 and just aft of x1.
-	sd := side{p0: p0, p1: p1, c: p.C, h0: h0, h1: h1}
+	sd := side{p0: s.p0[:n], p1: s.p1[:n], c: p.C, h0: h0, h1: h1}
+	if g.cnt > 0 && g.cnt < n && g.lo >= 0 && g.lo < n && sd.holds(g, n) {
+		if s.x1-s.x0 > 1e-12*(1+math.Abs(s.x1)) {
+			s.pieceArc(p, s.x0, s.x1, g, im)
+		}
+		return g, g, true
+	}
 	a0 = findArc(&sd, n, g)
 	sd.atEnd = true
 	a1 = findArc(&sd, n, a0)
@@ -220,20 +318,6 @@ func (s *slab) belowConvex(p Plane, im *Immersion, g arc, roots []cutRoot) (a0, 
 	// starts and between their ends; when the arcs do not overlap (or one
 	// is empty or whole) every vertex is looked at.
 	roots = roots[:0]
-	root := func(k int) {
-		a := p0[k].Z - p.C*p0[k].Y - h0
-		b := p1[k].Z - p.C*p1[k].Y - h1
-		if (a < 0 && b > 0) || (a > 0 && b < 0) {
-			roots = append(roots, cutRoot{s.x0 + dx*a/(a-b), k})
-		}
-	}
-	cyc := func(d int) int { // d reduced to (−n/2, n/2]
-		d = ((d % n) + n) % n
-		if d > n/2 {
-			d -= n
-		}
-		return d
-	}
 	if a0.cnt == 0 || a1.cnt == 0 || a0.cnt == n || a1.cnt == n {
 		if a0 == a1 && (a0.cnt == 0 || a0.cnt == n) {
 			if a0.cnt == n {
@@ -241,30 +325,22 @@ func (s *slab) belowConvex(p Plane, im *Immersion, g arc, roots []cutRoot) (a0, 
 			}
 			return a0, a1, true
 		}
-		for k := 0; k < n; k++ {
-			root(k)
-		}
+		roots = s.crossings(&sd, 0, n, roots)
 	} else {
-		dlo := cyc(a1.lo - a0.lo)
-		dhi := cyc((a1.lo + a1.cnt) - (a0.lo + a0.cnt))
+		dlo := cyc(a1.lo-a0.lo, n)
+		dhi := cyc((a1.lo+a1.cnt)-(a0.lo+a0.cnt), n)
 		if abs(dlo)+abs(dhi) >= min(a0.cnt, a1.cnt) {
-			for k := 0; k < n; k++ {
-				root(k)
-			}
+			roots = s.crossings(&sd, 0, n, roots)
 		} else {
-			for k, i := min(a0.lo, a0.lo+dlo), 0; i < abs(dlo); k, i = k+1, i+1 {
-				root(((k % n) + n) % n)
-			}
+			// From the earlier of the two starts, and of the two ends.
+			roots = s.crossings(&sd, mod(min(a0.lo, a0.lo+dlo), n), abs(dlo), roots)
 			e0 := a0.lo + a0.cnt
-			for k, i := min(e0, e0+dhi), 0; i < abs(dhi); k, i = k+1, i+1 {
-				root(((k % n) + n) % n)
-			}
+			roots = s.crossings(&sd, mod(min(e0, e0+dhi), n), abs(dhi), roots)
 		}
 	}
 	sortRoots(roots)
 	var part Immersion
 	cur := a0
-	var ch [1]chain
 	xa := s.x0
 	for i := 0; i <= len(roots); i++ {
 		xb := s.x1
@@ -272,12 +348,7 @@ func (s *slab) belowConvex(p Plane, im *Immersion, g arc, roots []cutRoot) (a0, 
 			xb = roots[i].x
 		}
 		if xb-xa > 1e-12*(1+math.Abs(xb)) {
-			var chains []chain
-			if cur.cnt > 0 && cur.cnt < n {
-				ch[0] = chain{(cur.lo + n - 1) % n, (cur.lo + cur.cnt - 1) % n}
-				chains = ch[:]
-			}
-			s.pieceChains(p, xa, xb, cur.cnt, chains, &part)
+			s.pieceArc(p, xa, xb, cur, &part)
 			xa = xb
 		}
 		if i < len(roots) {
@@ -290,6 +361,38 @@ func (s *slab) belowConvex(p Plane, im *Immersion, g arc, roots []cutRoot) (a0, 
 	im.add(part, 1)
 	return a0, a1, true
 }
+
+// pieceArc integrates [xa, xb], along which the vertices below the plane
+// are the arc a, adding to im: one chain, in on the edge into the arc's
+// first vertex, out on the edge out of its last.
+func (s *slab) pieceArc(p Plane, xa, xb float64, a arc, im *Immersion) {
+	n := len(s.p0)
+	if a.cnt <= 0 || a.cnt >= n {
+		s.pieceChains(p, xa, xb, max(a.cnt, 0), nil, im)
+		return
+	}
+	in, out := a.lo-1, a.lo+a.cnt-1
+	if in < 0 {
+		in += n
+	}
+	if out >= n {
+		out -= n
+	}
+	ch := [1]chain{{in, out}}
+	s.pieceChains(p, xa, xb, a.cnt, ch[:], im)
+}
+
+// cyc returns d reduced modulo n to (−n/2, n/2].
+func cyc(d, n int) int {
+	d = mod(d, n)
+	if d > n/2 {
+		d -= n
+	}
+	return d
+}
+
+// mod returns d modulo n in [0, n).
+func mod(d, n int) int { return ((d % n) + n) % n }
 
 // flip returns the arc with vertex k moved to the other side of the plane;
 // false when k is neither next to the arc nor at one of its ends.

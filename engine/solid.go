@@ -31,7 +31,8 @@ type slab struct {
 	p1     []Point // the vertices at x1, p0 + (x1 − x0)·dp
 	blocks []vertexBlock
 	full   Immersion  // the whole slab, waterplane terms zero
-	pre    []edgePoly // prefix sums of the edges' shoelace polynomials (waterline_cut.go)
+	pre    []edgePoly // prefix sums of the edges' shoelace polynomials (waterline_cut.go)…
+	base   int        // …counted from this vertex
 	zmin   float64
 	zmax   float64
 	ymax   float64 // largest |y| of any vertex
@@ -66,8 +67,9 @@ func newSlab(x0, x1 float64, a, b []Point) slab {
 		}
 	}
 	s.full = s.integrate(Plane{A: math.Inf(1)}, x0, x1)
-	s.pre = edgePrefix(s.p0, s.dp)
 	s.p1 = s.section(x1)
+	s.base = prefixBase(s.p0, s.p1)
+	s.pre = edgePrefix(s.p0, s.dp, s.base)
 	s.blocks = vertexBlocks(s.p0, s.p1)
 	s.convex, s.dents = arcSection(s.p0, s.p1)
 	return s
@@ -259,6 +261,7 @@ func (s *Solid) belowHinted(p Plane, hints []arc) Immersion {
 		return im
 	}
 	guess := arc{cnt: -1}
+	guessAt, guessN := -1, 0 // the slab guess is meant for, and the vertices of the one it came from
 	phi := math.Atan(p.C)
 	for i := range s.slabs {
 		sl := &s.slabs[i]
@@ -272,15 +275,19 @@ func (s *Solid) belowHinted(p Plane, hints []arc) Immersion {
 			continue
 		}
 		if sl.convex && (len(sl.dents) == 0 || !dentsHit(sl.dents, phi)) {
+			// The best guess is the arc at the end of the slab just
+			// aft, when its section has as many vertices (on a hull,
+			// the same station): the same plane at the same section.
+			// Else the arc of the last evaluation.
 			g := guess
-			if hints != nil && hints[i].cnt >= 0 {
+			if hints != nil && hints[i].cnt >= 0 && (guessAt != i || guessN != len(sl.p0)) {
 				g = hints[i]
 			}
 			if a0, a1, ok := sl.belowConvex(p, &im, g, sc.roots[:0]); ok {
 				if hints != nil {
 					hints[i] = a0
 				}
-				guess = a1
+				guess, guessAt, guessN = a1, i+1, len(sl.p0)
 				continue
 			}
 		}
