@@ -164,30 +164,31 @@ func dentsHit(dents []dent, phi float64) bool {
 }
 
 // side tells which vertices findArc looks for: those below the plane
-// z = h0 + c·y (with h1 at the slab's other end) just forward of x0
-// (atEnd false) or just aft of x1 (atEnd true). A vertex on the plane
-// takes the side it goes to.
+// z = h0 + c·y (with h1 at the slab's other end, dx along it) just forward
+// of x0 (atEnd false) or just aft of x1 (atEnd true). A vertex on the
+// plane takes the side it goes to.
 type side struct {
-	p0, p1 []Point
-	c      float64
+	v      []slabVertex
+	dx, c  float64
 	h0, h1 float64
 	atEnd  bool
 }
 
-// heights returns the heights of vertex k above the plane at x0 and x1.
+// heights returns the heights of vertex k above the plane at x0 and x1:
+// z − c·y − h at each end, the vertex at x1 being p + dx·d (the same
+// figures as the slab's p1).
 func (sd *side) heights(k int) (d0, d1 float64) {
-	return sd.p0[k].Z - sd.c*sd.p0[k].Y - sd.h0, sd.p1[k].Z - sd.c*sd.p1[k].Y - sd.h1
+	q := &sd.v[k]
+	y1, z1 := q.at(sd.dx)
+	return q.p.Z - sd.c*q.p.Y - sd.h0, z1 - sd.c*y1 - sd.h1
 }
 
 func (sd *side) below(k int) bool {
-	p, h, q, g := &sd.p0[k], sd.h0, &sd.p1[k], sd.h1
+	d0, d1 := sd.heights(k)
 	if sd.atEnd {
-		p, h, q, g = q, g, p, h
+		d0, d1 = d1, d0
 	}
-	if d := p.Z - sd.c*p.Y - h; d != 0 {
-		return d < 0
-	}
-	return q.Z-sd.c*q.Y-g < 0
+	return d0 < 0 || d0 == 0 && d1 < 0
 }
 
 // holds reports whether the arc g (0 < g.cnt < n) is the arc below at both
@@ -304,7 +305,7 @@ func (s *slab) belowConvex(p Plane, im *Immersion, g arc, roots []cutRoot) (a0, 
 	n := len(s.p0)
 	h0, h1 := p.A+p.B*s.x0, p.A+p.B*s.x1
 	// Sides just forward of x0 and just aft of x1.
-	sd := side{p0: s.p0[:n], p1: s.p1[:n], c: p.C, h0: h0, h1: h1}
+	sd := side{v: s.v[:n], dx: s.x1 - s.x0, c: p.C, h0: h0, h1: h1}
 	if g.cnt > 0 && g.cnt < n && g.lo >= 0 && g.lo < n && sd.holds(g, n) {
 		if s.x1-s.x0 > 1e-12*(1+math.Abs(s.x1)) {
 			s.pieceArc(p, s.x0, s.x1, g, im)
@@ -363,23 +364,116 @@ func (s *slab) belowConvex(p Plane, im *Immersion, g arc, roots []cutRoot) (a0, 
 }
 
 // pieceArc integrates [xa, xb], along which the vertices below the plane
-// are the arc a, adding to im: one chain, in on the edge into the arc's
-// first vertex, out on the edge out of its last.
+// are the arc a, adding to im: pieceChains for its one chain, which
+// enters on edge in = lo − 1 (v_in above, v_lo below), follows the whole
+// edges lo … out−1 and leaves on edge out = lo + cnt − 1.
+//
+// At a Gauss node x the section below is the polygon entry point → v_lo →
+// … → v_out → exit point → entry point. Its shoelace terms (area 2A = Σ
+// y_k z_k+1 − y_k+1 z_k, and that cross product times y_k + y_k+1 and
+// times z_k + z_k+1, 6·A·ȳ and 6·A·z̄) are the whole edges' prefix
+// polynomials (runAt), formed once for the piece, plus the two cut edges
+// and the waterline. The waterline, from the exit at y_o to the entry at
+// y_i, adds the waterplane's breadth y_o − y_i and its moments (y_o² −
+// y_i²)/2 and (y_o³ − y_i³)/3 at x.
 func (s *slab) pieceArc(p Plane, xa, xb float64, a arc, im *Immersion) {
 	n := len(s.p0)
 	if a.cnt <= 0 || a.cnt >= n {
 		s.pieceChains(p, xa, xb, max(a.cnt, 0), nil, im)
 		return
 	}
-	in, out := a.lo-1, a.lo+a.cnt-1
+	lo, out := a.lo, a.lo+a.cnt-1
+	in, after := lo-1, out+1
 	if in < 0 {
 		in += n
 	}
 	if out >= n {
 		out -= n
 	}
-	ch := [1]chain{{in, out}}
-	s.pieceChains(p, xa, xb, a.cnt, ch[:], im)
+	if after >= n {
+		after -= n
+	}
+	// The whole edges lo … out−1: pre[j] − pre[i] (+ pre[n] when the run
+	// passes the base), coefficient by coefficient.
+	var r edgePoly
+	if lo != out {
+		pre := s.pre[:n+1]
+		i, j := lo-s.base, out-s.base
+		if i < 0 {
+			i += n
+		}
+		if j < 0 {
+			j += n
+		}
+		h, l := &pre[j], &pre[i]
+		r.a = [3]float64{h.a[0] - l.a[0], h.a[1] - l.a[1], h.a[2] - l.a[2]}
+		r.sy = [4]float64{h.sy[0] - l.sy[0], h.sy[1] - l.sy[1], h.sy[2] - l.sy[2], h.sy[3] - l.sy[3]}
+		r.sz = [4]float64{h.sz[0] - l.sz[0], h.sz[1] - l.sz[1], h.sz[2] - l.sz[2], h.sz[3] - l.sz[3]}
+		if i > j {
+			r.add(&pre[n], 1)
+		}
+	}
+	vs := s.v[:n]
+	vk, vj, vu, vv := &vs[in], &vs[lo], &vs[out], &vs[after]
+	dx := xb - xa
+	var v, mx, my, mz, aw, sx, sy, ixx, ixy, iyy float64
+	for g := range gaussNode {
+		x := xa + gaussNode[g]*dx
+		w := gaussWeight[g] * dx
+		sg := x - s.x0
+		h := p.A + p.B*x
+		a2, sy6, sz6 := r.eval(sg)
+		// Entry point on edge in, and the edge entry → v_lo.
+		ky, kz := vk.at(sg)
+		jy, jz := vj.at(sg)
+		dk, dj := kz-p.C*ky-h, jz-p.C*jy-h
+		t := dk / (dk - dj)
+		iy, iz := ky+t*(jy-ky), kz+t*(jz-kz)
+		cr := iy*jz - jy*iz
+		a2 += cr
+		sy6 += (iy + jy) * cr
+		sz6 += (iz + jz) * cr
+		// Exit point on edge out, and the edge v_out → exit.
+		uy, uz := vu.at(sg)
+		vy, vz := vv.at(sg)
+		du, dv := uz-p.C*uy-h, vz-p.C*vy-h
+		t = du / (du - dv)
+		oy, oz := uy+t*(vy-uy), uz+t*(vz-uz)
+		cr = uy*oz - oy*uz
+		a2 += cr
+		sy6 += (uy + oy) * cr
+		sz6 += (uz + oz) * cr
+		// The waterline, exit → entry.
+		cr = oy*iz - iy*oz
+		a2 += cr
+		sy6 += (oy + iy) * cr
+		sz6 += (oz + iz) * cr
+		iy2, oy2 := iy*iy, oy*oy
+		W := oy - iy
+		WY := (oy2 - iy2) / 2
+		WYY := (oy2*oy - iy2*iy) / 3
+		A := a2 / 2
+		v += w * A
+		mx += w * x * A
+		my += w * sy6 / 6
+		mz += w * sz6 / 6
+		aw += w * W
+		sx += w * x * W
+		sy += w * WY
+		ixx += w * x * x * W
+		ixy += w * x * WY
+		iyy += w * WYY
+	}
+	im.V += v
+	im.MX += mx
+	im.MY += my
+	im.MZ += mz
+	im.AW += aw
+	im.SX += sx
+	im.SY += sy
+	im.IXX += ixx
+	im.IXY += ixy
+	im.IYY += iyy
 }
 
 // cyc returns d reduced modulo n to (−n/2, n/2].

@@ -25,20 +25,33 @@ func (p Plane) HeelRad() float64 { return math.Atan(p.C) }
 
 // slab is a piece of a solid between x0 and x1 whose section polygon has
 // vertex k at p0[k] + (x − x0)·dp[k]: a ruled surface.
+//
+// The fields read at every evaluation below a plane come first, and the
+// vertices are also kept as pairs (v) so that the few a cut looks at take
+// one cache line each rather than one per slice: a sweep of a solid is
+// bound by memory as much as by arithmetic.
 type slab struct {
 	x0, x1 float64
-	p0, dp []Point
-	p1     []Point // the vertices at x1, p0 + (x1 − x0)·dp
-	blocks []vertexBlock
-	full   Immersion  // the whole slab, waterplane terms zero
-	pre    []edgePoly // prefix sums of the edges' shoelace polynomials (waterline_cut.go)…
-	base   int        // …counted from this vertex
 	zmin   float64
 	zmax   float64
 	ymax   float64 // largest |y| of any vertex
 	convex bool    // the vertices below a plane are one arc (convex_cut.go)…
-	dents  []dent  // …unless the plane runs in one of these directions
+	base   int     // the vertex the prefix sums pre start from
+	v      []slabVertex
+	pre    []edgePoly // prefix sums of the edges' shoelace polynomials (waterline_cut.go)
+	dents  []dent     // …unless the plane runs in one of these directions
+
+	p0, dp []Point
+	p1     []Point // the vertices at x1, p0 + (x1 − x0)·dp
+	blocks []vertexBlock
+	full   Immersion // the whole slab, waterplane terms zero
 }
+
+// slabVertex is a vertex of a slab's section: at p + (x − x0)·d.
+type slabVertex struct{ p, d Point }
+
+// at returns the vertex at s = x − x0.
+func (q *slabVertex) at(s float64) (y, z float64) { return q.p.Y + s*q.d.Y, q.p.Z + s*q.d.Z }
 
 // planeSpan returns the lowest and the highest z of plane p over the
 // slab's box (x from x0 to x1, |y| up to ymax): a slab whose lowest point
@@ -70,6 +83,10 @@ func newSlab(x0, x1 float64, a, b []Point) slab {
 	s.p1 = s.section(x1)
 	s.base = prefixBase(s.p0, s.p1)
 	s.pre = edgePrefix(s.p0, s.dp, s.base)
+	s.v = make([]slabVertex, len(a))
+	for k := range s.v {
+		s.v[k] = slabVertex{s.p0[k], s.dp[k]}
+	}
 	s.blocks = vertexBlocks(s.p0, s.p1)
 	s.convex, s.dents = arcSection(s.p0, s.p1)
 	return s

@@ -400,7 +400,7 @@ func (s *slab) pieceChains(p Plane, xa, xb float64, nin int, chains []chain, im 
 		im.MZ += mz
 		return
 	}
-	p0, dp := s.p0[:n], s.dp[:n]
+	vs := s.v[:n]
 	for g := range gaussNode {
 		x := xa + gaussNode[g]*dx
 		w := gaussWeight[g] * dx
@@ -414,8 +414,8 @@ func (s *slab) pieceChains(p Plane, xa, xb float64, nin int, chains []chain, im 
 			if j == n {
 				j = 0
 			}
-			ky, kz := p0[k].Y+sg*dp[k].Y, p0[k].Z+sg*dp[k].Z
-			jy, jz := p0[j].Y+sg*dp[j].Y, p0[j].Z+sg*dp[j].Z
+			ky, kz := vs[k].at(sg)
+			jy, jz := vs[j].at(sg)
 			dk, dj := kz-p.C*ky-h, jz-p.C*jy-h
 			t := dk / (dk - dj)
 			iy, iz := ky+t*(jy-ky), kz+t*(jz-kz)
@@ -449,8 +449,8 @@ func (s *slab) pieceChains(p Plane, xa, xb float64, nin int, chains []chain, im 
 			if j == n {
 				j = 0
 			}
-			ky, kz = p0[k].Y+sg*dp[k].Y, p0[k].Z+sg*dp[k].Z
-			jy, jz = p0[j].Y+sg*dp[j].Y, p0[j].Z+sg*dp[j].Z
+			ky, kz = vs[k].at(sg)
+			jy, jz = vs[j].at(sg)
 			dk, dj = kz-p.C*ky-h, jz-p.C*jy-h
 			t = dk / (dk - dj)
 			oy, oz := ky+t*(jy-ky), kz+t*(jz-kz)
