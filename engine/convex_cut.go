@@ -24,11 +24,6 @@ type arc struct{ lo, cnt int }
 // lies in one is left to the general method.
 type dent struct{ lo, hi float64 }
 
-// maxDents bounds the dents a slab may have and still use the arc walk:
-// ranges that overlap are counted once, so the many round-off dents of a
-// long flat side, all about one direction, count as one.
-const maxDents = 8
-
 // dentMargin widens every dent (radians) so that round-off in the plane's
 // direction does not carry it out of one.
 const dentMargin = 1e-9
@@ -50,8 +45,10 @@ const dentMargin = 1e-9
 // left to the general method. The turn at vertex k, the cross product of
 // the edges into and out of it, is a quadratic in x: its sign is checked at
 // both ends, midway and at its extremum. A polygon with an edge of no
-// length at either end, that winds other than once, or with more than
-// maxDents dents or one over 0.5 rad, is refused.
+// length at either end, that winds other than once, or with a dent over
+// 0.5 rad, is refused. The dents are returned as sorted, disjoint ranges
+// (addDent), however many there are: the many round-off dents of a long
+// flat side, all about one direction, mostly merge.
 func arcSection(p0, p1 []Point) (bool, []dent) {
 	n := len(p0)
 	if n < 3 || len(p1) != n {
@@ -107,9 +104,6 @@ func arcSection(p0, p1 []Point) (bool, []dent) {
 			return false, nil
 		}
 		dents = addDent(dents, lo-dentMargin, hi+dentMargin)
-		if len(dents) > maxDents {
-			return false, nil
-		}
 	}
 	return true, dents
 }
@@ -153,14 +147,19 @@ func mergeDent(ds []dent, d dent) []dent {
 
 // dentsHit reports whether a plane at heel phi (radians, atan of its
 // slope C, in (−π/2, π/2)) runs in a direction that one of the dents
-// passes more than once.
+// (sorted and apart, as addDent keeps them) passes more than once: a
+// bisection for the first dent that ends at or beyond phi.
 func dentsHit(dents []dent, phi float64) bool {
-	for _, d := range dents {
-		if phi >= d.lo && phi <= d.hi {
-			return true
+	lo, hi := 0, len(dents)
+	for lo < hi {
+		m := int(uint(lo+hi) >> 1)
+		if dents[m].hi < phi {
+			lo = m + 1
+		} else {
+			hi = m
 		}
 	}
-	return false
+	return lo < len(dents) && dents[lo].lo <= phi
 }
 
 // side tells which vertices findArc looks for: those below the plane
