@@ -28,6 +28,7 @@ type Compartment struct {
 	Sections     []CompartmentSection // nil for a box; else its outlines (compartment_sections.go)
 	pieces       []prismPiece         // the region of a compartment given by sections
 	PumpM3h      float64              // pumping capacity on the compartment, m³/h (0: none given); the righting options' times
+	Pipe         *SoundingPipe        // where the tank is sounded (the vessel file's sounding_pipe); nil: DefaultSoundingPipe (sounding.go)
 
 	solid *Solid
 }

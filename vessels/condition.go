@@ -115,7 +115,14 @@ func (r *reader) condition(root *table, v *engine.Vessel, info *Info) *Condition
 	if len(ts) == 0 && !root.has("keep") {
 		r.addf("weight", "missing: a condition needs its weights: [[weight]] tables (lightship included), or keep = [names] of the vessel file's")
 	}
-	c.Tanks = r.tankFills(root.entries("tank", "one tank's contents"), v, info)
+	// Soundings are checked against full as she lay when sounded if the
+	// file says so, else upright and level (Apply reads a sounding past
+	// full at her own heel and trim as full).
+	slope := engine.Plane{}
+	if c.Sounded && v.Hull != nil {
+		slope = engine.Plane{B: -c.SoundedTrimM / v.Hull.LengthM, C: math.Tan(c.SoundedHeelDeg * math.Pi / 180)}
+	}
+	c.Tanks = r.tankFills(root.entries("tank", "one tank's contents"), v, info, slope)
 	if n := r.named; n.unknown >= 3 && n.unknown > n.known {
 		r.addf("name", "%d of the %d weights and tanks named here are not %s's: is this condition written for another ship?", n.unknown, n.unknown+n.known, v.Name)
 	}
@@ -179,11 +186,11 @@ func (r *reader) keptWeights(root *table, v *engine.Vessel) []engine.Weight {
 var tankAmounts = []string{"fill", "volume_m3", "mass_t", "sounding_m"}
 
 // tankFills reads the [[tank]] tables.
-func (r *reader) tankFills(ts []*table, v *engine.Vessel, info *Info) []TankFill {
+func (r *reader) tankFills(ts []*table, v *engine.Vessel, info *Info, slope engine.Plane) []TankFill {
 	var out []TankFill
 	seen := map[int]string{}
 	for _, t := range ts {
-		tf, ok := r.tankFill(t, v, info, seen)
+		tf, ok := r.tankFill(t, v, info, seen, slope)
 		t.finish()
 		if ok {
 			out = append(out, tf)
@@ -192,7 +199,8 @@ func (r *reader) tankFills(ts []*table, v *engine.Vessel, info *Info) []TankFill
 	return out
 }
 
-func (r *reader) tankFill(t *table, v *engine.Vessel, info *Info, seen map[int]string) (TankFill, bool) {
+// slope is the water plane's slopes the soundings are checked at.
+func (r *reader) tankFill(t *table, v *engine.Vessel, info *Info, seen map[int]string, slope engine.Plane) (TankFill, bool) {
 	tf := TankFill{SoundingM: -1, File: r.file, Key: t.path, Line: r.lines.line(t.path)}
 	name, nameOK := t.str("name", true, "the tank's compartment name in quotes")
 	liquid, liquidOK := t.str("liquid", false, "what the tank holds, e.g. \"fuel oil\"")
@@ -305,17 +313,17 @@ func (r *reader) tankFill(t *table, v *engine.Vessel, info *Info, seen map[int]s
 		}
 		tf.Liquid.Fill = math.Min(vol/capM3, 1)
 	case "sounding_m":
-		tf.Pipe = c.DefaultSoundingPipe()
+		tf.Pipe = c.SoundingPipe()
 		if info != nil && idx < len(info.Compartments) && info.Compartments[idx].SoundingPipe != nil {
 			tf.Pipe = *info.Compartments[idx].SoundingPipe
 		}
-		datum, top, err := c.PipeSpan(tf.Pipe)
+		full, err := c.FullSoundingM(tf.Pipe, slope)
 		if err != nil {
 			r.addf(p, "%v: give the compartment a sounding_pipe = [x, y] inside it in the vessel file", err)
 			return tf, false
 		}
-		if f > top-datum+1e-9 {
-			r.addf(p, "%g m is above the top of %q at its sounding pipe (%.3f m from the tank's bottom at x = %.2f m, y = %.2f m): the tank cannot hold more", f, c.Name, top-datum, tf.Pipe.X, tf.Pipe.Y)
+		if f > full+1e-9 {
+			r.addf(p, "%g m is more than %q can sound: it is full at %.3f m at its sounding pipe (x = %.2f m, y = %.2f m)", f, c.Name, full, tf.Pipe.X, tf.Pipe.Y)
 			return tf, false
 		}
 		tf.SoundingM = f

@@ -51,7 +51,16 @@ func (c *Condition) Apply(v *engine.Vessel) (*engine.Vessel, error) {
 				continue
 			}
 			cp := v.Compartments[t.Compartment]
-			vol, err := cp.SoundingVolumeM3(t.Pipe, t.SoundingM, slope)
+			s := t.SoundingM
+			if !c.Sounded {
+				// Checked against full upright when read: at her own
+				// heel and trim a sounding past full reads as full (the
+				// liquid stands in the pipe).
+				if full, err := cp.FullSoundingM(t.Pipe, slope); err == nil {
+					s = math.Min(s, full)
+				}
+			}
+			vol, err := cp.SoundingVolumeM3(t.Pipe, s, slope)
 			if err != nil {
 				return nil, t.problem(err.Error())
 			}

@@ -482,6 +482,7 @@ func (r *reader) compartments(ts []*table, hull *engine.Hull) ([]*engine.Compart
 		c.Use = use
 		c.Permeability = mu
 		c.PumpM3h = ci.PumpM3h
+		c.Pipe = ci.SoundingPipe
 		if liquid != nil {
 			if liquid.volumeM3 >= 0 {
 				if vol := c.CapacityM3(); liquid.volumeM3 > vol*(1+1e-9) {
