@@ -525,9 +525,11 @@ func handLollTan(gm, bm, lever float64) float64 {
 
 // handNum formats a figure of the working with about four significant
 // figures and no exponent; negative figures are bracketed so that they read
-// well inside a formula.
+// well inside a formula. A figure that rounds to zero at the finest
+// precision written (six decimals: round-off of sums, as a TCG of 1e-17 m
+// on the centreline) is written 0, without a sign.
 func handNum(x float64) string {
-	if x == 0 {
+	if x == 0 || math.Abs(x) < 5e-7 {
 		return "0"
 	}
 	if math.IsNaN(x) || math.IsInf(x, 0) {
