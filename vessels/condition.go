@@ -70,6 +70,10 @@ func ParseCondition(file string, data []byte, v *engine.Vessel, info *Info) (*Co
 	if err != nil {
 		return nil, err
 	}
+	if k := stateOnlyKey(root); k != "" {
+		r.addf(k, "this is a saved state (it holds %s, which a condition file does not), not a condition file: take it up on the dashboard with heelwatch --resume %s", k, file)
+		return nil, r.probs.sorted()
+	}
 	c := r.condition(root, v, info)
 	root.finish()
 	if len(r.probs) > 0 {
@@ -298,7 +302,7 @@ func (r *reader) tankFill(t *table, v *engine.Vessel, info *Info, seen map[int]s
 	switch k {
 	case "fill":
 		if f > 1 {
-			r.addf(p, "%g is more than 1: fill is the fraction of the tank's capacity (μ × its volume inside the hull), 0 to 1", f)
+			r.addf(p, "%g is more than 1: fill is a fraction of the tank's capacity (μ × its volume inside the hull), 0 to 1%s", f, percentHint(f))
 			return tf, false
 		}
 		tf.Liquid.Fill = f
@@ -331,6 +335,25 @@ func (r *reader) tankFill(t *table, v *engine.Vessel, info *Info, seen map[int]s
 	return tf, true
 }
 
+// percentHint is the hint for a fill that looks written in per cent
+// from 2 to 100): ": did you mean 0.80 (80 %)?"; "" otherwise.
+func percentHint(f float64) string {
+	if !(f >= 2 && f <= 100) {
+		return ""
+	}
+	return fmt.Sprintf(": did you mean %s (%g %%)?", strconvTrim(f/100), f)
+}
+
+// strconvTrim writes a fraction with two decimals at least and no
+// trailing zeros beyond them: 0.80, 0.555, 1.00.
+func strconvTrim(x float64) string {
+	s := fmt.Sprintf("%.6f", x)
+	for strings.HasSuffix(s, "0") && len(s)-strings.Index(s, ".") > 3 {
+		s = s[:len(s)-1]
+	}
+	return s
+}
+
 func tankAmountUnit(k string) string {
 	switch k {
 	case "fill":
@@ -351,4 +374,15 @@ func tankAmountText(k string, f float64) string {
 		return fmt.Sprintf("%g t", f)
 	}
 	return fmt.Sprint(f)
+}
+
+// stateOnlyKey returns the first top-level key of root that only a saved
+// state file holds (vessel, space, connection_state, reading), or "".
+func stateOnlyKey(root *table) string {
+	for _, k := range []string{"space", "connection_state", "reading", "vessel"} {
+		if root.has(k) {
+			return k
+		}
+	}
+	return ""
 }

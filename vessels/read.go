@@ -591,7 +591,7 @@ func (r *reader) liquid(t *table, use string, useOK bool) *tankLiquid {
 	l := &tankLiquid{Liquid: engine.Liquid{Name: name, Density: dens}, volumeM3: -1}
 	if fillOK {
 		if !(fill >= 0 && fill <= 1) {
-			r.addf(t.keyPath("fill"), "%g is outside [0, 1]: give the fraction of the tank filled", fill)
+			r.addf(t.keyPath("fill"), "%g is outside [0, 1]: give the fraction of the tank filled%s", fill, percentHint(fill))
 			return nil
 		}
 		l.Fill = fill
