@@ -126,7 +126,7 @@ func HandMethod(v *Vessel, d Damage) (*HandWorking, error) {
 		// A ship-shaped hull, or a space given by its own outlines (a
 		// hopper tank on a box barge): the working from the hull's own
 		// hydrostatics, which on a box with box spaces is the same.
-		return handShip(v, d) // hand_ship.go
+		return markUsable(handShip(v, d)) // hand_ship.go
 	}
 	L, B, D := h.LengthM, h.BreadthM, h.DepthM
 	spaces, spilt, spiltT, err := handSpaces(v, d)
@@ -286,7 +286,7 @@ func HandMethod(v *Vessel, d Damage) (*HandWorking, error) {
 
 	// Heel and trim solved together (I_xy kept): for the record.
 	w.handCoupled(iXY, V, L, lever, ld.LCGM)
-	return w, nil
+	return markUsable(w, nil)
 }
 
 // openOutlined reports whether a compartment given by its own outlines is
