@@ -82,6 +82,17 @@ const (
 	FlagDeckEdgeNear       = "deck-edge-near"
 )
 
+// AboutHandMethod reports whether f is a caveat of the hand method rather
+// than a flag about the ship: past-small-angles (the hand answer parts from
+// the direct one, or is not usable) and not-wall-sided (the hull is not
+// what the hand method and the wall-sided formula assume). They say how far
+// to trust a method, not that the ship is worse off, so a word for the
+// ship's state (the dashboard's header, `ship_severity` in JSON) leaves
+// them out.
+func (f Flag) AboutHandMethod() bool {
+	return f.Code == FlagPastSmallAngles || f.Code == FlagNotWallSided
+}
+
 // Thresholds of the flags.
 const (
 	// FlagHeelPartDeg and FlagDraftPart are how far the hand and direct

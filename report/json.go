@@ -48,6 +48,7 @@ type Document struct {
 	Outcome          string         `json:"outcome"`           // floats | sinks | capsizes | not converged
 	Reason           string         `json:"reason"`            // why there is no equilibrium, "" when she floats
 	Severity         string         `json:"severity"`          // highest flag severity: none | info | caution | danger
+	ShipSeverity     string         `json:"ship_severity"`     // the same without the hand method's caveats (engine.Flag.AboutHandMethod): the ship's own state
 	OpenCompartments []OpenDoc      `json:"open_compartments"` // each open compartment with its permeability
 	HeldWater        []HeldDoc      `json:"partly_flooded"`    // compartments holding floodwater, not open to the sea
 	Freeboards       []Freeboard    `json:"freeboards"`
@@ -234,6 +235,7 @@ func Build(r Report) Document {
 		Spills:           buildSpills(a.Spills),
 		Outcome:          r.Outcome(),
 		Severity:         r.Severity(),
+		ShipSeverity:     r.ShipSeverity(),
 		OpenCompartments: []OpenDoc{},
 		HeldWater:        append([]HeldDoc{}, r.heldWater()...),
 		Freeboards:       []Freeboard{},

@@ -3,6 +3,8 @@ package report
 import (
 	"io"
 	"strings"
+
+	"heelwatch/engine"
 )
 
 // Text writes r as a compact plain-text report for the terminal: aligned
@@ -183,13 +185,31 @@ func Text(w io.Writer, r Report) error {
 	}
 
 	e.line()
-	fl := r.Flags()
-	if len(fl) == 0 {
+	// The ship's flags, then the hand method's caveats under their own
+	// heading: they say how far to trust the method, not how the ship is.
+	var ship, method []engine.Flag
+	for _, f := range r.Flags() {
+		if f.AboutHandMethod() {
+			method = append(method, f)
+		} else {
+			ship = append(ship, f)
+		}
+	}
+	if len(ship) == 0 {
 		e.line("Flags: none")
 	} else {
 		e.line("Flags")
 		t := table{}
-		for _, f := range fl {
+		for _, f := range ship {
+			t.add(strings.ToUpper(f.Severity.String()), f.Code, f.Message)
+		}
+		writeLines(e, t.lines("  "))
+	}
+	if len(method) > 0 {
+		e.line()
+		e.line("About the hand method (its caveats, not flags of the ship)")
+		t := table{}
+		for _, f := range method {
 			t.add(strings.ToUpper(f.Severity.String()), f.Code, f.Message)
 		}
 		writeLines(e, t.lines("  "))
