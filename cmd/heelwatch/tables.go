@@ -21,7 +21,8 @@ Usage:
   --table T    hydrostatics, tanks or capacity (csv: one table, default
                hydrostatics; text and json: all three unless one is named)
   --step M     the drafts' step, m (default 0.25, from one step above the
-               keel to the deck at side); the tanks' soundings step M/2.5
+               keel; the last row is at the lowest deck at side, where the
+               model's hull ends); the tanks' soundings step M/2.5
   --format F   text (default), csv or json
 
 hydrostatics: at even keel and upright, per draft: displacement, LCB, VCB
@@ -42,23 +43,22 @@ func tanksOf(v *engine.Vessel) []int {
 	return out
 }
 
-// hydroTable returns the hydrostatic table of v from step to the deck at
-// side (the least depth at side, so that every draft has a waterplane).
+// hydroTable returns the hydrostatic table of v at every step from one
+// step above the keel, and at the top of the hydrostatic range (the lowest
+// deck at side, hydroRange) when the steps do not land on it.
 func hydroTable(v *engine.Vessel, step float64) []engine.HydroRow {
-	h := v.Hull
-	top := h.DepthM
-	for i := range h.Stations() {
-		_, _, z := h.DeckEdge(i)
-		top = math.Min(top, z)
-	}
+	hr := hydroRangeOf(v.Hull)
 	var rows []engine.HydroRow
 	for k := 1; ; k++ {
 		T := math.Round(float64(k)*step*1e6) / 1e6
-		if T >= top-1e-9 {
-			return rows
+		if T > hr.TopM-1e-9 {
+			T = hr.TopM
 		}
-		if r, err := engine.Hydrostatics(h, v.WaterDensity, T); err == nil {
+		if r, err := hydrostaticsAt(v, hr, T); err == nil && T > hr.KeelM {
 			rows = append(rows, r)
+		}
+		if T >= hr.TopM {
+			return rows
 		}
 	}
 }
@@ -224,6 +224,7 @@ func runTables(args []string, stdout, stderr io.Writer) int {
 		fmt.Fprintf(tw, "%s — %s\n", v.Name, source(info))
 		if want("hydrostatics") {
 			fmt.Fprintf(tw, "\nHydrostatics, even keel, upright, water %.3f t/m³\n", v.WaterDensity)
+			fmt.Fprintf(tw, "drafts %s\n", hydroRangeOf(v.Hull).why())
 			fmt.Fprintln(tw, "draft m\tΔ t\tLCB m\tKB m\tLCF m\tTPC t\tMCTC t·m\tKMT m\tKML m\t")
 			for _, r := range hyd {
 				fmt.Fprintf(tw, "%.3f\t%.1f\t%.3f\t%.3f\t%.3f\t%.2f\t%.1f\t%.3f\t%.1f\t\n", r.DraftM, r.DisplacementT, r.LCBM, r.VCBM, r.LCFM, r.TPCt, r.MCTCtm, r.KMTM, r.KMLM)

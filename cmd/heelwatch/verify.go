@@ -35,8 +35,13 @@ booklet − model and the tolerance that of MSC.1/Circ.1229 for the quantity
 (a percentage of the booklet's value, capped by a length where one is
 given). TPC has no figure of its own there: it is held to displacement's 2 %.
 
-Exit status: 0 every value within tolerance; 4 some are not; 1 bad input;
-2 bad usage.
+The model's hydrostatics are compared from the keel to the lowest deck at
+side, the range heelwatch tables prints; a row at a draft outside it is
+input verify cannot use.
+
+Exit status: 0 every value within tolerance; 4 some are not; 1 bad input
+(a table that cannot be read or used: file:line, column and why on
+stderr); 2 bad usage.
 `
 
 // exitVerifyFail is verify's status when some value is beyond tolerance.
@@ -167,13 +172,23 @@ func verifyHydrostatics(v *engine.Vessel, t *csvTable) ([]verifyRow, error) {
 	if err := t.columns("draft_m", hydroTolerances); err != nil {
 		return nil, err
 	}
+	hr := hydroRangeOf(v.Hull)
 	var out []verifyRow
+	var outside []error
 	for i := range t.rows {
 		T, err := t.number(i, 0)
 		if err != nil {
 			return nil, err
 		}
-		r, herr := engine.Hydrostatics(v.Hull, v.WaterDensity, T)
+		if why := hr.refusal(T); why != "" {
+			outside = append(outside, fmt.Errorf("%s:%d: draft_m: %s", t.file, t.lines[i], why))
+			continue
+		}
+		r, herr := hydrostaticsAt(v, hr, T)
+		if herr != nil {
+			outside = append(outside, fmt.Errorf("%s:%d: draft_m: %g m: %v", t.file, t.lines[i], T, herr))
+			continue
+		}
 		model := map[string]float64{}
 		for k, c := range hydroColumns {
 			model[c] = hydroValues(r)[k]
@@ -183,17 +198,15 @@ func verifyHydrostatics(v *engine.Vessel, t *csvTable) ([]verifyRow, error) {
 			if err != nil {
 				return nil, err
 			}
-			row := verifyRow{Table: "hydrostatics", Key: T, Quantity: q, Booklet: b, Tolerance: hydroTolerances[q].of(b)}
-			if herr != nil {
-				row.Note = herr.Error()
-			} else {
-				m := model[q]
-				d := b - m
-				row.Model, row.Deviation = &m, &d
-				row.Pass = math.Abs(d) <= row.Tolerance
-			}
-			out = append(out, row)
+			m := model[q]
+			d := b - m
+			tl := hydroTolerances[q].of(b)
+			out = append(out, verifyRow{Table: "hydrostatics", Key: T, Quantity: q, Booklet: b, Model: &m, Deviation: &d, Tolerance: tl, Pass: math.Abs(d) <= tl})
 		}
+	}
+	if len(outside) > 0 {
+		outside = append(outside, fmt.Errorf("%s: heelwatch works %s's hydrostatics at drafts %s; leave out the rows beyond (heelwatch tables prints this range)", t.file, v.Name, hr.why()))
+		return nil, errors.Join(outside...)
 	}
 	return out, nil
 }
