@@ -1,7 +1,6 @@
 package main
 
 import (
-	"encoding/csv"
 	"encoding/json"
 	"errors"
 	"flag"
@@ -9,11 +8,11 @@ import (
 	"io"
 	"math"
 	"os"
-	"strconv"
 	"strings"
 	"text/tabwriter"
 
 	"heelwatch/engine"
+	"heelwatch/vessels"
 )
 
 const verifyHelp = `heelwatch verify: the model against the ship's approved tables.
@@ -29,6 +28,10 @@ Usage:
   --tanks T.csv         the booklet's tanks, full: name and any of
                         volume_m3, lcg_m, tcg_m, vcg_m
   --format F            text (default) or json
+
+The CSV files: commas with decimal points, or semicolons with decimal
+commas. Every cell holds a figure (leave a quantity's column out rather
+than a cell empty); each draft and tank once.
 
 Each value is compared with heelwatch's own figure; the deviation is
 booklet − model and the tolerance that of MSC.1/Circ.1229 for the quantity
@@ -93,92 +96,38 @@ type verifyRow struct {
 	Note      string   `json:"note,omitempty"`
 }
 
-// csvTable is a CSV file read: its header and rows, with their lines.
-type csvTable struct {
-	file   string
-	header []string
-	rows   [][]string
-	lines  []int
-}
+// tankColumns are the columns of the tanks table verify reads.
+var tankColumns = []string{"name", "volume_m3", "lcg_m", "tcg_m", "vcg_m"}
 
-func readCSV(path string) (*csvTable, error) {
-	f, err := os.Open(path)
-	if err != nil {
-		return nil, err
-	}
-	defer f.Close()
-	r := csv.NewReader(f)
-	r.FieldsPerRecord = -1
-	r.TrimLeadingSpace = true
-	t := &csvTable{file: path}
-	for {
-		rec, err := r.Read()
-		if err == io.EOF {
-			break
-		}
-		if err != nil {
-			return nil, fmt.Errorf("%s: %v", path, err)
-		}
-		line, _ := r.FieldPos(0)
-		if t.header == nil {
-			for _, h := range rec {
-				t.header = append(t.header, strings.TrimSpace(h))
-			}
-			continue
-		}
-		if len(rec) == 1 && strings.TrimSpace(rec[0]) == "" {
-			continue
-		}
-		if len(rec) != len(t.header) {
-			return nil, fmt.Errorf("%s:%d: %d fields, the header has %d", path, line, len(rec), len(t.header))
-		}
-		t.rows = append(t.rows, rec)
-		t.lines = append(t.lines, line)
-	}
-	if t.header == nil {
-		return nil, fmt.Errorf("%s: empty: give a header row and one row per value", path)
-	}
-	return t, nil
-}
-
-// columns checks the header: first must come first, the rest be known.
-func (t *csvTable) columns(first string, known map[string]tolerance, extra ...string) error {
-	if len(t.header) == 0 || t.header[0] != first {
-		return fmt.Errorf("%s:1: the first column must be %s", t.file, first)
-	}
-	seen := map[string]bool{}
-	for _, h := range t.header[1:] {
-		_, ok := known[h]
-		for _, e := range extra {
-			ok = ok || h == e
-		}
-		if !ok || seen[h] {
-			return fmt.Errorf("%s:1: column %q is unknown or repeated", t.file, h)
-		}
-		seen[h] = true
-	}
-	return nil
-}
-
-func (t *csvTable) number(i, j int) (float64, error) {
-	x, err := strconv.ParseFloat(strings.TrimSpace(t.rows[i][j]), 64)
-	if err != nil || math.IsNaN(x) || math.IsInf(x, 0) {
-		return 0, fmt.Errorf("%s:%d: %s: %q is not a number", t.file, t.lines[i], t.header[j], t.rows[i][j])
-	}
-	return x, nil
-}
-
-func verifyHydrostatics(v *engine.Vessel, t *csvTable) ([]verifyRow, error) {
-	if err := t.columns("draft_m", hydroTolerances); err != nil {
+// verifyHydrostatics compares the booklet's hydrostatic table t with the
+// model, row by row. Every problem of the table is returned at once.
+func verifyHydrostatics(v *engine.Vessel, t *bookletCSV) ([]verifyRow, error) {
+	if err := t.columns("draft_m", hydroColumns); err != nil {
 		return nil, err
 	}
 	hr := hydroRangeOf(v.Hull)
 	var out []verifyRow
-	var outside []error
+	var problems, outside []error
+	lineOf := map[float64]int{}
 	for i := range t.rows {
-		T, err := t.number(i, 0)
+		T, err := t.number(i, 0, fmt.Sprintf("row %d", i+1))
 		if err != nil {
-			return nil, err
+			problems = append(problems, err)
+			continue
+		}
+		if l, ok := lineOf[T]; ok {
+			problems = append(problems, fmt.Errorf("%s:%d: draft_m: %g m again: line %d gives the same draft; give each draft once", t.file, t.lines[i], T, l))
+			continue
+		}
+		lineOf[T] = t.lines[i]
+		row := fmt.Sprintf("the row of draft %g m", T)
+		var booklet []float64
+		for j := range t.header[1:] {
+			b, err := t.number(i, j+1, row)
+			if err != nil {
+				problems = append(problems, err)
+			}
+			booklet = append(booklet, b)
 		}
 		if why := hr.refusal(T); why != "" {
 			outside = append(outside, fmt.Errorf("%s:%d: draft_m: %s", t.file, t.lines[i], why))
@@ -194,11 +143,7 @@ func verifyHydrostatics(v *engine.Vessel, t *csvTable) ([]verifyRow, error) {
 			model[c] = hydroValues(r)[k]
 		}
 		for j, q := range t.header[1:] {
-			b, err := t.number(i, j+1)
-			if err != nil {
-				return nil, err
-			}
-			m := model[q]
+			b, m := booklet[j], model[q]
 			d := b - m
 			tl := hydroTolerances[q].of(b)
 			out = append(out, verifyRow{Table: "hydrostatics", Key: T, Quantity: q, Booklet: b, Model: &m, Deviation: &d, Tolerance: tl, Pass: math.Abs(d) <= tl})
@@ -206,47 +151,83 @@ func verifyHydrostatics(v *engine.Vessel, t *csvTable) ([]verifyRow, error) {
 	}
 	if len(outside) > 0 {
 		outside = append(outside, fmt.Errorf("%s: heelwatch works %s's hydrostatics at drafts %s; leave out the rows beyond (heelwatch tables prints this range)", t.file, v.Name, hr.why()))
-		return nil, errors.Join(outside...)
+	}
+	if err := errors.Join(append(problems, outside...)...); err != nil {
+		return nil, err
 	}
 	return out, nil
 }
 
-func verifyTanks(v *engine.Vessel, t *csvTable) ([]verifyRow, error) {
-	tol := map[string]tolerance{}
-	for k, x := range tankTolerances {
-		tol[k] = x
-	}
-	if err := t.columns("name", tol, "tcg_m"); err != nil {
+// verifyTanks compares the booklet's table of tanks full t with the model.
+// Every problem of the table is returned at once.
+func verifyTanks(v *engine.Vessel, t *bookletCSV) ([]verifyRow, error) {
+	if err := t.columns("name", tankColumns); err != nil {
 		return nil, err
 	}
 	tcg := math.Min(0.005*v.Hull.BreadthM, 0.05)
 	full := map[string]tankFull{}
+	var names []string
 	for _, f := range fullTanks(v) {
 		full[strings.ToLower(f.Name)] = f
+		names = append(names, f.Name)
 	}
 	var out []verifyRow
+	var problems []error
+	unknown := false
+	lineOf := map[string]int{}
 	for i, rec := range t.rows {
 		name := strings.TrimSpace(rec[0])
 		f, ok := full[strings.ToLower(name)]
 		if !ok {
-			return nil, fmt.Errorf("%s:%d: name: %q is not a tank of %s (a compartment with use \"tank\")", t.file, t.lines[i], name, v.Name)
+			problems = append(problems, fmt.Errorf("%s:%d: name: %s", t.file, t.lines[i], notATank(v, name, names)))
+			unknown = true
+			continue
 		}
+		if l, ok := lineOf[strings.ToLower(name)]; ok {
+			problems = append(problems, fmt.Errorf("%s:%d: name: %s again: line %d gives the same tank; give each tank once", t.file, t.lines[i], f.Name, l))
+			continue
+		}
+		lineOf[strings.ToLower(name)] = t.lines[i]
 		model := map[string]float64{"volume_m3": f.VolumeM3, "lcg_m": f.LCGM, "tcg_m": f.TCGM, "vcg_m": f.VCGM}
 		for j, q := range t.header[1:] {
-			b, err := t.number(i, j+1)
+			b, err := t.number(i, j+1, "the row of "+f.Name)
 			if err != nil {
-				return nil, err
+				problems = append(problems, err)
+				continue
 			}
 			tl := tcg
 			if q != "tcg_m" {
-				tl = tol[q].of(b)
+				tl = tankTolerances[q].of(b)
 			}
 			m := model[q]
 			d := b - m
 			out = append(out, verifyRow{Table: "tanks", Key: f.Name, Quantity: q, Booklet: b, Model: &m, Deviation: &d, Tolerance: tl, Pass: math.Abs(d) <= tl})
 		}
 	}
+	if unknown {
+		list := "she has no tanks (compartments with use \"tank\")"
+		if len(names) > 0 {
+			list = "her tanks (names ignore case) are: " + strings.Join(names, ", ")
+		}
+		problems = append(problems, fmt.Errorf("%s: %s", t.file, list))
+	}
+	if err := errors.Join(problems...); err != nil {
+		return nil, err
+	}
 	return out, nil
+}
+
+// notATank says why name is not one of v's tanks, with the nearest tank's
+// name when it looks like a typing slip.
+func notATank(v *engine.Vessel, name string, tanks []string) string {
+	if i, ok := compartmentNamed(v, name); ok {
+		return fmt.Sprintf("%q is a compartment of %s with use %q, not a tank (use \"tank\")", v.Compartments[i].Name, v.Name, v.Compartments[i].Use)
+	}
+	msg := fmt.Sprintf("%q is not a tank of %s", name, v.Name)
+	if c := vessels.Closest(name, tanks); c != "" {
+		msg += fmt.Sprintf(": did you mean %q?", c)
+	}
+	return msg
 }
 
 func runVerify(args []string, stdout, stderr io.Writer) int {
@@ -278,14 +259,14 @@ func runVerify(args []string, stdout, stderr io.Writer) int {
 		return status
 	}
 	var rows []verifyRow
-	ht, err := readCSV(*hydro)
+	ht, err := readBookletCSV(*hydro)
 	if err == nil {
 		rows, err = verifyHydrostatics(v, ht)
 	}
 	if err == nil && *tanks != "" {
-		var tt *csvTable
+		var tt *bookletCSV
 		var tr []verifyRow
-		if tt, err = readCSV(*tanks); err == nil {
+		if tt, err = readBookletCSV(*tanks); err == nil {
 			tr, err = verifyTanks(v, tt)
 			rows = append(rows, tr...)
 		}
