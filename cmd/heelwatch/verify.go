@@ -9,7 +9,6 @@ import (
 	"math"
 	"os"
 	"strings"
-	"text/tabwriter"
 
 	"heelwatch/engine"
 	"heelwatch/vessels"
@@ -36,7 +35,11 @@ than a cell empty); each draft and tank once.
 Each value is compared with heelwatch's own figure; the deviation is
 booklet − model and the tolerance that of MSC.1/Circ.1229 for the quantity
 (a percentage of the booklet's value, capped by a length where one is
-given). TPC has no figure of its own there: it is held to displacement's 2 %.
+given; a tank's TCG: 0.5 % of the breadth, at most 5 cm). TPC has no figure
+of its own there: it is held to displacement's 2 %. Each tolerance is shown
+in the quantity's unit with its basis ("2 % of Δ", "5 cm cap"); the text
+ends with the count of values within and beyond tolerance and the failing
+ones listed together.
 
 The model's hydrostatics are compared from the keel to the lowest deck at
 side, the range heelwatch tables prints; a row at a draft outside it is
@@ -51,36 +54,55 @@ stderr); 2 bad usage.
 const exitVerifyFail = 4
 
 // tolerance is one quantity's acceptance tolerance: pct percent of the
-// reference, at most capM (0: no cap) (MSC.1/Circ.1229, references.md).
+// booklet's value (of the breadth B for a tank's TCG), at most capM metres
+// (0: no cap) (MSC.1/Circ.1229, references.md). of names what the
+// percentage is taken of, for the reader.
 type tolerance struct {
 	pct, capM float64
-	source    string
+	of        string
 }
 
-func (t tolerance) of(ref float64) float64 {
+// at returns the tolerance for booklet value ref (B for a TCG) and its
+// basis as an officer reads it: "2 % of Δ", "5 cm cap".
+func (t tolerance) at(ref float64) (float64, string) {
 	v := t.pct / 100 * math.Abs(ref)
-	if t.capM > 0 {
-		v = math.Min(v, t.capM)
+	basis := fmt.Sprintf("%g %% of %s", t.pct, t.of)
+	if t.capM > 0 && v > t.capM {
+		v = t.capM
+		basis = fmt.Sprintf("%g cm cap", t.capM*100)
 	}
-	return v
+	return v, basis
 }
 
 var hydroTolerances = map[string]tolerance{
-	"displacement_t": {2, 0, "MSC.1/Circ.1229: displacement 2 %"},
-	"lcb_m":          {1, 0.5, "MSC.1/Circ.1229: LCB 1 % / 50 cm"},
-	"vcb_m":          {1, 0.05, "MSC.1/Circ.1229: VCB 1 % / 5 cm"},
-	"lcf_m":          {1, 0.5, "MSC.1/Circ.1229: LCF 1 % / 50 cm"},
-	"tpc_t":          {2, 0, "as displacement, 2 % (practice: no figure of its own)"},
-	"mct_tm":         {2, 0, "MSC.1/Circ.1229: MCT 2 %"},
-	"kmt_m":          {1, 0.05, "MSC.1/Circ.1229: KMT 1 % / 5 cm"},
-	"kml_m":          {1, 0.5, "MSC.1/Circ.1229: KML 1 % / 50 cm"},
+	"displacement_t": {2, 0, "Δ"},
+	"lcb_m":          {1, 0.5, "LCB"},
+	"vcb_m":          {1, 0.05, "KB"},
+	"lcf_m":          {1, 0.5, "LCF"},
+	"tpc_t":          {2, 0, "TPC (as Δ)"}, // practice: Circ.1229 gives TPC no figure of its own
+	"mct_tm":         {2, 0, "MCTC"},
+	"kmt_m":          {1, 0.05, "KMT"},
+	"kml_m":          {1, 0.5, "KML"},
 }
 
 var tankTolerances = map[string]tolerance{
-	"volume_m3": {2, 0, "MSC.1/Circ.1229: compartment volume 2 %"},
-	"lcg_m":     {1, 0.5, "MSC.1/Circ.1229: compartment LCG 1 % / 50 cm"},
-	"vcg_m":     {1, 0.05, "MSC.1/Circ.1229: compartment VCG 1 % / 5 cm"},
-	// tcg_m: 0.5 % of the breadth, at most 5 cm (set per vessel).
+	"volume_m3": {2, 0, "volume"},
+	"lcg_m":     {1, 0.5, "LCG"},
+	"tcg_m":     {0.5, 0.05, "B"}, // of the ship's breadth, not of the TCG
+	"vcg_m":     {1, 0.05, "VCG"},
+}
+
+// quantityUnits are the units of verify's columns, as the booklet gives them.
+var quantityUnits = map[string]string{
+	"displacement_t": "t", "tpc_t": "t/cm", "mct_tm": "t·m/cm", "volume_m3": "m³",
+}
+
+// unitOf returns the unit of column q.
+func unitOf(q string) string {
+	if u, ok := quantityUnits[q]; ok {
+		return u
+	}
+	return "m"
 }
 
 // verifyRow is one value checked, as the JSON shows it.
@@ -93,7 +115,8 @@ type verifyRow struct {
 	Deviation *float64 `json:"deviation"`
 	Tolerance float64  `json:"tolerance"`
 	Pass      bool     `json:"pass"`
-	Note      string   `json:"note,omitempty"`
+	Unit      string   `json:"unit"`            // of booklet, model, deviation and tolerance
+	Basis     string   `json:"tolerance_basis"` // "2 % of Δ", "5 cm cap"
 }
 
 // tankColumns are the columns of the tanks table verify reads.
@@ -145,8 +168,9 @@ func verifyHydrostatics(v *engine.Vessel, t *bookletCSV) ([]verifyRow, error) {
 		for j, q := range t.header[1:] {
 			b, m := booklet[j], model[q]
 			d := b - m
-			tl := hydroTolerances[q].of(b)
-			out = append(out, verifyRow{Table: "hydrostatics", Key: T, Quantity: q, Booklet: b, Model: &m, Deviation: &d, Tolerance: tl, Pass: math.Abs(d) <= tl})
+			tl, basis := hydroTolerances[q].at(b)
+			out = append(out, verifyRow{Table: "hydrostatics", Key: T, Quantity: q, Booklet: b, Model: &m, Deviation: &d,
+				Tolerance: tl, Pass: math.Abs(d) <= tl, Unit: unitOf(q), Basis: basis})
 		}
 	}
 	if len(outside) > 0 {
@@ -164,7 +188,6 @@ func verifyTanks(v *engine.Vessel, t *bookletCSV) ([]verifyRow, error) {
 	if err := t.columns("name", tankColumns); err != nil {
 		return nil, err
 	}
-	tcg := math.Min(0.005*v.Hull.BreadthM, 0.05)
 	full := map[string]tankFull{}
 	var names []string
 	for _, f := range fullTanks(v) {
@@ -195,13 +218,15 @@ func verifyTanks(v *engine.Vessel, t *bookletCSV) ([]verifyRow, error) {
 				problems = append(problems, err)
 				continue
 			}
-			tl := tcg
-			if q != "tcg_m" {
-				tl = tankTolerances[q].of(b)
+			ref := b
+			if q == "tcg_m" {
+				ref = v.Hull.BreadthM
 			}
+			tl, basis := tankTolerances[q].at(ref)
 			m := model[q]
 			d := b - m
-			out = append(out, verifyRow{Table: "tanks", Key: f.Name, Quantity: q, Booklet: b, Model: &m, Deviation: &d, Tolerance: tl, Pass: math.Abs(d) <= tl})
+			out = append(out, verifyRow{Table: "tanks", Key: f.Name, Quantity: q, Booklet: b, Model: &m, Deviation: &d,
+				Tolerance: tl, Pass: math.Abs(d) <= tl, Unit: unitOf(q), Basis: basis})
 		}
 	}
 	if unknown {
@@ -280,13 +305,7 @@ func runVerify(args []string, stdout, stderr io.Writer) int {
 		}
 		return exitInput
 	}
-	pass, failed := true, 0
-	for _, r := range rows {
-		if !r.Pass {
-			pass = false
-			failed++
-		}
-	}
+	sum := summariseVerify(rows)
 	if *format == "json" {
 		enc := json.NewEncoder(stdout)
 		enc.SetIndent("", "  ")
@@ -294,38 +313,21 @@ func runVerify(args []string, stdout, stderr io.Writer) int {
 			Vessel string      `json:"vessel"`
 			Rows   []verifyRow `json:"rows"`
 			Pass   bool        `json:"pass"`
-		}{v.Name, rows, pass})
+			Passed int         `json:"passed"`
+			Failed int         `json:"failed"`
+		}{v.Name, rows, sum.pass(), sum.passed, len(sum.failed)})
 	} else {
-		tw := tabwriter.NewWriter(stdout, 0, 0, 2, ' ', 0)
-		fmt.Fprintf(tw, "%s — %s against %s\n", v.Name, source(info), *hydro)
-		fmt.Fprintln(tw, "table\tkey\tquantity\tbooklet\tmodel\tdeviation\ttolerance\t")
-		for _, r := range rows {
-			key := fmt.Sprint(r.Key)
-			if T, ok := r.Key.(float64); ok {
-				key = fmt.Sprintf("%.3f m", T)
-			}
-			m, d := "—", "—"
-			if r.Model != nil {
-				m, d = fmt.Sprintf("%.4f", *r.Model), fmt.Sprintf("%+.4f", *r.Deviation)
-			}
-			mark := ""
-			if !r.Pass {
-				mark = "FAIL"
-			}
-			fmt.Fprintf(tw, "%s\t%s\t%s\t%.4f\t%s\t%s\t%.4f\t%s\n", r.Table, key, r.Quantity, r.Booklet, m, d, r.Tolerance, mark)
+		against := *hydro
+		if *tanks != "" {
+			against += " and " + *tanks
 		}
-		if pass {
-			fmt.Fprintf(tw, "all %d values within the MSC.1/Circ.1229 tolerances\n", len(rows))
-		} else {
-			fmt.Fprintf(tw, "%d of %d values beyond the MSC.1/Circ.1229 tolerances: the model does not agree with the booklet there\n", failed, len(rows))
-		}
-		err = tw.Flush()
+		err = writeVerifyText(stdout, fmt.Sprintf("%s — %s against %s", v.Name, source(info), against), rows, sum)
 	}
 	if err != nil {
 		fmt.Fprintln(stderr, "heelwatch verify: writing the result:", err)
 		return exitFailed
 	}
-	if !pass {
+	if !sum.pass() {
 		return exitVerifyFail
 	}
 	return exitOK
