@@ -13,7 +13,7 @@ import (
 
 // pictureModel is the dashboard on vessel v at w × h with the damage
 // state that set gives (indices found by name), computed to the end.
-func pictureModel(t *testing.T, v *engine.Vessel, info *vessels.Info, w, h int, set func(d engine.Damage, at func(string) int)) model {
+func pictureModel(t testing.TB, v *engine.Vessel, info *vessels.Info, w, h int, set func(d engine.Damage, at func(string) int)) model {
 	t.Helper()
 	m := newModel(v, info, Options{Palette: "day"})
 	m.now = fixedClock()
@@ -366,4 +366,59 @@ func TestRakedPeakByOutline(t *testing.T) {
 			t.Errorf("the peak's rising bottom at (77, 1.5) m is not drawn as the selected compartment's outline")
 		}
 	})
+}
+
+// TestPictureCacheFollowsOutlineSelection: the pictures stay cached while
+// nothing they show changes, and selecting a compartment given by
+// outlines draws them again with it.
+func TestPictureCacheFollowsOutlineSelection(t *testing.T) {
+	v, info, err := vessels.Open("freighter")
+	if err != nil {
+		t.Fatal(err)
+	}
+	m := pictureModel(t, v, info, 120, 40, func(d engine.Damage, at func(string) int) { d[at("Hopper 2 S")].Open = true })
+	for _, kind := range []int{picSection, picProfile} {
+		draws := 0
+		draw := func(w, h int) []string {
+			draws++
+			if kind == picSection {
+				return m.sectionView(w, h)
+			}
+			return m.profileView(w, h)
+		}
+		m.sel = m.v.CompartmentIndex("DB 2 S")
+		box := strings.Join(m.cached(kind, 60, 16, draw), "\n")
+		_ = m.cached(kind, 60, 16, draw)
+		if draws != 1 {
+			t.Errorf("picture %d drawn %d times for two views of one state, want 1", kind, draws)
+		}
+		m.sel = m.v.CompartmentIndex("Hopper 2 S")
+		hop := strings.Join(m.cached(kind, 60, 16, draw), "\n")
+		if draws != 2 {
+			t.Errorf("picture %d drawn %d times after selecting the hopper tank, want 2", kind, draws)
+		}
+		if hop == box {
+			t.Errorf("picture %d unchanged after selecting the hopper tank:\n%s", kind, hop)
+		}
+		if kind == picSection && !strings.Contains(hop, "Hopper 2 S") {
+			t.Errorf("the section's title does not name the selected hopper tank:\n%s", hop)
+		}
+	}
+}
+
+// BenchmarkProfileOutlined measures one drawing of the profile (uncached)
+// with the freighter's hold 2, given by outlines, open and selected: the
+// profile samples the engine's section of it at every dot across its
+// length.
+func BenchmarkProfileOutlined(b *testing.B) {
+	v, info, err := vessels.Open("freighter")
+	if err != nil {
+		b.Fatal(err)
+	}
+	m := pictureModel(b, v, info, 120, 40, func(d engine.Damage, at func(string) int) { d[at("Hold 2")].Open = true })
+	m.sel = m.v.CompartmentIndex("Hold 2")
+	b.ResetTimer()
+	for i := 0; i < b.N; i++ {
+		_ = m.profileView(38, 14)
+	}
 }

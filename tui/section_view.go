@@ -26,7 +26,7 @@ const axisW = 5
 
 // framed puts a vertical scale left of a picture's canvas, labelled at
 // round values of the world's y, and returns the canvas's lines.
-func (m model) framed(c *canvas, yStep float64, yFmt func(float64) string) []string {
+func (m *model) framed(c *canvas, yStep float64, yFmt func(float64) string) []string {
 	return framedIn(m.st, m.inks, c, yStep, yFmt)
 }
 
