@@ -87,7 +87,7 @@ func regularAndSmall(path string, st os.FileInfo) error {
 	default:
 		kind = "not a regular file"
 	}
-	return fmt.Errorf("%s is %s: give a vessel file (only regular files are read)", path, kind)
+	return fmt.Errorf("%s is %s: give a file on disk (only regular files are read)", path, kind)
 }
 
 // tooDeep scans a document before it is decoded and returns a problem when
