@@ -660,7 +660,7 @@ func (m model) saveCmd(path string, all bool) tea.Cmd {
 	}
 	return func() tea.Msg {
 		if err == nil {
-			err = vessels.WriteFileSafely(path, data)
+			err = saveError(path, vessels.WriteFileSafely(path, data))
 		}
 		return condSavedMsg{path: path, what: what, err: err}
 	}
