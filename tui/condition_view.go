@@ -237,6 +237,10 @@ func (m model) conditionKey(msg tea.KeyMsg) (tea.Model, tea.Cmd, bool) {
 		if row.tank < 0 {
 			return m, nil, true
 		}
+		if why := m.seaRefusal(row.tank); why != "" {
+			p.note = why
+			return m, nil, true
+		}
 		step := 0.05
 		if key.Matches(msg, condLessKey) {
 			step = -0.05
@@ -292,6 +296,10 @@ func (m model) conditionKey(msg tea.KeyMsg) (tea.Model, tea.Cmd, bool) {
 	case key.Matches(msg, condEditKey):
 		switch {
 		case row.tank >= 0:
+			if why := m.seaRefusal(row.tank); why != "" {
+				p.note = why
+				return m, nil, true
+			}
 			f := 0.0
 			if l := m.v.Compartments[row.tank].Liquid; l != nil {
 				f = l.Fill
@@ -321,6 +329,20 @@ func (m model) conditionKey(msg tea.KeyMsg) (tea.Model, tea.Cmd, bool) {
 		return m, nil, false
 	}
 	return m, nil, true
+}
+
+// seaRefusal says why tank i's fill cannot be changed now ("" if it can):
+// while it is open to the sea or holds floodwater its contents are the
+// sea's, and a fill typed would change nothing of how she floats.
+func (m model) seaRefusal(i int) string {
+	name := m.v.Compartments[i].Name
+	switch why := seaHolds(m.damage, i); {
+	case why == "":
+		return ""
+	case m.damage[i].Open:
+		return name + " is open to the sea: its contents are the sea's while it is open, so its fill is not changed (undo the damage first)"
+	}
+	return name + " holds floodwater: its contents are the sea's while it is flooded, so its fill is not changed"
 }
 
 // defaultPath is the file a save offers: kind and the time, in the report
@@ -666,8 +688,11 @@ func (m model) saveCmd(path string, all bool) tea.Cmd {
 	}
 }
 
-// view draws the panel in w × h.
-func (p conditionPanel) view(v *engine.Vessel, st Styles, w, h int) []string {
+// view draws the panel in w × h for the ship v under damage d. A tank
+// open to the sea (or holding floodwater) is marked so, without a fill:
+// its contents are the sea's and no part of the ship's weight, so the
+// totals, like the floating position's ship weight, leave it out.
+func (p conditionPanel) view(v *engine.Vessel, d engine.Damage, st Styles, w, h int) []string {
 	title := "LOADING CONDITION"
 	if p.cond.Name != "" {
 		title += ": " + p.cond.Name
@@ -693,10 +718,8 @@ func (p conditionPanel) view(v *engine.Vessel, st Styles, w, h int) []string {
 	if !longWeights {
 		wNameW = max(6, min(longest, 22, w-2-27))
 	}
-	var total, fsm float64
-	for _, wt := range v.Weights {
-		total += wt.MassT
-	}
+	load := v.Loading(d)
+	var fsm float64
 	var body []string
 	sel := 0
 	for k, r := range rows {
@@ -704,7 +727,11 @@ func (p conditionPanel) view(v *engine.Vessel, st Styles, w, h int) []string {
 		if r.tank >= 0 {
 			c := v.Compartments[r.tank]
 			mass, _, _, _, f := v.TankContents(r.tank)
-			total += mass
+			if why := seaHolds(d, r.tank); why != "" {
+				line = fmt.Sprintf("%-*s %s", nameW, clipName(c.Name, nameW), why)
+				body = p.rowOf(body, st, k, r, line, w, nameW, wNameW, longWeights, &sel)
+				continue
+			}
 			fsm += f
 			fill := 0.0
 			liquid := "empty"
@@ -720,24 +747,9 @@ func (p conditionPanel) view(v *engine.Vessel, st Styles, w, h int) []string {
 				line = fmt.Sprintf("%-*s %7.1f %5.1f %5.1f %5.1f", wNameW, clipName(wt.Name, wNameW), wt.MassT, wt.LCGM, wt.TCGM, wt.VCGM)
 			}
 		}
-		if k == 0 && r.tank >= 0 {
-			body = append(body, st.Dim.Render(fitLine(fmt.Sprintf("%-*s %7s %9s  %s", nameW+2, "TANKS", "fill", "mass", "contents (fill: of capacity)"), w)))
-		}
-		if r.weight == 0 && longWeights {
-			body = append(body, st.Dim.Render("WEIGHTS"))
-		} else if r.weight == 0 {
-			body = append(body, st.Dim.Render(fitLine(fmt.Sprintf("%-*s %7s %5s %5s %5s", wNameW+2, "WEIGHTS", "t", "lcg m", "tcg m", "vcg m"), w)))
-		}
-		line = fitLine(line, w-2)
-		if k == p.sel {
-			sel = len(body)
-			line = st.Selected.Render("▸ " + line)
-		} else {
-			line = "  " + line
-		}
-		body = append(body, line)
+		body = p.rowOf(body, st, k, r, line, w, nameW, wNameW, longWeights, &sel)
 	}
-	foot := []string{st.Dim.Render(fitLine(fmt.Sprintf("Δ %.1f t · tanks' FSM %.0f t·m", total, fsm), w))}
+	foot := []string{st.Dim.Render(fitLine(fmt.Sprintf("Δ %.1f t · tanks' FSM %.0f t·m", load.MassT, fsm), w))}
 	switch {
 	case p.typing != condNone:
 		for _, l := range wrap(p.prompt(), w) {
@@ -765,6 +777,42 @@ func (p conditionPanel) view(v *engine.Vessel, st Styles, w, h int) []string {
 	return fit(append(lines, foot...), w, h)
 }
 
+// rowOf appends row k (r, drawn as line) to body, under its heading if it
+// is the first of its kind; sel is set to its place if it is chosen.
+func (p conditionPanel) rowOf(body []string, st Styles, k int, r condRow, line string, w, nameW, wNameW int, longWeights bool, sel *int) []string {
+	if k == 0 && r.tank >= 0 {
+		body = append(body, st.Dim.Render(fitLine(fmt.Sprintf("%-*s %7s %9s  %s", nameW+2, "TANKS", "fill", "mass", "contents (fill: of capacity)"), w)))
+	}
+	if r.weight == 0 && longWeights {
+		body = append(body, st.Dim.Render("WEIGHTS"))
+	} else if r.weight == 0 {
+		body = append(body, st.Dim.Render(fitLine(fmt.Sprintf("%-*s %7s %5s %5s %5s", wNameW+2, "WEIGHTS", "t", "lcg m", "tcg m", "vcg m"), w)))
+	}
+	line = fitLine(line, w-2)
+	if k == p.sel {
+		*sel = len(body)
+		line = st.Selected.Render("▸ " + line)
+	} else {
+		line = "  " + line
+	}
+	return append(body, line)
+}
+
+// seaHolds says why tank i's contents are not the ship's under d (open to
+// the sea, or holding floodwater), "" if they are.
+func seaHolds(d engine.Damage, i int) string {
+	if i >= len(d) {
+		return ""
+	}
+	switch {
+	case d[i].Open:
+		return "open to the sea: holds sea water, not the ship's"
+	case d[i].WaterM3 > 0:
+		return fmt.Sprintf("flooded: %.0f m³ of floodwater", d[i].WaterM3)
+	}
+	return ""
+}
+
 // prompt says what is being typed.
 func (p conditionPanel) prompt() string {
 	switch p.typing {
@@ -781,4 +829,4 @@ func (p conditionPanel) prompt() string {
 }
 
 // conditionLines is the panel drawn for the root model.
-func (m model) conditionLines(w, h int) []string { return m.cond.view(m.v, m.st, w, h) }
+func (m model) conditionLines(w, h int) []string { return m.cond.view(m.v, m.damage, m.st, w, h) }
