@@ -489,31 +489,39 @@ func parseTankAmount(s string, c, b *engine.Compartment, rho float64) (float64, 
 	return math.Min(f, 1), ""
 }
 
-// sounded reads a sounding typed for tank i ("1.2m") at the heel and trim
-// she lies at now, at the tank's pipe (the vessel file's sounding_pipe,
-// else its middle): one reading, not worked again once the fill moves
-// her.
+// sounded reads a sounding typed for tank i ("1.2m") at the tank's pipe
+// (the vessel file's sounding_pipe, else its middle) as a condition file's
+// sounding is read: the panel's condition is given the sounding and
+// vessels.Condition.Apply reads it where she lies intact with it, again
+// and again until the heel and trim it gives read the same fill (its fixed
+// point). The fill found is what the panel keeps: the sounding is one
+// reading, not worked again when later changes move her.
 func (m model) sounded(i int, s string) (float64, string, string) {
 	c := m.v.Compartments[i]
 	x, err := strconv.ParseFloat(strings.TrimSuffix(strings.ToLower(strings.ReplaceAll(s, " ", "")), "m"), 64)
 	if err != nil || math.IsNaN(x) || math.IsInf(x, 0) || x < 0 {
 		return 0, "", fmt.Sprintf("%q: give the sounding in metres, e.g. 1.2m", s)
 	}
-	if m.cur == nil || m.cur.Position == nil {
-		return 0, "", "no floating position to read the sounding at"
-	}
 	pipe := c.DefaultSoundingPipe()
 	if m.info != nil && i < len(m.info.Compartments) && m.info.Compartments[i].SoundingPipe != nil {
 		pipe = *m.info.Compartments[i].SoundingPipe
 	}
-	pos := m.cur.Position
-	vol, verr := c.SoundingVolumeM3(pipe, x, pos.Plane)
-	if verr != nil {
-		return 0, "", verr.Error()
+	p := m.cond
+	p.setFill(i, 0, m.v)
+	k := p.tankFill(i)
+	p.cond.Tanks[k].SoundingM, p.cond.Tanks[k].Pipe = x, pipe
+	nv, aerr := p.cond.Apply(p.base)
+	if aerr != nil {
+		return 0, "", aerr.Error()
 	}
-	f := math.Min(vol/c.CapacityM3(), 1)
-	return f, fmt.Sprintf("%s sounded %.2f m at heel %s, trim %s: %.1f %% of capacity (%.1f m³)",
-		c.Name, x, heelShort(pos.HeelDeg), trimText(pos.TrimM), f*100, vol), ""
+	f := nv.Compartments[i].Liquid.Fill
+	what := fmt.Sprintf("%s sounded %.2f m, read where she lies intact with it: %.1f %% of capacity (%.1f m³)",
+		c.Name, x, f*100, f*c.CapacityM3())
+	if pos, serr := engine.Solve(nv, nv.Intact()); serr == nil {
+		what = fmt.Sprintf("%s sounded %.2f m at heel %s, trim %s (where she lies intact with it): %.1f %% of capacity (%.1f m³)",
+			c.Name, x, heelShort(pos.HeelDeg), trimText(pos.TrimM), f*100, f*c.CapacityM3())
+	}
+	return f, what, ""
 }
 
 // parseWeight reads "mass lcg tcg vcg" (or, new, "name; mass; lcg; tcg;
@@ -817,7 +825,7 @@ func seaHolds(d engine.Damage, i int) string {
 func (p conditionPanel) prompt() string {
 	switch p.typing {
 	case condTank:
-		return "contents: per cent of capacity (55), tonnes (120t), m³ (80m3) or sounding (1.2m, read where she lies now); Enter takes, Esc drops"
+		return "contents: per cent of capacity (55), tonnes (120t), m³ (80m3) or sounding (1.2m, read where she lies with it); Enter takes, Esc drops"
 	case condWeight:
 		return "mass t, lcg m, tcg m (+ starboard), vcg m; Enter takes, Esc drops"
 	case condNew:
