@@ -31,6 +31,7 @@ type conditionPanel struct {
 	base   *engine.Vessel     // the ship as her vessel file gives her (Apply's ship); nil: no panel
 	cond   *vessels.Condition // the condition now (the panel's own copy)
 	taken  *vessels.Condition // the condition the ship is loaded with: what undo goes back to
+	named  string             // the condition's name before any change (condition_name.go)
 	resume *vessels.State     // a state to take up at start, nil once taken
 	source string             // where the ship came from, for a state file ("freighter" or a path)
 	dir    string             // where files are saved by default
@@ -115,6 +116,7 @@ func newConditionPanel(v *engine.Vessel, opts Options, name string) conditionPan
 		p.cond = vessels.ConditionOf(p.base, name)
 	}
 	p.taken = p.cond
+	p.named = unchangedName(p.cond.Name)
 	p.field.Prompt = ""
 	p.field.CharLimit = 120
 	return p
@@ -602,6 +604,9 @@ func (m model) takeRemedy() (tea.Model, tea.Cmd, bool) {
 // back to the one she is loaded with and says why.
 func (m model) takeCondition(what string) (tea.Model, tea.Cmd) {
 	before := m.cond.taken
+	c := *m.cond.cond
+	c.Name = changedName(m.cond.named, m.now())
+	m.cond.cond = &c
 	m, stop, err := m.loadCondition(m.cond.cond, what)
 	if err != nil {
 		m.cond.cond = m.cond.taken
@@ -644,6 +649,7 @@ func (m model) loadCondition(c *vessels.Condition, what string) (model, tea.Cmd,
 	m.flood, stop = m.flood.with(m).stop(&m) // a run going on is of the old condition
 	m.v = nv
 	m.cond.cond, m.cond.taken = c, c
+	m.condition = c.Name
 	m.cond.note = what
 	m.cond.gen++
 	m.rem.set = nil // worked out for the old condition
