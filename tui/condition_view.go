@@ -770,6 +770,11 @@ func (p conditionPanel) view(v *engine.Vessel, d engine.Damage, st Styles, w, h 
 			foot = append(foot, st.Prompt.Render(l))
 		}
 		foot = append(foot, "> "+p.field.View())
+		// A value refused: why, at once under the field, which stays open
+		// for the correction.
+		for _, l := range wrap(p.note, w) {
+			foot = append(foot, st.Error.Render(l))
+		}
 	default:
 		if p.note != "" {
 			for _, l := range wrap(p.note, w) {
