@@ -712,30 +712,41 @@ func (p conditionPanel) view(v *engine.Vessel, d engine.Damage, st Styles, w, h 
 		title += ": " + p.cond.Name
 	}
 	lines := []string{st.Heading.Render(titleFit(w, title, "L closes"))}
-	// The names as long as they are (up to 22) where the line has room,
-	// then cut keeping a side letter (clipName); a tank row's liquid and
-	// a weight row's numbers take the rest.
+	// The names as long as they are where the line has room, then cut
+	// keeping a side letter (clipName); a tank row's liquid and a weight
+	// row's numbers take the rest. Where the liquid's name would be cut,
+	// its column gives way and the chosen tank's contents are said whole
+	// under the table.
 	rows := p.rows()
-	longest := 0
+	longest, longestW, longestLiquid := 0, 0, len("empty") // tanks', weights', liquids' names
 	for _, r := range rows {
 		if r.tank >= 0 {
 			longest = max(longest, len([]rune(v.Compartments[r.tank].Name)))
+			if l := v.Compartments[r.tank].Liquid; l != nil {
+				longestLiquid = max(longestLiquid, len([]rune(l.Name)))
+			}
 		} else {
-			longest = max(longest, len([]rune(p.cond.Weights[r.weight].Name)))
+			longestW = max(longestW, len([]rune(p.cond.Weights[r.weight].Name)))
 		}
 	}
-	nameW := min(22, longest, max(8, w-2-18-6))
+	const tankFigs, weightWords, weightCols = 18, 38, 27 // the figures after a name
+	withLiquid := w-2-tankFigs-2-longestLiquid >= min(longest, 14)
+	nameW := max(8, min(longest, w-2-tankFigs))
+	if withLiquid {
+		nameW = max(8, min(longest, w-2-tankFigs-2-longestLiquid))
+	}
 	// A weight's figures in full words when they fit, else in columns
 	// under a heading that names them.
-	longWeights := w-2 >= nameW+38
-	wNameW := nameW
+	wNameW := max(8, min(longestW, w-2-weightWords))
+	longWeights := w-2 >= wNameW+weightWords
 	if !longWeights {
-		wNameW = max(6, min(longest, 22, w-2-27))
+		wNameW = max(6, min(longestW, w-2-weightCols))
 	}
 	load := v.Loading(d)
 	var fsm float64
 	var body []string
 	sel := 0
+	chosen := "" // the chosen tank's contents when the liquid's column gave way, or the chosen weight's name when cut
 	for k, r := range rows {
 		var line string
 		if r.tank >= 0 {
@@ -743,7 +754,7 @@ func (p conditionPanel) view(v *engine.Vessel, d engine.Damage, st Styles, w, h 
 			mass, _, _, _, f := v.TankContents(r.tank)
 			if why := seaHolds(d, r.tank); why != "" {
 				line = fmt.Sprintf("%-*s %s", nameW, clipName(c.Name, nameW), why)
-				body = p.rowOf(body, st, k, r, line, w, nameW, wNameW, longWeights, &sel)
+				body = p.rowOf(body, st, k, r, line, w, nameW, wNameW, longWeights, withLiquid, &sel)
 				continue
 			}
 			fsm += f
@@ -752,18 +763,30 @@ func (p conditionPanel) view(v *engine.Vessel, d engine.Damage, st Styles, w, h 
 			if c.Liquid != nil {
 				fill, liquid = c.Liquid.Fill, c.Liquid.Name
 			}
-			line = fmt.Sprintf("%-*s %5.1f %% %7.1f t  %s", nameW, clipName(c.Name, nameW), fill*100, mass, liquid)
+			line = fmt.Sprintf("%-*s %5.1f %% %7.1f t", nameW, clipName(c.Name, nameW), fill*100, mass)
+			if withLiquid {
+				line += "  " + liquid
+			} else if k == p.sel {
+				chosen = fmt.Sprintf("  = %s, %.1f m³ full", liquid, c.CapacityM3())
+			}
 		} else {
 			wt := p.cond.Weights[r.weight]
 			if longWeights {
-				line = fmt.Sprintf("%-*s %7.1f t lcg %5.1f tcg %4.1f vcg %4.1f", nameW, clipName(wt.Name, nameW), wt.MassT, wt.LCGM, wt.TCGM, wt.VCGM)
+				line = fmt.Sprintf("%-*s %7.1f t lcg %5.1f tcg %4.1f vcg %4.1f", wNameW, clipName(wt.Name, wNameW), wt.MassT, wt.LCGM, wt.TCGM, wt.VCGM)
 			} else {
 				line = fmt.Sprintf("%-*s %7.1f %5.1f %5.1f %5.1f", wNameW, clipName(wt.Name, wNameW), wt.MassT, wt.LCGM, wt.TCGM, wt.VCGM)
+				if k == p.sel && len([]rune(wt.Name)) > wNameW {
+					chosen = "  = " + wt.Name // cut in its row: whole under the table
+				}
 			}
 		}
-		body = p.rowOf(body, st, k, r, line, w, nameW, wNameW, longWeights, &sel)
+		body = p.rowOf(body, st, k, r, line, w, nameW, wNameW, longWeights, withLiquid, &sel)
 	}
-	foot := []string{st.Dim.Render(fitLine(fmt.Sprintf("Δ %.1f t · tanks' FSM %.0f t·m", load.MassT, fsm), w))}
+	var foot []string
+	for _, l := range wrap(chosen, w) {
+		foot = append(foot, st.Text.Render(l))
+	}
+	foot = append(foot, st.Dim.Render(fitLine(fmt.Sprintf("Δ %.1f t · tanks' FSM %.0f t·m", load.MassT, fsm), w)))
 	switch {
 	case p.typing != condNone:
 		for _, l := range wrap(p.prompt(), w) {
@@ -798,9 +821,13 @@ func (p conditionPanel) view(v *engine.Vessel, d engine.Damage, st Styles, w, h 
 
 // rowOf appends row k (r, drawn as line) to body, under its heading if it
 // is the first of its kind; sel is set to its place if it is chosen.
-func (p conditionPanel) rowOf(body []string, st Styles, k int, r condRow, line string, w, nameW, wNameW int, longWeights bool, sel *int) []string {
+func (p conditionPanel) rowOf(body []string, st Styles, k int, r condRow, line string, w, nameW, wNameW int, longWeights, withLiquid bool, sel *int) []string {
 	if k == 0 && r.tank >= 0 {
-		body = append(body, st.Dim.Render(fitLine(fmt.Sprintf("%-*s %7s %9s  %s", nameW+2, "TANKS", "fill", "mass", "contents (fill: of capacity)"), w)))
+		head := fmt.Sprintf("%-*s %7s %9s", nameW+2, "TANKS", "fill", "mass")
+		if withLiquid {
+			head += "  contents (fill: of capacity)"
+		}
+		body = append(body, st.Dim.Render(fitLine(head, w)))
 	}
 	if r.weight == 0 && longWeights {
 		body = append(body, st.Dim.Render("WEIGHTS"))
