@@ -53,10 +53,12 @@ func (c *Condition) Apply(v *engine.Vessel) (*engine.Vessel, error) {
 			cp := v.Compartments[t.Compartment]
 			s := t.SoundingM
 			if !c.Sounded {
-				// Checked against full upright when read: at her own
-				// heel and trim a sounding past full reads as full (the
-				// liquid stands in the pipe).
-				if full, err := cp.FullSoundingM(t.Pipe, slope); err == nil {
+				// A sounding within full upright (what a condition file
+				// is checked against) that is past full at her own heel
+				// and trim reads as full: the liquid stands in the pipe.
+				// One past full upright too is refused below.
+				up, errUp := cp.FullSoundingM(t.Pipe, engine.Plane{})
+				if full, err := cp.FullSoundingM(t.Pipe, slope); err == nil && errUp == nil && s <= up+1e-9 {
 					s = math.Min(s, full)
 				}
 			}
