@@ -73,6 +73,9 @@ func (hp handPanel) update(msg tea.KeyMsg, k keyMap) (handPanel, bool) {
 func (hp handPanel) view(w, h int, withAnswers bool) []string {
 	st := hp.st
 	title := "HAND METHOD · lost buoyancy, small angles"
+	if hp.a != nil && hp.a.Hand.Unusable() != "" {
+		title = "HAND METHOD · NOT USABLE here"
+	}
 	if hp.a == nil {
 		return fit([]string{st.Heading.Render(title), st.Dim.Render("computing…")}, w, h)
 	}
@@ -106,6 +109,9 @@ func (hp handPanel) view(w, h int, withAnswers bool) []string {
 		}
 		if len([]rune(title))+3+len([]rune(right)) > w {
 			title = "HAND METHOD" // the steps in view before the method's words
+			if hp.a.Hand.Unusable() != "" {
+				title = "HAND METHOD ✗"
+			}
 		}
 		title = titleFit(w, title, right)
 	}
@@ -129,6 +135,17 @@ func (hp handPanel) body(w int, withAnswers bool) (lines []string, stepAt []int)
 	}
 	if withAnswers {
 		lines = append(lines, hp.answers(w)...)
+	}
+	if why := hp.a.Hand.Unusable(); why != "" {
+		// Said before the caveats and the working, in the danger style:
+		// the hand heel and drafts beside are not to be worked from.
+		for k, l := range wrap("NOT USABLE: the hand heel and drafts are not to be worked from: "+why+".", w-2) {
+			mark := "  "
+			if k == 0 {
+				mark = "✗ "
+			}
+			lines = append(lines, st.Danger.Render(mark+l))
+		}
 	}
 	lines = append(lines, hp.caveatLines(w)...)
 	lines = append(lines, st.Dim.Render(fmt.Sprintf("working, %d steps", len(hp.a.Hand.Steps))))
