@@ -57,6 +57,10 @@ type scanner struct {
 	i    int
 	line int
 	ix   *lineIndex
+	// path is the key path of the value being scanned, built up and cut
+	// back in place as the scanner enters and leaves arrays and inline
+	// tables, so that only a path that is noted becomes a string.
+	path []byte
 }
 
 func (s *scanner) eof() bool { return s.i >= len(s.src) }
@@ -130,7 +134,8 @@ func (s *scanner) document() {
 			s.blank()
 			path := joinPath(table, key)
 			s.note(path, line)
-			s.value(path, 0, line)
+			s.path = append(s.path[:0], path...)
+			s.value(0, line)
 		}
 		if s.i == start {
 			s.next() // always move on
@@ -143,6 +148,35 @@ func (s *scanner) note(path string, line int) {
 	if _, ok := s.ix.at[path]; !ok {
 		s.ix.at[path] = line
 	}
+}
+
+// notePath records the line of the scanner's current path unless it was
+// seen already.
+func (s *scanner) notePath(line int) {
+	if _, ok := s.ix.at[string(s.path)]; !ok {
+		s.ix.at[string(s.path)] = line
+	}
+}
+
+// enterElement extends the current path to its element n ("[n]") and
+// returns the length to cut it back to.
+func (s *scanner) enterElement(n int) int {
+	mark := len(s.path)
+	s.path = append(s.path, '[')
+	s.path = strconv.AppendInt(s.path, int64(n), 10)
+	s.path = append(s.path, ']')
+	return mark
+}
+
+// enterKey extends the current path by key k as joinPath does and returns
+// the length to cut it back to.
+func (s *scanner) enterKey(k string) int {
+	mark := len(s.path)
+	if len(s.path) > 0 && k != "" {
+		s.path = append(s.path, '.')
+	}
+	s.path = append(s.path, k...)
+	return mark
 }
 
 // header reads "[a.b]" or "[[a.b]]" and returns the resolved table path.
@@ -226,10 +260,11 @@ func (s *scanner) quoted(q byte) string {
 }
 
 // value skips one value, noting the lines of array elements and of the
-// keys of inline tables under path, which starts on line at. An element
-// on the line its array starts on is not noted (its line is found through
-// its parent's), so that a long table of numbers costs little.
-func (s *scanner) value(path string, depth, at int) {
+// keys of inline tables under the current path (s.path), which starts on
+// line at. An element on the line its array starts on is not noted (its
+// line is found through its parent's), so that a long table of numbers
+// costs little.
+func (s *scanner) value(depth, at int) {
 	switch c := s.peek(); c {
 	case '"', '\'':
 		if strings.HasPrefix(s.src[s.i:], string([]byte{c, c, c})) {
@@ -255,17 +290,18 @@ func (s *scanner) value(path string, depth, at int) {
 			start := s.i
 			c := s.peek()
 			if s.line == at && c != '[' && c != '{' {
-				s.value("", depth+1, at) // a scalar or a string: nothing to note
+				s.value(depth+1, at) // a scalar or a string: nothing to note
 			} else {
-				el := path + "[" + itoa(n) + "]"
+				mark := s.enterElement(n)
 				if s.line != at {
-					s.note(el, s.line)
+					s.notePath(s.line)
 				}
 				if depth < maxNesting {
-					s.value(el, depth+1, s.line)
+					s.value(depth+1, s.line)
 				} else {
 					s.scalar()
 				}
+				s.path = s.path[:mark]
 			}
 			if s.i == start {
 				s.next()
@@ -293,13 +329,14 @@ func (s *scanner) value(path string, depth, at int) {
 			if s.peek() == '=' {
 				s.next()
 				s.blank()
-				p := joinPath(path, k)
-				s.note(p, line)
+				mark := s.enterKey(k)
+				s.notePath(line)
 				if depth < maxNesting {
-					s.value(p, depth+1, line)
+					s.value(depth+1, line)
 				} else {
 					s.scalar()
 				}
+				s.path = s.path[:mark]
 			}
 			if s.i == start {
 				s.next()

@@ -269,23 +269,29 @@ func (r *reader) offsets(s *table) ([]engine.Point, bool) {
 		r.addf(s.keyPath("offsets"), "has %d point(s): an outline needs at least two [half_breadth, z] pairs, keel to deck", len(pts))
 		return nil, false
 	}
-	var out []engine.Point
+	p := s.keyPath("offsets")
+	out := make([]engine.Point, 0, len(pts))
 	for _, q := range pts {
-		ep, y, z := q.path, q.Y, q.Z
-		if r.pointTooFar(ep, y, z) {
-			ok = false
-		}
-		if y < 0 {
-			r.addf(ep, "half-breadth %g m is negative: give the starboard half, 0 or more", y)
-			ok = false
-		}
-		if z < 0 {
-			r.addf(ep, "height %g m is below the baseline: z must be 0 or more", z)
-			ok = false
-		}
-		if len(out) > 0 && z < out[len(out)-1].Z {
-			r.addf(ep, "height %g m is below the point before (%g m): heights must ascend from the keel to the deck", z, out[len(out)-1].Z)
-			ok = false
+		y, z := q.Y, q.Z
+		descends := len(out) > 0 && z < out[len(out)-1].Z
+		if y > maxHalfBreadth || z > maxHeight || y < 0 || z < 0 || descends {
+			// Only a refused point needs its key path.
+			ep := elemPath(p, q.at)
+			if r.pointTooFar(ep, y, z) {
+				ok = false
+			}
+			if y < 0 {
+				r.addf(ep, "half-breadth %g m is negative: give the starboard half, 0 or more", y)
+				ok = false
+			}
+			if z < 0 {
+				r.addf(ep, "height %g m is below the baseline: z must be 0 or more", z)
+				ok = false
+			}
+			if descends {
+				r.addf(ep, "height %g m is below the point before (%g m): heights must ascend from the keel to the deck", z, out[len(out)-1].Z)
+				ok = false
+			}
 		}
 		out = append(out, q.Point)
 	}
@@ -296,11 +302,17 @@ func (r *reader) offsets(s *table) ([]engine.Point, bool) {
 	return out, ok
 }
 
-// pointAt is a point read from a file with the key path it was read at.
+// pointAt is a point read from a file with the place it was read at: the
+// 1-based index of its pair in the array (its key path is elemPath(array's
+// path, at), built only for a message).
 type pointAt struct {
 	engine.Point
-	path string
+	at int
 }
+
+// elemPath returns the key path of element i (1-based) of the array at p,
+// as "hull.section[2].offsets[4]".
+func elemPath(p string, i int) string { return p + "[" + itoa(i) + "]" }
 
 // pointPairs reads the array key of s as [a, b] pairs of finite metres
 // (names says what a and b are, as "y, z"), each with its key path. A
@@ -321,10 +333,9 @@ func (r *reader) pointPairs(s *table, key, names, missing string) ([]pointAt, bo
 	ok := true
 	out := make([]pointAt, 0, len(a))
 	for j, e := range a {
-		ep := fmt.Sprintf("%s[%d]", p, j+1)
 		pair, isPair := e.([]any)
 		if !isPair || len(pair) != 2 {
-			r.addf(ep, "must be a pair [%s] in metres, not %s", names, describe(e))
+			r.addf(elemPath(p, j+1), "must be a pair [%s] in metres, not %s", names, describe(e))
 			ok = false
 			continue
 		}
@@ -332,15 +343,15 @@ func (r *reader) pointPairs(s *table, key, names, missing string) ([]pointAt, bo
 		z, zOK := number(pair[1])
 		switch {
 		case !yOK || !zOK:
-			r.addf(ep, "must be two numbers [%s] in metres", names)
+			r.addf(elemPath(p, j+1), "must be two numbers [%s] in metres", names)
 			ok = false
 			continue
 		case math.IsNaN(y) || math.IsInf(y, 0) || math.IsNaN(z) || math.IsInf(z, 0) || math.Abs(y) > maxMagnitude || math.Abs(z) > maxMagnitude:
-			r.addf(ep, "[%v, %v] is not a pair of finite metres (at most %g in size)", y, z, maxMagnitude)
+			r.addf(elemPath(p, j+1), "[%v, %v] is not a pair of finite metres (at most %g in size)", y, z, maxMagnitude)
 			ok = false
 			continue
 		}
-		out = append(out, pointAt{engine.Point{Y: y, Z: z}, ep})
+		out = append(out, pointAt{engine.Point{Y: y, Z: z}, j + 1})
 	}
 	return out, ok
 }
