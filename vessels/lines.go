@@ -1,6 +1,7 @@
 package vessels
 
 import (
+	"runtime"
 	"strconv"
 	"strings"
 )
@@ -29,6 +30,40 @@ func indexLines(src string) *lineIndex {
 	s := &scanner{src: src, line: 1, ix: ix}
 	s.document()
 	return ix
+}
+
+// lineIndexing is the indexing of a document's lines (indexLines) begun
+// beside the TOML decoder: on a goroutine of its own when more than one
+// can run, so that it takes nothing from the decoder's time; otherwise
+// only when the index is asked for.
+type lineIndexing struct {
+	src  string
+	done chan *lineIndex // nil when not started
+}
+
+func startIndexLines(src string) *lineIndexing {
+	li := &lineIndexing{src: src}
+	if runtime.GOMAXPROCS(0) >= 2 {
+		li.done = make(chan *lineIndex, 1)
+		go func() { li.done <- indexLines(src) }()
+	}
+	return li
+}
+
+// index returns the index, waiting for it or making it.
+func (li *lineIndexing) index() *lineIndex {
+	if li.done == nil {
+		return indexLines(li.src)
+	}
+	return <-li.done
+}
+
+// drop waits for a scan begun (so that none outlives decode) and does
+// not make one: the index of a document the decoder refused is not used.
+func (li *lineIndexing) drop() {
+	if li.done != nil {
+		<-li.done
+	}
 }
 
 // line returns the line of path, or of its nearest enclosing key or table
