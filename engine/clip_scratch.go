@@ -1,15 +1,23 @@
 package engine
 
+import "sync"
+
 // clipScratch holds the buffers that clipping a solid by a convex region
 // (clipSlabs) reuses from one section to the next, so that the hundreds
 // of sections a compartment's clip looks at cost no allocation each. It
-// is owned by one clip at a time (not shared between goroutines).
+// is owned by one clip at a time (not shared between goroutines); the
+// clips of a ship's compartments take it in turn from clipScratches.
 type clipScratch struct {
 	sec        []Point   // the slab's section at x, before clipping
 	ping, pong []Point   // the section after each half-plane in turn
 	pa, pb, pm []Point   // the clipped sections at a piece's ends and at a bisection's midpoint
 	cuts       []float64 // the x where a vertex crosses a side, sorted
 }
+
+// clipScratches keeps clipScratch values between clips, so that building
+// a ship's compartments one after another (or a few at once) reuses a few
+// sets of buffers.
+var clipScratches = sync.Pool{New: func() any { return new(clipScratch) }}
 
 // clipAt returns the section of sl at x clipped by planes, written into
 // dst's storage, and its topology signature: the same polygon and the same

@@ -76,7 +76,8 @@ func clipSolid(s *Solid, b Box) *Solid {
 // inside every one of planes (a convex region of the section, the same
 // all along).
 func clipSlabs(out []slab, s *Solid, x0, x1 float64, planes []halfPlane) []slab {
-	var sc clipScratch
+	sc := clipScratches.Get().(*clipScratch)
+	defer clipScratches.Put(sc)
 	for i := range s.slabs {
 		sl := &s.slabs[i]
 		xa, xb := math.Max(sl.x0, x0), math.Min(sl.x1, x1)
@@ -97,7 +98,7 @@ func clipSlabs(out []slab, s *Solid, x0, x1 float64, planes []halfPlane) []slab 
 		sort.Float64s(cuts)
 		sc.cuts = cuts
 		for j := 1; j < len(cuts); j++ {
-			out = appendClipped(out, sl, planes, cuts[j-1], cuts[j], 0, &sc)
+			out = appendClipped(out, sl, planes, cuts[j-1], cuts[j], 0, sc)
 		}
 	}
 	return out
