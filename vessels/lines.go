@@ -23,8 +23,10 @@ type lineIndex struct {
 // tables; deeper values are skipped as a whole.
 const maxNesting = 64
 
-// indexLines scans src, which must be a document BurntSushi/toml accepted.
-// It never fails: on anything it does not follow it stops noting lines.
+// indexLines scans src, a document BurntSushi/toml accepted; its index
+// of any other text is not used. It never fails, on any text (lineIndexing
+// runs it before the decoder has judged the text): on anything it does not
+// follow it stops noting lines.
 func indexLines(src string) *lineIndex {
 	ix := &lineIndex{at: map[string]int{}, aot: map[string]int{}}
 	s := &scanner{src: src, line: 1, ix: ix}
@@ -41,6 +43,7 @@ type lineIndexing struct {
 	done chan *lineIndex // nil when not started
 }
 
+// startIndexLines begins indexing the lines of src.
 func startIndexLines(src string) *lineIndexing {
 	li := &lineIndexing{src: src}
 	if runtime.GOMAXPROCS(0) >= 2 {
