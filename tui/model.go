@@ -381,7 +381,7 @@ func (m model) key(msg tea.KeyMsg) (tea.Model, tea.Cmd) {
 		return m.updateRemedies(msg)
 	}
 	var took bool
-	if m.hand, took = m.hand.with(m.cur, m.st).update(msg, k); took {
+	if m.hand, took = m.handShown().update(msg, k); took {
 		return m, nil
 	}
 	n := len(m.v.Compartments)
