@@ -504,7 +504,7 @@ type compartmentRead struct {
 // problems.
 func (r *reader) compartment(t *table, names map[string]string, hull *engine.Hull) compartmentRead {
 	name, _ := r.name(t, names, "compartment")
-	use, useOK := t.choice("use", true, Uses())
+	use, useOK := t.choice("use", true, useNames)
 	cr := compartmentRead{t: t, name: name}
 	ci := &cr.ci
 	ci.Use = use
