@@ -235,7 +235,7 @@ func (r *reader) tooManyAt(path string, v any) bool {
 			return true
 		}
 		for i, e := range x {
-			found = r.tooManyAt(fmt.Sprintf("%s[%d]", path, i+1), e) || found
+			found = r.tooManyAt(elemPath(path, i+1), e) || found
 		}
 	case []any:
 		if len(x) > maxItems {
@@ -243,7 +243,7 @@ func (r *reader) tooManyAt(path string, v any) bool {
 			return true
 		}
 		for i, e := range x {
-			found = r.tooManyAt(fmt.Sprintf("%s[%d]", path, i+1), e) || found
+			found = r.tooManyAt(elemPath(path, i+1), e) || found
 		}
 	}
 	return found

@@ -428,3 +428,7 @@ func joinPath(a, b string) string {
 }
 
 func itoa(n int) string { return strconv.Itoa(n) }
+
+// elemPath returns the key path of element i (1-based) of the array at p,
+// as "hull.section[2].offsets[4]".
+func elemPath(p string, i int) string { return p + "[" + itoa(i) + "]" }

@@ -310,10 +310,6 @@ type pointAt struct {
 	at int
 }
 
-// elemPath returns the key path of element i (1-based) of the array at p,
-// as "hull.section[2].offsets[4]".
-func elemPath(p string, i int) string { return p + "[" + itoa(i) + "]" }
-
 // pointPairs reads the array key of s as [a, b] pairs of finite metres
 // (names says what a and b are, as "y, z"), each with its key path. A
 // missing key says missing; nil means nothing could be read; ok is false

@@ -299,16 +299,16 @@ func (t *table) entries(key, what string) []*table {
 	switch a := v.(type) {
 	case []map[string]any:
 		for i, m := range a {
-			out = append(out, t.r.table(fmt.Sprintf("%s[%d]", p, i+1), m))
+			out = append(out, t.r.table(elemPath(p, i+1), m))
 		}
 	case []any:
 		for i, e := range a {
 			m, ok := e.(map[string]any)
 			if !ok {
-				t.r.addf(fmt.Sprintf("%s[%d]", p, i+1), "must be a table (%s), not %s", what, typeName(e))
+				t.r.addf(elemPath(p, i+1), "must be a table (%s), not %s", what, typeName(e))
 				continue
 			}
-			out = append(out, t.r.table(fmt.Sprintf("%s[%d]", p, i+1), m))
+			out = append(out, t.r.table(elemPath(p, i+1), m))
 		}
 	default:
 		t.r.addf(p, "must be written as [[%s]] tables (%s), not %s", p, what, typeName(v))
