@@ -706,7 +706,7 @@ func (m model) saveCmd(path string, all bool) tea.Cmd {
 // open to the sea (or holding floodwater) is marked so, without a fill:
 // its contents are the sea's and no part of the ship's weight, so the
 // totals, like the floating position's ship weight, leave it out.
-func (p conditionPanel) view(v *engine.Vessel, d engine.Damage, st Styles, w, h int) []string {
+func (p conditionPanel) view(v *engine.Vessel, d engine.Damage, st *Styles, w, h int) []string {
 	title := "LOADING CONDITION"
 	if p.cond.Name != "" {
 		title += ": " + p.cond.Name
@@ -821,7 +821,7 @@ func (p conditionPanel) view(v *engine.Vessel, d engine.Damage, st Styles, w, h 
 
 // rowOf appends row k (r, drawn as line) to body, under its heading if it
 // is the first of its kind; sel is set to its place if it is chosen.
-func (p conditionPanel) rowOf(body []string, st Styles, k int, r condRow, line string, w, nameW, wNameW int, longWeights, withLiquid bool, sel *int) []string {
+func (p conditionPanel) rowOf(body []string, st *Styles, k int, r condRow, line string, w, nameW, wNameW int, longWeights, withLiquid bool, sel *int) []string {
 	if k == 0 && r.tank >= 0 {
 		head := fmt.Sprintf("%-*s %7s %9s", nameW+2, "TANKS", "fill", "mass")
 		if withLiquid {

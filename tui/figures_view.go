@@ -220,7 +220,7 @@ func (m model) flagLines(w, h int) []string {
 }
 
 // flagLine is one flag: a mark by its severity and its sentence.
-func flagLine(st Styles, f engine.Flag, prefix string) string {
+func flagLine(st *Styles, f engine.Flag, prefix string) string {
 	s := st.Info
 	switch f.Severity {
 	case engine.Danger:
@@ -269,7 +269,7 @@ func (m model) bannerView(w, h int) []string {
 	return fit(lines, w, h)
 }
 
-func flagLineText(st Styles, f engine.Flag, l string) string {
+func flagLineText(st *Styles, f engine.Flag, l string) string {
 	if f.Severity == engine.Danger {
 		return st.Danger.Render("‼ " + l)
 	}

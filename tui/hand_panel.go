@@ -21,7 +21,7 @@ type handPanel struct {
 	scroll int // the first line shown under the heading
 
 	a       *engine.Assessment // the figures shown; nil while computing
-	st      Styles
+	st      *Styles
 	caveats []engine.Flag // the hand method's caveats among the flags (severity.go)
 
 	w, h        int  // the room it is drawn in (room)
@@ -29,7 +29,7 @@ type handPanel struct {
 }
 
 // with returns the panel drawing assessment a in styles st.
-func (hp handPanel) with(a *engine.Assessment, st Styles) handPanel {
+func (hp handPanel) with(a *engine.Assessment, st *Styles) handPanel {
 	hp.a, hp.st = a, st
 	return hp
 }

@@ -90,7 +90,7 @@ type model struct {
 
 	rend    *lipgloss.Renderer
 	palette int
-	st      Styles
+	st      *Styles
 	inks    map[ink]lipgloss.Style
 
 	damage engine.Damage
