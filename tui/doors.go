@@ -54,7 +54,7 @@ func (p doorsPanel) update(msg tea.KeyMsg, conns []engine.Connection) (doorsPane
 }
 
 // view draws the panel: each connection and what it joins, then the spread.
-func (p doorsPanel) view(v *engine.Vessel, a *engine.Assessment, st Styles, w, h int) string {
+func (p doorsPanel) view(v *engine.Vessel, a *engine.Assessment, st *Styles, w, h int) string {
 	lines := []string{st.Heading.Render(titleFit(w, "DOORS AND VALVES", "↑↓ choose", "space open/shut", "d closes"))}
 	if len(v.Connections) == 0 {
 		lines = append(lines, st.Dim.Render("The vessel file has no [[connection]] tables."))
@@ -153,8 +153,9 @@ func spreadState(a *engine.Assessment, d engine.Damage, i int) (word, mark strin
 
 // openNow reports whether compartment i is open to the sea in the state
 // whose figures are shown: the officer's, and those the water reached
-// through connections and openings (the pictures shade them all).
-func (m model) openNow(i int) bool {
+// through connections and openings (the pictures shade them all). (A
+// pointer receiver: the model is too large to copy once per compartment.)
+func (m *model) openNow(i int) bool {
 	if m.cur != nil && i < len(m.cur.Damage) {
 		return m.cur.Damage[i].Open
 	}

@@ -64,6 +64,9 @@ func Uses() []string {
 	return out
 }
 
+// useNames is Uses, worked out once for the reader.
+var useNames = Uses()
+
 func quotedList(vals []string) string {
 	q := make([]string, len(vals))
 	for i, v := range vals {
@@ -80,6 +83,11 @@ func contains(vals []string, v string) bool {
 	}
 	return false
 }
+
+// Closest returns the candidate nearest to s by edit distance (ignoring
+// case) when it is near enough to be a likely typing slip, else "": the
+// did-you-mean of every name heelwatch refuses.
+func Closest(s string, candidates []string) string { return closest(s, candidates) }
 
 // closest returns the candidate nearest to s by edit distance when it is
 // near enough to be a likely typing slip, else "".
