@@ -415,29 +415,34 @@ func (s *slab) pieceArc(p Plane, xa, xb float64, a arc, im *Immersion) {
 	vs := s.v[:n]
 	vk, vj, vu, vv := &vs[in], &vs[lo], &vs[out], &vs[after]
 	dx := xb - xa
-	var v, mx, my, mz, aw, sx, sy, ixx, ixy, iyy float64
+	// The sums are kept as twice the area and six times the moments (the
+	// shoelace terms as they come) and three times the second moment of
+	// the waterline, and divided once for the piece.
+	var v2, mx2, my6, mz6, aw, sx, sy2, ixx, ixy2, iyy3 float64
 	for g := range gaussNode {
 		x := xa + gaussNode[g]*dx
 		w := gaussWeight[g] * dx
 		sg := x - s.x0
 		h := p.A + p.B*x
 		a2, sy6, sz6 := r.eval(sg)
-		// Entry point on edge in, and the edge entry → v_lo.
+		// The cut edges' ends and their heights above the plane: edge in
+		// from k to j, edge out from u to v. The waterline crosses them at
+		// the fractions dk/(dk − dj) and du/(du − dv).
 		ky, kz := vk.at(sg)
 		jy, jz := vj.at(sg)
+		uy, uz := vu.at(sg)
+		vy, vz := vv.at(sg)
 		dk, dj := kz-p.C*ky-h, jz-p.C*jy-h
-		t := dk / (dk - dj)
-		iy, iz := ky+t*(jy-ky), kz+t*(jz-kz)
+		du, dv := uz-p.C*uy-h, vz-p.C*vy-h
+		ti, to := dk/(dk-dj), du/(du-dv)
+		// Entry point, and the edge entry → v_lo.
+		iy, iz := ky+ti*(jy-ky), kz+ti*(jz-kz)
 		cr := iy*jz - jy*iz
 		a2 += cr
 		sy6 += (iy + jy) * cr
 		sz6 += (iz + jz) * cr
-		// Exit point on edge out, and the edge v_out → exit.
-		uy, uz := vu.at(sg)
-		vy, vz := vv.at(sg)
-		du, dv := uz-p.C*uy-h, vz-p.C*vy-h
-		t = du / (du - dv)
-		oy, oz := uy+t*(vy-uy), uz+t*(vz-uz)
+		// Exit point, and the edge v_out → exit.
+		oy, oz := uy+to*(vy-uy), uz+to*(vz-uz)
 		cr = uy*oz - oy*uz
 		a2 += cr
 		sy6 += (uy + oy) * cr
@@ -449,30 +454,27 @@ func (s *slab) pieceArc(p Plane, xa, xb float64, a arc, im *Immersion) {
 		sz6 += (oz + iz) * cr
 		iy2, oy2 := iy*iy, oy*oy
 		W := oy - iy
-		WY := (oy2 - iy2) / 2
-		WYY := (oy2*oy - iy2*iy) / 3
-		A := a2 / 2
-		v += w * A
-		mx += w * x * A
-		my += w * sy6 / 6
-		mz += w * sz6 / 6
+		v2 += w * a2
+		mx2 += w * x * a2
+		my6 += w * sy6
+		mz6 += w * sz6
 		aw += w * W
 		sx += w * x * W
-		sy += w * WY
+		sy2 += w * (oy2 - iy2)
 		ixx += w * x * x * W
-		ixy += w * x * WY
-		iyy += w * WYY
+		ixy2 += w * x * (oy2 - iy2)
+		iyy3 += w * (oy2*oy - iy2*iy)
 	}
-	im.V += v
-	im.MX += mx
-	im.MY += my
-	im.MZ += mz
+	im.V += v2 / 2
+	im.MX += mx2 / 2
+	im.MY += my6 / 6
+	im.MZ += mz6 / 6
 	im.AW += aw
 	im.SX += sx
-	im.SY += sy
+	im.SY += sy2 / 2
 	im.IXX += ixx
-	im.IXY += ixy
-	im.IYY += iyy
+	im.IXY += ixy2 / 2
+	im.IYY += iyy3 / 3
 }
 
 // cyc returns d reduced modulo n to (−n/2, n/2].

@@ -384,28 +384,34 @@ func (s *slab) pieceChains(p Plane, xa, xb float64, nin int, chains []chain, im 
 	pre := s.pre[:n+1]
 	if nin == n {
 		// The whole section is under water along the piece.
-		var v, mx, my, mz float64
+		var v2, mx2, my6, mz6 float64
 		for g := range gaussNode {
 			x := xa + gaussNode[g]*dx
 			w := gaussWeight[g] * dx
 			a, sy, sz := pre[n].eval(x - s.x0)
-			v += w * a / 2
-			mx += w * x * a / 2
-			my += w * sy / 6
-			mz += w * sz / 6
+			v2 += w * a
+			mx2 += w * x * a
+			my6 += w * sy
+			mz6 += w * sz
 		}
-		im.V += v
-		im.MX += mx
-		im.MY += my
-		im.MZ += mz
+		im.V += v2 / 2
+		im.MX += mx2 / 2
+		im.MY += my6 / 6
+		im.MZ += mz6 / 6
 		return
 	}
+	// As in pieceArc, the sums are kept as they come (twice the area, six
+	// times the moments, two and three times the waterline's moments) and
+	// divided once for the piece.
+	var v2, mx2, my6, mz6, aw, sx, sy2, ixx, ixy2, iyy3 float64
 	vs := s.v[:n]
 	for g := range gaussNode {
 		x := xa + gaussNode[g]*dx
 		w := gaussWeight[g] * dx
 		sg := x - s.x0
 		h := p.A + p.B*x
+		// W, WY, WYY: the waterline's breadth and twice and three times
+		// its moments.
 		var a2, sy6, sz6, W, WY, WYY float64
 		var lastOutY, lastOutZ, firstInY, firstInZ float64
 		for c, ch := range chains {
@@ -426,8 +432,8 @@ func (s *slab) pieceChains(p Plane, xa, xb float64, nin int, chains []chain, im 
 			sz6 += (iz + jz) * cr
 			y2 := iy * iy
 			W -= iy
-			WY -= y2 / 2
-			WYY -= y2 * iy / 3
+			WY -= y2
+			WYY -= y2 * iy
 			if c == 0 {
 				firstInY, firstInZ = iy, iz
 			} else {
@@ -460,8 +466,8 @@ func (s *slab) pieceChains(p Plane, xa, xb float64, nin int, chains []chain, im 
 			sz6 += (kz + oz) * cr
 			y2 = oy * oy
 			W += oy
-			WY += y2 / 2
-			WYY += y2 * oy / 3
+			WY += y2
+			WYY += y2 * oy
 			lastOutY, lastOutZ = oy, oz
 		}
 		// Close: the last exit to the first entry.
@@ -470,18 +476,27 @@ func (s *slab) pieceChains(p Plane, xa, xb float64, nin int, chains []chain, im 
 		sy6 += (lastOutY + firstInY) * cr
 		sz6 += (lastOutZ + firstInZ) * cr
 
-		A := a2 / 2
-		im.V += w * A
-		im.MX += w * x * A
-		im.MY += w * sy6 / 6
-		im.MZ += w * sz6 / 6
-		im.AW += w * W
-		im.SX += w * x * W
-		im.SY += w * WY
-		im.IXX += w * x * x * W
-		im.IXY += w * x * WY
-		im.IYY += w * WYY
+		v2 += w * a2
+		mx2 += w * x * a2
+		my6 += w * sy6
+		mz6 += w * sz6
+		aw += w * W
+		sx += w * x * W
+		sy2 += w * WY
+		ixx += w * x * x * W
+		ixy2 += w * x * WY
+		iyy3 += w * WYY
 	}
+	im.V += v2 / 2
+	im.MX += mx2 / 2
+	im.MY += my6 / 6
+	im.MZ += mz6 / 6
+	im.AW += aw
+	im.SX += sx
+	im.SY += sy2 / 2
+	im.IXX += ixx
+	im.IXY += ixy2 / 2
+	im.IYY += iyy3 / 3
 }
 
 // sortRoots puts the waterline's crossings of a slab in order along x:
