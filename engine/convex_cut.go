@@ -371,10 +371,10 @@ func (s *slab) belowConvex(p Plane, im *Immersion, g arc, roots []cutRoot) (a0, 
 // … → v_out → exit point → entry point. Its shoelace terms (area 2A = Σ
 // y_k z_k+1 − y_k+1 z_k, and that cross product times y_k + y_k+1 and
 // times z_k + z_k+1, 6·A·ȳ and 6·A·z̄) are the whole edges' prefix
-// polynomials (runAt), formed once for the piece, plus the two cut edges
-// and the waterline. The waterline, from the exit at y_o to the entry at
-// y_i, adds the waterplane's breadth y_o − y_i and its moments (y_o² −
-// y_i²)/2 and (y_o³ − y_i³)/3 at x.
+// polynomials (a run of prefix sums, as runAt), formed once for the
+// piece, plus the two cut edges and the waterline. The waterline, from the
+// exit at y_o to the entry at y_i, adds the waterplane's breadth y_o − y_i
+// and its moments (y_o² − y_i²)/2 and (y_o³ − y_i³)/3 at x.
 func (s *slab) pieceArc(p Plane, xa, xb float64, a arc, im *Immersion) {
 	n := len(s.p0)
 	if a.cnt <= 0 || a.cnt >= n {
