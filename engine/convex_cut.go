@@ -465,16 +465,7 @@ func (s *slab) pieceArc(p Plane, xa, xb float64, a arc, im *Immersion) {
 		ixy2 += w * x * (oy2 - iy2)
 		iyy3 += w * (oy2*oy - iy2*iy)
 	}
-	im.V += v2 / 2
-	im.MX += mx2 / 2
-	im.MY += my6 / 6
-	im.MZ += mz6 / 6
-	im.AW += aw
-	im.SX += sx
-	im.SY += sy2 / 2
-	im.IXX += ixx
-	im.IXY += ixy2 / 2
-	im.IYY += iyy3 / 3
+	im.addPiece(v2, mx2, my6, mz6, aw, sx, sy2, ixx, ixy2, iyy3)
 }
 
 // cyc returns d reduced modulo n to (−n/2, n/2].

@@ -144,7 +144,7 @@ func NewSectionHull(length float64, stations []Station) (*Hull, error) {
 	// The slabs are independent of one another: built concurrently, each
 	// into its own place.
 	slabs := make([]slab, len(aft))
-	fanOut(len(slabs), func(k int) {
+	FanOut(len(slabs), func(k int) {
 		sa, sb := h.stations[aft[k]], h.stations[fore[k]]
 		a, b := matchStations(sa.Offsets, sb.Offsets)
 		slabs[k] = newSlab(sa.X, sb.X, fullSection(a), fullSection(b))
@@ -157,7 +157,7 @@ func NewSectionHull(length float64, stations []Station) (*Hull, error) {
 	_, _, zmin, zmax := h.solid.Extent()
 	h.levelA = make([]float64, levels+1)
 	h.levelV = make([]float64, levels+1)
-	fanOut(levels+1, func(i int) {
+	FanOut(levels+1, func(i int) {
 		a := zmin + (zmax-zmin)*float64(i)/levels
 		h.levelA[i] = a
 		h.levelV[i] = h.solid.Below(Plane{A: a}).V

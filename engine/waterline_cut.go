@@ -487,6 +487,15 @@ func (s *slab) pieceChains(p Plane, xa, xb float64, nin int, chains []chain, im 
 		ixy2 += w * x * WY
 		iyy3 += w * WYY
 	}
+	im.addPiece(v2, mx2, my6, mz6, aw, sx, sy2, ixx, ixy2, iyy3)
+}
+
+// addPiece adds a piece's sums as pieceArc and pieceChains keep them while
+// they run over the Gauss nodes — twice the area (v2, mx2), six times the
+// section's moments (my6, mz6), and the waterline's sums with its y
+// moments two (sy2, ixy2) and three (iyy3) times over — divided once for
+// the piece.
+func (im *Immersion) addPiece(v2, mx2, my6, mz6, aw, sx, sy2, ixx, ixy2, iyy3 float64) {
 	im.V += v2 / 2
 	im.MX += mx2 / 2
 	im.MY += my6 / 6

@@ -1,12 +1,6 @@
 package vessels
 
-import (
-	"runtime"
-	"sync"
-	"sync/atomic"
-
-	"heelwatch/engine"
-)
+import "heelwatch/engine"
 
 // buildSolids builds on hull the compartment of each read that is to be
 // built (cr.build), setting cr.c and cr.err: a box clipped by the hull
@@ -29,25 +23,5 @@ func buildSolids(hull *engine.Hull, reads []compartmentRead) {
 			cr.c, cr.err = engine.NewCompartment(hull, cr.name, cr.box)
 		}
 	}
-	workers := min(runtime.GOMAXPROCS(0), len(todo))
-	if workers <= 1 {
-		for _, i := range todo {
-			build(&reads[i])
-		}
-		return
-	}
-	var next atomic.Int64
-	var wg sync.WaitGroup
-	for range workers {
-		wg.Go(func() {
-			for {
-				k := int(next.Add(1)) - 1
-				if k >= len(todo) {
-					return
-				}
-				build(&reads[todo[k]])
-			}
-		})
-	}
-	wg.Wait()
+	engine.FanOut(len(todo), func(k int) { build(&reads[todo[k]]) })
 }
