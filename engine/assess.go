@@ -153,6 +153,12 @@ type Assessment struct {
 // computed is said in NoEq, HandWhy or Notes.
 func Assess(v *Vessel, d Damage) Assessment {
 	a := Assessment{Damage: append(Damage(nil), d...)}
+	// The hand method needs nothing solved: it is worked beside the
+	// equilibrium, on another core when there is one.
+	var hw *HandWorking
+	var herr error
+	var hand beside
+	hand.run(func() { hw, herr = HandMethod(v, d) })
 	pr := NewProblem(v, d)
 	pos, err := pr.Equilibrium()
 	if err != nil {
@@ -160,20 +166,20 @@ func Assess(v *Vessel, d Damage) Assessment {
 	} else {
 		a.Position = &pos
 	}
-	if a.NoEq != nil {
+	hand.wait()
+	na, notApplicable := herr.(*HandNotApplicable)
+	switch {
+	case a.NoEq != nil && herr == nil:
 		// A small-angle answer beside a ship that sinks or capsizes would
 		// be a false comfort.
-		if _, err := HandMethod(v, d); err == nil {
-			a.HandWhy = "not shown: there is no floating position (" + a.NoEq.Outcome.Plain() + "), and the small-angle working would give a false picture of her"
-		} else if na, ok := err.(*HandNotApplicable); ok {
-			a.HandWhy = na.Reason
-		}
-	} else if hw, err := HandMethod(v, d); err == nil {
-		a.Hand = hw
-	} else if na, ok := err.(*HandNotApplicable); ok {
+		a.HandWhy = "not shown: there is no floating position (" + a.NoEq.Outcome.Plain() + "), and the small-angle working would give a false picture of her"
+	case notApplicable:
 		a.HandWhy = na.Reason
-	} else {
-		a.HandWhy = err.Error()
+	case a.NoEq != nil:
+	case herr == nil:
+		a.Hand = hw
+	default:
+		a.HandWhy = herr.Error()
 	}
 	up := uprightUnknown
 	var upPtr *float64

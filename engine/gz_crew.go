@@ -3,7 +3,6 @@ package engine
 import (
 	"math"
 	"runtime"
-	"sync"
 	"sync/atomic"
 )
 
@@ -71,13 +70,15 @@ func (pr *Problem) leverCurvesFrom(eq Position, asks []curveAsk, starts func(ste
 		}
 	}
 	n := min(runtime.GOMAXPROCS(0), len(jobs))
-	var wg sync.WaitGroup
+	var others beside
 	for range n - 1 {
 		f := pr.fork()
-		wg.Go(func() { work(f) })
+		others.run(func() { work(f) })
 	}
+	// A fault in another worker is raised here once all have stopped (a
+	// faulty span is never joined, so neither is its curve).
+	defer others.wait()
 	work(pr)
-	wg.Wait()
 	return ws
 }
 
