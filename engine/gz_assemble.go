@@ -26,9 +26,15 @@ const errSpanCut = "engine: a GZ span was cut short before the curve's end"
 func (pr *Problem) assemble(w *curveWork) (*GZCurve, []solvedHeel, error) {
 	sgn := float64(w.side)
 	c := &GZCurve{Toward: w.side, EquilibriumDeg: w.eqDeg}
-	sol := make([]solvedHeel, 0, 96)
-	c.HeelDeg = make([]float64, 0, 96)
-	c.GZM = make([]float64, 0, 96)
+	var sol []solvedHeel
+	if len(w.spans) == 1 {
+		// One span: the curve is its samples, in the same order, so they
+		// are kept where they are (each is written over itself).
+		s := &w.spans[0]
+		c.HeelDeg, c.GZM, sol = s.heels[:0], s.gz[:0], s.sol[:0]
+	} else {
+		c.HeelDeg, c.GZM, sol = make([]float64, 0, 96), make([]float64, 0, 96), make([]solvedHeel, 0, 96)
+	}
 	push := func(deg, gz float64, sh solvedHeel) {
 		c.HeelDeg = append(c.HeelDeg, deg)
 		c.GZM = append(c.GZM, gz)

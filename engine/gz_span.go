@@ -134,6 +134,8 @@ func newCurveWork(side Side, eq Position, stepDeg float64, start Plane, starts [
 // span's end, or where the curve no longer needs samples (w.need).
 func (pr *Problem) workSpan(w *curveWork, s *spanRun) {
 	sgn := float64(w.side)
+	n := s.k1 - s.k0 + 1 // its samples and an angle of vanishing stability
+	s.heels, s.gz, s.sol = make([]float64, 0, n), make([]float64, 0, n), make([]solvedHeel, 0, n)
 	for k := s.k0; k < s.k1; k++ {
 		if int64(k) > w.need.Load() {
 			s.cut = true
