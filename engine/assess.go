@@ -220,6 +220,7 @@ func Assess(v *Vessel, d Damage) Assessment {
 	a.Spills = Spills(v, d)
 	more := append(StabilityFlags(v, a.Position, a.GZ, a.Criteria), StrengthFlags(a.Strength)...)
 	more = append(more, spillFlags(a.Spills)...)
+	more = append(more, ballastBasisFlags(v, d)...)
 	if len(more) > 0 {
 		a.Flags = append(a.Flags, more...)
 		sort.SliceStable(a.Flags, func(i, j int) bool { return a.Flags[i].Severity > a.Flags[j].Severity })

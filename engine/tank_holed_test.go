@@ -5,6 +5,7 @@ package engine_test
 // fraction of it.
 
 import (
+	"fmt"
 	"math"
 	"strings"
 	"testing"
@@ -119,5 +120,54 @@ func TestHoledFuelTankSpills(t *testing.T) {
 	}
 	if !found {
 		t.Error("no spill flag")
+	}
+}
+
+// TestHoledBallastSaysTheBasis: the full ballast tank holed, the GM shown
+// rises though nothing moves (lost-buoyancy basis), and a note says by how
+// much the ship weight fell: exactly the displacement lost, μ·V·ρ. A tank
+// of fuel oil holed gives the spill caution instead, and an empty ballast
+// tank no note.
+func TestHoledBallastSaysTheBasis(t *testing.T) {
+	v := holedTankBarge(t, engine.Liquid{Name: "sea water ballast", Density: engine.SeaWaterDensity, Fill: 1})
+	intact, err := engine.Solve(v, v.Intact())
+	if err != nil {
+		t.Fatal(err)
+	}
+	d := v.Intact()
+	d[0].Open = true
+	a := engine.Assess(v, d)
+	if a.Position == nil {
+		t.Fatal("no position holed")
+	}
+	lost := intact.DisplacementT - a.Position.DisplacementT
+	var note *engine.Flag
+	for i, f := range a.Flags {
+		if f.Code == engine.FlagBallastHoled {
+			note = &a.Flags[i]
+		}
+	}
+	if note == nil {
+		t.Fatalf("no %s note: %+v", engine.FlagBallastHoled, a.Flags)
+	}
+	if note.Severity != engine.Info {
+		t.Errorf("severity %v, want a note", note.Severity)
+	}
+	if want := fmt.Sprintf("its %.0f t of sea water ballast left the ship weight", lost); !strings.Contains(note.Message, want) {
+		t.Errorf("note %q does not say %q", note.Message, want)
+	}
+	for _, c := range []struct {
+		liq  engine.Liquid
+		what string
+	}{
+		{engine.Liquid{Name: "fuel oil", Density: 0.95, Fill: 1}, "fuel oil"},
+		{engine.Liquid{Name: "sea water ballast", Density: engine.SeaWaterDensity, Fill: 0}, "empty ballast"},
+	} {
+		v := holedTankBarge(t, c.liq)
+		for _, f := range engine.Assess(v, d).Flags {
+			if f.Code == engine.FlagBallastHoled {
+				t.Errorf("%s: %s note %q", c.what, engine.FlagBallastHoled, f.Message)
+			}
+		}
 	}
 }

@@ -30,6 +30,7 @@ type conditionPanel struct {
 	show   bool
 	base   *engine.Vessel     // the ship as her vessel file gives her (Apply's ship); nil: no panel
 	cond   *vessels.Condition // the condition now (the panel's own copy)
+	taken  *vessels.Condition // the condition the ship is loaded with: what undo goes back to
 	resume *vessels.State     // a state to take up at start, nil once taken
 	source string             // where the ship came from, for a state file ("freighter" or a path)
 	dir    string             // where files are saved by default
@@ -113,6 +114,7 @@ func newConditionPanel(v *engine.Vessel, opts Options, name string) conditionPan
 	} else {
 		p.cond = vessels.ConditionOf(p.base, name)
 	}
+	p.taken = p.cond
 	p.field.Prompt = ""
 	p.field.CharLimit = 120
 	return p
@@ -565,30 +567,65 @@ func (m model) takeRemedy() (tea.Model, tea.Cmd, bool) {
 // connections as they are), and works out the intact reference and the
 // damage state shown for her again. A flooding run going on is stopped
 // (it was of the old condition); the righting options are dropped. The
-// undo key does not undo a change of the condition: it undoes damage.
+// change is undone with the undo key, which puts back the condition taken
+// before it. A condition the ship cannot take is not taken: the panel goes
+// back to the one she is loaded with and says why.
 func (m model) takeCondition(what string) (tea.Model, tea.Cmd) {
-	nv, err := m.cond.cond.Apply(m.cond.base)
+	before := m.cond.taken
+	m, stop, err := m.loadCondition(m.cond.cond, what)
 	if err != nil {
+		m.cond.cond = m.cond.taken
 		m.cond.note = "not taken: " + err.Error()
 		return m, nil
 	}
+	m.pushUndo(undoEntry{damage: m.damage, what: "condition: " + what, cond: before})
+	mm, cmd := m.commit(cloneDamage(m.damage), "condition: "+what)
+	return mm, tea.Batch(stop, cmd, m.conditionBase())
+}
+
+// undoCondition puts back the condition c (taken before the change u
+// undoes) and u's damage state.
+func (m model) undoCondition(u undoEntry) (tea.Model, tea.Cmd) {
+	m, stop, err := m.loadCondition(u.cond, "undone: "+u.what)
+	if err != nil { // the condition was taken once: cannot happen, but say so
+		m.cond.note = "not undone: " + err.Error()
+		return m, nil
+	}
+	mm, cmd := m.commit(cloneDamage(u.damage), "undone: "+u.what)
+	return mm, tea.Batch(stop, cmd, m.conditionBase())
+}
+
+// loadCondition makes c the condition the ship is loaded with (keeping
+// the connections as they are): the panel's condition and the one taken.
+// A flooding run going on is stopped (stop, it was of the old condition);
+// the righting options and the intact reference are dropped.
+func (m model) loadCondition(c *vessels.Condition, what string) (model, tea.Cmd, error) {
+	nv, err := c.Apply(m.cond.base)
+	if err != nil {
+		return m, nil, err
+	}
 	nv = plainNames(nv)
-	for i, c := range m.v.Connections {
-		if i < len(nv.Connections) && nv.Connections[i].Open != c.Open {
-			nv = nv.WithConnection(i, c.Open)
+	for i, cn := range m.v.Connections {
+		if i < len(nv.Connections) && nv.Connections[i].Open != cn.Open {
+			nv = nv.WithConnection(i, cn.Open)
 		}
 	}
 	var stop tea.Cmd
 	m.flood, stop = m.flood.with(m).stop(&m) // a run going on is of the old condition
 	m.v = nv
+	m.cond.cond, m.cond.taken = c, c
 	m.cond.note = what
 	m.cond.gen++
 	m.rem.set = nil // worked out for the old condition
 	m.base = nil
-	gen, v := m.cond.gen, nv
-	base := func() tea.Msg { return conditionBaseMsg{gen: gen, a: engine.Assess(v, v.Intact())} }
-	mm, cmd := m.commit(cloneDamage(m.damage), "condition: "+what)
-	return mm, tea.Batch(stop, cmd, base)
+	return m, stop, nil
+}
+
+// conditionBase returns the Cmd that works out the intact reference of
+// the condition now taken.
+func (m model) conditionBase() tea.Cmd {
+	gen, v := m.cond.gen, m.v
+	return func() tea.Msg { return conditionBaseMsg{gen: gen, a: engine.Assess(v, v.Intact())} }
 }
 
 // withCondition gives the dashboard its condition panel and, taking up a

@@ -153,8 +153,9 @@ func spreadState(a *engine.Assessment, d engine.Damage, i int) (word, mark strin
 
 // openNow reports whether compartment i is open to the sea in the state
 // whose figures are shown: the officer's, and those the water reached
-// through connections and openings (the pictures shade them all).
-func (m model) openNow(i int) bool {
+// through connections and openings (the pictures shade them all). (A
+// pointer receiver: the model is too large to copy once per compartment.)
+func (m *model) openNow(i int) bool {
 	if m.cur != nil && i < len(m.cur.Damage) {
 		return m.cur.Damage[i].Open
 	}

@@ -136,6 +136,10 @@ const (
 type undoEntry struct {
 	damage engine.Damage
 	what   string
+	// cond is the loading condition to go back to when the change undone
+	// was one of the condition (condition panel); nil for a change of the
+	// damage.
+	cond *vessels.Condition
 }
 
 // Pictures a narrow screen shows one at a time.
@@ -463,6 +467,9 @@ func (m model) key(msg tea.KeyMsg) (tea.Model, tea.Cmd) {
 		}
 		u := m.undo[len(m.undo)-1]
 		m.undo = m.undo[:len(m.undo)-1]
+		if u.cond != nil {
+			return m.undoCondition(u)
+		}
 		return m.commit(u.damage, "undone: "+u.what)
 	case key.Matches(msg, k.Reset):
 		if len(m.damage) == 0 || allZero(m.damage) {
@@ -588,11 +595,16 @@ func (m model) mu(d engine.Damage, i int) float64 { return m.v.Permeability(d, i
 
 // apply makes d the damage state, keeping the old one for undo.
 func (m model) apply(d engine.Damage, what string) (tea.Model, tea.Cmd) {
-	m.undo = append(m.undo, undoEntry{m.damage, what})
+	m.pushUndo(undoEntry{damage: m.damage, what: what})
+	return m.commit(d, what)
+}
+
+// pushUndo keeps u as the change the undo key undoes next (the last 500).
+func (m *model) pushUndo(u undoEntry) {
+	m.undo = append(m.undo, u)
 	if len(m.undo) > 500 {
 		m.undo = m.undo[1:]
 	}
-	return m.commit(d, what)
 }
 
 // commit makes d the damage state and starts its computation: the change

@@ -46,17 +46,8 @@ func keelAt(st engine.Station) float64 {
 // baseline up; the vertical scale is enlarged.
 func (m model) profileView(w, h int) []string {
 	st := m.st
-	hull := m.v.Hull
-	L := hull.LengthM
-	var p *engine.Plane
-	side := engine.Starboard
-	if m.cur != nil && m.cur.Position != nil {
-		pl := m.cur.Position.Plane
-		p = &pl
-		if heelShort(m.cur.Position.HeelDeg) != "0.0°" && pl.C < 0 {
-			side = engine.Port
-		}
-	}
+	L := m.v.Hull.LengthM
+	p, side := m.profileSide()
 	title := "PROFILE from " + sideShort(side)
 	if p != nil {
 		title += " · " + trimText(m.cur.Position.TrimM)
@@ -66,6 +57,39 @@ func (m model) profileView(w, h int) []string {
 	if cw < 8 || ch < 3 {
 		return fit(lines, w, h)
 	}
+	c := m.profileCanvas(cw, ch)
+	step := niceStep(c.y1-c.y0, max(2, ch/3))
+	xstep := niceStep(L, max(2, cw/10))
+	marks := []tick{{0, "AP"}}
+	for v := xstep; v < L-xstep/2; v += xstep {
+		marks = append(marks, tick{v, num(v, 0)})
+	}
+	marks = append(marks, tick{L, "FP"})
+	lines = append(lines, m.framed(c, step, func(v float64) string { return num(v, 0) })...)
+	lines = append(lines, st.Axis.Render(scaleLine(c, marks, "m")))
+	return fit(lines, w, h)
+}
+
+// profileSide returns the sea's surface (nil before the first figures)
+// and the side the profile is seen from: the low side, starboard when
+// upright.
+func (m model) profileSide() (*engine.Plane, engine.Side) {
+	if m.cur == nil || m.cur.Position == nil {
+		return nil, engine.Starboard
+	}
+	pl := m.cur.Position.Plane
+	if heelShort(m.cur.Position.HeelDeg) != "0.0°" && pl.C < 0 {
+		return &pl, engine.Port
+	}
+	return &pl, engine.Starboard
+}
+
+// profileCanvas draws profileView's picture on a canvas of cw × ch cells,
+// without its title and scales.
+func (m model) profileCanvas(cw, ch int) *canvas {
+	hull := m.v.Hull
+	L := hull.LengthM
+	p, side := m.profileSide()
 	c := newCanvas(cw, ch)
 	stations := hull.Stations()
 	zlo, zhi := 0.0, hull.DepthM
@@ -93,7 +117,9 @@ func (m model) profileView(w, h int) []string {
 
 	// Open compartments: shade the part of each box (cut at the deck) below
 	// the water at the middle of its breadth; partly flooded ones below the
-	// free surface of the water they hold.
+	// free surface of the water they hold. A compartment given by outlines
+	// is shaded the same way between the bottom and the top of its own
+	// section at each x (outlineSpan), not its box.
 	for i, comp := range m.v.Compartments {
 		if p == nil {
 			break
@@ -109,6 +135,10 @@ func (m model) profileView(w, h int) []string {
 			if surface == nil {
 				continue
 			}
+		}
+		if comp.Sections != nil {
+			shadeOutlineProfile(c, comp, surface)
+			continue
 		}
 		b := comp.Box
 		yc := (math.Max(b.Y0, -hull.BreadthM/2) + math.Min(b.Y1, hull.BreadthM/2)) / 2
@@ -142,7 +172,9 @@ func (m model) profileView(w, h int) []string {
 		c.line(stations[0].X, keelAt(stations[0]), stations[0].X, z0, inkHull)
 		c.line(stations[n-1].X, keelAt(stations[n-1]), stations[n-1].X, z1, inkHull)
 	}
-	if len(m.v.Compartments) > 0 {
+	if len(m.v.Compartments) > 0 && m.v.Compartments[m.sel].Sections != nil {
+		outlineProfile(c, m.v.Compartments[m.sel], inkSpace)
+	} else if len(m.v.Compartments) > 0 {
 		b := m.v.Compartments[m.sel].Box
 		x0, x1 := math.Max(b.X0, 0), math.Min(b.X1, L)
 		_, d0 := deckAt(hull, x0)
@@ -166,14 +198,5 @@ func (m model) profileView(w, h int) []string {
 			m.markOpening(c, oc, oc.X, oc.Z)
 		}
 	}
-	step := niceStep(c.y1-c.y0, max(2, ch/3))
-	xstep := niceStep(L, max(2, cw/10))
-	marks := []tick{{0, "AP"}}
-	for v := xstep; v < L-xstep/2; v += xstep {
-		marks = append(marks, tick{v, num(v, 0)})
-	}
-	marks = append(marks, tick{L, "FP"})
-	lines = append(lines, m.framed(c, step, func(v float64) string { return num(v, 0) })...)
-	lines = append(lines, st.Axis.Render(scaleLine(c, marks, "m")))
-	return fit(lines, w, h)
+	return c
 }

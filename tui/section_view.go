@@ -26,7 +26,7 @@ const axisW = 5
 
 // framed puts a vertical scale left of a picture's canvas, labelled at
 // round values of the world's y, and returns the canvas's lines.
-func (m model) framed(c *canvas, yStep float64, yFmt func(float64) string) []string {
+func (m *model) framed(c *canvas, yStep float64, yFmt func(float64) string) []string {
 	return framedIn(m.st, m.inks, c, yStep, yFmt)
 }
 
@@ -116,6 +116,22 @@ func (m model) sectionView(w, h int) []string {
 	if cw < 8 || ch < 3 {
 		return fit(lines, w, h)
 	}
+	c := m.sectionCanvas(x, cw, ch)
+	half := m.v.Hull.BreadthM / 2
+	step := niceStep(c.y1-c.y0, max(2, ch/3))
+	ystep := niceStep(half*2, 4)
+	var marks []tick
+	for v := -math.Floor(half/ystep) * ystep; v <= half+1e-9; v += ystep {
+		marks = append(marks, tick{v, num(math.Abs(v), 0)})
+	}
+	lines = append(lines, m.framed(c, step, func(v float64) string { return num(v, 0) })...)
+	lines = append(lines, st.Axis.Render(scaleLine(c, marks, "m")))
+	return fit(lines, w, h)
+}
+
+// sectionCanvas draws sectionView's picture of the section at x on a
+// canvas of cw × ch cells, without its title and scales.
+func (m model) sectionCanvas(x float64, cw, ch int) *canvas {
 	hull := m.v.Hull
 	c := newCanvas(cw, ch)
 	half := hull.BreadthM / 2
@@ -204,16 +220,7 @@ func (m model) sectionView(w, h int) []string {
 	}
 	c.label(0, 0, "P", inkText)
 	c.label(c.w-1, 0, "S", inkText)
-
-	step := niceStep(c.y1-c.y0, max(2, ch/3))
-	ystep := niceStep(half*2, 4)
-	var marks []tick
-	for v := -math.Floor(half/ystep) * ystep; v <= half+1e-9; v += ystep {
-		marks = append(marks, tick{v, num(math.Abs(v), 0)})
-	}
-	lines = append(lines, m.framed(c, step, func(v float64) string { return num(v, 0) })...)
-	lines = append(lines, st.Axis.Render(scaleLine(c, marks, "m")))
-	return fit(lines, w, h)
+	return c
 }
 
 // titleFit joins the parts of a title with " · " while they fit in w;

@@ -81,6 +81,11 @@ func contains(vals []string, v string) bool {
 	return false
 }
 
+// Closest returns the candidate nearest to s by edit distance (ignoring
+// case) when it is near enough to be a likely typing slip, else "": the
+// did-you-mean of every name heelwatch refuses.
+func Closest(s string, candidates []string) string { return closest(s, candidates) }
+
 // closest returns the candidate nearest to s by edit distance when it is
 // near enough to be a likely typing slip, else "".
 func closest(s string, candidates []string) string {

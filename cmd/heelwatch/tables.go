@@ -2,12 +2,10 @@ package main
 
 import (
 	"encoding/csv"
-	"encoding/json"
 	"flag"
 	"fmt"
 	"io"
 	"math"
-	"strconv"
 	"text/tabwriter"
 
 	"heelwatch/engine"
@@ -21,14 +19,17 @@ Usage:
   --table T    hydrostatics, tanks or capacity (csv: one table, default
                hydrostatics; text and json: all three unless one is named)
   --step M     the drafts' step, m (default 0.25, from one step above the
-               keel to the deck at side); the tanks' soundings step M/2.5
+               keel; the last row is at the lowest deck at side, where the
+               model's hull ends); the tanks' soundings step M/2.5
   --format F   text (default), csv or json
 
 hydrostatics: at even keel and upright, per draft: displacement, LCB, VCB
 (KB), LCF, TPC, MCTC, KMT, KML (columns as heelwatch verify reads them).
 tanks: each tank full (μ × its volume) and its centre. capacity: each tank
 level by level from empty to full: sounding above its lowest point, volume,
-centre, free-surface moment (its own liquid's density; sea water if none).
+centre (blank, or null, when empty), free-surface moment (its own liquid's
+density, given in the heading, the CSV's density_t_m3 column and the JSON's
+density_t_m3; sea water if none). JSON figures are rounded to 4 decimals.
 `
 
 // tanksOf returns the indices of v's tanks (use "tank").
@@ -42,23 +43,22 @@ func tanksOf(v *engine.Vessel) []int {
 	return out
 }
 
-// hydroTable returns the hydrostatic table of v from step to the deck at
-// side (the least depth at side, so that every draft has a waterplane).
+// hydroTable returns the hydrostatic table of v at every step from one
+// step above the keel, and at the top of the hydrostatic range (the lowest
+// deck at side, hydroRange) when the steps do not land on it.
 func hydroTable(v *engine.Vessel, step float64) []engine.HydroRow {
-	h := v.Hull
-	top := h.DepthM
-	for i := range h.Stations() {
-		_, _, z := h.DeckEdge(i)
-		top = math.Min(top, z)
-	}
+	hr := hydroRangeOf(v.Hull)
 	var rows []engine.HydroRow
 	for k := 1; ; k++ {
 		T := math.Round(float64(k)*step*1e6) / 1e6
-		if T >= top-1e-9 {
-			return rows
+		if T > hr.TopM-1e-9 {
+			T = hr.TopM
 		}
-		if r, err := engine.Hydrostatics(h, v.WaterDensity, T); err == nil {
+		if r, err := hydrostaticsAt(v, hr, T); err == nil && T > hr.KeelM {
 			rows = append(rows, r)
+		}
+		if T >= hr.TopM {
+			return rows
 		}
 	}
 }
@@ -80,6 +80,18 @@ func fullTanks(v *engine.Vessel) []tankFull {
 		out = append(out, tankFull{c.Name, c.Permeability * c.Volume(), x, y, z})
 	}
 	return out
+}
+
+// liquidName names what a tank's free-surface moment is worked for: its
+// liquid, or the sea water it would hold when the file gives none.
+func liquidName(c *engine.Compartment) string {
+	if c.Liquid != nil && c.Liquid.Density > 0 && c.Liquid.Name != "" {
+		return c.Liquid.Name
+	}
+	if c.Liquid != nil && c.Liquid.Density > 0 {
+		return "its liquid"
+	}
+	return "sea water"
 }
 
 func liquidDensity(c *engine.Compartment, water float64) float64 {
@@ -137,13 +149,7 @@ func runTables(args []string, stdout, stderr io.Writer) int {
 	switch *format {
 	case "csv":
 		cw := csv.NewWriter(stdout)
-		f := func(x float64) string {
-			s := strconv.FormatFloat(x, 'f', 4, 64)
-			if s == "-0.0000" {
-				s = "0.0000"
-			}
-			return s
-		}
+		f := func(x float64) string { return fixedN(x, 4) }
 		switch *table {
 		case "hydrostatics":
 			cw.Write(hydroColumns)
@@ -160,89 +166,54 @@ func runTables(args []string, stdout, stderr io.Writer) int {
 				cw.Write([]string{t.Name, f(t.VolumeM3), f(t.LCGM), f(t.TCGM), f(t.VCGM)})
 			}
 		case "capacity":
-			cw.Write([]string{"name", "sounding_m", "volume_m3", "lcg_m", "tcg_m", "vcg_m", "fsm_tm"})
+			cw.Write([]string{"name", "sounding_m", "volume_m3", "lcg_m", "tcg_m", "vcg_m", "fsm_tm", "density_t_m3"})
 			for _, i := range tanksOf(v) {
 				c := v.Compartments[i]
-				for _, r := range engine.CapacityTable(c, liquidDensity(c, v.WaterDensity), sstep) {
-					cw.Write([]string{c.Name, f(r.SoundingM), f(r.VolumeM3), f(r.LCGM), f(r.TCGM), f(r.VCGM), f(r.FSMTm)})
+				rho := liquidDensity(c, v.WaterDensity)
+				for _, r := range capacityRows(c, rho, sstep) {
+					lcg, tcg, vcg := "", "", ""
+					if r.VolumeM3 > 0 {
+						lcg, tcg, vcg = f(r.LCGM), f(r.TCGM), f(r.VCGM)
+					}
+					cw.Write([]string{c.Name, f(r.SoundingM), f(r.VolumeM3), lcg, tcg, vcg, f(r.FSMTm), fixedN(rho, 3)})
 				}
 			}
 		}
 		cw.Flush()
 		werr = cw.Error()
 	case "json":
-		type hrow struct {
-			DraftM        float64 `json:"draft_m"`
-			DisplacementT float64 `json:"displacement_t"`
-			LCBM          float64 `json:"lcb_m"`
-			VCBM          float64 `json:"vcb_m"`
-			LCFM          float64 `json:"lcf_m"`
-			TPCt          float64 `json:"tpc_t"`
-			MCTtm         float64 `json:"mct_tm"`
-			KMTM          float64 `json:"kmt_m"`
-			KMLM          float64 `json:"kml_m"`
-		}
-		type crow struct {
-			SoundingM float64 `json:"sounding_m"`
-			VolumeM3  float64 `json:"volume_m3"`
-			LCGM      float64 `json:"lcg_m"`
-			TCGM      float64 `json:"tcg_m"`
-			VCGM      float64 `json:"vcg_m"`
-			FSMtm     float64 `json:"fsm_tm"`
-		}
-		type tank struct {
-			tankFull
-			Capacity []crow `json:"capacity,omitempty"`
-		}
-		doc := struct {
-			Vessel       string `json:"vessel"`
-			Hydrostatics []hrow `json:"hydrostatics,omitempty"`
-			Tanks        []tank `json:"tanks,omitempty"`
-		}{Vessel: v.Name}
-		if want("hydrostatics") {
-			for _, r := range hyd {
-				doc.Hydrostatics = append(doc.Hydrostatics, hrow{r.DraftM, r.DisplacementT, r.LCBM, r.VCBM, r.LCFM, r.TPCt, r.MCTCtm, r.KMTM, r.KMLM})
-			}
-		}
-		if want("tanks") || want("capacity") {
-			for k, i := range tanksOf(v) {
-				t := tank{tankFull: tanks[k]}
-				if want("capacity") {
-					c := v.Compartments[i]
-					for _, r := range engine.CapacityTable(c, liquidDensity(c, v.WaterDensity), sstep) {
-						t.Capacity = append(t.Capacity, crow{r.SoundingM, r.VolumeM3, r.LCGM, r.TCGM, r.VCGM, r.FSMTm})
-					}
-				}
-				doc.Tanks = append(doc.Tanks, t)
-			}
-		}
-		enc := json.NewEncoder(stdout)
-		enc.SetIndent("", "  ")
-		werr = enc.Encode(doc)
+		werr = writeTablesJSON(stdout, v, want, hyd, tanks, sstep)
 	default:
 		tw := tabwriter.NewWriter(stdout, 0, 0, 2, ' ', tabwriter.AlignRight)
 		fmt.Fprintf(tw, "%s — %s\n", v.Name, source(info))
 		if want("hydrostatics") {
 			fmt.Fprintf(tw, "\nHydrostatics, even keel, upright, water %.3f t/m³\n", v.WaterDensity)
-			fmt.Fprintln(tw, "draft m\tΔ t\tLCB m\tKB m\tLCF m\tTPC t\tMCTC t·m\tKMT m\tKML m\t")
+			fmt.Fprintf(tw, "drafts %s\n", hydroRangeOf(v.Hull).why())
+			fmt.Fprintln(tw, "draft m\tΔ t\tLCB m\tKB m\tLCF m\tTPC t/cm\tMCTC t·m/cm\tKMT m\tKML m\t")
 			for _, r := range hyd {
-				fmt.Fprintf(tw, "%.3f\t%.1f\t%.3f\t%.3f\t%.3f\t%.2f\t%.1f\t%.3f\t%.1f\t\n", r.DraftM, r.DisplacementT, r.LCBM, r.VCBM, r.LCFM, r.TPCt, r.MCTCtm, r.KMTM, r.KMLM)
+				fmt.Fprintf(tw, "%s\t%s\t%s\t%s\t%s\t%s\t%s\t%s\t%s\t\n", fixedN(r.DraftM, 3), fixedN(r.DisplacementT, 1), fixedN(r.LCBM, 3), fixedN(r.VCBM, 3),
+					fixedN(r.LCFM, 3), fixedN(r.TPCt, 2), fixedN(r.MCTCtm, 1), fixedN(r.KMTM, 3), fixedN(r.KMLM, 1))
 			}
 		}
 		if want("tanks") {
 			fmt.Fprintln(tw, "\nTanks full (μ × volume)")
 			fmt.Fprintln(tw, "tank\tm³\tLCG m\tTCG m\tVCG m\t")
 			for _, t := range tanks {
-				fmt.Fprintf(tw, "%s\t%.1f\t%.3f\t%.3f\t%.3f\t\n", t.Name, t.VolumeM3, t.LCGM, t.TCGM, t.VCGM)
+				fmt.Fprintf(tw, "%s\t%s\t%s\t%s\t%s\t\n", t.Name, fixedN(t.VolumeM3, 1), fixedN(t.LCGM, 3), fixedN(t.TCGM, 3), fixedN(t.VCGM, 3))
 			}
 		}
 		if want("capacity") {
 			for _, i := range tanksOf(v) {
 				c := v.Compartments[i]
-				fmt.Fprintf(tw, "\nCapacity: %s (%.3f t/m³)\n", c.Name, liquidDensity(c, v.WaterDensity))
+				rho := liquidDensity(c, v.WaterDensity)
+				fmt.Fprintf(tw, "\nCapacity: %s, FSM for %s of %.3f t/m³\n", c.Name, liquidName(c), rho)
 				fmt.Fprintln(tw, "sounding m\tm³\tLCG m\tTCG m\tVCG m\tFSM t·m\t")
-				for _, r := range engine.CapacityTable(c, liquidDensity(c, v.WaterDensity), sstep) {
-					fmt.Fprintf(tw, "%.3f\t%.1f\t%.3f\t%.3f\t%.3f\t%.1f\t\n", r.SoundingM, r.VolumeM3, r.LCGM, r.TCGM, r.VCGM, r.FSMTm)
+				for _, r := range capacityRows(c, rho, sstep) {
+					lcg, tcg, vcg := "", "", ""
+					if r.VolumeM3 > 0 {
+						lcg, tcg, vcg = fixedN(r.LCGM, 3), fixedN(r.TCGM, 3), fixedN(r.VCGM, 3)
+					}
+					fmt.Fprintf(tw, "%s\t%s\t%s\t%s\t%s\t%s\t\n", fixedN(r.SoundingM, 3), fixedN(r.VolumeM3, 1), lcg, tcg, vcg, fixedN(r.FSMTm, 1))
 				}
 			}
 		}

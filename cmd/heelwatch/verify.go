@@ -1,7 +1,6 @@
 package main
 
 import (
-	"encoding/csv"
 	"encoding/json"
 	"errors"
 	"flag"
@@ -9,11 +8,10 @@ import (
 	"io"
 	"math"
 	"os"
-	"strconv"
 	"strings"
-	"text/tabwriter"
 
 	"heelwatch/engine"
+	"heelwatch/vessels"
 )
 
 const verifyHelp = `heelwatch verify: the model against the ship's approved tables.
@@ -30,49 +28,81 @@ Usage:
                         volume_m3, lcg_m, tcg_m, vcg_m
   --format F            text (default) or json
 
+The CSV files: commas with decimal points, or semicolons with decimal
+commas. Every cell holds a figure (leave a quantity's column out rather
+than a cell empty); each draft and tank once.
+
 Each value is compared with heelwatch's own figure; the deviation is
 booklet − model and the tolerance that of MSC.1/Circ.1229 for the quantity
 (a percentage of the booklet's value, capped by a length where one is
-given). TPC has no figure of its own there: it is held to displacement's 2 %.
+given; a tank's TCG: 0.5 % of the breadth, at most 5 cm). TPC has no figure
+of its own there: it is held to displacement's 2 %. Each tolerance is shown
+in the quantity's unit with its basis ("2 % of Δ", "5 cm cap"); the text
+ends with the count of values within and beyond tolerance and the failing
+ones listed together.
 
-Exit status: 0 every value within tolerance; 4 some are not; 1 bad input;
-2 bad usage.
+The model's hydrostatics are compared from the keel to the lowest deck at
+side, the range heelwatch tables prints; a row at a draft outside it is
+input verify cannot use.
+
+Exit status: 0 every value within tolerance; 4 some are not; 1 bad input
+(a table that cannot be read or used: file:line, column and why on
+stderr); 2 bad usage.
 `
 
 // exitVerifyFail is verify's status when some value is beyond tolerance.
 const exitVerifyFail = 4
 
 // tolerance is one quantity's acceptance tolerance: pct percent of the
-// reference, at most capM (0: no cap) (MSC.1/Circ.1229, references.md).
+// booklet's value (of the breadth B for a tank's TCG), at most capM metres
+// (0: no cap) (MSC.1/Circ.1229, references.md). of names what the
+// percentage is taken of, for the reader.
 type tolerance struct {
 	pct, capM float64
-	source    string
+	of        string
 }
 
-func (t tolerance) of(ref float64) float64 {
+// at returns the tolerance for booklet value ref (B for a TCG) and its
+// basis as an officer reads it: "2 % of Δ", "5 cm cap".
+func (t tolerance) at(ref float64) (float64, string) {
 	v := t.pct / 100 * math.Abs(ref)
-	if t.capM > 0 {
-		v = math.Min(v, t.capM)
+	basis := fmt.Sprintf("%g %% of %s", t.pct, t.of)
+	if t.capM > 0 && v > t.capM {
+		v = t.capM
+		basis = fmt.Sprintf("%g cm cap", t.capM*100)
 	}
-	return v
+	return v, basis
 }
 
 var hydroTolerances = map[string]tolerance{
-	"displacement_t": {2, 0, "MSC.1/Circ.1229: displacement 2 %"},
-	"lcb_m":          {1, 0.5, "MSC.1/Circ.1229: LCB 1 % / 50 cm"},
-	"vcb_m":          {1, 0.05, "MSC.1/Circ.1229: VCB 1 % / 5 cm"},
-	"lcf_m":          {1, 0.5, "MSC.1/Circ.1229: LCF 1 % / 50 cm"},
-	"tpc_t":          {2, 0, "as displacement, 2 % (practice: no figure of its own)"},
-	"mct_tm":         {2, 0, "MSC.1/Circ.1229: MCT 2 %"},
-	"kmt_m":          {1, 0.05, "MSC.1/Circ.1229: KMT 1 % / 5 cm"},
-	"kml_m":          {1, 0.5, "MSC.1/Circ.1229: KML 1 % / 50 cm"},
+	"displacement_t": {2, 0, "Δ"},
+	"lcb_m":          {1, 0.5, "LCB"},
+	"vcb_m":          {1, 0.05, "KB"},
+	"lcf_m":          {1, 0.5, "LCF"},
+	"tpc_t":          {2, 0, "TPC (as Δ)"}, // practice: Circ.1229 gives TPC no figure of its own
+	"mct_tm":         {2, 0, "MCTC"},
+	"kmt_m":          {1, 0.05, "KMT"},
+	"kml_m":          {1, 0.5, "KML"},
 }
 
 var tankTolerances = map[string]tolerance{
-	"volume_m3": {2, 0, "MSC.1/Circ.1229: compartment volume 2 %"},
-	"lcg_m":     {1, 0.5, "MSC.1/Circ.1229: compartment LCG 1 % / 50 cm"},
-	"vcg_m":     {1, 0.05, "MSC.1/Circ.1229: compartment VCG 1 % / 5 cm"},
-	// tcg_m: 0.5 % of the breadth, at most 5 cm (set per vessel).
+	"volume_m3": {2, 0, "volume"},
+	"lcg_m":     {1, 0.5, "LCG"},
+	"tcg_m":     {0.5, 0.05, "B"}, // of the ship's breadth, not of the TCG
+	"vcg_m":     {1, 0.05, "VCG"},
+}
+
+// quantityUnits are the units of verify's columns, as the booklet gives them.
+var quantityUnits = map[string]string{
+	"displacement_t": "t", "tpc_t": "t/cm", "mct_tm": "t·m/cm", "volume_m3": "m³",
+}
+
+// unitOf returns the unit of column q.
+func unitOf(q string) string {
+	if u, ok := quantityUnits[q]; ok {
+		return u
+	}
+	return "m"
 }
 
 // verifyRow is one value checked, as the JSON shows it.
@@ -85,155 +115,144 @@ type verifyRow struct {
 	Deviation *float64 `json:"deviation"`
 	Tolerance float64  `json:"tolerance"`
 	Pass      bool     `json:"pass"`
-	Note      string   `json:"note,omitempty"`
+	Unit      string   `json:"unit"`            // of booklet, model, deviation and tolerance
+	Basis     string   `json:"tolerance_basis"` // "2 % of Δ", "5 cm cap"
 }
 
-// csvTable is a CSV file read: its header and rows, with their lines.
-type csvTable struct {
-	file   string
-	header []string
-	rows   [][]string
-	lines  []int
-}
+// tankColumns are the columns of the tanks table verify reads.
+var tankColumns = []string{"name", "volume_m3", "lcg_m", "tcg_m", "vcg_m"}
 
-func readCSV(path string) (*csvTable, error) {
-	f, err := os.Open(path)
-	if err != nil {
+// verifyHydrostatics compares the booklet's hydrostatic table t with the
+// model, row by row. Every problem of the table is returned at once.
+func verifyHydrostatics(v *engine.Vessel, t *bookletCSV) ([]verifyRow, error) {
+	if err := t.columns("draft_m", hydroColumns); err != nil {
 		return nil, err
 	}
-	defer f.Close()
-	r := csv.NewReader(f)
-	r.FieldsPerRecord = -1
-	r.TrimLeadingSpace = true
-	t := &csvTable{file: path}
-	for {
-		rec, err := r.Read()
-		if err == io.EOF {
-			break
-		}
-		if err != nil {
-			return nil, fmt.Errorf("%s: %v", path, err)
-		}
-		line, _ := r.FieldPos(0)
-		if t.header == nil {
-			for _, h := range rec {
-				t.header = append(t.header, strings.TrimSpace(h))
-			}
-			continue
-		}
-		if len(rec) == 1 && strings.TrimSpace(rec[0]) == "" {
-			continue
-		}
-		if len(rec) != len(t.header) {
-			return nil, fmt.Errorf("%s:%d: %d fields, the header has %d", path, line, len(rec), len(t.header))
-		}
-		t.rows = append(t.rows, rec)
-		t.lines = append(t.lines, line)
-	}
-	if t.header == nil {
-		return nil, fmt.Errorf("%s: empty: give a header row and one row per value", path)
-	}
-	return t, nil
-}
-
-// columns checks the header: first must come first, the rest be known.
-func (t *csvTable) columns(first string, known map[string]tolerance, extra ...string) error {
-	if len(t.header) == 0 || t.header[0] != first {
-		return fmt.Errorf("%s:1: the first column must be %s", t.file, first)
-	}
-	seen := map[string]bool{}
-	for _, h := range t.header[1:] {
-		_, ok := known[h]
-		for _, e := range extra {
-			ok = ok || h == e
-		}
-		if !ok || seen[h] {
-			return fmt.Errorf("%s:1: column %q is unknown or repeated", t.file, h)
-		}
-		seen[h] = true
-	}
-	return nil
-}
-
-func (t *csvTable) number(i, j int) (float64, error) {
-	x, err := strconv.ParseFloat(strings.TrimSpace(t.rows[i][j]), 64)
-	if err != nil || math.IsNaN(x) || math.IsInf(x, 0) {
-		return 0, fmt.Errorf("%s:%d: %s: %q is not a number", t.file, t.lines[i], t.header[j], t.rows[i][j])
-	}
-	return x, nil
-}
-
-func verifyHydrostatics(v *engine.Vessel, t *csvTable) ([]verifyRow, error) {
-	if err := t.columns("draft_m", hydroTolerances); err != nil {
-		return nil, err
-	}
+	hr := hydroRangeOf(v.Hull)
 	var out []verifyRow
+	var problems, outside []error
+	lineOf := map[float64]int{}
 	for i := range t.rows {
-		T, err := t.number(i, 0)
+		T, err := t.number(i, 0, fmt.Sprintf("row %d", i+1))
 		if err != nil {
-			return nil, err
+			problems = append(problems, err)
+			continue
 		}
-		r, herr := engine.Hydrostatics(v.Hull, v.WaterDensity, T)
+		if l, ok := lineOf[T]; ok {
+			problems = append(problems, fmt.Errorf("%s:%d: draft_m: %g m again: line %d gives the same draft; give each draft once", t.file, t.lines[i], T, l))
+			continue
+		}
+		lineOf[T] = t.lines[i]
+		row := fmt.Sprintf("the row of draft %g m", T)
+		var booklet []float64
+		for j := range t.header[1:] {
+			b, err := t.number(i, j+1, row)
+			if err != nil {
+				problems = append(problems, err)
+			}
+			booklet = append(booklet, b)
+		}
+		if why := hr.refusal(T); why != "" {
+			outside = append(outside, fmt.Errorf("%s:%d: draft_m: %s", t.file, t.lines[i], why))
+			continue
+		}
+		r, herr := hydrostaticsAt(v, hr, T)
+		if herr != nil {
+			outside = append(outside, fmt.Errorf("%s:%d: draft_m: %g m: %v", t.file, t.lines[i], T, herr))
+			continue
+		}
 		model := map[string]float64{}
 		for k, c := range hydroColumns {
 			model[c] = hydroValues(r)[k]
 		}
 		for j, q := range t.header[1:] {
-			b, err := t.number(i, j+1)
-			if err != nil {
-				return nil, err
-			}
-			row := verifyRow{Table: "hydrostatics", Key: T, Quantity: q, Booklet: b, Tolerance: hydroTolerances[q].of(b)}
-			if herr != nil {
-				row.Note = herr.Error()
-			} else {
-				m := model[q]
-				d := b - m
-				row.Model, row.Deviation = &m, &d
-				row.Pass = math.Abs(d) <= row.Tolerance
-			}
-			out = append(out, row)
+			b, m := booklet[j], model[q]
+			d := b - m
+			tl, basis := hydroTolerances[q].at(b)
+			out = append(out, verifyRow{Table: "hydrostatics", Key: T, Quantity: q, Booklet: b, Model: &m, Deviation: &d,
+				Tolerance: tl, Pass: math.Abs(d) <= tl, Unit: unitOf(q), Basis: basis})
 		}
+	}
+	if len(outside) > 0 {
+		outside = append(outside, fmt.Errorf("%s: heelwatch works %s's hydrostatics at drafts %s; leave out the rows beyond (heelwatch tables prints this range)", t.file, v.Name, hr.why()))
+	}
+	if err := errors.Join(append(problems, outside...)...); err != nil {
+		return nil, err
 	}
 	return out, nil
 }
 
-func verifyTanks(v *engine.Vessel, t *csvTable) ([]verifyRow, error) {
-	tol := map[string]tolerance{}
-	for k, x := range tankTolerances {
-		tol[k] = x
-	}
-	if err := t.columns("name", tol, "tcg_m"); err != nil {
+// verifyTanks compares the booklet's table of tanks full t with the model.
+// Every problem of the table is returned at once.
+func verifyTanks(v *engine.Vessel, t *bookletCSV) ([]verifyRow, error) {
+	if err := t.columns("name", tankColumns); err != nil {
 		return nil, err
 	}
-	tcg := math.Min(0.005*v.Hull.BreadthM, 0.05)
 	full := map[string]tankFull{}
+	var names []string
 	for _, f := range fullTanks(v) {
 		full[strings.ToLower(f.Name)] = f
+		names = append(names, f.Name)
 	}
 	var out []verifyRow
+	var problems []error
+	unknown := false
+	lineOf := map[string]int{}
 	for i, rec := range t.rows {
 		name := strings.TrimSpace(rec[0])
 		f, ok := full[strings.ToLower(name)]
 		if !ok {
-			return nil, fmt.Errorf("%s:%d: name: %q is not a tank of %s (a compartment with use \"tank\")", t.file, t.lines[i], name, v.Name)
+			problems = append(problems, fmt.Errorf("%s:%d: name: %s", t.file, t.lines[i], notATank(v, name, names)))
+			unknown = true
+			continue
 		}
+		if l, ok := lineOf[strings.ToLower(name)]; ok {
+			problems = append(problems, fmt.Errorf("%s:%d: name: %s again: line %d gives the same tank; give each tank once", t.file, t.lines[i], f.Name, l))
+			continue
+		}
+		lineOf[strings.ToLower(name)] = t.lines[i]
 		model := map[string]float64{"volume_m3": f.VolumeM3, "lcg_m": f.LCGM, "tcg_m": f.TCGM, "vcg_m": f.VCGM}
 		for j, q := range t.header[1:] {
-			b, err := t.number(i, j+1)
+			b, err := t.number(i, j+1, "the row of "+f.Name)
 			if err != nil {
-				return nil, err
+				problems = append(problems, err)
+				continue
 			}
-			tl := tcg
-			if q != "tcg_m" {
-				tl = tol[q].of(b)
+			ref := b
+			if q == "tcg_m" {
+				ref = v.Hull.BreadthM
 			}
+			tl, basis := tankTolerances[q].at(ref)
 			m := model[q]
 			d := b - m
-			out = append(out, verifyRow{Table: "tanks", Key: f.Name, Quantity: q, Booklet: b, Model: &m, Deviation: &d, Tolerance: tl, Pass: math.Abs(d) <= tl})
+			out = append(out, verifyRow{Table: "tanks", Key: f.Name, Quantity: q, Booklet: b, Model: &m, Deviation: &d,
+				Tolerance: tl, Pass: math.Abs(d) <= tl, Unit: unitOf(q), Basis: basis})
 		}
 	}
+	if unknown {
+		list := "she has no tanks (compartments with use \"tank\")"
+		if len(names) > 0 {
+			list = "her tanks (names ignore case) are: " + strings.Join(names, ", ")
+		}
+		problems = append(problems, fmt.Errorf("%s: %s", t.file, list))
+	}
+	if err := errors.Join(problems...); err != nil {
+		return nil, err
+	}
 	return out, nil
+}
+
+// notATank says why name is not one of v's tanks, with the nearest tank's
+// name when it looks like a typing slip.
+func notATank(v *engine.Vessel, name string, tanks []string) string {
+	if i, ok := compartmentNamed(v, name); ok {
+		return fmt.Sprintf("%q is a compartment of %s with use %q, not a tank (use \"tank\")", v.Compartments[i].Name, v.Name, v.Compartments[i].Use)
+	}
+	msg := fmt.Sprintf("%q is not a tank of %s", name, v.Name)
+	if c := vessels.Closest(name, tanks); c != "" {
+		msg += fmt.Sprintf(": did you mean %q?", c)
+	}
+	return msg
 }
 
 func runVerify(args []string, stdout, stderr io.Writer) int {
@@ -265,14 +284,14 @@ func runVerify(args []string, stdout, stderr io.Writer) int {
 		return status
 	}
 	var rows []verifyRow
-	ht, err := readCSV(*hydro)
+	ht, err := readBookletCSV(*hydro)
 	if err == nil {
 		rows, err = verifyHydrostatics(v, ht)
 	}
 	if err == nil && *tanks != "" {
-		var tt *csvTable
+		var tt *bookletCSV
 		var tr []verifyRow
-		if tt, err = readCSV(*tanks); err == nil {
+		if tt, err = readBookletCSV(*tanks); err == nil {
 			tr, err = verifyTanks(v, tt)
 			rows = append(rows, tr...)
 		}
@@ -286,13 +305,7 @@ func runVerify(args []string, stdout, stderr io.Writer) int {
 		}
 		return exitInput
 	}
-	pass, failed := true, 0
-	for _, r := range rows {
-		if !r.Pass {
-			pass = false
-			failed++
-		}
-	}
+	sum := summariseVerify(rows)
 	if *format == "json" {
 		enc := json.NewEncoder(stdout)
 		enc.SetIndent("", "  ")
@@ -300,38 +313,21 @@ func runVerify(args []string, stdout, stderr io.Writer) int {
 			Vessel string      `json:"vessel"`
 			Rows   []verifyRow `json:"rows"`
 			Pass   bool        `json:"pass"`
-		}{v.Name, rows, pass})
+			Passed int         `json:"passed"`
+			Failed int         `json:"failed"`
+		}{v.Name, rows, sum.pass(), sum.passed, len(sum.failed)})
 	} else {
-		tw := tabwriter.NewWriter(stdout, 0, 0, 2, ' ', 0)
-		fmt.Fprintf(tw, "%s — %s against %s\n", v.Name, source(info), *hydro)
-		fmt.Fprintln(tw, "table\tkey\tquantity\tbooklet\tmodel\tdeviation\ttolerance\t")
-		for _, r := range rows {
-			key := fmt.Sprint(r.Key)
-			if T, ok := r.Key.(float64); ok {
-				key = fmt.Sprintf("%.3f m", T)
-			}
-			m, d := "—", "—"
-			if r.Model != nil {
-				m, d = fmt.Sprintf("%.4f", *r.Model), fmt.Sprintf("%+.4f", *r.Deviation)
-			}
-			mark := ""
-			if !r.Pass {
-				mark = "FAIL"
-			}
-			fmt.Fprintf(tw, "%s\t%s\t%s\t%.4f\t%s\t%s\t%.4f\t%s\n", r.Table, key, r.Quantity, r.Booklet, m, d, r.Tolerance, mark)
+		against := *hydro
+		if *tanks != "" {
+			against += " and " + *tanks
 		}
-		if pass {
-			fmt.Fprintf(tw, "all %d values within the MSC.1/Circ.1229 tolerances\n", len(rows))
-		} else {
-			fmt.Fprintf(tw, "%d of %d values beyond the MSC.1/Circ.1229 tolerances: the model does not agree with the booklet there\n", failed, len(rows))
-		}
-		err = tw.Flush()
+		err = writeVerifyText(stdout, fmt.Sprintf("%s — %s against %s", v.Name, source(info), against), rows, sum)
 	}
 	if err != nil {
 		fmt.Fprintln(stderr, "heelwatch verify: writing the result:", err)
 		return exitFailed
 	}
-	if !pass {
+	if !sum.pass() {
 		return exitVerifyFail
 	}
 	return exitOK

@@ -146,7 +146,7 @@ func TestTablesFormats(t *testing.T) {
 		}
 	}
 	code, out, _ := heelwatch(t, "tables", "--vessel", "barge", "--format", "csv", "--table", "capacity")
-	if code != exitOK || !strings.HasPrefix(out, "name,sounding_m,volume_m3,lcg_m,tcg_m,vcg_m,fsm_tm\n") {
+	if code != exitOK || !strings.HasPrefix(out, "name,sounding_m,volume_m3,lcg_m,tcg_m,vcg_m,fsm_tm,density_t_m3\n") {
 		t.Errorf("capacity csv: exit %d\n%s", code, out)
 	}
 }
