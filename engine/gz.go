@@ -70,26 +70,32 @@ func RightingLevers(pr *Problem, eq Position) (*GZCurve, error) {
 	if pr == nil {
 		panic("engine: RightingLevers of a nil problem")
 	}
+	return pr.rightingLevers(eq, nil)
+}
+
+// rightingLevers is RightingLevers with help offered to work the curves'
+// spans (see spanHelp).
+func (pr *Problem) rightingLevers(eq Position, help *spanHelp) (*GZCurve, error) {
 	if math.IsNaN(eq.HeelDeg) || math.Abs(eq.HeelDeg) > gzEndDeg {
 		return nil, fmt.Errorf("equilibrium heel %v° is not a heel the curve can start from", eq.HeelDeg)
 	}
 	switch {
 	case eq.HeelDeg >= uprightDeg:
-		c, _, err := pr.leverCurve(Starboard, eq)
-		return c, err
+		w := pr.leverCurves(eq, []curveAsk{{Starboard, gzStepDeg}}, help)[0]
+		return w.c, w.err
 	case eq.HeelDeg <= -uprightDeg:
-		c, _, err := pr.leverCurve(Port, eq)
-		return c, err
+		w := pr.leverCurves(eq, []curveAsk{{Port, gzStepDeg}}, help)[0]
+		return w.c, w.err
 	}
 	var sb, ps *GZCurve
 	if pr.symmetric() {
-		c, sol, err := pr.leverCurve(Starboard, eq)
-		if err != nil {
-			return nil, err
+		w := pr.leverCurves(eq, []curveAsk{{Starboard, gzStepDeg}}, help)[0]
+		if w.err != nil {
+			return nil, w.err
 		}
-		sb, ps = c, pr.mirrored(c, sol)
+		sb, ps = w.c, pr.mirrored(w.c, w.sol)
 	} else {
-		ws := pr.leverCurves(eq, []curveAsk{{Starboard, gzStepDeg}, {Port, gzStepDeg}})
+		ws := pr.leverCurves(eq, []curveAsk{{Starboard, gzStepDeg}, {Port, gzStepDeg}}, help)
 		for _, w := range ws {
 			if w.err != nil {
 				return nil, w.err
@@ -132,7 +138,7 @@ func (pr *Problem) leverCurve(side Side, eq Position) (*GZCurve, []solvedHeel, e
 
 // leverCurveStep is leverCurve with samples every stepDeg of heel.
 func (pr *Problem) leverCurveStep(side Side, eq Position, stepDeg float64) (*GZCurve, []solvedHeel, error) {
-	w := pr.leverCurves(eq, []curveAsk{{side, stepDeg}})[0]
+	w := pr.leverCurves(eq, []curveAsk{{side, stepDeg}}, nil)[0]
 	return w.c, w.sol, w.err
 }
 

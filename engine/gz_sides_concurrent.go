@@ -27,26 +27,32 @@ func (pr *Problem) fork() *Problem {
 // withOtherSide gives it), the other side worked beside the curve towards
 // her own side.
 func (pr *Problem) leversBothSides(eq Position) (*GZCurve, error) {
+	return pr.leversHelped(eq, nil)
+}
+
+// leversHelped is leversBothSides with help offered to work the curves'
+// spans (see spanHelp).
+func (pr *Problem) leversHelped(eq Position, help *spanHelp) (*GZCurve, error) {
 	h := math.Abs(eq.HeelDeg)
 	if !(h >= uprightDeg && h < NearUprightDeg) {
-		gz, err := RightingLevers(pr, eq)
+		gz, err := pr.rightingLevers(eq, help)
 		if err != nil {
 			return nil, err
 		}
 		return pr.withOtherSide(gz, eq), nil
 	}
-	return pr.leversBeside(eq)
+	return pr.leversBeside(eq, help)
 }
 
-// leversBeside is leversBothSides for a ship heeled within
-// NearUprightDeg: the two sides' curves worked together (leverCurves).
-func (pr *Problem) leversBeside(eq Position) (*GZCurve, error) {
+// leversBeside is leversHelped for a ship heeled within NearUprightDeg:
+// the two sides' curves worked together (leverCurves).
+func (pr *Problem) leversBeside(eq Position, help *spanHelp) (*GZCurve, error) {
 	toward := Starboard
 	if eq.HeelDeg < 0 {
 		toward = Port
 	}
 	// The other side's curve, one long span, is asked first (spanOrder).
-	ws := pr.leverCurves(eq, []curveAsk{{-toward, otherSideStepDeg}, {toward, gzStepDeg}})
+	ws := pr.leverCurves(eq, []curveAsk{{-toward, otherSideStepDeg}, {toward, gzStepDeg}}, help)
 	other, own := ws[0], ws[1]
 	if own.err != nil {
 		return nil, own.err

@@ -13,7 +13,7 @@ func CurvesSplitAndWhole(v *Vessel, d Damage, pos Position) (split, whole []*GZC
 	asks := []curveAsk{{toward, gzStepDeg}, {-toward, otherSideStepDeg}}
 	pr := NewProblem(v, d)
 	for _, starts := range []func(float64) []float64{pr.spanStarts, wholeStarts} {
-		ws := pr.leverCurvesFrom(pos, asks, starts)
+		ws := pr.leverCurvesFrom(pos, asks, starts, nil)
 		var cs []*GZCurve
 		for _, w := range ws {
 			if w.err != nil {
