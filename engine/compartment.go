@@ -28,6 +28,7 @@ type Compartment struct {
 	Sections     []CompartmentSection // nil for a box; else its outlines (compartment_sections.go)
 	pieces       []prismPiece         // the region of a compartment given by sections
 	PumpM3h      float64              // pumping capacity on the compartment, m³/h (0: none given); the righting options' times
+	Pipe         *SoundingPipe        // where the tank is sounded (the vessel file's sounding_pipe); nil: DefaultSoundingPipe (sounding.go)
 
 	solid *Solid
 }
@@ -76,13 +77,15 @@ func clipSolid(s *Solid, b Box) *Solid {
 // inside every one of planes (a convex region of the section, the same
 // all along).
 func clipSlabs(out []slab, s *Solid, x0, x1 float64, planes []halfPlane) []slab {
+	sc := clipScratches.Get().(*clipScratch)
+	defer clipScratches.Put(sc)
 	for i := range s.slabs {
 		sl := &s.slabs[i]
 		xa, xb := math.Max(sl.x0, x0), math.Min(sl.x1, x1)
 		if !(xb > xa) {
 			continue
 		}
-		cuts := []float64{xa, xb}
+		cuts := append(sc.cuts[:0], xa, xb)
 		for k := range sl.p0 {
 			for _, hp := range planes {
 				// d(x) = n·v(x) − k is linear in x.
@@ -94,40 +97,35 @@ func clipSlabs(out []slab, s *Solid, x0, x1 float64, planes []halfPlane) []slab 
 			}
 		}
 		sort.Float64s(cuts)
+		sc.cuts = cuts
 		for j := 1; j < len(cuts); j++ {
-			out = appendClipped(out, sl, planes, cuts[j-1], cuts[j], 0)
+			out = appendClipped(out, sl, planes, cuts[j-1], cuts[j], 0, sc)
 		}
 	}
 	return out
 }
 
-func clipSection(p []Point, planes []halfPlane) ([]Point, uint64) {
-	var sig uint64
-	for _, hp := range planes {
-		var s uint64
-		p, s = clipPolygon(p, hp)
-		sig = sig*31 + s
-	}
-	return p, sig
-}
-
 // appendClipped appends the slabs of sl clipped by planes between xa and xb,
 // splitting the piece where its clipped section changes topology (found by
-// bisection) until each piece keeps one.
-func appendClipped(out []slab, sl *slab, planes []halfPlane, xa, xb float64, depth int) []slab {
+// bisection) until each piece keeps one. sc's buffers are its scratch; the
+// slabs appended own their vertices.
+func appendClipped(out []slab, sl *slab, planes []halfPlane, xa, xb float64, depth int, sc *clipScratch) []slab {
 	if !(xb-xa > 1e-9) {
 		return out
 	}
 	// Clip a little inside the ends so that a vertex lying exactly on a
 	// side at a cut gives the topology of the piece's interior.
 	eps := 1e-7 * (xb - xa)
-	pa, sa := clipSection(sl.section(xa+eps), planes)
-	pb, sb := clipSection(sl.section(xb-eps), planes)
+	pa, sa := sc.clipAt(sc.pa, sl, xa+eps, planes)
+	sc.pa = pa
+	pb, sb := sc.clipAt(sc.pb, sl, xb-eps, planes)
+	sc.pb = pb
 	if sa == sb && len(pa) == len(pb) {
 		if len(pa) >= 3 {
 			// Extend the inset ends linearly back to xa and xb.
 			f := eps / (xb - xa - 2*eps)
-			ea, eb := make([]Point, len(pa)), make([]Point, len(pb))
+			ends := make([]Point, 2*len(pa))
+			ea, eb := ends[:len(pa):len(pa)], ends[len(pa):]
 			for k := range pa {
 				dy, dz := pb[k].Y-pa[k].Y, pb[k].Z-pa[k].Z
 				ea[k] = Point{pa[k].Y - f*dy, pa[k].Z - f*dz}
@@ -138,25 +136,29 @@ func appendClipped(out []slab, sl *slab, planes []halfPlane, xa, xb float64, dep
 		return out
 	}
 	if depth >= 24 {
-		pm, _ := clipSection(sl.section((xa+xb)/2), planes)
+		pm, _ := sc.clipAt(sc.pm, sl, (xa+xb)/2, planes)
+		sc.pm = pm
 		if len(pm) >= 3 {
-			out = append(out, newSlab(xa, xb, pm, pm))
+			own := append([]Point(nil), pm...)
+			out = append(out, newSlab(xa, xb, own, own))
 		}
 		return out
 	}
 	// Find where the topology changes by bisection and split there, so that
 	// each change costs two slabs.
+	na := len(pa)
 	lo, hi := xa+eps, xb-eps
 	for i := 0; i < 60 && hi-lo > 1e-9*(xb-xa); i++ {
 		mid := (lo + hi) / 2
-		pm, sm := clipSection(sl.section(mid), planes)
-		if sm == sa && len(pm) == len(pa) {
+		pm, sm := sc.clipAt(sc.pm, sl, mid, planes)
+		sc.pm = pm
+		if sm == sa && len(pm) == na {
 			lo = mid
 		} else {
 			hi = mid
 		}
 	}
 	xm := (lo + hi) / 2
-	out = appendClipped(out, sl, planes, xa, xm, depth+1)
-	return appendClipped(out, sl, planes, xm, xb, depth+1)
+	out = appendClipped(out, sl, planes, xa, xm, depth+1, sc)
+	return appendClipped(out, sl, planes, xm, xb, depth+1, sc)
 }

@@ -16,14 +16,17 @@ import "math"
 // known (no guess).
 type arc struct{ lo, cnt int }
 
-// dent is a vertex where a slab's section turns right somewhere along the
-// slab (round-off in the offsets, or a hollow): the directions its two
-// edges take along the slab lie within half of mid (radians, atan2 of
-// (dz, dy)).
-type dent struct{ mid, half float64 }
+// dent is a range of directions of a line in the (y, z) plane, lo to hi
+// (radians, taken modulo π into [−π/2, π/2], lo ≤ hi), that a slab's
+// section passes more than once: about a vertex where it turns right
+// somewhere along the slab (round-off in the offsets, or a hollow), the
+// directions its two edges take along the slab. A plane whose direction
+// lies in one is left to the general method.
+type dent struct{ lo, hi float64 }
 
-// maxDents bounds the dents a slab may have and still use the arc walk.
-const maxDents = 8
+// dentMargin widens every dent (radians) so that round-off in the plane's
+// direction does not carry it out of one.
+const dentMargin = 1e-9
 
 // arcSection reports whether the vertices of the slab's polygon (p0 at one
 // end, p1 at the other) below any plane are one arc, except for planes
@@ -42,8 +45,10 @@ const maxDents = 8
 // left to the general method. The turn at vertex k, the cross product of
 // the edges into and out of it, is a quadratic in x: its sign is checked at
 // both ends, midway and at its extremum. A polygon with an edge of no
-// length at either end, that winds other than once, or with more than
-// maxDents dents or one over 0.5 rad, is refused.
+// length at either end, that winds other than once, or with a dent over
+// 0.5 rad, is refused. The dents are returned as sorted, disjoint ranges
+// (addDent), however many there are: the many round-off dents of a long
+// flat side, all about one direction, mostly merge.
 func arcSection(p0, p1 []Point) (bool, []dent) {
 	n := len(p0)
 	if n < 3 || len(p1) != n {
@@ -86,9 +91,6 @@ func arcSection(p0, p1 []Point) (bool, []dent) {
 		if !right {
 			continue
 		}
-		if len(dents) == maxDents {
-			return false, nil
-		}
 		// The directions of both edges at both ends, unwrapped about the
 		// first.
 		e := edge(0, (k+n-1)%n)
@@ -101,50 +103,120 @@ func arcSection(p0, p1 []Point) (bool, []dent) {
 		if hi-lo > 0.5 {
 			return false, nil
 		}
-		dents = append(dents, dent{(lo + hi) / 2, (hi - lo) / 2})
+		dents = addDent(dents, lo-dentMargin, hi+dentMargin)
 	}
 	return true, dents
 }
 
-// dentsHit reports whether a plane at heel phi (radians, atan of its
-// slope C) runs in a direction that one of the dents passes more than once.
-func dentsHit(dents []dent, phi float64) bool {
-	for _, d := range dents {
-		for _, f := range [2]float64{phi, phi + math.Pi} {
-			// f − mid, brought within [−π, π]: both lie within 2π of 0.
-			a := f - d.mid
-			for a > math.Pi {
-				a -= 2 * math.Pi
+// addDent adds the directions lo … hi (radians, hi − lo < π) to the
+// ranges ds, kept sorted and apart: the range is taken modulo π into
+// [−π/2, π/2] (split in two where it passes π/2) and merged with those
+// it overlaps.
+func addDent(ds []dent, lo, hi float64) []dent {
+	l := math.Remainder(lo, math.Pi)
+	h := l + (hi - lo)
+	if h > math.Pi/2 {
+		ds = mergeDent(ds, dent{-math.Pi / 2, h - math.Pi})
+		h = math.Pi / 2
+	}
+	return mergeDent(ds, dent{l, h})
+}
+
+// mergeDent adds d to the sorted, disjoint ranges ds.
+func mergeDent(ds []dent, d dent) []dent {
+	var out []dent
+	placed := false
+	for _, e := range ds {
+		switch {
+		case e.hi < d.lo:
+			out = append(out, e)
+		case d.hi < e.lo:
+			if !placed {
+				out, placed = append(out, d), true
 			}
-			for a < -math.Pi {
-				a += 2 * math.Pi
-			}
-			if math.Abs(a) <= d.half+1e-9 {
-				return true
-			}
+			out = append(out, e)
+		default: // overlap: d takes e in
+			d = dent{math.Min(d.lo, e.lo), math.Max(d.hi, e.hi)}
 		}
 	}
-	return false
+	if !placed {
+		out = append(out, d)
+	}
+	return out
+}
+
+// dentsHit reports whether a plane at heel phi (radians, atan of its
+// slope C, in (−π/2, π/2)) runs in a direction that one of the dents
+// (sorted and apart, as addDent keeps them) passes more than once: a
+// bisection for the first dent that ends at or beyond phi.
+func dentsHit(dents []dent, phi float64) bool {
+	lo, hi := 0, len(dents)
+	for lo < hi {
+		m := int(uint(lo+hi) >> 1)
+		if dents[m].hi < phi {
+			lo = m + 1
+		} else {
+			hi = m
+		}
+	}
+	return lo < len(dents) && dents[lo].lo <= phi
 }
 
 // side tells which vertices findArc looks for: those below the plane
-// z = h0 + c·y (with h1 at the slab's other end) just forward of x0
-// (atEnd false) or just aft of x1 (atEnd true). A vertex on the plane
-// takes the side it goes to.
+// z = h0 + c·y (with h1 at the slab's other end, dx along it) just forward
+// of x0 (atEnd false) or just aft of x1 (atEnd true). A vertex on the
+// plane takes the side it goes to.
 type side struct {
-	p0, p1 []Point
-	c      float64
+	v      []slabVertex
+	dx, c  float64
 	h0, h1 float64
 	atEnd  bool
 }
 
+// heights returns the heights of vertex k above the plane at x0 and x1:
+// z − c·y − h at each end, the vertex at x1 being p + dx·d (the same
+// figures as the slab's p1).
+func (sd *side) heights(k int) (d0, d1 float64) {
+	q := &sd.v[k]
+	y1, z1 := q.at(sd.dx)
+	return q.p.Z - sd.c*q.p.Y - sd.h0, z1 - sd.c*y1 - sd.h1
+}
+
 func (sd *side) below(k int) bool {
-	d0 := sd.p0[k].Z - sd.c*sd.p0[k].Y - sd.h0
-	d1 := sd.p1[k].Z - sd.c*sd.p1[k].Y - sd.h1
+	d0, d1 := sd.heights(k)
 	if sd.atEnd {
 		d0, d1 = d1, d0
 	}
 	return d0 < 0 || d0 == 0 && d1 < 0
+}
+
+// holds reports whether the arc g (0 < g.cnt < n) is the arc below at both
+// ends of the slab: its end vertices below and their outer neighbours not,
+// just forward of x0 and just aft of x1. Then no vertex crosses the plane
+// inside the slab (the vertices below are one arc at each end: see
+// arcSection). A vertex is below at both ends when its heights there are
+// d0, d1 ≤ 0, not both 0; above at both when d0, d1 ≥ 0.
+func (sd *side) holds(g arc, n int) bool {
+	lo, hi := g.lo, g.lo+g.cnt-1
+	if hi >= n {
+		hi -= n
+	}
+	before, after := lo-1, hi+1
+	if before < 0 {
+		before = n - 1
+	}
+	if after == n {
+		after = 0
+	}
+	below := func(k int) bool {
+		d0, d1 := sd.heights(k)
+		return d0 <= 0 && d1 <= 0 && (d0 < 0 || d1 < 0)
+	}
+	above := func(k int) bool {
+		d0, d1 := sd.heights(k)
+		return d0 >= 0 && d1 >= 0
+	}
+	return below(lo) && above(before) && below(hi) && above(after)
 }
 
 // findArc returns the arc of vertices below (see side), walking from the
@@ -201,18 +273,44 @@ func findArc(sd *side, n int, g arc) arc {
 	return arc{lo, (hi-lo+n)%n + 1}
 }
 
+// crossings appends to roots the vertices k, k+1, …, k+m−1 (mod n, with
+// 0 ≤ k < n) that cross the plane inside the slab: those whose heights at
+// the two ends, d0 and d1, have strictly opposite signs, at
+// x = x0 + (x1 − x0)·d0/(d0 − d1).
+func (s *slab) crossings(sd *side, k, m int, roots []cutRoot) []cutRoot {
+	n := len(s.p0)
+	dx := s.x1 - s.x0
+	for i := 0; i < m; i++ {
+		d0, d1 := sd.heights(k)
+		if (d0 < 0 && d1 > 0) || (d0 > 0 && d1 < 0) {
+			roots = append(roots, cutRoot{s.x0 + dx*d0/(d0-d1), k, d0 < 0})
+		}
+		if k++; k == n {
+			k = 0
+		}
+	}
+	return roots
+}
+
 // belowConvex is belowChains for a convex slab, from the guess g of the
 // arc at x0; it returns the arcs found at x0 and x1 (the next guesses for
 // this slab and the one forward of it), and false
 // (nothing added) when the vertices' crossings do not keep one arc, which
 // convexity rules out but round-off might not.
+//
+// Most often the guess is the arc at both ends (holds: four vertices
+// looked at) and the slab is one piece.
 func (s *slab) belowConvex(p Plane, im *Immersion, g arc, roots []cutRoot) (a0, a1 arc, ok bool) {
 	n := len(s.p0)
-	dx := s.x1 - s.x0
 	h0, h1 := p.A+p.B*s.x0, p.A+p.B*s.x1
-	p0, p1 := s.p0[:n], s.p1[:n]
 	// Sides just forward of x0 and just aft of x1.
-	sd := side{p0: p0, p1: p1, c: p.C, h0: h0, h1: h1}
+	sd := side{v: s.v[:n], dx: s.x1 - s.x0, c: p.C, h0: h0, h1: h1}
+	if g.cnt > 0 && g.cnt < n && g.lo >= 0 && g.lo < n && sd.holds(g, n) {
+		if s.x1-s.x0 > 1e-12*(1+math.Abs(s.x1)) {
+			s.pieceArc(p, s.x0, s.x1, g, im)
+		}
+		return g, g, true
+	}
 	a0 = findArc(&sd, n, g)
 	sd.atEnd = true
 	a1 = findArc(&sd, n, a0)
@@ -220,20 +318,6 @@ func (s *slab) belowConvex(p Plane, im *Immersion, g arc, roots []cutRoot) (a0, 
 	// starts and between their ends; when the arcs do not overlap (or one
 	// is empty or whole) every vertex is looked at.
 	roots = roots[:0]
-	root := func(k int) {
-		a := p0[k].Z - p.C*p0[k].Y - h0
-		b := p1[k].Z - p.C*p1[k].Y - h1
-		if (a < 0 && b > 0) || (a > 0 && b < 0) {
-			roots = append(roots, cutRoot{s.x0 + dx*a/(a-b), k})
-		}
-	}
-	cyc := func(d int) int { // d reduced to (−n/2, n/2]
-		d = ((d % n) + n) % n
-		if d > n/2 {
-			d -= n
-		}
-		return d
-	}
 	if a0.cnt == 0 || a1.cnt == 0 || a0.cnt == n || a1.cnt == n {
 		if a0 == a1 && (a0.cnt == 0 || a0.cnt == n) {
 			if a0.cnt == n {
@@ -241,30 +325,22 @@ func (s *slab) belowConvex(p Plane, im *Immersion, g arc, roots []cutRoot) (a0, 
 			}
 			return a0, a1, true
 		}
-		for k := 0; k < n; k++ {
-			root(k)
-		}
+		roots = s.crossings(&sd, 0, n, roots)
 	} else {
-		dlo := cyc(a1.lo - a0.lo)
-		dhi := cyc((a1.lo + a1.cnt) - (a0.lo + a0.cnt))
+		dlo := cyc(a1.lo-a0.lo, n)
+		dhi := cyc((a1.lo+a1.cnt)-(a0.lo+a0.cnt), n)
 		if abs(dlo)+abs(dhi) >= min(a0.cnt, a1.cnt) {
-			for k := 0; k < n; k++ {
-				root(k)
-			}
+			roots = s.crossings(&sd, 0, n, roots)
 		} else {
-			for k, i := min(a0.lo, a0.lo+dlo), 0; i < abs(dlo); k, i = k+1, i+1 {
-				root(((k % n) + n) % n)
-			}
+			// From the earlier of the two starts, and of the two ends.
+			roots = s.crossings(&sd, mod(min(a0.lo, a0.lo+dlo), n), abs(dlo), roots)
 			e0 := a0.lo + a0.cnt
-			for k, i := min(e0, e0+dhi), 0; i < abs(dhi); k, i = k+1, i+1 {
-				root(((k % n) + n) % n)
-			}
+			roots = s.crossings(&sd, mod(min(e0, e0+dhi), n), abs(dhi), roots)
 		}
 	}
 	sortRoots(roots)
 	var part Immersion
 	cur := a0
-	var ch [1]chain
 	xa := s.x0
 	for i := 0; i <= len(roots); i++ {
 		xb := s.x1
@@ -272,12 +348,7 @@ func (s *slab) belowConvex(p Plane, im *Immersion, g arc, roots []cutRoot) (a0, 
 			xb = roots[i].x
 		}
 		if xb-xa > 1e-12*(1+math.Abs(xb)) {
-			var chains []chain
-			if cur.cnt > 0 && cur.cnt < n {
-				ch[0] = chain{(cur.lo + n - 1) % n, (cur.lo + cur.cnt - 1) % n}
-				chains = ch[:]
-			}
-			s.pieceChains(p, xa, xb, cur.cnt, chains, &part)
+			s.pieceArc(p, xa, xb, cur, &part)
 			xa = xb
 		}
 		if i < len(roots) {
@@ -290,6 +361,133 @@ func (s *slab) belowConvex(p Plane, im *Immersion, g arc, roots []cutRoot) (a0, 
 	im.add(part, 1)
 	return a0, a1, true
 }
+
+// pieceArc integrates [xa, xb], along which the vertices below the plane
+// are the arc a, adding to im: pieceChains for its one chain, which
+// enters on edge in = lo − 1 (v_in above, v_lo below), follows the whole
+// edges lo … out−1 and leaves on edge out = lo + cnt − 1.
+//
+// At a Gauss node x the section below is the polygon entry point → v_lo →
+// … → v_out → exit point → entry point. Its shoelace terms (area 2A = Σ
+// y_k z_k+1 − y_k+1 z_k, and that cross product times y_k + y_k+1 and
+// times z_k + z_k+1, 6·A·ȳ and 6·A·z̄) are the whole edges' prefix
+// polynomials (a run of prefix sums, as runAt), formed once for the
+// piece, plus the two cut edges and the waterline. The waterline, from the
+// exit at y_o to the entry at y_i, adds the waterplane's breadth y_o − y_i
+// and its moments (y_o² − y_i²)/2 and (y_o³ − y_i³)/3 at x.
+func (s *slab) pieceArc(p Plane, xa, xb float64, a arc, im *Immersion) {
+	n := len(s.p0)
+	if a.cnt <= 0 || a.cnt >= n {
+		s.pieceChains(p, xa, xb, max(a.cnt, 0), nil, im)
+		return
+	}
+	lo, out := a.lo, a.lo+a.cnt-1
+	in, after := lo-1, out+1
+	if in < 0 {
+		in += n
+	}
+	if out >= n {
+		out -= n
+	}
+	if after >= n {
+		after -= n
+	}
+	// The whole edges lo … out−1: pre[j] − pre[i] (+ pre[n] when the run
+	// passes the base), coefficient by coefficient.
+	var r edgePoly
+	if lo != out {
+		pre := s.pre[:n+1]
+		i, j := lo-s.base, out-s.base
+		if i < 0 {
+			i += n
+		}
+		if j < 0 {
+			j += n
+		}
+		h, l := &pre[j], &pre[i]
+		r.a = [3]float64{h.a[0] - l.a[0], h.a[1] - l.a[1], h.a[2] - l.a[2]}
+		r.sy = [4]float64{h.sy[0] - l.sy[0], h.sy[1] - l.sy[1], h.sy[2] - l.sy[2], h.sy[3] - l.sy[3]}
+		r.sz = [4]float64{h.sz[0] - l.sz[0], h.sz[1] - l.sz[1], h.sz[2] - l.sz[2], h.sz[3] - l.sz[3]}
+		if i > j {
+			r.add(&pre[n], 1)
+		}
+	}
+	vs := s.v[:n]
+	vk, vj, vu, vv := &vs[in], &vs[lo], &vs[out], &vs[after]
+	dx := xb - xa
+	// The sums are kept as twice the area and six times the moments (the
+	// shoelace terms as they come) and three times the second moment of
+	// the waterline, and divided once for the piece.
+	var v2, mx2, my6, mz6, aw, sx, sy2, ixx, ixy2, iyy3 float64
+	for g := range gaussNode {
+		x := xa + gaussNode[g]*dx
+		w := gaussWeight[g] * dx
+		sg := x - s.x0
+		h := p.A + p.B*x
+		a2, sy6, sz6 := r.eval(sg)
+		// The cut edges' ends and their heights above the plane: edge in
+		// from k to j, edge out from u to v. The waterline crosses them at
+		// the fractions dk/(dk − dj) and du/(du − dv).
+		ky, kz := vk.at(sg)
+		jy, jz := vj.at(sg)
+		uy, uz := vu.at(sg)
+		vy, vz := vv.at(sg)
+		dk, dj := kz-p.C*ky-h, jz-p.C*jy-h
+		du, dv := uz-p.C*uy-h, vz-p.C*vy-h
+		ti, to := dk/(dk-dj), du/(du-dv)
+		// Entry point, and the edge entry → v_lo.
+		iy, iz := ky+ti*(jy-ky), kz+ti*(jz-kz)
+		cr := iy*jz - jy*iz
+		a2 += cr
+		sy6 += (iy + jy) * cr
+		sz6 += (iz + jz) * cr
+		// Exit point, and the edge v_out → exit.
+		oy, oz := uy+to*(vy-uy), uz+to*(vz-uz)
+		cr = uy*oz - oy*uz
+		a2 += cr
+		sy6 += (uy + oy) * cr
+		sz6 += (uz + oz) * cr
+		// The waterline, exit → entry.
+		cr = oy*iz - iy*oz
+		a2 += cr
+		sy6 += (oy + iy) * cr
+		sz6 += (oz + iz) * cr
+		iy2, oy2 := iy*iy, oy*oy
+		W := oy - iy
+		v2 += w * a2
+		mx2 += w * x * a2
+		my6 += w * sy6
+		mz6 += w * sz6
+		aw += w * W
+		sx += w * x * W
+		sy2 += w * (oy2 - iy2)
+		ixx += w * x * x * W
+		ixy2 += w * x * (oy2 - iy2)
+		iyy3 += w * (oy2*oy - iy2*iy)
+	}
+	im.V += v2 / 2
+	im.MX += mx2 / 2
+	im.MY += my6 / 6
+	im.MZ += mz6 / 6
+	im.AW += aw
+	im.SX += sx
+	im.SY += sy2 / 2
+	im.IXX += ixx
+	im.IXY += ixy2 / 2
+	im.IYY += iyy3 / 3
+}
+
+// cyc returns d reduced modulo n to (−n/2, n/2].
+func cyc(d, n int) int {
+	d = mod(d, n)
+	if d > n/2 {
+		d -= n
+	}
+	return d
+}
+
+// mod returns d modulo n in [0, n).
+func mod(d, n int) int { return ((d % n) + n) % n }
 
 // flip returns the arc with vertex k moved to the other side of the plane;
 // false when k is neither next to the arc nor at one of its ends.

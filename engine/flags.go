@@ -10,10 +10,13 @@ import (
 // carries the figures (which side, where, which opening, by how much).
 //
 //	code                  severity         raised when                                   what it tells the officer
-//	past-small-angles     caution          the hand and direct answers part: heel by      the quick hand answer no longer describes her;
-//	                                       more than 0.5° or a centreline draft by more   work from the direct solution
-//	                                       than 1 % of the mean draft; with no hand
-//	                                       answer, a heel beyond 10°
+//	past-small-angles     caution/danger   the hand and direct answers part: heel by      the quick hand answer no longer describes her
+//	                                       more than 0.5° or a centreline draft by more   (the message says what parts: heel, trim or
+//	                                       than 1 % of the mean draft; with no hand       mean draft); work from the direct solution.
+//	                                       answer, a heel beyond 10°. Danger when the     Danger: the hand heel and drafts are not
+//	                                       hand answer is beyond the method's range       usable at all (a caveat of the method, not
+//	                                       (HandWorking.Unusable: heel > 20°, dropped     of the ship: Flag.AboutHandMethod)
+//	                                       wall-sided term > ¼ GM, or GM < 0.05 m)
 //	deck-edge-immersed    danger           the least freeboard to the deck at side is     water on deck (side, place, depth); the righting
 //	                                       below zero                                     lever falls off from here
 //	margin-line-immersed  danger           the margin line is under water                 past the limit the subdivision was laid out for
@@ -78,6 +81,17 @@ const (
 	FlagLittleStability    = "little-stability"
 	FlagDeckEdgeNear       = "deck-edge-near"
 )
+
+// AboutHandMethod reports whether f is a caveat of the hand method rather
+// than a flag about the ship: past-small-angles (the hand answer parts from
+// the direct one, or is not usable) and not-wall-sided (the hull is not
+// what the hand method and the wall-sided formula assume). They say how far
+// to trust a method, not that the ship is worse off, so a word for the
+// ship's state (the dashboard's header, `ship_severity` in JSON) leaves
+// them out.
+func (f Flag) AboutHandMethod() bool {
+	return f.Code == FlagPastSmallAngles || f.Code == FlagNotWallSided
+}
 
 // Thresholds of the flags.
 const (
@@ -232,16 +246,19 @@ func flags(v *Vessel, d Damage, pos *Position, noEq *NoEquilibrium, hand *HandWo
 		dd := math.Max(math.Abs(hand.DraftAftM-pos.DraftAftM), math.Max(math.Abs(hand.DraftFwdM-pos.DraftFwdM), math.Abs(hand.DraftMidM-pos.DraftMidM))) / mean
 		coupled := math.Abs(hand.CoupledHeelDeg-pos.HeelDeg) <= FlagHeelPartDeg &&
 			math.Abs(hand.CoupledTrimM-pos.TrimM) <= FlagDraftPart*mean
+		parts, cause := handParts(hand, pos, dh, dd, L)
 		switch {
+		case !hand.Usable():
+			add(FlagPastSmallAngles, Danger, "The hand answer is not usable here: %s. Its heel (%s, against %s direct) and its drafts (aft %.3f m, forward %.3f m, against %.3f m and %.3f m direct) are beyond the method: work from the direct solution.",
+				hand.Unusable(), heelWords(hand.HeelDeg), heelWords(pos.HeelDeg), hand.DraftAftM, hand.DraftFwdM, pos.DraftAftM, pos.DraftFwdM)
 		case !(dh > FlagHeelPartDeg || dd > FlagDraftPart):
-		case coupled:
+		case coupled && dh > FlagHeelPartDeg:
 			// The angles are small; what parts them is the coupling of heel
 			// and trim through the waterplane's product of inertia.
-			add(FlagPastSmallAngles, Caution, "The hand method and the direct solution part: heel %s against %s (%.2f° apart), drafts up to %.1f %% apart. The damage is off the centreline and off midships together, so heel and trim work on each other, which the plain hand method leaves out; kept in, the hand working gives %s and %.2f m trim, as the direct solution does. Work from the direct solution.",
-				heelWords(hand.HeelDeg), heelWords(pos.HeelDeg), dh, 100*dd, heelWords(hand.CoupledHeelDeg), hand.CoupledTrimM)
+			add(FlagPastSmallAngles, Caution, "The hand method and the direct solution part: %s. The damage is off the centreline and off midships together, so heel and trim work on each other, which the plain hand method leaves out; kept in, the hand working gives %s and %.2f m trim, as the direct solution does. Work from the direct solution.",
+				parts, heelWords(hand.CoupledHeelDeg), hand.CoupledTrimM)
 		default:
-			add(FlagPastSmallAngles, Caution, "The hand method and the direct solution part: heel %s against %s (%.2f° apart), drafts up to %.1f %% apart. She is beyond the small angles the hand method assumes: work from the direct solution.",
-				heelWords(hand.HeelDeg), heelWords(pos.HeelDeg), dh, 100*dd)
+			add(FlagPastSmallAngles, Caution, "The hand method and the direct solution part: %s. %s: work from the direct solution.", parts, cause)
 		}
 	} else if math.Abs(pos.HeelDeg) > FlagLargeHeelDeg {
 		add(FlagPastSmallAngles, Caution, "She lies at %s, beyond the %.0f° where small-angle hand methods hold: work from the direct solution and expect the righting lever to change quickly with more heel.",
@@ -549,4 +566,53 @@ func UprightGM(v *Vessel, d Damage, pos *Position) (gm float64, ok bool) {
 		return 0, false
 	}
 	return pr.uprightAt(pl), true
+}
+
+// handParts says in words what parts the hand answer from the direct one
+// (the heel, the drafts, and whether the drafts part through the trim or
+// the mean draft), and the cause that goes with it. dh is the heels'
+// difference in degrees, dd the largest draft difference over the mean
+// draft; L the length.
+func handParts(hand *HandWorking, pos *Position, dh, dd, L float64) (parts, cause string) {
+	heel := dh > FlagHeelPartDeg
+	var ps []string
+	if heel {
+		ps = append(ps, fmt.Sprintf("the heel by %.2f° (%s by hand against %s direct)", dh, heelWords(hand.HeelDeg), heelWords(pos.HeelDeg)))
+	}
+	// An end draft moves by up to half the trim difference and all of the
+	// mean draft difference: the larger names the cause.
+	byTrim := math.Abs(hand.TrimM-pos.TrimM)/2 >= math.Abs(hand.DraftMidM-pos.DraftMidM)
+	if dd > FlagDraftPart {
+		d := fmt.Sprintf("the drafts by up to %.1f %% of the mean draft", 100*dd)
+		if byTrim {
+			d += fmt.Sprintf(" (trim %s by hand against %s direct)", trimWords(hand.TrimM), trimWords(pos.TrimM))
+		} else {
+			d += fmt.Sprintf(" (mean draft %.3f m by hand against %.3f m direct)", hand.DraftMidM, pos.DraftMidM)
+		}
+		ps = append(ps, d)
+	}
+	if !heel {
+		if a, b := heelWords(hand.HeelDeg), heelWords(pos.HeelDeg); a == b {
+			ps = append(ps, fmt.Sprintf("the heel agrees (%s, both)", a))
+		} else {
+			ps = append(ps, fmt.Sprintf("the heel agrees (%s by hand, %s direct)", a, b))
+		}
+	}
+	parts = ps[0]
+	for i, p := range ps[1:] {
+		if i == len(ps)-2 {
+			parts += " and " + p
+		} else {
+			parts += ", " + p
+		}
+	}
+	switch {
+	case heel:
+		cause = "She is beyond the small angles the hand method assumes"
+	case byTrim:
+		cause = fmt.Sprintf("The hand method takes the trim as a small angle, from the MCTC of the level waterplane; at a trim of %.1f %% of her length the waterplane she floats on is another", 100*math.Abs(pos.TrimM)/L)
+	default:
+		cause = "The hand method sinks her parallel over one waterplane, but her sides are not parallel over that sinkage"
+	}
+	return parts, cause
 }

@@ -126,7 +126,7 @@ func HandMethod(v *Vessel, d Damage) (*HandWorking, error) {
 		// A ship-shaped hull, or a space given by its own outlines (a
 		// hopper tank on a box barge): the working from the hull's own
 		// hydrostatics, which on a box with box spaces is the same.
-		return handShip(v, d) // hand_ship.go
+		return markUsable(handShip(v, d)) // hand_ship.go
 	}
 	L, B, D := h.LengthM, h.BreadthM, h.DepthM
 	spaces, spilt, spiltT, err := handSpaces(v, d)
@@ -286,7 +286,7 @@ func HandMethod(v *Vessel, d Damage) (*HandWorking, error) {
 
 	// Heel and trim solved together (I_xy kept): for the record.
 	w.handCoupled(iXY, V, L, lever, ld.LCGM)
-	return w, nil
+	return markUsable(w, nil)
 }
 
 // openOutlined reports whether a compartment given by its own outlines is
@@ -525,9 +525,11 @@ func handLollTan(gm, bm, lever float64) float64 {
 
 // handNum formats a figure of the working with about four significant
 // figures and no exponent; negative figures are bracketed so that they read
-// well inside a formula.
+// well inside a formula. A figure that rounds to zero at the finest
+// precision written (six decimals: round-off of sums, as a TCG of 1e-17 m
+// on the centreline) is written 0, without a sign.
 func handNum(x float64) string {
-	if x == 0 {
+	if x == 0 || math.Abs(x) < 5e-7 {
 		return "0"
 	}
 	if math.IsNaN(x) || math.IsInf(x, 0) {

@@ -127,31 +127,41 @@ func NewSectionHull(length float64, stations []Station) (*Hull, error) {
 		h.DepthM = math.Max(h.DepthM, top.Z)
 		h.stations = append(h.stations, Station{X: st.X, Offsets: off})
 	}
-	var slabs []slab
+	// Each slab runs from station aft to station fore. A run of stations
+	// with the same offsets (a parallel middle body) is one prismatic
+	// slab: the same body, integrated in one piece instead of one per
+	// station.
+	var aft, fore []int
 	for i := 1; i < len(h.stations); i++ {
-		// A run of stations with the same offsets (a parallel middle
-		// body) is one prismatic slab: the same body, integrated in one
-		// piece instead of one per station.
 		j := i
 		for j+1 < len(h.stations) && samePoints(h.stations[i-1].Offsets, h.stations[j].Offsets) &&
 			samePoints(h.stations[j].Offsets, h.stations[j+1].Offsets) {
 			j++
 		}
-		a, b := matchStations(h.stations[i-1].Offsets, h.stations[j].Offsets)
-		slabs = append(slabs, newSlab(h.stations[i-1].X, h.stations[j].X, fullSection(a), fullSection(b)))
+		aft, fore = append(aft, i-1), append(fore, j)
 		i = j
 	}
+	// The slabs are independent of one another: built concurrently, each
+	// into its own place.
+	slabs := make([]slab, len(aft))
+	fanOut(len(slabs), func(k int) {
+		sa, sb := h.stations[aft[k]], h.stations[fore[k]]
+		a, b := matchStations(sa.Offsets, sb.Offsets)
+		slabs[k] = newSlab(sa.X, sb.X, fullSection(a), fullSection(b))
+	})
 	h.solid = newSolid(slabs)
 	if !(h.solid.Volume() > 0) {
 		return nil, errors.New("the hull encloses no volume")
 	}
 	const levels = 48
 	_, _, zmin, zmax := h.solid.Extent()
-	for i := 0; i <= levels; i++ {
+	h.levelA = make([]float64, levels+1)
+	h.levelV = make([]float64, levels+1)
+	fanOut(levels+1, func(i int) {
 		a := zmin + (zmax-zmin)*float64(i)/levels
-		h.levelA = append(h.levelA, a)
-		h.levelV = append(h.levelV, h.solid.Below(Plane{A: a}).V)
-	}
+		h.levelA[i] = a
+		h.levelV[i] = h.solid.Below(Plane{A: a}).V
+	})
 	return h, nil
 }
 

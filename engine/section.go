@@ -103,30 +103,5 @@ type halfPlane struct{ ny, nz, k float64 }
 // signature of which vertices were inside, so that two clips of polygons
 // with corresponding vertices can be told to have the same topology.
 func clipPolygon(p []Point, hp halfPlane) ([]Point, uint64) {
-	var out []Point
-	var sig uint64 = 1469598103934665603
-	n := len(p)
-	if n == 0 {
-		return nil, sig
-	}
-	last := p[n-1]
-	dLast := hp.ny*last.Y + hp.nz*last.Z - hp.k
-	for _, cur := range p {
-		dCur := hp.ny*cur.Y + hp.nz*cur.Z - hp.k
-		inLast, inCur := dLast <= 0, dCur <= 0
-		bit := uint64(0)
-		if inCur {
-			bit = 1
-		}
-		sig = (sig ^ bit) * 1099511628211
-		if inLast != inCur {
-			t := dLast / (dLast - dCur)
-			out = append(out, Point{last.Y + t*(cur.Y-last.Y), last.Z + t*(cur.Z-last.Z)})
-		}
-		if inCur {
-			out = append(out, cur)
-		}
-		last, dLast = cur, dCur
-	}
-	return out, sig
+	return clipPolygonInto(nil, p, hp)
 }

@@ -25,19 +25,33 @@ func (p Plane) HeelRad() float64 { return math.Atan(p.C) }
 
 // slab is a piece of a solid between x0 and x1 whose section polygon has
 // vertex k at p0[k] + (x − x0)·dp[k]: a ruled surface.
+//
+// The fields read at every evaluation below a plane come first, and the
+// vertices are also kept as pairs (v) so that the few a cut looks at take
+// one cache line each rather than one per slice: a sweep of a solid is
+// bound by memory as much as by arithmetic.
 type slab struct {
 	x0, x1 float64
-	p0, dp []Point
-	p1     []Point // the vertices at x1, p0 + (x1 − x0)·dp
-	blocks []vertexBlock
-	full   Immersion  // the whole slab, waterplane terms zero
-	pre    []edgePoly // prefix sums of the edges' shoelace polynomials (waterline_cut.go)
 	zmin   float64
 	zmax   float64
 	ymax   float64 // largest |y| of any vertex
 	convex bool    // the vertices below a plane are one arc (convex_cut.go)…
-	dents  []dent  // …unless the plane runs in one of these directions
+	base   int     // the vertex the prefix sums pre start from
+	v      []slabVertex
+	pre    []edgePoly // prefix sums of the edges' shoelace polynomials (waterline_cut.go)
+	dents  []dent     // …unless the plane runs in one of these directions
+
+	p0, dp []Point
+	p1     []Point // the vertices at x1, p0 + (x1 − x0)·dp
+	blocks []vertexBlock
+	full   Immersion // the whole slab, waterplane terms zero
 }
+
+// slabVertex is a vertex of a slab's section: at p + (x − x0)·d.
+type slabVertex struct{ p, d Point }
+
+// at returns the vertex at s = x − x0.
+func (q *slabVertex) at(s float64) (y, z float64) { return q.p.Y + s*q.d.Y, q.p.Z + s*q.d.Z }
 
 // planeSpan returns the lowest and the highest z of plane p over the
 // slab's box (x from x0 to x1, |y| up to ymax): a slab whose lowest point
@@ -66,8 +80,13 @@ func newSlab(x0, x1 float64, a, b []Point) slab {
 		}
 	}
 	s.full = s.integrate(Plane{A: math.Inf(1)}, x0, x1)
-	s.pre = edgePrefix(s.p0, s.dp)
 	s.p1 = s.section(x1)
+	s.base = prefixBase(s.p0, s.p1)
+	s.pre = edgePrefix(s.p0, s.dp, s.base)
+	s.v = make([]slabVertex, len(a))
+	for k := range s.v {
+		s.v[k] = slabVertex{s.p0[k], s.dp[k]}
+	}
 	s.blocks = vertexBlocks(s.p0, s.p1)
 	s.convex, s.dents = arcSection(s.p0, s.p1)
 	return s
@@ -259,6 +278,7 @@ func (s *Solid) belowHinted(p Plane, hints []arc) Immersion {
 		return im
 	}
 	guess := arc{cnt: -1}
+	guessAt, guessN := -1, 0 // the slab guess is meant for, and the vertices of the one it came from
 	phi := math.Atan(p.C)
 	for i := range s.slabs {
 		sl := &s.slabs[i]
@@ -272,15 +292,19 @@ func (s *Solid) belowHinted(p Plane, hints []arc) Immersion {
 			continue
 		}
 		if sl.convex && (len(sl.dents) == 0 || !dentsHit(sl.dents, phi)) {
+			// The best guess is the arc at the end of the slab just
+			// aft, when its section has as many vertices (on a hull,
+			// the same station): the same plane at the same section.
+			// Else the arc of the last evaluation.
 			g := guess
-			if hints != nil && hints[i].cnt >= 0 {
+			if hints != nil && hints[i].cnt >= 0 && (guessAt != i || guessN != len(sl.p0)) {
 				g = hints[i]
 			}
 			if a0, a1, ok := sl.belowConvex(p, &im, g, sc.roots[:0]); ok {
 				if hints != nil {
 					hints[i] = a0
 				}
-				guess = a1
+				guess, guessAt, guessN = a1, i+1, len(sl.p0)
 				continue
 			}
 		}

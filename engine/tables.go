@@ -52,10 +52,10 @@ func Hydrostatics(h *Hull, rho, T float64) (HydroRow, error) {
 	}, nil
 }
 
-// CapacityRow is one line of a tank's capacity table: its contents with
-// the surface level at the sounding, upright and level.
+// CapacityRow is one line of a tank's capacity table: its contents when it
+// sounds SoundingM at its pipe, upright and level.
 type CapacityRow struct {
-	SoundingM  float64 // the surface's height above the tank's lowest point
+	SoundingM  float64 // the sounding at the tank's pipe (Compartment.SoundingPipe): the surface's height above the pipe's datum
 	VolumeM3   float64 // μ × the tank's volume below the surface (its capacity is μ × its volume: conventions)
 	LCGM, TCGM float64 // centre of the contents
 	VCGM       float64
@@ -63,29 +63,55 @@ type CapacityRow struct {
 }
 
 // CapacityTable returns compartment c's capacity table, from empty to full,
-// with the level every stepM metres and at the top, for a liquid of density
-// rho (t/m³; the free-surface moment). Soundings are taken above the
-// tank's lowest point, as a level gauge reads: the pipe's own position is
-// not modelled.
+// with a row every stepM metres of sounding and one at full, for a liquid
+// of density rho (t/m³; the free-surface moment).
+//
+// The sounding is the one a condition's sounding_m is: taken at the
+// tank's pipe (c.SoundingPipe(); a pipe that misses the tank gives way to
+// DefaultSoundingPipe), from the pipe's datum up, so a sounding read off
+// the table and entered in a condition gives the row's contents
+// (SoundingVolumeM3, upright and level). At the default pipe the datum is
+// the tank's lowest point. The table runs to the sounding at which the
+// tank is full (FullSoundingM), which may be above the tank's top at the
+// pipe; a pipe whose datum is above the tank's lowest point cannot see
+// the liquid below its datum, and its row at 0 is empty, as a sounding of
+// 0 is taken.
 func CapacityTable(c *Compartment, rho, stepM float64) []CapacityRow {
 	if !(stepM > 0) {
 		panic("engine: CapacityTable step must be positive")
 	}
 	_, _, zmin, zmax := c.solid.Extent()
+	datum := zmin
+	p := c.SoundingPipe()
+	if d, _, err := c.PipeSpan(p); err == nil {
+		datum = d
+	} else if d, _, err := c.PipeSpan(c.DefaultSoundingPipe()); err == nil {
+		datum = d
+	}
+	top := zmax - datum
 	mu := c.Permeability
+	capM3 := c.CapacityM3()
 	var out []CapacityRow
 	for k := 0; ; k++ {
-		s := math.Min(float64(k)*stepM, zmax-zmin)
-		im := c.solid.Below(Plane{A: zmin + s})
-		row := CapacityRow{SoundingM: s, VolumeM3: mu * im.V}
-		if im.V > 0 {
-			row.LCGM, row.TCGM, row.VCGM = im.Centroid()
+		s := float64(k) * stepM
+		// A step that lands within round-off of the top is the top: no
+		// second row a hair above it.
+		if s >= top-1e-9*math.Max(1, top) {
+			s = top
 		}
-		if im.AW > 0 && s < zmax-zmin {
-			row.FSMTm = rho * mu * (im.IYY - im.SY*im.SY/im.AW)
+		row := CapacityRow{SoundingM: s}
+		if s > 0 || datum <= zmin {
+			im := c.solid.Below(Plane{A: datum + s})
+			row.VolumeM3 = math.Min(mu*im.V, capM3)
+			if im.V > 0 {
+				row.LCGM, row.TCGM, row.VCGM = im.Centroid()
+			}
+			if im.AW > 0 && s < top {
+				row.FSMTm = rho * mu * (im.IYY - im.SY*im.SY/im.AW)
+			}
 		}
 		out = append(out, row)
-		if s >= zmax-zmin {
+		if s >= top {
 			return out
 		}
 	}

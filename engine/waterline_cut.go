@@ -39,12 +39,15 @@ func (e *edgePoly) eval(s float64) (a, sy, sz float64) {
 	return
 }
 
-// edgePrefix returns the prefix sums pre[k] = Σ_{e<k} edge e's polynomials,
-// k = 0 … n, of the polygon p0 + s·dp.
-func edgePrefix(p0, dp []Point) []edgePoly {
+// edgePrefix returns the prefix sums pre[k] = Σ_{i<k} the polynomials of
+// edge base+i (mod n), k = 0 … n, of the polygon p0 + s·dp. Counting from
+// base, a vertex that is seldom under water (prefixBase), a run of whole
+// edges under water seldom passes the end of the sums: see runAt.
+func edgePrefix(p0, dp []Point, base int) []edgePoly {
 	n := len(p0)
 	pre := make([]edgePoly, n+1)
-	for k := 0; k < n; k++ {
+	for i := 0; i < n; i++ {
+		k := (base + i) % n
 		j := (k + 1) % n
 		ay, by, az, bz := p0[k].Y, dp[k].Y, p0[k].Z, dp[k].Z
 		ay1, by1, az1, bz1 := p0[j].Y, dp[j].Y, p0[j].Z, dp[j].Z
@@ -57,10 +60,47 @@ func edgePrefix(p0, dp []Point) []edgePoly {
 		e.a = [3]float64{c0, c1, c2}
 		e.sy = [4]float64{e0 * c0, e0*c1 + e1*c0, e0*c2 + e1*c1, e1 * c2}
 		e.sz = [4]float64{f0 * c0, f0*c1 + f1*c0, f0*c2 + f1*c1, f1 * c2}
-		pre[k+1] = pre[k]
-		pre[k+1].add(&e, 1)
+		pre[i+1] = pre[i]
+		pre[i+1].add(&e, 1)
 	}
 	return pre
+}
+
+// prefixBase returns the vertex the edges' prefix sums start from: the
+// highest at the slab's two ends together (on a hull, a deck edge), the
+// first of equals.
+func prefixBase(p0, p1 []Point) int {
+	base := 0
+	for k := range p0 {
+		if p0[k].Z+p1[k].Z > p0[base].Z+p1[base].Z {
+			base = k
+		}
+	}
+	return base
+}
+
+// runAt returns the sums of the shoelace terms of the whole edges lo …
+// hi−1 (vertex indices mod n, lo ≠ hi) at s, from the prefix sums pre
+// counted from base: with i = lo − base and j = hi − base (mod n),
+// pre[j] − pre[i], or pre[n] − pre[i] + pre[j] when the run passes base
+// (i > j).
+func runAt(pre []edgePoly, base, lo, hi int, s float64) (a, sy, sz float64) {
+	n := len(pre) - 1
+	i, j := lo-base, hi-base
+	if i < 0 {
+		i += n
+	}
+	if j < 0 {
+		j += n
+	}
+	a, sy, sz = pre[j].eval(s)
+	qa, qsy, qsz := pre[i].eval(s)
+	a, sy, sz = a-qa, sy-qsy, sz-qsz
+	if i > j {
+		ra, rsy, rsz := pre[n].eval(s)
+		a, sy, sz = a+ra, sy+rsy, sz+rsz
+	}
+	return a, sy, sz
 }
 
 // chain is one stretch of the clipped section: it enters the water on edge
@@ -71,16 +111,25 @@ type chain struct{ in, out int }
 // maxChains bounds the chains handled without falling back to clipBelow.
 const maxChains = 16
 
-// cutState tracks, along a slab, which vertices are below the plane and
+// cutEdge is an edge k (v_k → v_k+1) with one end below the plane and one
+// above; in: v_k+1 is the end below (the section goes into the water
+// along it).
+type cutEdge struct {
+	k  int
+	in bool
+}
+
+// cutState tracks, along a slab, how many vertices are below the plane and
 // which edges the plane cuts (in ascending order), updated vertex by vertex
-// as the plane passes them. It holds no pointers, so it stays on the stack.
+// as the plane passes them. It keeps no side per vertex (a vertex crosses
+// at most once in a slab, so its side is known from its root), so its size
+// does not depend on the section's; it holds no pointers and stays on the
+// stack.
 type cutState struct {
-	below [maxVertices]bool
-	big   []bool // below, for sections of more than maxVertices vertices
-	nin   int
-	cut   [2 * maxChains]int // edges k (v_k → v_k+1) with one end below and one above
-	ncut  int
-	ok    bool // false once the cut edges outgrow cut
+	nin  int
+	cut  [2 * maxChains]cutEdge
+	ncut int
+	ok   bool // false once the cut edges outgrow cut
 
 	// Working space of chains and pieceChains, kept here so that it is not
 	// cleared for every piece.
@@ -88,38 +137,25 @@ type cutState struct {
 	chainBuf  [maxChains]chain
 }
 
-// maxVertices is the number of section vertices whose sides are kept in
-// cutState's own array; larger sections use a slice grown once per scratch.
-const maxVertices = 256
-
-// sides returns the working array of the vertices' sides for n vertices.
-func (c *cutState) sides(n int) []bool {
-	if n <= maxVertices {
-		return c.below[:n]
-	}
-	if cap(c.big) < n {
-		c.big = make([]bool, n)
-	}
-	return c.big[:n]
-}
-
 // markCut records that edge e is cut at the slab's start; when the list is
 // full the fast path gives up (ok false) and the slab is clipped instead.
-func (c *cutState) markCut(e int) {
+func (c *cutState) markCut(e int, in bool) {
 	if c.ncut == len(c.cut) {
 		c.ok = false
 		return
 	}
-	c.cut[c.ncut] = e
+	c.cut[c.ncut] = cutEdge{e, in}
 	c.ncut++
 }
 
-func (c *cutState) toggle(e int) {
+// toggle removes edge e from the cut edges if it is there, and otherwise
+// adds it with direction in.
+func (c *cutState) toggle(e int, in bool) {
 	i := 0
-	for i < c.ncut && c.cut[i] < e {
+	for i < c.ncut && c.cut[i].k < e {
 		i++
 	}
-	if i < c.ncut && c.cut[i] == e {
+	if i < c.ncut && c.cut[i].k == e {
 		copy(c.cut[i:c.ncut], c.cut[i+1:c.ncut])
 		c.ncut--
 		return
@@ -129,44 +165,42 @@ func (c *cutState) toggle(e int) {
 		return
 	}
 	copy(c.cut[i+1:c.ncut+1], c.cut[i:c.ncut])
-	c.cut[i] = e
+	c.cut[i] = cutEdge{e, in}
 	c.ncut++
 }
 
-// flip moves vertex k to the other side of the plane.
-func (c *cutState) flip(below []bool, k, n int) {
-	below[k] = !below[k]
-	if below[k] {
+// flip moves vertex k, below the plane before if was, to the other side.
+// The edge into it is cut afterwards if it was not before, with v_k its
+// end below if k is now below; the edge out of it likewise, with v_k+1 on
+// the side k has left.
+func (c *cutState) flip(k, n int, was bool) {
+	now := !was
+	if now {
 		c.nin++
 	} else {
 		c.nin--
 	}
-	c.toggle((k + n - 1) % n)
-	c.toggle(k)
+	c.toggle((k+n-1)%n, now)
+	c.toggle(k, was)
 }
 
 // chains pairs each edge where the section enters the water with the next
 // edge where it leaves, in the polygon's order.
-func (c *cutState) chains(below []bool, out *[maxChains]chain) (int, bool) {
-	n := len(below)
+func (c *cutState) chains(out *[maxChains]chain) (int, bool) {
 	ins, outs := &c.ins, &c.outs
 	ni, no := 0, 0
-	for _, k := range c.cut[:c.ncut] {
-		j := k + 1
-		if j == n {
-			j = 0
-		}
-		if below[j] {
+	for _, e := range c.cut[:c.ncut] {
+		if e.in {
 			if ni == maxChains {
 				return 0, false
 			}
-			ins[ni] = k
+			ins[ni] = e.k
 			ni++
 		} else {
 			if no == maxChains {
 				return 0, false
 			}
-			outs[no] = k
+			outs[no] = e.k
 			no++
 		}
 	}
@@ -208,10 +242,12 @@ func vertexBlocks(a, b []Point) []vertexBlock {
 	return out
 }
 
-// cutRoot is an x where vertex k crosses the plane.
+// cutRoot is an x where vertex k crosses the plane; below: its side
+// before.
 type cutRoot struct {
-	x float64
-	k int
+	x     float64
+	k     int
+	below bool
 }
 
 // cutScratch is belowChains's working space.
@@ -236,9 +272,8 @@ func (s *slab) belowChains(p Plane, im *Immersion, sc *cutScratch) bool {
 	roots := sc.roots[:0]
 	h0, h1 := p.A+p.B*s.x0, p.A+p.B*s.x1
 	p0, p1 := s.p0[:n], s.p1[:n]
-	below := st.sides(n)
 	st.ncut, st.ok = 0, true
-	prev := false
+	prev, first := false, false
 	hlo, hhi := min(h0, h1), max(h0, h1)
 	for bi, bb := range s.blocks {
 		k0, k1 := bi*blockSize, min(bi*blockSize+blockSize, n)
@@ -251,14 +286,13 @@ func (s *slab) belowChains(p Plane, im *Immersion, sc *cutScratch) bool {
 			// The whole block is on one side all along the slab: no roots
 			// and no cut edges inside it.
 			b := dmax < 0
-			for k := k0; k < k1; k++ {
-				below[k] = b
-			}
 			if b {
 				st.nin += k1 - k0
 			}
-			if k0 > 0 && b != prev {
-				st.markCut(k0 - 1)
+			if k0 == 0 {
+				first = b
+			} else if b != prev {
+				st.markCut(k0-1, b)
 			}
 			prev = b
 			continue
@@ -269,26 +303,22 @@ func (s *slab) belowChains(p Plane, im *Immersion, sc *cutScratch) bool {
 			// The side just forward of x0 (a vertex on the plane there takes
 			// the side it goes to).
 			b := d0 < 0 || d0 == 0 && d1 < 0
-			below[k] = b
 			if b {
 				st.nin++
 			}
-			if k > 0 && b != prev {
-				st.markCut(k - 1) // edge k−1 is cut at x0
+			if k == 0 {
+				first = b
+			} else if b != prev {
+				st.markCut(k-1, b) // edge k−1 is cut at x0
 			}
 			prev = b
 			if (d0 < 0 && d1 > 0) || (d0 > 0 && d1 < 0) {
-				roots = append(roots, cutRoot{s.x0 + dx*d0/(d0-d1), k})
+				roots = append(roots, cutRoot{s.x0 + dx*d0/(d0-d1), k, b})
 			}
 		}
 	}
-	if below[n-1] != below[0] {
-		if st.ncut == len(st.cut) {
-			st.ok = false
-		} else {
-			st.cut[st.ncut] = n - 1
-			st.ncut++
-		}
+	if prev != first {
+		st.markCut(n-1, first)
 	}
 	if len(roots) == 0 {
 		switch st.nin {
@@ -311,13 +341,13 @@ func (s *slab) belowChains(p Plane, im *Immersion, sc *cutScratch) bool {
 			xb = roots[i].x
 		}
 		if xb-xa > 1e-12*(1+math.Abs(xb)) {
-			if !st.ok || !s.pieceCut(p, xa, xb, st, below, &part) {
+			if !st.ok || !s.pieceCut(p, xa, xb, st, &part) {
 				part.add(s.integrate(p, xa, xb), 1)
 			}
 			xa = xb
 		}
 		if i < len(roots) {
-			st.flip(below, roots[i].k, n)
+			st.flip(roots[i].k, n, roots[i].below)
 		}
 	}
 	im.add(part, 1)
@@ -326,12 +356,12 @@ func (s *slab) belowChains(p Plane, im *Immersion, sc *cutScratch) bool {
 
 // pieceCut integrates [xa, xb], along which st holds, adding to im;
 // false (nothing added) when there are too many chains.
-func (s *slab) pieceCut(p Plane, xa, xb float64, st *cutState, below []bool, im *Immersion) bool {
+func (s *slab) pieceCut(p Plane, xa, xb float64, st *cutState, im *Immersion) bool {
 	if st.nin == 0 || st.nin == len(s.p0) {
 		s.pieceChains(p, xa, xb, st.nin, nil, im)
 		return true
 	}
-	nc, ok := st.chains(below, &st.chainBuf)
+	nc, ok := st.chains(&st.chainBuf)
 	if !ok {
 		return false
 	}
@@ -341,43 +371,57 @@ func (s *slab) pieceCut(p Plane, xa, xb float64, st *cutState, below []bool, im 
 
 // pieceChains integrates [xa, xb], along which nin vertices are below the
 // plane and the clipped section is made of chains, adding to im.
+//
+// At each Gauss node x the section below is the chains' runs of whole
+// edges, each a difference of prefix sums (runAt), and the cut edges with
+// the waterline between them, worked at the node.
 func (s *slab) pieceChains(p Plane, xa, xb float64, nin int, chains []chain, im *Immersion) {
 	n := len(s.p0)
 	dx := xb - xa
 	if nin == 0 {
 		return
 	}
-	pre := s.pre
+	pre := s.pre[:n+1]
 	if nin == n {
 		// The whole section is under water along the piece.
+		var v2, mx2, my6, mz6 float64
 		for g := range gaussNode {
 			x := xa + gaussNode[g]*dx
 			w := gaussWeight[g] * dx
 			a, sy, sz := pre[n].eval(x - s.x0)
-			im.V += w * a / 2
-			im.MX += w * x * a / 2
-			im.MY += w * sy / 6
-			im.MZ += w * sz / 6
+			v2 += w * a
+			mx2 += w * x * a
+			my6 += w * sy
+			mz6 += w * sz
 		}
+		im.V += v2 / 2
+		im.MX += mx2 / 2
+		im.MY += my6 / 6
+		im.MZ += mz6 / 6
 		return
 	}
-	nc := len(chains)
+	// As in pieceArc, the sums are kept as they come (twice the area, six
+	// times the moments, two and three times the waterline's moments) and
+	// divided once for the piece.
+	var v2, mx2, my6, mz6, aw, sx, sy2, ixx, ixy2, iyy3 float64
+	vs := s.v[:n]
 	for g := range gaussNode {
 		x := xa + gaussNode[g]*dx
 		w := gaussWeight[g] * dx
 		sg := x - s.x0
 		h := p.A + p.B*x
+		// W, WY, WYY: the waterline's breadth and twice and three times
+		// its moments.
 		var a2, sy6, sz6, W, WY, WYY float64
 		var lastOutY, lastOutZ, firstInY, firstInZ float64
-		for c := 0; c < nc; c++ {
-			ch := chains[c]
+		for c, ch := range chains {
 			// Entry point on edge in.
 			k, j := ch.in, ch.in+1
 			if j == n {
 				j = 0
 			}
-			ky, kz := s.p0[k].Y+sg*s.dp[k].Y, s.p0[k].Z+sg*s.dp[k].Z
-			jy, jz := s.p0[j].Y+sg*s.dp[j].Y, s.p0[j].Z+sg*s.dp[j].Z
+			ky, kz := vs[k].at(sg)
+			jy, jz := vs[j].at(sg)
 			dk, dj := kz-p.C*ky-h, jz-p.C*jy-h
 			t := dk / (dk - dj)
 			iy, iz := ky+t*(jy-ky), kz+t*(jz-kz)
@@ -388,8 +432,8 @@ func (s *slab) pieceChains(p Plane, xa, xb float64, nin int, chains []chain, im 
 			sz6 += (iz + jz) * cr
 			y2 := iy * iy
 			W -= iy
-			WY -= y2 / 2
-			WYY -= y2 * iy / 3
+			WY -= y2
+			WYY -= y2 * iy
 			if c == 0 {
 				firstInY, firstInZ = iy, iz
 			} else {
@@ -400,19 +444,8 @@ func (s *slab) pieceChains(p Plane, xa, xb float64, nin int, chains []chain, im 
 				sz6 += (lastOutZ + iz) * cr
 			}
 			// Whole edges in+1 … out−1.
-			lo, hi := j, ch.out
-			if lo != hi {
-				var pa, psy, psz float64
-				if lo < hi {
-					pa, psy, psz = pre[hi].eval(sg)
-					qa, qsy, qsz := pre[lo].eval(sg)
-					pa, psy, psz = pa-qa, psy-qsy, psz-qsz
-				} else {
-					pa, psy, psz = pre[n].eval(sg)
-					qa, qsy, qsz := pre[lo].eval(sg)
-					ra, rsy, rsz := pre[hi].eval(sg)
-					pa, psy, psz = pa-qa+ra, psy-qsy+rsy, psz-qsz+rsz
-				}
+			if lo := j; lo != ch.out {
+				pa, psy, psz := runAt(pre, s.base, lo, ch.out, sg)
 				a2 += pa
 				sy6 += psy
 				sz6 += psz
@@ -422,8 +455,8 @@ func (s *slab) pieceChains(p Plane, xa, xb float64, nin int, chains []chain, im 
 			if j == n {
 				j = 0
 			}
-			ky, kz = s.p0[k].Y+sg*s.dp[k].Y, s.p0[k].Z+sg*s.dp[k].Z
-			jy, jz = s.p0[j].Y+sg*s.dp[j].Y, s.p0[j].Z+sg*s.dp[j].Z
+			ky, kz = vs[k].at(sg)
+			jy, jz = vs[j].at(sg)
 			dk, dj = kz-p.C*ky-h, jz-p.C*jy-h
 			t = dk / (dk - dj)
 			oy, oz := ky+t*(jy-ky), kz+t*(jz-kz)
@@ -433,8 +466,8 @@ func (s *slab) pieceChains(p Plane, xa, xb float64, nin int, chains []chain, im 
 			sz6 += (kz + oz) * cr
 			y2 = oy * oy
 			W += oy
-			WY += y2 / 2
-			WYY += y2 * oy / 3
+			WY += y2
+			WYY += y2 * oy
 			lastOutY, lastOutZ = oy, oz
 		}
 		// Close: the last exit to the first entry.
@@ -443,18 +476,27 @@ func (s *slab) pieceChains(p Plane, xa, xb float64, nin int, chains []chain, im 
 		sy6 += (lastOutY + firstInY) * cr
 		sz6 += (lastOutZ + firstInZ) * cr
 
-		A := a2 / 2
-		im.V += w * A
-		im.MX += w * x * A
-		im.MY += w * sy6 / 6
-		im.MZ += w * sz6 / 6
-		im.AW += w * W
-		im.SX += w * x * W
-		im.SY += w * WY
-		im.IXX += w * x * x * W
-		im.IXY += w * x * WY
-		im.IYY += w * WYY
+		v2 += w * a2
+		mx2 += w * x * a2
+		my6 += w * sy6
+		mz6 += w * sz6
+		aw += w * W
+		sx += w * x * W
+		sy2 += w * WY
+		ixx += w * x * x * W
+		ixy2 += w * x * WY
+		iyy3 += w * WYY
 	}
+	im.V += v2 / 2
+	im.MX += mx2 / 2
+	im.MY += my6 / 6
+	im.MZ += mz6 / 6
+	im.AW += aw
+	im.SX += sx
+	im.SY += sy2 / 2
+	im.IXX += ixx
+	im.IXY += ixy2 / 2
+	im.IYY += iyy3 / 3
 }
 
 // sortRoots puts the waterline's crossings of a slab in order along x:

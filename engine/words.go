@@ -38,3 +38,15 @@ func signWords(x float64, pos, neg, zero string) string {
 	}
 	return zero
 }
+
+// trimWords writes a trim for a sentence, at two decimals: "3.20 m by the
+// stern", "0.41 m by the head", "even keel" below 0.005 m; "—" for NaN.
+func trimWords(m float64) string {
+	if math.IsNaN(m) {
+		return "—"
+	}
+	if math.Abs(m) < 0.005 {
+		return "even keel"
+	}
+	return fmt.Sprintf("%.2f m %s", math.Abs(m), signWords(m, "by the stern", "by the head", ""))
+}

@@ -48,6 +48,7 @@ type Document struct {
 	Outcome          string         `json:"outcome"`           // floats | sinks | capsizes | not converged
 	Reason           string         `json:"reason"`            // why there is no equilibrium, "" when she floats
 	Severity         string         `json:"severity"`          // highest flag severity: none | info | caution | danger
+	ShipSeverity     string         `json:"ship_severity"`     // the same without the hand method's caveats (engine.Flag.AboutHandMethod): the ship's own state
 	OpenCompartments []OpenDoc      `json:"open_compartments"` // each open compartment with its permeability
 	HeldWater        []HeldDoc      `json:"partly_flooded"`    // compartments holding floodwater, not open to the sea
 	Freeboards       []Freeboard    `json:"freeboards"`
@@ -177,13 +178,18 @@ type Hand struct {
 	DraftFwdM Num `json:"draft_fwd_m"`
 	TrimM     Num `json:"trim_m"`
 
-	DraftMidM        Num       `json:"draft_mid_m"`
-	LostVolumeM3     Num       `json:"lost_volume_m3"`
-	LostAreaM2       Num       `json:"lost_area_m2"`
-	WaterplaneAreaM2 Num       `json:"waterplane_area_m2"`
-	LCFM             Num       `json:"lcf_m"`
-	TCFM             Num       `json:"tcf_m"`
-	GMLM             Num       `json:"gml_m"`
+	DraftMidM        Num `json:"draft_mid_m"`
+	LostVolumeM3     Num `json:"lost_volume_m3"`
+	LostAreaM2       Num `json:"lost_area_m2"`
+	WaterplaneAreaM2 Num `json:"waterplane_area_m2"`
+	LCFM             Num `json:"lcf_m"`
+	TCFM             Num `json:"tcf_m"`
+	GMLM             Num `json:"gml_m"`
+	// Usable is false when the hand answer is beyond the method's range
+	// (engine.HandWorking.Unusable): its heel and drafts are then kept for
+	// the record only, and NotUsableBecause says why ("" when usable).
+	Usable           bool      `json:"usable"`
+	NotUsableBecause string    `json:"not_usable_because"`
 	Steps            []StepDoc `json:"steps"`
 }
 
@@ -229,6 +235,7 @@ func Build(r Report) Document {
 		Spills:           buildSpills(a.Spills),
 		Outcome:          r.Outcome(),
 		Severity:         r.Severity(),
+		ShipSeverity:     r.ShipSeverity(),
 		OpenCompartments: []OpenDoc{},
 		HeldWater:        append([]HeldDoc{}, r.heldWater()...),
 		Freeboards:       []Freeboard{},
@@ -285,6 +292,7 @@ func Build(r Report) Document {
 			DraftAftM: Num(h.DraftAftM), DraftFwdM: Num(h.DraftFwdM), TrimM: Num(h.TrimM),
 			DraftMidM: Num(h.DraftMidM), LostVolumeM3: Num(h.LostVolumeM3), LostAreaM2: Num(h.LostAreaM2),
 			WaterplaneAreaM2: Num(h.WaterplaneM2), LCFM: Num(h.LCFM), TCFM: Num(h.TCFM), GMLM: Num(h.GMLM),
+			Usable: h.Usable(), NotUsableBecause: h.Unusable(),
 			Steps: []StepDoc{}}
 		for _, s := range h.Steps {
 			d.Hand.Steps = append(d.Hand.Steps, StepDoc{s.Label, s.Formula, Num(s.Value), s.Unit})

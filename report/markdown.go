@@ -31,6 +31,7 @@ func Markdown(w io.Writer, r Report) error {
 	}
 	e.line("| Outcome | ", outcome, " |")
 	e.line("| Highest flag | ", r.Severity(), " |")
+	e.line("| Highest flag about the ship | ", r.ShipSeverity(), " (the hand method's caveats left out) |")
 	e.line()
 
 	markdownCondition(e, r, doc)
@@ -50,7 +51,11 @@ func Markdown(w io.Writer, r Report) error {
 			if sev == "danger" {
 				sev = "**danger**"
 			}
-			e.line("| ", sev, " | `", f.Code, "` | ", md(f.Message), " |")
+			msg := md(f.Message)
+			if f.AboutHandMethod() {
+				msg = "About the hand method, not the ship: " + msg
+			}
+			e.line("| ", sev, " | `", f.Code, "` | ", msg, " |")
 		}
 	}
 	e.line()

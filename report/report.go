@@ -121,16 +121,29 @@ func (r Report) Flags() []engine.Flag {
 }
 
 // Severity is the highest severity among the flags, or "none".
-func (r Report) Severity() string {
-	fl := r.Flags()
-	if len(fl) == 0 {
-		return "none"
-	}
-	s := engine.Info
+func (r Report) Severity() string { return highest(r.Flags(), false) }
+
+// ShipSeverity is the highest severity among the flags about the ship,
+// leaving out the hand method's caveats (engine.Flag.AboutHandMethod), or
+// "none": the word for the ship's state, as the dashboard's header gives
+// it.
+func (r Report) ShipSeverity() string { return highest(r.Flags(), true) }
+
+// highest is the highest severity among fl (without the hand method's
+// caveats when shipOnly), or "none".
+func highest(fl []engine.Flag, shipOnly bool) string {
+	s, any := engine.Info, false
 	for _, f := range fl {
+		if shipOnly && f.AboutHandMethod() {
+			continue
+		}
+		any = true
 		if f.Severity > s {
 			s = f.Severity
 		}
+	}
+	if !any {
+		return "none"
 	}
 	return s.String()
 }

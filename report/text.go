@@ -3,6 +3,8 @@ package report
 import (
 	"io"
 	"strings"
+
+	"heelwatch/engine"
 )
 
 // Text writes r as a compact plain-text report for the terminal: aligned
@@ -149,20 +151,31 @@ func Text(w io.Writer, r Report) error {
 		}
 		writeLines(e, t.lines("  "))
 		c := table{right: []bool{false, true, true}}
-		c.add("", "hand", "direct")
+		// A hand answer beyond the method's range is shown for the record,
+		// each of its positions marked.
+		mark := func(s string) string { return s }
+		if !h.Usable() {
+			c.add("", "hand (NOT USABLE)", "direct")
+			mark = func(s string) string { return s + " *" }
+		} else {
+			c.add("", "hand", "direct")
+		}
 		direct := func(f func() string) string {
 			if p == nil {
 				return "—"
 			}
 			return f()
 		}
-		c.add("draft aft", num(h.DraftAftM, 3, "m"), direct(func() string { return num(p.DraftAftM, 3, "m") }))
-		c.add("draft amidships", num(h.DraftMidM, 3, "m"), direct(func() string { return num(p.DraftMidM, 3, "m") }))
-		c.add("draft forward", num(h.DraftFwdM, 3, "m"), direct(func() string { return num(p.DraftFwdM, 3, "m") }))
+		c.add("draft aft", mark(num(h.DraftAftM, 3, "m")), direct(func() string { return num(p.DraftAftM, 3, "m") }))
+		c.add("draft amidships", mark(num(h.DraftMidM, 3, "m")), direct(func() string { return num(p.DraftMidM, 3, "m") }))
+		c.add("draft forward", mark(num(h.DraftFwdM, 3, "m")), direct(func() string { return num(p.DraftFwdM, 3, "m") }))
 		c.add("trim", TrimWords(h.TrimM), direct(func() string { return TrimWords(p.TrimM) }))
-		c.add("heel", HeelWords(h.HeelDeg), direct(func() string { return HeelWords(p.HeelDeg) }))
+		c.add("heel", mark(HeelWords(h.HeelDeg)), direct(func() string { return HeelWords(p.HeelDeg) }))
 		c.add("GM upright", num(h.GMM, 3, "m"), direct(func() string { return num(p.GMUprightM, 3, "m") }))
 		writeLines(e, c.lines("  "))
+		if !h.Usable() {
+			e.line("  * not usable: beyond the hand method's range (past-small-angles, below); read the direct answer")
+		}
 	} else {
 		why := a.HandWhy
 		if why == "" {
@@ -172,13 +185,31 @@ func Text(w io.Writer, r Report) error {
 	}
 
 	e.line()
-	fl := r.Flags()
-	if len(fl) == 0 {
+	// The ship's flags, then the hand method's caveats under their own
+	// heading: they say how far to trust the method, not how the ship is.
+	var ship, method []engine.Flag
+	for _, f := range r.Flags() {
+		if f.AboutHandMethod() {
+			method = append(method, f)
+		} else {
+			ship = append(ship, f)
+		}
+	}
+	if len(ship) == 0 {
 		e.line("Flags: none")
 	} else {
 		e.line("Flags")
 		t := table{}
-		for _, f := range fl {
+		for _, f := range ship {
+			t.add(strings.ToUpper(f.Severity.String()), f.Code, f.Message)
+		}
+		writeLines(e, t.lines("  "))
+	}
+	if len(method) > 0 {
+		e.line()
+		e.line("About the hand method (its caveats, not flags of the ship)")
+		t := table{}
+		for _, f := range method {
 			t.add(strings.ToUpper(f.Severity.String()), f.Code, f.Message)
 		}
 		writeLines(e, t.lines("  "))

@@ -115,7 +115,7 @@ func criterionFormat(unit string) (int, string) {
 	return 3, " " + unit
 }
 
-func flagMark(st Styles, f engine.Flag) string {
+func flagMark(st *Styles, f engine.Flag) string {
 	switch f.Severity {
 	case engine.Danger:
 		return st.Danger.Render("‼ ")

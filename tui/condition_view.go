@@ -31,6 +31,7 @@ type conditionPanel struct {
 	base   *engine.Vessel     // the ship as her vessel file gives her (Apply's ship); nil: no panel
 	cond   *vessels.Condition // the condition now (the panel's own copy)
 	taken  *vessels.Condition // the condition the ship is loaded with: what undo goes back to
+	named  string             // the condition's name before any change (condition_name.go)
 	resume *vessels.State     // a state to take up at start, nil once taken
 	source string             // where the ship came from, for a state file ("freighter" or a path)
 	dir    string             // where files are saved by default
@@ -115,6 +116,7 @@ func newConditionPanel(v *engine.Vessel, opts Options, name string) conditionPan
 		p.cond = vessels.ConditionOf(p.base, name)
 	}
 	p.taken = p.cond
+	p.named = unchangedName(p.cond.Name)
 	p.field.Prompt = ""
 	p.field.CharLimit = 120
 	return p
@@ -237,6 +239,10 @@ func (m model) conditionKey(msg tea.KeyMsg) (tea.Model, tea.Cmd, bool) {
 		if row.tank < 0 {
 			return m, nil, true
 		}
+		if why := m.seaRefusal(row.tank); why != "" {
+			p.note = why
+			return m, nil, true
+		}
 		step := 0.05
 		if key.Matches(msg, condLessKey) {
 			step = -0.05
@@ -292,6 +298,10 @@ func (m model) conditionKey(msg tea.KeyMsg) (tea.Model, tea.Cmd, bool) {
 	case key.Matches(msg, condEditKey):
 		switch {
 		case row.tank >= 0:
+			if why := m.seaRefusal(row.tank); why != "" {
+				p.note = why
+				return m, nil, true
+			}
 			f := 0.0
 			if l := m.v.Compartments[row.tank].Liquid; l != nil {
 				f = l.Fill
@@ -321,6 +331,20 @@ func (m model) conditionKey(msg tea.KeyMsg) (tea.Model, tea.Cmd, bool) {
 		return m, nil, false
 	}
 	return m, nil, true
+}
+
+// seaRefusal says why tank i's fill cannot be changed now ("" if it can):
+// while it is open to the sea or holds floodwater its contents are the
+// sea's, and a fill typed would change nothing of how she floats.
+func (m model) seaRefusal(i int) string {
+	name := m.v.Compartments[i].Name
+	switch why := seaHolds(m.damage, i); {
+	case why == "":
+		return ""
+	case m.damage[i].Open:
+		return name + " is open to the sea: its contents are the sea's while it is open, so its fill is not changed (undo the damage first)"
+	}
+	return name + " holds floodwater: its contents are the sea's while it is flooded, so its fill is not changed"
 }
 
 // defaultPath is the file a save offers: kind and the time, in the report
@@ -467,31 +491,39 @@ func parseTankAmount(s string, c, b *engine.Compartment, rho float64) (float64, 
 	return math.Min(f, 1), ""
 }
 
-// sounded reads a sounding typed for tank i ("1.2m") at the heel and trim
-// she lies at now, at the tank's pipe (the vessel file's sounding_pipe,
-// else its middle): one reading, not worked again once the fill moves
-// her.
+// sounded reads a sounding typed for tank i ("1.2m") at the tank's pipe
+// (the vessel file's sounding_pipe, else its middle) as a condition file's
+// sounding is read: the panel's condition is given the sounding and
+// vessels.Condition.Apply reads it where she lies intact with it, again
+// and again until the heel and trim it gives read the same fill (its fixed
+// point). The fill found is what the panel keeps: the sounding is one
+// reading, not worked again when later changes move her.
 func (m model) sounded(i int, s string) (float64, string, string) {
 	c := m.v.Compartments[i]
 	x, err := strconv.ParseFloat(strings.TrimSuffix(strings.ToLower(strings.ReplaceAll(s, " ", "")), "m"), 64)
 	if err != nil || math.IsNaN(x) || math.IsInf(x, 0) || x < 0 {
 		return 0, "", fmt.Sprintf("%q: give the sounding in metres, e.g. 1.2m", s)
 	}
-	if m.cur == nil || m.cur.Position == nil {
-		return 0, "", "no floating position to read the sounding at"
-	}
 	pipe := c.DefaultSoundingPipe()
 	if m.info != nil && i < len(m.info.Compartments) && m.info.Compartments[i].SoundingPipe != nil {
 		pipe = *m.info.Compartments[i].SoundingPipe
 	}
-	pos := m.cur.Position
-	vol, verr := c.SoundingVolumeM3(pipe, x, pos.Plane)
-	if verr != nil {
-		return 0, "", verr.Error()
+	p := m.cond
+	p.setFill(i, 0, m.v)
+	k := p.tankFill(i)
+	p.cond.Tanks[k].SoundingM, p.cond.Tanks[k].Pipe = x, pipe
+	nv, aerr := p.cond.Apply(p.base)
+	if aerr != nil {
+		return 0, "", aerr.Error()
 	}
-	f := math.Min(vol/c.CapacityM3(), 1)
-	return f, fmt.Sprintf("%s sounded %.2f m at heel %s, trim %s: %.1f %% of capacity (%.1f m³)",
-		c.Name, x, heelShort(pos.HeelDeg), trimText(pos.TrimM), f*100, vol), ""
+	f := nv.Compartments[i].Liquid.Fill
+	what := fmt.Sprintf("%s sounded %.2f m, read where she lies intact with it: %.1f %% of capacity (%.1f m³)",
+		c.Name, x, f*100, f*c.CapacityM3())
+	if pos, serr := engine.Solve(nv, nv.Intact()); serr == nil {
+		what = fmt.Sprintf("%s sounded %.2f m at heel %s, trim %s (where she lies intact with it): %.1f %% of capacity (%.1f m³)",
+			c.Name, x, heelShort(pos.HeelDeg), trimText(pos.TrimM), f*100, f*c.CapacityM3())
+	}
+	return f, what, ""
 }
 
 // parseWeight reads "mass lcg tcg vcg" (or, new, "name; mass; lcg; tcg;
@@ -572,6 +604,9 @@ func (m model) takeRemedy() (tea.Model, tea.Cmd, bool) {
 // back to the one she is loaded with and says why.
 func (m model) takeCondition(what string) (tea.Model, tea.Cmd) {
 	before := m.cond.taken
+	c := *m.cond.cond
+	c.Name = changedName(m.cond.named, m.now())
+	m.cond.cond = &c
 	m, stop, err := m.loadCondition(m.cond.cond, what)
 	if err != nil {
 		m.cond.cond = m.cond.taken
@@ -614,6 +649,7 @@ func (m model) loadCondition(c *vessels.Condition, what string) (model, tea.Cmd,
 	m.flood, stop = m.flood.with(m).stop(&m) // a run going on is of the old condition
 	m.v = nv
 	m.cond.cond, m.cond.taken = c, c
+	m.condition = c.Name
 	m.cond.note = what
 	m.cond.gen++
 	m.rem.set = nil // worked out for the old condition
@@ -660,90 +696,108 @@ func (m model) saveCmd(path string, all bool) tea.Cmd {
 	}
 	return func() tea.Msg {
 		if err == nil {
-			err = vessels.WriteFileSafely(path, data)
+			err = saveError(path, vessels.WriteFileSafely(path, data))
 		}
 		return condSavedMsg{path: path, what: what, err: err}
 	}
 }
 
-// view draws the panel in w × h.
-func (p conditionPanel) view(v *engine.Vessel, st Styles, w, h int) []string {
+// view draws the panel in w × h for the ship v under damage d. A tank
+// open to the sea (or holding floodwater) is marked so, without a fill:
+// its contents are the sea's and no part of the ship's weight, so the
+// totals, like the floating position's ship weight, leave it out.
+func (p conditionPanel) view(v *engine.Vessel, d engine.Damage, st *Styles, w, h int) []string {
 	title := "LOADING CONDITION"
 	if p.cond.Name != "" {
 		title += ": " + p.cond.Name
 	}
 	lines := []string{st.Heading.Render(titleFit(w, title, "L closes"))}
-	// The names as long as they are (up to 22) where the line has room,
-	// then cut keeping a side letter (clipName); a tank row's liquid and
-	// a weight row's numbers take the rest.
+	// The names as long as they are where the line has room, then cut
+	// keeping a side letter (clipName); a tank row's liquid and a weight
+	// row's numbers take the rest. Where the liquid's name would be cut,
+	// its column gives way and the chosen tank's contents are said whole
+	// under the table.
 	rows := p.rows()
-	longest := 0
+	longest, longestW, longestLiquid := 0, 0, len("empty") // tanks', weights', liquids' names
 	for _, r := range rows {
 		if r.tank >= 0 {
 			longest = max(longest, len([]rune(v.Compartments[r.tank].Name)))
+			if l := v.Compartments[r.tank].Liquid; l != nil {
+				longestLiquid = max(longestLiquid, len([]rune(l.Name)))
+			}
 		} else {
-			longest = max(longest, len([]rune(p.cond.Weights[r.weight].Name)))
+			longestW = max(longestW, len([]rune(p.cond.Weights[r.weight].Name)))
 		}
 	}
-	nameW := min(22, longest, max(8, w-2-18-6))
+	const tankFigs, weightWords, weightCols = 18, 38, 27 // the figures after a name
+	withLiquid := w-2-tankFigs-2-longestLiquid >= min(longest, 14)
+	nameW := max(8, min(longest, w-2-tankFigs))
+	if withLiquid {
+		nameW = max(8, min(longest, w-2-tankFigs-2-longestLiquid))
+	}
 	// A weight's figures in full words when they fit, else in columns
 	// under a heading that names them.
-	longWeights := w-2 >= nameW+38
-	wNameW := nameW
+	wNameW := max(8, min(longestW, w-2-weightWords))
+	longWeights := w-2 >= wNameW+weightWords
 	if !longWeights {
-		wNameW = max(6, min(longest, 22, w-2-27))
+		wNameW = max(6, min(longestW, w-2-weightCols))
 	}
-	var total, fsm float64
-	for _, wt := range v.Weights {
-		total += wt.MassT
-	}
+	load := v.Loading(d)
+	var fsm float64
 	var body []string
 	sel := 0
+	chosen := "" // the chosen tank's contents when the liquid's column gave way, or the chosen weight's name when cut
 	for k, r := range rows {
 		var line string
 		if r.tank >= 0 {
 			c := v.Compartments[r.tank]
 			mass, _, _, _, f := v.TankContents(r.tank)
-			total += mass
+			if why := seaHolds(d, r.tank); why != "" {
+				line = fmt.Sprintf("%-*s %s", nameW, clipName(c.Name, nameW), why)
+				body = p.rowOf(body, st, k, r, line, w, nameW, wNameW, longWeights, withLiquid, &sel)
+				continue
+			}
 			fsm += f
 			fill := 0.0
 			liquid := "empty"
 			if c.Liquid != nil {
 				fill, liquid = c.Liquid.Fill, c.Liquid.Name
 			}
-			line = fmt.Sprintf("%-*s %5.1f %% %7.1f t  %s", nameW, clipName(c.Name, nameW), fill*100, mass, liquid)
+			line = fmt.Sprintf("%-*s %5.1f %% %7.1f t", nameW, clipName(c.Name, nameW), fill*100, mass)
+			if withLiquid {
+				line += "  " + liquid
+			} else if k == p.sel {
+				chosen = fmt.Sprintf("  = %s, %.1f m³ full", liquid, c.CapacityM3())
+			}
 		} else {
 			wt := p.cond.Weights[r.weight]
 			if longWeights {
-				line = fmt.Sprintf("%-*s %7.1f t lcg %5.1f tcg %4.1f vcg %4.1f", nameW, clipName(wt.Name, nameW), wt.MassT, wt.LCGM, wt.TCGM, wt.VCGM)
+				line = fmt.Sprintf("%-*s %7.1f t lcg %5.1f tcg %4.1f vcg %4.1f", wNameW, clipName(wt.Name, wNameW), wt.MassT, wt.LCGM, wt.TCGM, wt.VCGM)
 			} else {
 				line = fmt.Sprintf("%-*s %7.1f %5.1f %5.1f %5.1f", wNameW, clipName(wt.Name, wNameW), wt.MassT, wt.LCGM, wt.TCGM, wt.VCGM)
+				if k == p.sel && len([]rune(wt.Name)) > wNameW {
+					chosen = "  = " + wt.Name // cut in its row: whole under the table
+				}
 			}
 		}
-		if k == 0 && r.tank >= 0 {
-			body = append(body, st.Dim.Render(fitLine(fmt.Sprintf("%-*s %7s %9s  %s", nameW+2, "TANKS", "fill", "mass", "contents (fill: of capacity)"), w)))
-		}
-		if r.weight == 0 && longWeights {
-			body = append(body, st.Dim.Render("WEIGHTS"))
-		} else if r.weight == 0 {
-			body = append(body, st.Dim.Render(fitLine(fmt.Sprintf("%-*s %7s %5s %5s %5s", wNameW+2, "WEIGHTS", "t", "lcg m", "tcg m", "vcg m"), w)))
-		}
-		line = fitLine(line, w-2)
-		if k == p.sel {
-			sel = len(body)
-			line = st.Selected.Render("▸ " + line)
-		} else {
-			line = "  " + line
-		}
-		body = append(body, line)
+		body = p.rowOf(body, st, k, r, line, w, nameW, wNameW, longWeights, withLiquid, &sel)
 	}
-	foot := []string{st.Dim.Render(fitLine(fmt.Sprintf("Δ %.1f t · tanks' FSM %.0f t·m", total, fsm), w))}
+	var foot []string
+	for _, l := range wrap(chosen, w) {
+		foot = append(foot, st.Text.Render(l))
+	}
+	foot = append(foot, st.Dim.Render(fitLine(fmt.Sprintf("Δ %.1f t · tanks' FSM %.0f t·m", load.MassT, fsm), w)))
 	switch {
 	case p.typing != condNone:
 		for _, l := range wrap(p.prompt(), w) {
 			foot = append(foot, st.Prompt.Render(l))
 		}
 		foot = append(foot, "> "+p.field.View())
+		// A value refused: why, at once under the field, which stays open
+		// for the correction.
+		for _, l := range wrap(p.note, w) {
+			foot = append(foot, st.Error.Render(l))
+		}
 	default:
 		if p.note != "" {
 			for _, l := range wrap(p.note, w) {
@@ -765,11 +819,51 @@ func (p conditionPanel) view(v *engine.Vessel, st Styles, w, h int) []string {
 	return fit(append(lines, foot...), w, h)
 }
 
+// rowOf appends row k (r, drawn as line) to body, under its heading if it
+// is the first of its kind; sel is set to its place if it is chosen.
+func (p conditionPanel) rowOf(body []string, st *Styles, k int, r condRow, line string, w, nameW, wNameW int, longWeights, withLiquid bool, sel *int) []string {
+	if k == 0 && r.tank >= 0 {
+		head := fmt.Sprintf("%-*s %7s %9s", nameW+2, "TANKS", "fill", "mass")
+		if withLiquid {
+			head += "  contents (fill: of capacity)"
+		}
+		body = append(body, st.Dim.Render(fitLine(head, w)))
+	}
+	if r.weight == 0 && longWeights {
+		body = append(body, st.Dim.Render("WEIGHTS"))
+	} else if r.weight == 0 {
+		body = append(body, st.Dim.Render(fitLine(fmt.Sprintf("%-*s %7s %5s %5s %5s", wNameW+2, "WEIGHTS", "t", "lcg m", "tcg m", "vcg m"), w)))
+	}
+	line = fitLine(line, w-2)
+	if k == p.sel {
+		*sel = len(body)
+		line = st.Selected.Render("▸ " + line)
+	} else {
+		line = "  " + line
+	}
+	return append(body, line)
+}
+
+// seaHolds says why tank i's contents are not the ship's under d (open to
+// the sea, or holding floodwater), "" if they are.
+func seaHolds(d engine.Damage, i int) string {
+	if i >= len(d) {
+		return ""
+	}
+	switch {
+	case d[i].Open:
+		return "open to the sea: holds sea water, not the ship's"
+	case d[i].WaterM3 > 0:
+		return fmt.Sprintf("flooded: %.0f m³ of floodwater", d[i].WaterM3)
+	}
+	return ""
+}
+
 // prompt says what is being typed.
 func (p conditionPanel) prompt() string {
 	switch p.typing {
 	case condTank:
-		return "contents: per cent of capacity (55), tonnes (120t), m³ (80m3) or sounding (1.2m, read where she lies now); Enter takes, Esc drops"
+		return "contents: per cent of capacity (55), tonnes (120t), m³ (80m3) or sounding (1.2m, read where she lies with it); Enter takes, Esc drops"
 	case condWeight:
 		return "mass t, lcg m, tcg m (+ starboard), vcg m; Enter takes, Esc drops"
 	case condNew:
@@ -781,4 +875,4 @@ func (p conditionPanel) prompt() string {
 }
 
 // conditionLines is the panel drawn for the root model.
-func (m model) conditionLines(w, h int) []string { return m.cond.view(m.v, m.st, w, h) }
+func (m model) conditionLines(w, h int) []string { return m.cond.view(m.v, m.damage, m.st, w, h) }

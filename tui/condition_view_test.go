@@ -227,3 +227,54 @@ func TestConditionPanelSounding(t *testing.T) {
 		t.Errorf("a sounding above the top: %q", m.cond.note)
 	}
 }
+
+// A sounding typed on the panel is read where she lies once it is in:
+// the fill kept is the fixed point of vessels.Condition.Apply (the same
+// sounding in a condition file gives the same tonnes), and read again at
+// the heel and trim she then lies at, it gives that same fill. Before, it
+// was read once at the heel she lay at before the change.
+func TestConditionPanelSoundingFixedPoint(t *testing.T) {
+	m := testModel(t, 120, 40)
+	m = press(t, m, "L")
+	m = condRowOf(t, m, "DB 2 S")
+	m = press(t, m, "e")
+	m = typed(t, m, "0.6m")
+	if m.cond.typing != condNone {
+		t.Fatalf("still typing: %q", m.cond.note)
+	}
+	i := indexOf(t, m, "DB 2 S")
+	got := m.v.Compartments[i].Liquid.Fill
+
+	v, info := ship(t)
+	pipe := v.Compartments[i].DefaultSoundingPipe()
+	if sp := info.Compartments[i].SoundingPipe; sp != nil {
+		pipe = *sp
+	}
+	c := vessels.ConditionOf(v, "")
+	for k := range c.Tanks {
+		if c.Tanks[k].Compartment == i {
+			c.Tanks[k].SoundingM, c.Tanks[k].Pipe = 0.6, pipe
+		}
+	}
+	nv, err := c.Apply(v)
+	if err != nil {
+		t.Fatal(err)
+	}
+	if want := nv.Compartments[i].Liquid.Fill; math.Abs(got-want) > 1e-9 {
+		t.Errorf("fill %.9f on the panel, %.9f from Apply", got, want)
+	}
+	pos := m.cur.Position
+	if math.Abs(pos.HeelDeg) < 1 {
+		t.Fatalf("heel %.2f°: the sounding does not move her, the test shows nothing", pos.HeelDeg)
+	}
+	vol, err := v.Compartments[i].SoundingVolumeM3(pipe, 0.6, pos.Plane)
+	if err != nil {
+		t.Fatal(err)
+	}
+	if again := vol / v.Compartments[i].CapacityM3(); math.Abs(again-got) > 1e-6 {
+		t.Errorf("read again at heel %.3f° it gives %.6f, kept %.6f", pos.HeelDeg, again, got)
+	}
+	if m.cond.cond.Tanks[m.cond.tankFill(i)].BySounding() {
+		t.Error("the panel keeps the sounding: later changes would read it again")
+	}
+}

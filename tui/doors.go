@@ -54,7 +54,7 @@ func (p doorsPanel) update(msg tea.KeyMsg, conns []engine.Connection) (doorsPane
 }
 
 // view draws the panel: each connection and what it joins, then the spread.
-func (p doorsPanel) view(v *engine.Vessel, a *engine.Assessment, st Styles, w, h int) string {
+func (p doorsPanel) view(v *engine.Vessel, a *engine.Assessment, st *Styles, w, h int) string {
 	lines := []string{st.Heading.Render(titleFit(w, "DOORS AND VALVES", "↑↓ choose", "space open/shut", "d closes"))}
 	if len(v.Connections) == 0 {
 		lines = append(lines, st.Dim.Render("The vessel file has no [[connection]] tables."))

@@ -130,7 +130,13 @@ func (m model) figuresView(w int) []string {
 	st := m.st
 	const labelW, valueW, deltaW = 12, 8, 7
 	noteW := max(0, w-labelW-valueW-deltaW-3)
-	const since = "since intact"
+	// The changes are against her intact in the loading she has now: once
+	// the condition is changed on the panel (a righting option taken in,
+	// say), that intact may itself list, and the heading says so.
+	since := "since intact"
+	if changeOnly(m.condition) != "" {
+		since = "since intact, this loading"
+	}
 	head := fitLine(st.Heading.Render("FLOATING POSITION"), w-len(since)-1) + " " + st.Dim.Render(since)
 	lines := []string{head}
 	for _, f := range m.figures() {
@@ -214,7 +220,7 @@ func (m model) flagLines(w, h int) []string {
 }
 
 // flagLine is one flag: a mark by its severity and its sentence.
-func flagLine(st Styles, f engine.Flag, prefix string) string {
+func flagLine(st *Styles, f engine.Flag, prefix string) string {
 	s := st.Info
 	switch f.Severity {
 	case engine.Danger:
@@ -263,7 +269,7 @@ func (m model) bannerView(w, h int) []string {
 	return fit(lines, w, h)
 }
 
-func flagLineText(st Styles, f engine.Flag, l string) string {
+func flagLineText(st *Styles, f engine.Flag, l string) string {
 	if f.Severity == engine.Danger {
 		return st.Danger.Render("‼ " + l)
 	}

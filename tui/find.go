@@ -24,7 +24,7 @@ type finder struct {
 	sel     int      // the selection now
 	matches []int    // the compartments matching what is typed, in list order
 	done    bool     // enter or esc was pressed: the root closes the finder
-	st      Styles
+	st      *Styles
 }
 
 // findLines is how many lines the finder takes at the foot of the screen.
@@ -32,7 +32,7 @@ const findLines = 2
 
 // newFinder opens a finder on compartments names, listed in order, with
 // sel selected.
-func newFinder(names []string, order []int, sel int, st Styles, still bool) (finder, tea.Cmd) {
+func newFinder(names []string, order []int, sel int, st *Styles, still bool) (finder, tea.Cmd) {
 	in := textinput.New()
 	in.Prompt = ""
 	in.CharLimit = 40

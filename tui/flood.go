@@ -70,7 +70,7 @@ type floodPanel struct {
 	v       *engine.Vessel
 	sel     int
 	damage  engine.Damage
-	st      Styles
+	st      *Styles
 	inks    map[ink]lipgloss.Style
 	bar     progress.Model
 	pics    *pictureCache // the plot, drawn again only when it changed

@@ -45,7 +45,7 @@ type floodForm struct {
 	shellZ  float64      // its lowest point in the shell at mid-length
 	state   engine.SpaceState
 	animate bool
-	st      Styles
+	st      *Styles
 }
 
 // formAction is what a key in the form asks of the dashboard.

@@ -225,6 +225,11 @@ func (m model) flagRoom() (flagH, sheetH int) {
 	if m.danger() && !m.hand.show {
 		least = 0
 	}
+	if m.hand.show {
+		// Asked for, the hand method has all but the flags' least: its
+		// answers, caveats and working scroll in it.
+		least = max(least, min(room-l.flagH, 10))
+	}
 	flagH = max(l.flagH, min(m.flagsNeed(l.rightW), room-least))
 	if room-flagH < 5 {
 		flagH = room

@@ -90,7 +90,7 @@ type model struct {
 
 	rend    *lipgloss.Renderer
 	palette int
-	st      Styles
+	st      *Styles
 	inks    map[ink]lipgloss.Style
 
 	damage engine.Damage
@@ -381,7 +381,7 @@ func (m model) key(msg tea.KeyMsg) (tea.Model, tea.Cmd) {
 		return m.updateRemedies(msg)
 	}
 	var took bool
-	if m.hand, took = m.hand.with(m.cur, m.st).update(msg, k); took {
+	if m.hand, took = m.handShown().update(msg, k); took {
 		return m, nil
 	}
 	n := len(m.v.Compartments)

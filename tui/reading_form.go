@@ -41,7 +41,7 @@ const (
 // field is left empty, so that typing "3" gives 3, not the clock's value
 // with a 3 after it), each mark's field with the draft of the state shown
 // as its placeholder.
-func newReadingForm(v *engine.Vessel, minutes float64, shown []engine.MarkDraft, st Styles, animate bool) readingForm {
+func newReadingForm(v *engine.Vessel, minutes float64, shown []engine.MarkDraft, st *Styles, animate bool) readingForm {
 	f := readingForm{on: true}
 	add := func(label, unit, value, hint string, limit int) {
 		in := newTextField()
@@ -215,7 +215,7 @@ func shortKey(key string) string {
 
 // view draws the form in w × h: a title, one field a line (in two columns
 // when they do not fit), the error or the keys.
-func (f readingForm) view(st Styles, w, h int) []string {
+func (f readingForm) view(st *Styles, w, h int) []string {
 	lines := []string{st.Heading.Render("READING BY HAND") + st.Dim.Render("  empty: not read")}
 	labelW := 0
 	for _, l := range f.labels {

@@ -38,7 +38,7 @@ type readingPanel struct {
 	// What to draw with, handed in by the root model (with).
 	v     *engine.Vessel
 	cur   *engine.Position
-	st    Styles
+	st    *Styles
 	bar   progress.Model
 	wide  bool
 	shown []engine.MarkDraft
@@ -67,7 +67,7 @@ type (
 )
 
 // with returns the panel with what it needs to draw.
-func (p readingPanel) with(v *engine.Vessel, cur *engine.Position, st Styles, bar progress.Model, wide bool) readingPanel {
+func (p readingPanel) with(v *engine.Vessel, cur *engine.Position, st *Styles, bar progress.Model, wide bool) readingPanel {
 	p.v, p.cur, p.st, p.bar, p.wide = v, cur, st, bar, wide
 	p.shown = nil
 	if cur != nil && len(v.DraftMarks) > 0 {

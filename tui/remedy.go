@@ -39,7 +39,7 @@ type remedyPanel struct {
 	// What the panel works and draws with, given by with before each use.
 	v      *engine.Vessel
 	damage engine.Damage // the damage state shown
-	st     Styles
+	st     *Styles
 	spin   string // the computing mark
 	w, h   int    // the body of the screen, which the panel takes
 }

@@ -220,7 +220,7 @@ func remedyColumns(w int) remedyCols {
 	c := remedyCols{wide: w >= remedyWideW}
 	fixed := 3 + 7 + 8 + 6 + 7 + 5
 	if c.wide {
-		fixed += 7 + 8 + 6
+		fixed += 2 + 10 + 10 + 6
 	}
 	c.actionW = max(8, w-fixed)
 	return c
@@ -228,11 +228,14 @@ func remedyColumns(w int) remedyCols {
 
 // header is the table's heading line.
 func (c remedyCols) header() string {
-	s := " # " + pad("action", c.actionW) + padLeft("mass t", 7) + padLeft("heel", 8) + padLeft("GM m", 6) + padLeft("deck m", 7)
 	if c.wide {
-		s += padLeft("rest m", 7) + padLeft("opening", 8)
+		// Each GM says where it is taken (upright, at the heel she comes
+		// to), and the opening's height its unit.
+		s := " # " + pad("action", c.actionW) + padLeft("mass t", 7) + padLeft("heel", 8) + padLeft("GM up m", 8) + padLeft("deck m", 7)
+		s += padLeft("GM heel m", 10) + padLeft("opening m", 10)
 		return s + "  advisable"
 	}
+	s := " # " + pad("action", c.actionW) + padLeft("mass t", 7) + padLeft("heel", 8) + padLeft("GM m", 6) + padLeft("deck m", 7)
 	return s + "  adv"
 }
 
@@ -271,10 +274,11 @@ func (p remedyPanel) row(c remedyCols, rank int, o engine.Remedy) []string {
 		adv = st.Caution.Render("NO")
 	}
 	first := st.Dim.Render(padLeft(strconv.Itoa(rank), 2)+" ") + text.Render(pad(firstOf(act), c.actionW)) +
-		text.Render(padLeft(massText(o.MassT), 7)) + heelStyle.Render(padLeft(heel, 8)) + text.Render(padLeft(gm, 6)) +
-		deckStyle.Render(padLeft(deck, 7))
+		text.Render(padLeft(massText(o.MassT), 7)) + heelStyle.Render(padLeft(heel, 8))
 	if c.wide {
-		first += text.Render(padLeft(gm0, 7) + padLeft(open, 8))
+		first += text.Render(padLeft(gm, 8)) + deckStyle.Render(padLeft(deck, 7)) + text.Render(padLeft(gm0, 10)+padLeft(open, 10))
+	} else {
+		first += text.Render(padLeft(gm, 6)) + deckStyle.Render(padLeft(deck, 7))
 	}
 	out := []string{first + "  " + adv}
 	for _, l := range act[min(1, len(act)):] {

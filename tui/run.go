@@ -103,6 +103,6 @@ func (m model) writeReport() tea.Cmd {
 		if path == "" {
 			path = filepath.Join(dir, base+".md")
 		}
-		return reportMsg{path, err}
+		return reportMsg{path, saveError(path, err)}
 	}
 }

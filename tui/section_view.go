@@ -13,7 +13,7 @@ import (
 const floodShade = '░'
 
 // pictureInks maps the inks of a picture to the styles of the palette.
-func (st Styles) pictureInks() map[ink]lipgloss.Style {
+func (st *Styles) pictureInks() map[ink]lipgloss.Style {
 	return map[ink]lipgloss.Style{
 		inkAxis: st.Axis, inkFlood: st.Flood, inkBulkhead: st.Bulkhead, inkWater: st.Waterline,
 		inkHull: st.Hull, inkCurve: st.Curve, inkSpace: st.Space, inkMark: st.Mark,
@@ -31,7 +31,7 @@ func (m *model) framed(c *canvas, yStep float64, yFmt func(float64) string) []st
 }
 
 // framedIn is framed for a part that holds its own styles.
-func framedIn(st Styles, inks map[ink]lipgloss.Style, c *canvas, yStep float64, yFmt func(float64) string) []string {
+func framedIn(st *Styles, inks map[ink]lipgloss.Style, c *canvas, yStep float64, yFmt func(float64) string) []string {
 	body := c.render(inks)
 	left := make([]string, c.h)
 	if yStep > 0 {

@@ -71,12 +71,18 @@ func (hp handPanel) caveatLines(w int) []string {
 	return out
 }
 
-// handShown is the hand method's panel with the figures shown and the
-// hand method's caveats among their flags.
+// handShown is the hand method's panel with the figures shown, the
+// hand method's caveats among their flags, and the room it is drawn in:
+// the wide screen's row of pictures (without its answers, which stand
+// under the figures), else the narrow screen's sheet.
 func (m model) handShown() handPanel {
 	hp := m.hand.with(m.cur, m.st)
 	hp.caveats = m.derived.hand
-	return hp
+	if m.lay.wide {
+		return hp.room(m.width, m.lay.picH, false)
+	}
+	_, sheetH := m.flagRoom()
+	return hp.room(m.lay.rightW, sheetH, true)
 }
 
 // danger reports whether a flag about the ship is of danger.

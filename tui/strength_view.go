@@ -23,7 +23,7 @@ type girderPanel struct {
 	flip bool // the other set of limits than the vessel's (sea or harbour)
 
 	cur, base *engine.Assessment // the state shown and the intact one
-	st        Styles
+	st        *Styles
 	inks      map[ink]lipgloss.Style
 }
 
@@ -45,7 +45,7 @@ func (p girderPanel) update(msg tea.Msg) (girderPanel, tea.Cmd) {
 }
 
 // with returns the panel with the figures and styles to draw.
-func (p girderPanel) with(cur, base *engine.Assessment, st Styles, inks map[ink]lipgloss.Style) girderPanel {
+func (p girderPanel) with(cur, base *engine.Assessment, st *Styles, inks map[ink]lipgloss.Style) girderPanel {
 	p.cur, p.base, p.st, p.inks = cur, base, st, inks
 	return p
 }

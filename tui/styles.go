@@ -134,7 +134,7 @@ type Styles struct {
 
 // newStyles builds the dashboard's styles for a palette on renderer r (the
 // renderer decides how far colours are degraded for the terminal).
-func newStyles(r *lipgloss.Renderer, p palette) Styles {
+func newStyles(r *lipgloss.Renderer, p palette) *Styles {
 	fg := func(c lipgloss.TerminalColor) lipgloss.Style {
 		s := r.NewStyle()
 		if c != nil {
@@ -205,7 +205,7 @@ func newStyles(r *lipgloss.Renderer, p palette) Styles {
 		FullDesc:       fg(p.dim),
 		FullSeparator:  fg(p.dim),
 	}
-	return s
+	return &s
 }
 
 // hexOf is the hex string of a palette colour as the renderer would show

@@ -92,11 +92,14 @@ func (m model) headerView(w int) string {
 		// list's heading says it too.
 		right = summary(sum[1:])
 	}
-	if palette := st.Dim.Render("  " + m.st.Palette); lipgloss.Width(left)+lipgloss.Width(right+palette)+1 <= w {
-		right += palette
-	}
 	if m.condition != "" && lipgloss.Width(left)+lipgloss.Width(right)+len([]rune(m.condition))+4 <= w {
 		left += st.Dim.Render(" · " + m.condition)
+	} else if mark := changeOnly(m.condition); mark != "" && lipgloss.Width(left)+lipgloss.Width(right)+len([]rune(mark))+4 <= w {
+		// No room for the name: that it was changed is said all the same.
+		left += st.Dim.Render(" · " + mark)
+	}
+	if palette := st.Dim.Render("  " + m.st.Palette); lipgloss.Width(left)+lipgloss.Width(right+palette)+1 <= w {
+		right += palette
 	}
 	if lipgloss.Width(left)+lipgloss.Width(right)+1 > w {
 		// The vessel's name gives way to the figures.

@@ -71,17 +71,6 @@ func (r *reader) outline(s *table) ([]engine.Point, bool) {
 	return out, ok
 }
 
-// sectionCompartment builds a compartment from its sections on hull,
-// saying why where it cannot.
-func (r *reader) sectionCompartment(t *table, hull *engine.Hull, name string, secs []engine.CompartmentSection) *engine.Compartment {
-	c, err := engine.NewSectionCompartment(hull, name, secs)
-	if err != nil {
-		r.addf(t.keyPath("section"), "%v", err)
-		return nil
-	}
-	return c
-}
-
 // overlapM3 returns the volume two compartments share inside the hull:
 // boxes by their common box, others by their outlines.
 func overlapM3(h *engine.Hull, a, b *engine.Compartment) float64 {

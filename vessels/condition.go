@@ -70,6 +70,10 @@ func ParseCondition(file string, data []byte, v *engine.Vessel, info *Info) (*Co
 	if err != nil {
 		return nil, err
 	}
+	if k := stateOnlyKey(root); k != "" {
+		r.addf(k, "this is a saved state (it holds %s, which a condition file does not), not a condition file: take it up on the dashboard with heelwatch --resume %s", k, file)
+		return nil, r.probs.sorted()
+	}
 	c := r.condition(root, v, info)
 	root.finish()
 	if len(r.probs) > 0 {
@@ -115,7 +119,14 @@ func (r *reader) condition(root *table, v *engine.Vessel, info *Info) *Condition
 	if len(ts) == 0 && !root.has("keep") {
 		r.addf("weight", "missing: a condition needs its weights: [[weight]] tables (lightship included), or keep = [names] of the vessel file's")
 	}
-	c.Tanks = r.tankFills(root.entries("tank", "one tank's contents"), v, info)
+	// Soundings are checked against full as she lay when sounded if the
+	// file says so, else upright and level (Apply reads a sounding past
+	// full at her own heel and trim as full).
+	slope := engine.Plane{}
+	if c.Sounded && v.Hull != nil {
+		slope = engine.Plane{B: -c.SoundedTrimM / v.Hull.LengthM, C: math.Tan(c.SoundedHeelDeg * math.Pi / 180)}
+	}
+	c.Tanks = r.tankFills(root.entries("tank", "one tank's contents"), v, info, slope)
 	if n := r.named; n.unknown >= 3 && n.unknown > n.known {
 		r.addf("name", "%d of the %d weights and tanks named here are not %s's: is this condition written for another ship?", n.unknown, n.unknown+n.known, v.Name)
 	}
@@ -179,11 +190,11 @@ func (r *reader) keptWeights(root *table, v *engine.Vessel) []engine.Weight {
 var tankAmounts = []string{"fill", "volume_m3", "mass_t", "sounding_m"}
 
 // tankFills reads the [[tank]] tables.
-func (r *reader) tankFills(ts []*table, v *engine.Vessel, info *Info) []TankFill {
+func (r *reader) tankFills(ts []*table, v *engine.Vessel, info *Info, slope engine.Plane) []TankFill {
 	var out []TankFill
 	seen := map[int]string{}
 	for _, t := range ts {
-		tf, ok := r.tankFill(t, v, info, seen)
+		tf, ok := r.tankFill(t, v, info, seen, slope)
 		t.finish()
 		if ok {
 			out = append(out, tf)
@@ -192,7 +203,8 @@ func (r *reader) tankFills(ts []*table, v *engine.Vessel, info *Info) []TankFill
 	return out
 }
 
-func (r *reader) tankFill(t *table, v *engine.Vessel, info *Info, seen map[int]string) (TankFill, bool) {
+// slope is the water plane's slopes the soundings are checked at.
+func (r *reader) tankFill(t *table, v *engine.Vessel, info *Info, seen map[int]string, slope engine.Plane) (TankFill, bool) {
 	tf := TankFill{SoundingM: -1, File: r.file, Key: t.path, Line: r.lines.line(t.path)}
 	name, nameOK := t.str("name", true, "the tank's compartment name in quotes")
 	liquid, liquidOK := t.str("liquid", false, "what the tank holds, e.g. \"fuel oil\"")
@@ -290,7 +302,7 @@ func (r *reader) tankFill(t *table, v *engine.Vessel, info *Info, seen map[int]s
 	switch k {
 	case "fill":
 		if f > 1 {
-			r.addf(p, "%g is more than 1: fill is the fraction of the tank's capacity (μ × its volume inside the hull), 0 to 1", f)
+			r.addf(p, "%g is more than 1: fill is a fraction of the tank's capacity (μ × its volume inside the hull), 0 to 1%s", f, percentHint(f))
 			return tf, false
 		}
 		tf.Liquid.Fill = f
@@ -305,22 +317,41 @@ func (r *reader) tankFill(t *table, v *engine.Vessel, info *Info, seen map[int]s
 		}
 		tf.Liquid.Fill = math.Min(vol/capM3, 1)
 	case "sounding_m":
-		tf.Pipe = c.DefaultSoundingPipe()
+		tf.Pipe = c.SoundingPipe()
 		if info != nil && idx < len(info.Compartments) && info.Compartments[idx].SoundingPipe != nil {
 			tf.Pipe = *info.Compartments[idx].SoundingPipe
 		}
-		datum, top, err := c.PipeSpan(tf.Pipe)
+		full, err := c.FullSoundingM(tf.Pipe, slope)
 		if err != nil {
 			r.addf(p, "%v: give the compartment a sounding_pipe = [x, y] inside it in the vessel file", err)
 			return tf, false
 		}
-		if f > top-datum+1e-9 {
-			r.addf(p, "%g m is above the top of %q at its sounding pipe (%.3f m from the tank's bottom at x = %.2f m, y = %.2f m): the tank cannot hold more", f, c.Name, top-datum, tf.Pipe.X, tf.Pipe.Y)
+		if f > full+1e-9 {
+			r.addf(p, "%g m is more than %q can sound: it is full at %.3f m at its sounding pipe (x = %.2f m, y = %.2f m)", f, c.Name, full, tf.Pipe.X, tf.Pipe.Y)
 			return tf, false
 		}
 		tf.SoundingM = f
 	}
 	return tf, true
+}
+
+// percentHint is the hint for a fill that looks written in per cent
+// from 2 to 100): ": did you mean 0.80 (80 %)?"; "" otherwise.
+func percentHint(f float64) string {
+	if !(f >= 2 && f <= 100) {
+		return ""
+	}
+	return fmt.Sprintf(": did you mean %s (%g %%)?", strconvTrim(f/100), f)
+}
+
+// strconvTrim writes a fraction with two decimals at least and no
+// trailing zeros beyond them: 0.80, 0.555, 1.00.
+func strconvTrim(x float64) string {
+	s := fmt.Sprintf("%.6f", x)
+	for strings.HasSuffix(s, "0") && len(s)-strings.Index(s, ".") > 3 {
+		s = s[:len(s)-1]
+	}
+	return s
 }
 
 func tankAmountUnit(k string) string {
@@ -343,4 +374,15 @@ func tankAmountText(k string, f float64) string {
 		return fmt.Sprintf("%g t", f)
 	}
 	return fmt.Sprint(f)
+}
+
+// stateOnlyKey returns the first top-level key of root that only a saved
+// state file holds (vessel, space, connection_state, reading), or "".
+func stateOnlyKey(root *table) string {
+	for _, k := range []string{"space", "connection_state", "reading", "vessel"} {
+		if root.has(k) {
+			return k
+		}
+	}
+	return ""
 }

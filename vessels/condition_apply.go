@@ -51,7 +51,18 @@ func (c *Condition) Apply(v *engine.Vessel) (*engine.Vessel, error) {
 				continue
 			}
 			cp := v.Compartments[t.Compartment]
-			vol, err := cp.SoundingVolumeM3(t.Pipe, t.SoundingM, slope)
+			s := t.SoundingM
+			if !c.Sounded {
+				// A sounding within full upright (what a condition file
+				// is checked against) that is past full at her own heel
+				// and trim reads as full: the liquid stands in the pipe.
+				// One past full upright too is refused below.
+				up, errUp := cp.FullSoundingM(t.Pipe, engine.Plane{})
+				if full, err := cp.FullSoundingM(t.Pipe, slope); err == nil && errUp == nil && s <= up+1e-9 {
+					s = math.Min(s, full)
+				}
+			}
+			vol, err := cp.SoundingVolumeM3(t.Pipe, s, slope)
 			if err != nil {
 				return nil, t.problem(err.Error())
 			}

@@ -15,7 +15,7 @@ func TestSoundingAboveTopMessage(t *testing.T) {
 	if err == nil {
 		t.Fatal("a sounding above the fore peak's top was taken")
 	}
-	if !regexp.MustCompile(`is above the top of "Fore peak tank" at its sounding pipe \(\d+\.\d{3} m from the tank's bottom at x = \d+\.\d\d m, y = -?\d+\.\d\d m\)`).MatchString(err.Error()) {
+	if !regexp.MustCompile(`is more than "Fore peak tank" can sound: it is full at \d+\.\d{3} m at its sounding pipe \(x = \d+\.\d\d m, y = -?\d+\.\d\d m\)`).MatchString(err.Error()) {
 		t.Errorf("the message reads %v", err)
 	}
 }

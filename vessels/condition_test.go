@@ -159,7 +159,7 @@ func TestConditionProblems(t *testing.T) {
 		{"format = 1\nkeep = [\"Lightship\"]\n[[tank]]\nname = \"DB ballast aft\"\nfill = 1.2\n",
 			`c.toml:5: tank[1].fill: 1.2 is more than 1`},
 		{"format = 1\nkeep = [\"Lightship\"]\n[[tank]]\nname = \"DB ballast aft\"\nsounding_m = 1.5\n",
-			`c.toml:5: tank[1].sounding_m: 1.5 m is above the top of "DB ballast aft"`},
+			`c.toml:5: tank[1].sounding_m: 1.5 m is more than "DB ballast aft" can sound: it is full at 1.000 m`},
 		{"format = 1\nkeep = [\"Lightship\"]\n[[tank]]\nname = \"DB ballast aft\"\nfill = 0.5\nvolume_m3 = 3.0\n",
 			`tank[1].volume_m3: give one of fill, volume_m3, mass_t, sounding_m, not both fill and volume_m3`},
 		{"format = 1\nkeep = [\"Lightship\"]\n[[tank]]\nname = \"Hold aft\"\nfill = 0.5\n",

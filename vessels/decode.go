@@ -6,9 +6,11 @@ import "github.com/BurntSushi/toml"
 // condition, readings, scenario, state): at most MaxFileBytes, nesting no
 // deeper than the formats need (checked before the TOML decoder sees the
 // text, which would otherwise take minutes on a hostile file), the TOML
-// decoded, no array longer than maxItems. It returns the reader that
-// collects the file's problems and the root table; an error here is the
-// whole answer (a syntax error stops the reading of the rest).
+// decoded, no array longer than maxItems. The lines of the keys (for the
+// messages) are indexed while the decoder runs (lineIndexing). It returns
+// the reader that collects the file's problems and the root table; an
+// error here is the whole answer (a syntax error stops the reading of the
+// rest).
 func decode(file string, data []byte) (*reader, *table, error) {
 	if len(data) > MaxFileBytes {
 		return nil, nil, Problems{{File: file, Line: 1, Key: "syntax", Msg: errTooLarge.Error()}}
@@ -17,10 +19,13 @@ func decode(file string, data []byte) (*reader, *table, error) {
 		return nil, nil, Problems{*p}
 	}
 	var doc map[string]any
-	if _, err := toml.Decode(string(data), &doc); err != nil {
+	src := string(data)
+	lines := startIndexLines(src)
+	if _, err := toml.Decode(src, &doc); err != nil {
+		lines.drop()
 		return nil, nil, syntaxProblem(file, err)
 	}
-	r := &reader{file: file, lines: indexLines(string(data))}
+	r := &reader{file: file, lines: lines.index()}
 	if r.tooMany("", doc) {
 		return nil, nil, r.probs.sorted()
 	}

@@ -87,7 +87,7 @@ func regularAndSmall(path string, st os.FileInfo) error {
 	default:
 		kind = "not a regular file"
 	}
-	return fmt.Errorf("%s is %s: give a vessel file (only regular files are read)", path, kind)
+	return fmt.Errorf("%s is %s: give a file on disk (only regular files are read)", path, kind)
 }
 
 // tooDeep scans a document before it is decoded and returns a problem when
@@ -175,13 +175,59 @@ func skipString(data []byte, i int) (int, int) {
 }
 
 // tooMany reports every array in the decoded document v (at path) with
-// more than maxItems entries, and returns whether it found one.
+// more than maxItems entries, and returns whether it found one. A document
+// without one (every file that is read) is walked once without building
+// any key path (anyTooLong); only a refused one is walked again for them.
 func (r *reader) tooMany(path string, v any) bool {
+	if !anyTooLong(v) {
+		return false
+	}
+	return r.tooManyAt(path, v)
+}
+
+// anyTooLong reports whether the decoded value v holds an array of more
+// than maxItems entries, at any depth.
+func anyTooLong(v any) bool {
+	switch x := v.(type) {
+	case map[string]any:
+		for _, e := range x {
+			if anyTooLong(e) {
+				return true
+			}
+		}
+	case []map[string]any:
+		if len(x) > maxItems {
+			return true
+		}
+		for _, e := range x {
+			if anyTooLong(e) {
+				return true
+			}
+		}
+	case []any:
+		if len(x) > maxItems {
+			return true
+		}
+		for _, e := range x {
+			switch e.(type) {
+			case map[string]any, []map[string]any, []any:
+				if anyTooLong(e) {
+					return true
+				}
+			}
+		}
+	}
+	return false
+}
+
+// tooManyAt is tooMany's walk that reports each array too long at its key
+// path.
+func (r *reader) tooManyAt(path string, v any) bool {
 	found := false
 	switch x := v.(type) {
 	case map[string]any:
 		for k, e := range x {
-			found = r.tooMany(joinPath(path, k), e) || found
+			found = r.tooManyAt(joinPath(path, k), e) || found
 		}
 	case []map[string]any:
 		if len(x) > maxItems {
@@ -189,7 +235,7 @@ func (r *reader) tooMany(path string, v any) bool {
 			return true
 		}
 		for i, e := range x {
-			found = r.tooMany(fmt.Sprintf("%s[%d]", path, i+1), e) || found
+			found = r.tooManyAt(elemPath(path, i+1), e) || found
 		}
 	case []any:
 		if len(x) > maxItems {
@@ -197,7 +243,7 @@ func (r *reader) tooMany(path string, v any) bool {
 			return true
 		}
 		for i, e := range x {
-			found = r.tooMany(fmt.Sprintf("%s[%d]", path, i+1), e) || found
+			found = r.tooManyAt(elemPath(path, i+1), e) || found
 		}
 	}
 	return found

@@ -37,6 +37,12 @@ func TestOnlyRegularFilesAreRead(t *testing.T) {
 			t.Errorf("Load(%s) = %v, want %q", path, err, frag)
 		}
 	}
+	// A condition file that is a device is called a condition file, not a
+	// vessel file.
+	v, info := openBundled(t, "barge")
+	if _, err := LoadCondition("/dev/zero", v, info); err == nil || !strings.HasPrefix(err.Error(), "condition file: /dev/zero is a device") || strings.Contains(err.Error(), "vessel file") {
+		t.Errorf("LoadCondition(/dev/zero) = %v", err)
+	}
 	if _, _, err := Parse("big.toml", make([]byte, MaxFileBytes+1)); err == nil || !strings.Contains(err.Error(), "larger than 16 MiB") {
 		t.Errorf("Parse of 16 MiB + 1: %v", err)
 	}

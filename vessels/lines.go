@@ -1,6 +1,7 @@
 package vessels
 
 import (
+	"runtime"
 	"strconv"
 	"strings"
 )
@@ -22,13 +23,50 @@ type lineIndex struct {
 // tables; deeper values are skipped as a whole.
 const maxNesting = 64
 
-// indexLines scans src, which must be a document BurntSushi/toml accepted.
-// It never fails: on anything it does not follow it stops noting lines.
+// indexLines scans src, a document BurntSushi/toml accepted; its index
+// of any other text is not used. It never fails, on any text (lineIndexing
+// runs it before the decoder has judged the text): on anything it does not
+// follow it stops noting lines.
 func indexLines(src string) *lineIndex {
 	ix := &lineIndex{at: map[string]int{}, aot: map[string]int{}}
 	s := &scanner{src: src, line: 1, ix: ix}
 	s.document()
 	return ix
+}
+
+// lineIndexing is the indexing of a document's lines (indexLines) begun
+// beside the TOML decoder: on a goroutine of its own when more than one
+// can run, so that it takes nothing from the decoder's time; otherwise
+// only when the index is asked for.
+type lineIndexing struct {
+	src  string
+	done chan *lineIndex // nil when not started
+}
+
+// startIndexLines begins indexing the lines of src.
+func startIndexLines(src string) *lineIndexing {
+	li := &lineIndexing{src: src}
+	if runtime.GOMAXPROCS(0) >= 2 {
+		li.done = make(chan *lineIndex, 1)
+		go func() { li.done <- indexLines(src) }()
+	}
+	return li
+}
+
+// index returns the index, waiting for it or making it.
+func (li *lineIndexing) index() *lineIndex {
+	if li.done == nil {
+		return indexLines(li.src)
+	}
+	return <-li.done
+}
+
+// drop waits for a scan begun (so that none outlives decode) and does
+// not make one: the index of a document the decoder refused is not used.
+func (li *lineIndexing) drop() {
+	if li.done != nil {
+		<-li.done
+	}
 }
 
 // line returns the line of path, or of its nearest enclosing key or table
@@ -57,6 +95,10 @@ type scanner struct {
 	i    int
 	line int
 	ix   *lineIndex
+	// path is the key path of the value being scanned, built up and cut
+	// back in place as the scanner enters and leaves arrays and inline
+	// tables, so that only a path that is noted becomes a string.
+	path []byte
 }
 
 func (s *scanner) eof() bool { return s.i >= len(s.src) }
@@ -130,7 +172,8 @@ func (s *scanner) document() {
 			s.blank()
 			path := joinPath(table, key)
 			s.note(path, line)
-			s.value(path, 0, line)
+			s.path = append(s.path[:0], path...)
+			s.value(0, line)
 		}
 		if s.i == start {
 			s.next() // always move on
@@ -143,6 +186,35 @@ func (s *scanner) note(path string, line int) {
 	if _, ok := s.ix.at[path]; !ok {
 		s.ix.at[path] = line
 	}
+}
+
+// notePath records the line of the scanner's current path unless it was
+// seen already.
+func (s *scanner) notePath(line int) {
+	if _, ok := s.ix.at[string(s.path)]; !ok {
+		s.ix.at[string(s.path)] = line
+	}
+}
+
+// enterElement extends the current path to its element n ("[n]") and
+// returns the length to cut it back to.
+func (s *scanner) enterElement(n int) int {
+	mark := len(s.path)
+	s.path = append(s.path, '[')
+	s.path = strconv.AppendInt(s.path, int64(n), 10)
+	s.path = append(s.path, ']')
+	return mark
+}
+
+// enterKey extends the current path by key k as joinPath does and returns
+// the length to cut it back to.
+func (s *scanner) enterKey(k string) int {
+	mark := len(s.path)
+	if len(s.path) > 0 && k != "" {
+		s.path = append(s.path, '.')
+	}
+	s.path = append(s.path, k...)
+	return mark
 }
 
 // header reads "[a.b]" or "[[a.b]]" and returns the resolved table path.
@@ -226,10 +298,11 @@ func (s *scanner) quoted(q byte) string {
 }
 
 // value skips one value, noting the lines of array elements and of the
-// keys of inline tables under path, which starts on line at. An element
-// on the line its array starts on is not noted (its line is found through
-// its parent's), so that a long table of numbers costs little.
-func (s *scanner) value(path string, depth, at int) {
+// keys of inline tables under the current path (s.path), which starts on
+// line at. An element on the line its array starts on is not noted (its
+// line is found through its parent's), so that a long table of numbers
+// costs little.
+func (s *scanner) value(depth, at int) {
 	switch c := s.peek(); c {
 	case '"', '\'':
 		if strings.HasPrefix(s.src[s.i:], string([]byte{c, c, c})) {
@@ -255,17 +328,18 @@ func (s *scanner) value(path string, depth, at int) {
 			start := s.i
 			c := s.peek()
 			if s.line == at && c != '[' && c != '{' {
-				s.value("", depth+1, at) // a scalar or a string: nothing to note
+				s.value(depth+1, at) // a scalar or a string: nothing to note
 			} else {
-				el := path + "[" + itoa(n) + "]"
+				mark := s.enterElement(n)
 				if s.line != at {
-					s.note(el, s.line)
+					s.notePath(s.line)
 				}
 				if depth < maxNesting {
-					s.value(el, depth+1, s.line)
+					s.value(depth+1, s.line)
 				} else {
 					s.scalar()
 				}
+				s.path = s.path[:mark]
 			}
 			if s.i == start {
 				s.next()
@@ -293,13 +367,14 @@ func (s *scanner) value(path string, depth, at int) {
 			if s.peek() == '=' {
 				s.next()
 				s.blank()
-				p := joinPath(path, k)
-				s.note(p, line)
+				mark := s.enterKey(k)
+				s.notePath(line)
 				if depth < maxNesting {
-					s.value(p, depth+1, line)
+					s.value(depth+1, line)
 				} else {
 					s.scalar()
 				}
+				s.path = s.path[:mark]
 			}
 			if s.i == start {
 				s.next()
@@ -353,3 +428,7 @@ func joinPath(a, b string) string {
 }
 
 func itoa(n int) string { return strconv.Itoa(n) }
+
+// elemPath returns the key path of element i (1-based) of the array at p,
+// as "hull.section[2].offsets[4]".
+func elemPath(p string, i int) string { return p + "[" + itoa(i) + "]" }

@@ -269,23 +269,29 @@ func (r *reader) offsets(s *table) ([]engine.Point, bool) {
 		r.addf(s.keyPath("offsets"), "has %d point(s): an outline needs at least two [half_breadth, z] pairs, keel to deck", len(pts))
 		return nil, false
 	}
-	var out []engine.Point
+	p := s.keyPath("offsets")
+	out := make([]engine.Point, 0, len(pts))
 	for _, q := range pts {
-		ep, y, z := q.path, q.Y, q.Z
-		if r.pointTooFar(ep, y, z) {
-			ok = false
-		}
-		if y < 0 {
-			r.addf(ep, "half-breadth %g m is negative: give the starboard half, 0 or more", y)
-			ok = false
-		}
-		if z < 0 {
-			r.addf(ep, "height %g m is below the baseline: z must be 0 or more", z)
-			ok = false
-		}
-		if len(out) > 0 && z < out[len(out)-1].Z {
-			r.addf(ep, "height %g m is below the point before (%g m): heights must ascend from the keel to the deck", z, out[len(out)-1].Z)
-			ok = false
+		y, z := q.Y, q.Z
+		descends := len(out) > 0 && z < out[len(out)-1].Z
+		if y > maxHalfBreadth || z > maxHeight || y < 0 || z < 0 || descends {
+			// Only a refused point needs its key path.
+			ep := elemPath(p, q.at)
+			if r.pointTooFar(ep, y, z) {
+				ok = false
+			}
+			if y < 0 {
+				r.addf(ep, "half-breadth %g m is negative: give the starboard half, 0 or more", y)
+				ok = false
+			}
+			if z < 0 {
+				r.addf(ep, "height %g m is below the baseline: z must be 0 or more", z)
+				ok = false
+			}
+			if descends {
+				r.addf(ep, "height %g m is below the point before (%g m): heights must ascend from the keel to the deck", z, out[len(out)-1].Z)
+				ok = false
+			}
 		}
 		out = append(out, q.Point)
 	}
@@ -296,10 +302,12 @@ func (r *reader) offsets(s *table) ([]engine.Point, bool) {
 	return out, ok
 }
 
-// pointAt is a point read from a file with the key path it was read at.
+// pointAt is a point read from a file with the place it was read at: the
+// 1-based index of its pair in the array (its key path is elemPath(array's
+// path, at), built only for a message).
 type pointAt struct {
 	engine.Point
-	path string
+	at int
 }
 
 // pointPairs reads the array key of s as [a, b] pairs of finite metres
@@ -321,10 +329,9 @@ func (r *reader) pointPairs(s *table, key, names, missing string) ([]pointAt, bo
 	ok := true
 	out := make([]pointAt, 0, len(a))
 	for j, e := range a {
-		ep := fmt.Sprintf("%s[%d]", p, j+1)
 		pair, isPair := e.([]any)
 		if !isPair || len(pair) != 2 {
-			r.addf(ep, "must be a pair [%s] in metres, not %s", names, describe(e))
+			r.addf(elemPath(p, j+1), "must be a pair [%s] in metres, not %s", names, describe(e))
 			ok = false
 			continue
 		}
@@ -332,15 +339,15 @@ func (r *reader) pointPairs(s *table, key, names, missing string) ([]pointAt, bo
 		z, zOK := number(pair[1])
 		switch {
 		case !yOK || !zOK:
-			r.addf(ep, "must be two numbers [%s] in metres", names)
+			r.addf(elemPath(p, j+1), "must be two numbers [%s] in metres", names)
 			ok = false
 			continue
 		case math.IsNaN(y) || math.IsInf(y, 0) || math.IsNaN(z) || math.IsInf(z, 0) || math.Abs(y) > maxMagnitude || math.Abs(z) > maxMagnitude:
-			r.addf(ep, "[%v, %v] is not a pair of finite metres (at most %g in size)", y, z, maxMagnitude)
+			r.addf(elemPath(p, j+1), "[%v, %v] is not a pair of finite metres (at most %g in size)", y, z, maxMagnitude)
 			ok = false
 			continue
 		}
-		out = append(out, pointAt{engine.Point{Y: y, Z: z}, ep})
+		out = append(out, pointAt{engine.Point{Y: y, Z: z}, j + 1})
 	}
 	return out, ok
 }
@@ -407,82 +414,49 @@ func (r *reader) name(t *table, seen map[string]string, what string) (string, bo
 
 // compartments reads the [[compartment]] tables and builds them on hull
 // (nil if the hull could not be built: then only the file's own checks run).
+//
+// It works in three passes: each table is read in file order (its
+// problems kept aside), the solids of those read well are built at once
+// (buildSolids, concurrently), and then, in file order again, each
+// compartment's problems are recorded, followed by those found building
+// it, filling it and checking it against the ones before. The problems
+// come out in the same order as if each compartment were read and built
+// before the next.
 func (r *reader) compartments(ts []*table, hull *engine.Hull) ([]*engine.Compartment, []CompartmentInfo) {
 	names := map[string]string{}
+	reads := make([]compartmentRead, len(ts))
+	for i, t := range ts {
+		mark := len(r.probs)
+		reads[i] = r.compartment(t, names, hull)
+		reads[i].probs = append(Problems(nil), r.probs[mark:]...)
+		r.probs = r.probs[:mark]
+	}
+	buildSolids(hull, reads)
 	var out []*engine.Compartment
 	var infos []CompartmentInfo
 	var paths []string
-	for _, t := range ts {
-		name, _ := r.name(t, names, "compartment")
-		use, useOK := t.choice("use", true, Uses())
-		var ci CompartmentInfo
-		ci.Use = use
-		mu, muGiven := t.num("permeability", "fraction, 0 < μ ≤ 1", false)
-		if muGiven && !(mu > 0 && mu <= 1) {
-			def := ""
-			if useOK {
-				def = fmt.Sprintf(", or leave it out for the default %.2f of use %q", uses[use].permeability, use)
-			}
-			r.addf(t.keyPath("permeability"), "%g is outside (0, 1]: give the fraction of the space water can fill, above 0 and at most 1%s", mu, def)
-			muGiven = false
-		}
-		if !muGiven && useOK {
-			mu = uses[use].permeability
-			ci.DefaultPermeabilityFromUse = true
-		}
-		secs, secBox, secsOK := r.sectionOutlines(t)
-		var bx, by, bz [2]float64
-		xOK, yOK, zOK := secsOK, secsOK, secsOK
-		if secs == nil {
-			bx, xOK = t.bounds("x", "aft and forward bounds")
-			by, yOK = t.bounds("y", "port and starboard bounds")
-			bz, zOK = t.bounds("z", "bottom and top")
-		}
-		box := engine.Box{X0: bx[0], X1: bx[1], Y0: by[0], Y1: by[1], Z0: bz[0], Z1: bz[1]}
-		if secs != nil {
-			box = secBox
-		}
-		ci.Group = uses[use].group
-		if g, ok := t.str("group", false, "the compartment's group, e.g. \"double bottom\""); ok {
-			if strings.TrimSpace(g) == "" {
-				r.addf(t.keyPath("group"), "is empty: give a group name or leave the key out")
-			} else if r.checkName(t.keyPath("group"), g, "group's name") {
-				ci.Group = g
-			}
-		}
-		liquid := r.liquid(t, use, useOK)
-		ci.Hole = r.hole(t, box, xOK && yOK && zOK)
-		if p, ok := t.num("pump_m3h", "m³/h", false); ok {
-			if p < 0 {
-				r.addf(t.keyPath("pump_m3h"), "%g m³/h is negative: pumping capacity is 0 or more", p)
-			}
-			ci.PumpM3h = p
-		}
-		ci.SoundingPipe = r.soundingPipe(t, box, xOK && yOK && zOK)
-		t.finish()
-		if hull == nil || !(xOK && yOK && zOK) {
+	for i := range reads {
+		cr := &reads[i]
+		t, name := cr.t, cr.name
+		r.probs = append(r.probs, cr.probs...)
+		if !cr.build {
 			continue
 		}
-		if !r.insideHull(t, hull, box) {
-			continue
-		}
-		var c *engine.Compartment
-		var err error
-		if secs != nil {
-			if c = r.sectionCompartment(t, hull, name, secs); c == nil {
-				continue
-			}
-		} else {
-			c, err = engine.NewCompartment(hull, name, box)
-		}
+		c, err := cr.c, cr.err
 		if err != nil {
-			r.addf(t.path, "%q holds no part of the hull: its box x [%g, %g], y [%g, %g], z [%g, %g] lies outside the shell", name, bx[0], bx[1], by[0], by[1], bz[0], bz[1])
+			if cr.secs != nil {
+				r.addf(t.keyPath("section"), "%v", err)
+			} else {
+				bx, by, bz := cr.box.X0, cr.box.Y0, cr.box.Z0
+				r.addf(t.path, "%q holds no part of the hull: its box x [%g, %g], y [%g, %g], z [%g, %g] lies outside the shell", name, bx, cr.box.X1, by, cr.box.Y1, bz, cr.box.Z1)
+			}
 			continue
 		}
-		c.Use = use
-		c.Permeability = mu
-		c.PumpM3h = ci.PumpM3h
-		if liquid != nil {
+		c.Use = cr.ci.Use
+		c.Permeability = cr.mu
+		c.PumpM3h = cr.ci.PumpM3h
+		c.Pipe = cr.ci.SoundingPipe
+		if liquid := cr.liquid; liquid != nil {
 			if liquid.volumeM3 >= 0 {
 				if vol := c.CapacityM3(); liquid.volumeM3 > vol*(1+1e-9) {
 					r.addf(t.keyPath("fill_m3"), "%g m³ is more than the tank holds (%.1f m³: permeability %g × %.1f m³ inside the hull)", liquid.volumeM3, vol, c.Permeability, c.Volume())
@@ -498,10 +472,86 @@ func (r *reader) compartments(ts []*table, hull *engine.Hull) ([]*engine.Compart
 			}
 		}
 		out = append(out, c)
-		infos = append(infos, ci)
+		infos = append(infos, cr.ci)
 		paths = append(paths, t.path)
 	}
 	return out, infos
+}
+
+// compartmentRead is one [[compartment]] table as read: what the engine
+// needs to build its solid, what is set on it once built, and the problems
+// found reading it.
+type compartmentRead struct {
+	t      *table
+	name   string
+	mu     float64 // permeability, given or the use's default
+	ci     CompartmentInfo
+	liquid *tankLiquid
+	box    engine.Box                  // the compartment's box (given, or that of its sections)
+	secs   []engine.CompartmentSection // nil for a box
+	build  bool                        // read well enough, on a hull, to build its solid
+	probs  Problems                    // found reading the table
+
+	c   *engine.Compartment // built (buildSolids), nil with err when it could not be
+	err error
+}
+
+// compartment reads one [[compartment]] table (names maps the folded
+// names of the compartments before it to their paths) and reports its
+// problems.
+func (r *reader) compartment(t *table, names map[string]string, hull *engine.Hull) compartmentRead {
+	name, _ := r.name(t, names, "compartment")
+	use, useOK := t.choice("use", true, useNames)
+	cr := compartmentRead{t: t, name: name}
+	ci := &cr.ci
+	ci.Use = use
+	mu, muGiven := t.num("permeability", "fraction, 0 < μ ≤ 1", false)
+	if muGiven && !(mu > 0 && mu <= 1) {
+		def := ""
+		if useOK {
+			def = fmt.Sprintf(", or leave it out for the default %.2f of use %q", uses[use].permeability, use)
+		}
+		r.addf(t.keyPath("permeability"), "%g is outside (0, 1]: give the fraction of the space water can fill, above 0 and at most 1%s", mu, def)
+		muGiven = false
+	}
+	if !muGiven && useOK {
+		mu = uses[use].permeability
+		ci.DefaultPermeabilityFromUse = true
+	}
+	cr.mu = mu
+	secs, secBox, secsOK := r.sectionOutlines(t)
+	var bx, by, bz [2]float64
+	xOK, yOK, zOK := secsOK, secsOK, secsOK
+	if secs == nil {
+		bx, xOK = t.bounds("x", "aft and forward bounds")
+		by, yOK = t.bounds("y", "port and starboard bounds")
+		bz, zOK = t.bounds("z", "bottom and top")
+	}
+	box := engine.Box{X0: bx[0], X1: bx[1], Y0: by[0], Y1: by[1], Z0: bz[0], Z1: bz[1]}
+	if secs != nil {
+		box = secBox
+	}
+	cr.box, cr.secs = box, secs
+	ci.Group = uses[use].group
+	if g, ok := t.str("group", false, "the compartment's group, e.g. \"double bottom\""); ok {
+		if strings.TrimSpace(g) == "" {
+			r.addf(t.keyPath("group"), "is empty: give a group name or leave the key out")
+		} else if r.checkName(t.keyPath("group"), g, "group's name") {
+			ci.Group = g
+		}
+	}
+	cr.liquid = r.liquid(t, use, useOK)
+	ci.Hole = r.hole(t, box, xOK && yOK && zOK)
+	if p, ok := t.num("pump_m3h", "m³/h", false); ok {
+		if p < 0 {
+			r.addf(t.keyPath("pump_m3h"), "%g m³/h is negative: pumping capacity is 0 or more", p)
+		}
+		ci.PumpM3h = p
+	}
+	ci.SoundingPipe = r.soundingPipe(t, box, xOK && yOK && zOK)
+	t.finish()
+	cr.build = hull != nil && xOK && yOK && zOK && r.insideHull(t, hull, box)
+	return cr
 }
 
 // insideHull reports (and returns false) when box reaches beyond the hull's
@@ -590,7 +640,7 @@ func (r *reader) liquid(t *table, use string, useOK bool) *tankLiquid {
 	l := &tankLiquid{Liquid: engine.Liquid{Name: name, Density: dens}, volumeM3: -1}
 	if fillOK {
 		if !(fill >= 0 && fill <= 1) {
-			r.addf(t.keyPath("fill"), "%g is outside [0, 1]: give the fraction of the tank filled", fill)
+			r.addf(t.keyPath("fill"), "%g is outside [0, 1]: give the fraction of the tank filled%s", fill, percentHint(fill))
 			return nil
 		}
 		l.Fill = fill

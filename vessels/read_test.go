@@ -425,7 +425,7 @@ permability = 0.9
 	fmt.Println(err)
 	// Output:
 	// scow.toml:7: hull.breadth: -8 must be above zero (m, moulded)
-	// scow.toml:15: weight[1].permability: unknown key; the keys allowed in weight[1] are fsm, lcg, mass, name, tcg, vcg
+	// scow.toml:15: weight[1].permability: unknown key; the keys allowed in weight[1] are fsm, lcg, mass, name, tcg, vcg, x
 }
 
 // TestFormatExample reads the example of FORMAT.md, so that the page and

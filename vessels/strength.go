@@ -16,7 +16,7 @@ var strengthLimits = []string{"sea", "harbour"}
 // the hull and hold the weight's lcg strictly inside (the mass is spread
 // over it with its centre at the lcg). Zero when absent or refused.
 func (r *reader) weightExtent(t *table, lcg float64, lcgOK bool, hull *engine.Hull) [2]float64 {
-	if !t.has("x") {
+	if _, present := t.get("x"); !present { // asked, so that x is among the keys a message lists
 		return [2]float64{}
 	}
 	x, ok := t.bounds("x", "aft and forward ends of the stretch the mass is spread over")

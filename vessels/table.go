@@ -63,6 +63,9 @@ func (t *table) finish() {
 			unknown = append(unknown, k)
 		}
 	}
+	if len(unknown) == 0 {
+		return
+	}
 	sort.Strings(unknown)
 	allowed := append([]string(nil), t.asked...)
 	sort.Strings(allowed)
@@ -194,6 +197,11 @@ func (t *table) str(key string, required bool, what string) (string, bool) {
 
 // choice reads a string that must be one of vals.
 func (t *table) choice(key string, required bool, vals []string) (string, bool) {
+	if s, ok := t.m[key].(string); ok && contains(vals, s) {
+		// A good value: taken without building the list for a message.
+		t.asked = append(t.asked, key)
+		return s, true
+	}
 	s, ok := t.str(key, required, "one of "+quotedList(vals))
 	if !ok {
 		return "", false
@@ -226,31 +234,30 @@ func (t *table) boolean(key string) (bool, bool) {
 // bounds reads a [low, high] pair of finite numbers with low < high.
 func (t *table) bounds(key, what string) ([2]float64, bool) {
 	v, present := t.get(key)
-	p := t.keyPath(key)
 	if !present {
-		t.r.addf(p, "missing: give the %s as [low, high] in metres", what)
+		t.r.addf(t.keyPath(key), "missing: give the %s as [low, high] in metres", what)
 		return [2]float64{}, false
 	}
 	a, ok := v.([]any)
 	if !ok || len(a) != 2 {
-		t.r.addf(p, "must be a pair [low, high] of numbers in metres (the %s), not %s", what, describe(v))
+		t.r.addf(t.keyPath(key), "must be a pair [low, high] of numbers in metres (the %s), not %s", what, describe(v))
 		return [2]float64{}, false
 	}
 	var out [2]float64
 	for i, e := range a {
 		f, ok := number(e)
 		if !ok {
-			t.r.addf(p, "must be a pair [low, high] of numbers in metres (the %s); item %d is %s", what, i+1, typeName(e))
+			t.r.addf(t.keyPath(key), "must be a pair [low, high] of numbers in metres (the %s); item %d is %s", what, i+1, typeName(e))
 			return out, false
 		}
 		if math.IsNaN(f) || math.IsInf(f, 0) || math.Abs(f) > maxMagnitude {
-			t.r.addf(p, "item %d is %v: the %s must be finite numbers in metres, at most %g in size", i+1, f, what, maxMagnitude)
+			t.r.addf(t.keyPath(key), "item %d is %v: the %s must be finite numbers in metres, at most %g in size", i+1, f, what, maxMagnitude)
 			return out, false
 		}
 		out[i] = f
 	}
 	if !(out[1] > out[0]) {
-		t.r.addf(p, "[%g, %g] does not run from low to high: the %s must be [low, high] with low < high", out[0], out[1], what)
+		t.r.addf(t.keyPath(key), "[%g, %g] does not run from low to high: the %s must be [low, high] with low < high", out[0], out[1], what)
 		return out, false
 	}
 	return out, true
@@ -292,16 +299,16 @@ func (t *table) entries(key, what string) []*table {
 	switch a := v.(type) {
 	case []map[string]any:
 		for i, m := range a {
-			out = append(out, t.r.table(fmt.Sprintf("%s[%d]", p, i+1), m))
+			out = append(out, t.r.table(elemPath(p, i+1), m))
 		}
 	case []any:
 		for i, e := range a {
 			m, ok := e.(map[string]any)
 			if !ok {
-				t.r.addf(fmt.Sprintf("%s[%d]", p, i+1), "must be a table (%s), not %s", what, typeName(e))
+				t.r.addf(elemPath(p, i+1), "must be a table (%s), not %s", what, typeName(e))
 				continue
 			}
-			out = append(out, t.r.table(fmt.Sprintf("%s[%d]", p, i+1), m))
+			out = append(out, t.r.table(elemPath(p, i+1), m))
 		}
 	default:
 		t.r.addf(p, "must be written as [[%s]] tables (%s), not %s", p, what, typeName(v))

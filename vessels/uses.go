@@ -64,6 +64,9 @@ func Uses() []string {
 	return out
 }
 
+// useNames is Uses, worked out once for the reader.
+var useNames = Uses()
+
 func quotedList(vals []string) string {
 	q := make([]string, len(vals))
 	for i, v := range vals {

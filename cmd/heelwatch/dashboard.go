@@ -50,6 +50,14 @@ func runDashboard(vessel string, o dashboardOptions, stdout, stderr io.Writer) i
 			return exitFailed
 		}
 	}
+	if o.reportDir != "" {
+		// Refused at start, as --log is: a folder that is not there is
+		// otherwise found only when the first report or save fails.
+		if err := tui.CheckReportDir(o.reportDir); err != nil {
+			fmt.Fprintf(stderr, "heelwatch: --reports %s: %v\n", o.reportDir, err)
+			return exitUsage
+		}
+	}
 	if o.resume != "" && (o.condition != "" || len(o.open) > 0) {
 		fmt.Fprintln(stderr, "heelwatch: --resume takes up a saved state with its own condition and damage: give --resume alone, or --condition and --open")
 		return exitUsage
