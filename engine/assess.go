@@ -153,6 +153,18 @@ type Assessment struct {
 // computed is said in NoEq, HandWhy or Notes.
 func Assess(v *Vessel, d Damage) Assessment {
 	a := Assessment{Damage: append(Damage(nil), d...)}
+	// The hand method needs nothing solved: it is worked on a goroutine
+	// of its own, on another core when there is one, which also helps
+	// with the GZ curve's spans (started now, its core is awake by the
+	// time they are ready: waking an idle one can take a fifth of a
+	// millisecond).
+	var hw *HandWorking
+	var herr error
+	var help spanHelp
+	var hand beside
+	hand.run(func() {
+		help.alongside(func() { hw, herr = HandMethod(v, d) })
+	})
 	pr := NewProblem(v, d)
 	pos, err := pr.Equilibrium()
 	if err != nil {
@@ -160,27 +172,31 @@ func Assess(v *Vessel, d Damage) Assessment {
 	} else {
 		a.Position = &pos
 	}
-	if a.NoEq != nil {
+	var gz *GZCurve
+	var gzErr error
+	if a.Position != nil {
+		gz, gzErr = pr.leversHelped(pos, &help)
+	}
+	hand.wait()
+	na, notApplicable := herr.(*HandNotApplicable)
+	switch {
+	case a.NoEq != nil && herr == nil:
 		// A small-angle answer beside a ship that sinks or capsizes would
 		// be a false comfort.
-		if _, err := HandMethod(v, d); err == nil {
-			a.HandWhy = "not shown: there is no floating position (" + a.NoEq.Outcome.Plain() + "), and the small-angle working would give a false picture of her"
-		} else if na, ok := err.(*HandNotApplicable); ok {
-			a.HandWhy = na.Reason
-		}
-	} else if hw, err := HandMethod(v, d); err == nil {
-		a.Hand = hw
-	} else if na, ok := err.(*HandNotApplicable); ok {
+		a.HandWhy = "not shown: there is no floating position (" + a.NoEq.Outcome.Plain() + "), and the small-angle working would give a false picture of her"
+	case notApplicable:
 		a.HandWhy = na.Reason
-	} else {
-		a.HandWhy = err.Error()
+	case a.NoEq != nil:
+	case herr == nil:
+		a.Hand = hw
+	default:
+		a.HandWhy = herr.Error()
 	}
 	up := uprightUnknown
 	var upPtr *float64
 	if a.Position != nil {
-		gz, err := pr.leversBothSides(pos)
-		if err != nil {
-			a.Notes = append(a.Notes, "GZ curve not computed: "+err.Error())
+		if gzErr != nil {
+			a.Notes = append(a.Notes, "GZ curve not computed: "+gzErr.Error())
 		} else {
 			a.GZ = gz
 		}

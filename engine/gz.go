@@ -36,8 +36,11 @@ const (
 // GZ at 0° is negative for a listed ship: the heeling moment of her
 // off-centre weight or lost buoyancy. Each heel starts from the cubic
 // Hermite extrapolation of the last two solved planes and their exact rates
-// of change with heel, so most heels cost one evaluation (see leverAt). The
-// curve runs to at least 60° and on to the angle of vanishing stability or
+// of change with heel, so most heels cost one evaluation (see leverAt);
+// when one evaluation is costly the curve is worked in spans of fixed
+// heels shared out over the cores, each span's first heel started from
+// her own draft and trim (gz_span.go; the same curve, to the solver's
+// tolerance, on any number of cores). The curve runs to at least 60° and on to the angle of vanishing stability or
 // to 89.5° (the solver's limit), whichever is first. Each lever agrees with
 // a solve to the solver's own tolerance (pr.AtHeel) to a few 1e-9 m. The
 // angle of vanishing stability starts from the root of the cubic Hermite
@@ -67,26 +70,38 @@ func RightingLevers(pr *Problem, eq Position) (*GZCurve, error) {
 	if pr == nil {
 		panic("engine: RightingLevers of a nil problem")
 	}
+	return pr.rightingLevers(eq, nil)
+}
+
+// rightingLevers is RightingLevers with help offered to work the curves'
+// spans (see spanHelp).
+func (pr *Problem) rightingLevers(eq Position, help *spanHelp) (*GZCurve, error) {
 	if math.IsNaN(eq.HeelDeg) || math.Abs(eq.HeelDeg) > gzEndDeg {
 		return nil, fmt.Errorf("equilibrium heel %v° is not a heel the curve can start from", eq.HeelDeg)
 	}
 	switch {
 	case eq.HeelDeg >= uprightDeg:
-		c, _, err := pr.leverCurve(Starboard, eq)
-		return c, err
+		w := pr.leverCurves(eq, []curveAsk{{Starboard, gzStepDeg}}, help)[0]
+		return w.c, w.err
 	case eq.HeelDeg <= -uprightDeg:
-		c, _, err := pr.leverCurve(Port, eq)
-		return c, err
+		w := pr.leverCurves(eq, []curveAsk{{Port, gzStepDeg}}, help)[0]
+		return w.c, w.err
 	}
-	sb, sol, err := pr.leverCurve(Starboard, eq)
-	if err != nil {
-		return nil, err
-	}
-	var ps *GZCurve
+	var sb, ps *GZCurve
 	if pr.symmetric() {
-		ps = pr.mirrored(sb, sol)
-	} else if ps, _, err = pr.leverCurve(Port, eq); err != nil {
-		return nil, err
+		w := pr.leverCurves(eq, []curveAsk{{Starboard, gzStepDeg}}, help)[0]
+		if w.err != nil {
+			return nil, w.err
+		}
+		sb, ps = w.c, pr.mirrored(w.c, w.sol)
+	} else {
+		ws := pr.leverCurves(eq, []curveAsk{{Starboard, gzStepDeg}, {Port, gzStepDeg}}, help)
+		for _, w := range ws {
+			if w.err != nil {
+				return nil, w.err
+			}
+		}
+		sb, ps = ws[0].c, ws[1].c
 	}
 	if ps.reserve() < sb.reserve()*(1-1e-9) {
 		sb, ps = ps, sb
@@ -123,83 +138,8 @@ func (pr *Problem) leverCurve(side Side, eq Position) (*GZCurve, []solvedHeel, e
 
 // leverCurveStep is leverCurve with samples every stepDeg of heel.
 func (pr *Problem) leverCurveStep(side Side, eq Position, stepDeg float64) (*GZCurve, []solvedHeel, error) {
-	sgn := float64(side)
-	c := &GZCurve{Toward: side}
-	if eq.HeelDeg*sgn > 0 {
-		c.EquilibriumDeg = math.Abs(eq.HeelDeg)
-	}
-	sol := make([]solvedHeel, 0, 96)
-	c.HeelDeg = make([]float64, 0, 96)
-	c.GZM = make([]float64, 0, 96)
-	push := func(deg, gz float64, sh solvedHeel) {
-		c.HeelDeg = append(c.HeelDeg, deg)
-		c.GZM = append(c.GZM, gz)
-		sol = append(sol, sh)
-	}
-	// Heel 0 starts from her own draft and trim: the draft on the
-	// centreline changes little as she comes upright.
-	start := eq.Plane
-	if math.IsNaN(start.A+start.B) || start.A == 0 && start.B == 0 {
-		start = pr.upright()
-	}
-	found := false
-	for k := 0; ; k++ {
-		deg := math.Min(float64(k)*stepDeg, gzEndDeg)
-		guess := start
-		if n := len(sol); n > 0 {
-			guess = hermitePlane(c.HeelDeg, sol, max(0, n-2), deg)
-		}
-		sh, lever, err := pr.leverAt(sgn, deg, guess)
-		if err != nil {
-			if len(c.HeelDeg) < 2 {
-				return nil, nil, err
-			}
-			c.Note = fmt.Sprintf("no draft and trim found at %.1f° of heel: the curve ends at %.1f°", deg, c.HeelDeg[len(c.HeelDeg)-1])
-			break
-		}
-		gz := sgn * lever
-		if math.IsNaN(gz) || math.IsInf(gz, 0) {
-			if len(c.HeelDeg) < 2 {
-				return nil, nil, &NoEquilibrium{NotConverged, fmt.Sprintf("no righting lever found at %.1f° of heel", deg)}
-			}
-			c.Note = fmt.Sprintf("no righting lever found at %.1f° of heel: the curve ends at %.1f°", deg, c.HeelDeg[len(c.HeelDeg)-1])
-			break
-		}
-		n := len(c.HeelDeg)
-		if !found && n > 0 && c.GZM[n-1] > 0 && gz <= 0 && c.HeelDeg[n-1] >= c.EquilibriumDeg-1e-9 {
-			found = true
-			c.Vanishes = true
-			vd, vgz, vs := pr.vanishing(sgn, c.HeelDeg[n-1], deg, c.GZM[n-1], gz, sol[n-1], sh)
-			c.VanishingDeg = vd
-			if vd-c.HeelDeg[n-1] > 1e-3 && deg-vd > 1e-3 {
-				push(vd, vgz, vs)
-			}
-		}
-		push(deg, gz, sh)
-		if k == 0 {
-			c.upright, c.hasUpright = sh.p, true
-		}
-		if deg >= gzEndDeg || (found && deg >= gzMinEndDeg) {
-			break
-		}
-	}
-	last := c.HeelDeg[len(c.HeelDeg)-1]
-	if !found {
-		c.VanishingDeg = last
-	}
-	c.RangeDeg = math.Max(0, c.VanishingDeg-c.EquilibriumDeg)
-	c.fit()
-	c.GZMaxM, c.GZMaxDeg = c.MaxBetween(0, last)
-
-	h := pr.v.Hull
-	var deck []immersionPoint
-	for i := range h.stations {
-		x, hb, z := h.DeckEdge(i)
-		deck = append(deck, immersionPoint{x: x, y: hb, z: z}, immersionPoint{x: x, y: -hb, z: z})
-	}
-	c.DeckEdgeDeg, _ = pr.firstImmersionStep(sgn, c.HeelDeg, sol, deck, stepDeg)
-	pr.downfloodingStep(c, sol, stepDeg)
-	return c, sol, nil
+	w := pr.leverCurves(eq, []curveAsk{{side, stepDeg}}, nil)[0]
+	return w.c, w.sol, w.err
 }
 
 // downflooding sets the curve's downflooding angle and opening from its

@@ -3,12 +3,12 @@ package engine
 import "math"
 
 // This file works the two sides of the GZ curve of a ship lying near
-// upright at the same time, on two goroutines, so that a keystroke uses
-// both cores. Each side is worked on its own copy of the problem (the arc
-// hints carried from one evaluation to the next are per problem and are
-// written as it goes); the hints only choose where the search for a
-// slab's arc under the water starts, never its result, so the curves are
-// exactly those worked one after the other.
+// upright at the same time, their spans shared out over the cores
+// (gz_crew.go), so that a keystroke uses them all. Each goroutine works on
+// its own copy of the problem (the arc hints carried from one evaluation
+// to the next are per problem and are written as it goes); the hints only
+// choose where the search for a slab's arc under the water starts, never
+// its result, so the curves are exactly those worked one after the other.
 
 // fork returns a copy of pr that may be evaluated beside pr on another
 // goroutine: the same condition, with arc hints of its own.
@@ -24,47 +24,43 @@ func (pr *Problem) fork() *Problem {
 
 // leversBothSides returns RightingLevers(pr, eq) with, when she lies
 // within NearUprightDeg of upright, the other side's curve in Other (as
-// withOtherSide gives it), the other side worked on a forked problem
-// beside the curve towards her own side.
+// withOtherSide gives it), the other side worked beside the curve towards
+// her own side.
 func (pr *Problem) leversBothSides(eq Position) (*GZCurve, error) {
+	return pr.leversHelped(eq, nil)
+}
+
+// leversHelped is leversBothSides with help offered to work the curves'
+// spans (see spanHelp).
+func (pr *Problem) leversHelped(eq Position, help *spanHelp) (*GZCurve, error) {
 	h := math.Abs(eq.HeelDeg)
 	if !(h >= uprightDeg && h < NearUprightDeg) {
-		gz, err := RightingLevers(pr, eq)
+		gz, err := pr.rightingLevers(eq, help)
 		if err != nil {
 			return nil, err
 		}
 		return pr.withOtherSide(gz, eq), nil
 	}
-	return pr.leversBeside(eq)
+	return pr.leversBeside(eq, help)
 }
 
-// leversBeside is leversBothSides for a ship heeled within
-// NearUprightDeg (kept apart so that only this path pays for the
-// goroutine).
-func (pr *Problem) leversBeside(eq Position) (*GZCurve, error) {
+// leversBeside is leversHelped for a ship heeled within NearUprightDeg:
+// the two sides' curves worked together (leverCurves).
+func (pr *Problem) leversBeside(eq Position, help *spanHelp) (*GZCurve, error) {
 	toward := Starboard
 	if eq.HeelDeg < 0 {
 		toward = Port
 	}
-	type result struct {
-		c   *GZCurve
-		err error
+	// The other side's curve, one long span, is asked first (spanOrder).
+	ws := pr.leverCurves(eq, []curveAsk{{-toward, otherSideStepDeg}, {toward, gzStepDeg}}, help)
+	other, own := ws[0], ws[1]
+	if own.err != nil {
+		return nil, own.err
 	}
-	done := make(chan result, 1)
-	f := pr.fork()
-	go func() {
-		c, _, err := f.leverCurveStep(-toward, eq, otherSideStepDeg)
-		done <- result{c, err}
-	}()
-	gz, err := RightingLevers(pr, eq)
-	other := <-done
-	if err != nil {
-		return nil, err
+	if other.err != nil {
+		return own.c, nil
 	}
-	if gz == nil || gz.Other != nil || other.err != nil {
-		return gz, nil
-	}
-	cc := *gz
+	cc := *own.c
 	cc.Other = other.c
 	return &cc, nil
 }
