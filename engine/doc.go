@@ -33,7 +33,8 @@
 //   - Geometry: section.go (a section clipped by a plane), solid.go (slabs
 //     integrated along the length; the plane of the water), waterline_cut.go,
 //     convex_cut.go and outline_cursor.go (the fast paths of a slab's
-//     immersion), hull.go and compartment.go; leads.go and neighbours.go
+//     immersion), hull.go and compartment.go, clip_scratch.go (the buffers
+//     a compartment's clip by the hull reuses); leads.go and neighbours.go
 //     (where openings lead, which compartments touch).
 //   - The loading condition: vessel.go (weights, tanks and their contents,
 //     damage states, permeability).
@@ -44,8 +45,16 @@
 //   - The righting-lever curve: gz.go (the curve and what is read off it),
 //     spline.go (the not-a-knot spline that joins its samples, fitted once per
 //     curve), criteria.go (the stability criteria read off it) and gz_sides.go
-//     (the worse side near upright).
-//   - The hand method: hand.go. The flags: flags.go. Righting options:
+//     (the worse side near upright). The curve is worked in spans over the
+//     cores: gz_span.go (one span of samples from a fixed heel),
+//     gz_span_starts.go (the fixed heels, so that the curve is the same on
+//     any machine), gz_crew.go (the spans of one or more curves shared
+//     out), gz_assemble.go (the spans joined by the rules of a curve worked
+//     end to end) and gz_sides_concurrent.go (both sides at once).
+//   - The hand method: hand.go, hand_ship.go (on a ship-shaped hull) and
+//     hand_usable.go (when its answer is beyond its range). The flags:
+//     flags.go; ballast_basis.go (the basis of the GM shown when a holed
+//     tank held water ballast). Righting options:
 //     remedy.go and remedy_stages.go (each checked while carried out).
 //     Still-water strength: strength.go. All of one keystroke: assess.go
 //     (Assess and the result types).
@@ -67,8 +76,13 @@
 //     through the ship: the case and the flow law of each path),
 //     network_run.go (the run, its events and report) and
 //     network_stepper.go (its linearly implicit Rosenbrock integrator).
+//   - Soundings and tables: sounding.go (a sounding to a volume at the
+//     tank's pipe), tables.go (hydrostatic and capacity tables).
 //   - One root-finder for functions that cost a solve per value:
 //     illinois.go (the vanishing angle, flooding events, righting options).
+//   - Work beside the caller: beside.go (goroutines whose panic is raised
+//     again on the caller's) and fan_out.go (FanOut: independent calls over
+//     GOMAXPROCS goroutines).
 //
 // The free-surface correction is spread over four files, each doing one
 // part of it: vessel.go computes the free-surface moment of each slack tank
