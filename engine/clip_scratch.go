@@ -20,9 +20,10 @@ type clipScratch struct {
 var clipScratches = sync.Pool{New: func() any { return new(clipScratch) }}
 
 // clipAt returns the section of sl at x clipped by planes, written into
-// dst's storage, and its topology signature: the same polygon and the same
-// signature as clipSection(sl.section(x), planes), computed with the same
-// arithmetic in the same order (so the results agree to the bit).
+// dst's storage, and its topology signature: the same polygon as clipping
+// sl.section(x) by each of planes in turn with clipPolygon, and the
+// signature sig·31 + s over the planes' signatures s, computed with the
+// same arithmetic in the same order (so the results agree to the bit).
 func (sc *clipScratch) clipAt(dst []Point, sl *slab, x float64, planes []halfPlane) ([]Point, uint64) {
 	t := x - sl.x0
 	sec := sc.sec[:0]

@@ -36,14 +36,15 @@ const (
 // GZ at 0° is negative for a listed ship: the heeling moment of her
 // off-centre weight or lost buoyancy. Each heel starts from the cubic
 // Hermite extrapolation of the last two solved planes and their exact rates
-// of change with heel, so most heels cost one evaluation (see leverAt);
-// when one evaluation is costly the curve is worked in spans of fixed
-// heels shared out over the cores, each span's first heel started from
-// her own draft and trim (gz_span.go; the same curve, to the solver's
-// tolerance, on any number of cores). The curve runs to at least 60° and on to the angle of vanishing stability or
-// to 89.5° (the solver's limit), whichever is first. Each lever agrees with
-// a solve to the solver's own tolerance (pr.AtHeel) to a few 1e-9 m. The
-// angle of vanishing stability starts from the root of the cubic Hermite
+// of change with heel, so most heels cost one evaluation (see leverAt).
+// When one evaluation is costly (spanMinVertices) the curve is worked in
+// spans starting at fixed heels, shared out over the cores, each span's
+// first heel started from her own draft and trim (gz_span.go): the same
+// curve on any number of cores, and the same as one worked from end to
+// end to the solver's tolerance. The curve runs to at least 60° and on to
+// the angle of vanishing stability or to 89.5° (the solver's limit),
+// whichever is first. Each lever agrees with a solve to the solver's own
+// tolerance (pr.AtHeel) to a few 1e-9 m. The angle of vanishing stability starts from the root of the cubic Hermite
 // polynomial of GZ and its exact slopes between the samples that bracket
 // it, is refined by the Illinois method on solved heels and is added to
 // the curve as a sample; GZmax is the maximum of the curve's spline (see

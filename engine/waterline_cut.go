@@ -169,7 +169,8 @@ func (c *cutState) toggle(e int, in bool) {
 	c.ncut++
 }
 
-// flip moves vertex k, below the plane before if was, to the other side.
+// flip moves vertex k to the other side of the plane; was says whether it
+// was below before.
 // The edge into it is cut afterwards if it was not before, with v_k its
 // end below if k is now below; the edge out of it likewise, with v_k+1 on
 // the side k has left.

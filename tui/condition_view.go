@@ -492,11 +492,12 @@ func parseTankAmount(s string, c, b *engine.Compartment, rho float64) (float64, 
 }
 
 // sounded reads a sounding typed for tank i ("1.2m") at the tank's pipe
-// (the vessel file's sounding_pipe, else its middle) as a condition file's
-// sounding is read: the panel's condition is given the sounding and
+// (the vessel file's sounding_pipe, else at the tank's lowest point:
+// engine.Compartment.SoundingPipe) as a condition file's sounding is
+// read: the panel's condition is given the sounding and
 // vessels.Condition.Apply reads it where she lies intact with it, again
-// and again until the heel and trim it gives read the same fill (its fixed
-// point). The fill found is what the panel keeps: the sounding is one
+// and again until the heel and trim it gives read the same fill (its
+// fixed point). The fill found is what the panel keeps: the sounding is one
 // reading, not worked again when later changes move her.
 func (m model) sounded(i int, s string) (float64, string, string) {
 	c := m.v.Compartments[i]

@@ -204,11 +204,11 @@ func (hp handPanel) answers(w int) []string {
 	return lines
 }
 
-// stepLines is one step of the working, w wide (labels lw wide), its result always whole
-// and in a column of its own (as the printed working has it): on a wide
-// column the label, the result, then the formula wrapped under its own
-// column; on a narrow one the label with the result, the formula wrapped
-// under them. A caution among the steps (its label says so) is marked as
+// stepLines is one step of the working, w wide (labels lw wide), its
+// result always whole and in a column of its own (as the printed working
+// has it): on a wide column the label, the result, then the formula
+// wrapped under its own column; on a narrow one the label with the
+// result, the formula wrapped under them. A caution among the steps (its label says so) is marked as
 // one, so that its figure is read as the figure it is about, not as the
 // answer its text points to.
 func (hp handPanel) stepLines(s engine.HandStep, w, lw int) []string {

@@ -189,7 +189,8 @@ func (r *reader) keptWeights(root *table, v *engine.Vessel) []engine.Weight {
 // tankAmounts are the keys that say how much a tank holds: exactly one.
 var tankAmounts = []string{"fill", "volume_m3", "mass_t", "sounding_m"}
 
-// tankFills reads the [[tank]] tables.
+// tankFills reads the [[tank]] tables (tankFill), soundings checked at the
+// water plane's slopes slope.
 func (r *reader) tankFills(ts []*table, v *engine.Vessel, info *Info, slope engine.Plane) []TankFill {
 	var out []TankFill
 	seen := map[int]string{}
@@ -203,7 +204,12 @@ func (r *reader) tankFills(ts []*table, v *engine.Vessel, info *Info, slope engi
 	return out
 }
 
-// slope is the water plane's slopes the soundings are checked at.
+// tankFill reads one [[tank]] table: the tank's compartment, its liquid and
+// exactly one amount (tankAmounts); false when it is refused, the problem
+// recorded. seen maps each compartment given already to the key path of
+// its table (a tank given twice is refused); slope is the water plane's
+// slopes (B = −trim/L, C = tan heel) a sounding is checked against full at
+// (engine.Compartment.FullSoundingM).
 func (r *reader) tankFill(t *table, v *engine.Vessel, info *Info, seen map[int]string, slope engine.Plane) (TankFill, bool) {
 	tf := TankFill{SoundingM: -1, File: r.file, Key: t.path, Line: r.lines.line(t.path)}
 	name, nameOK := t.str("name", true, "the tank's compartment name in quotes")
@@ -335,8 +341,8 @@ func (r *reader) tankFill(t *table, v *engine.Vessel, info *Info, seen map[int]s
 	return tf, true
 }
 
-// percentHint is the hint for a fill that looks written in per cent
-// from 2 to 100): ": did you mean 0.80 (80 %)?"; "" otherwise.
+// percentHint is the hint for a fill that looks written in per cent (from
+// 2 to 100): ": did you mean 0.80 (80 %)?"; "" otherwise.
 func percentHint(f float64) string {
 	if !(f >= 2 && f <= 100) {
 		return ""

@@ -41,7 +41,7 @@ type CompartmentInfo struct {
 	// PumpM3h is the pumping capacity that can be put on the compartment, m³/h.
 	PumpM3h float64
 	// SoundingPipe is where the tank is sounded (sounding_pipe), nil for
-	// its middle (engine.DefaultSoundingPipe).
+	// its lowest point (engine.DefaultSoundingPipe).
 	SoundingPipe *engine.SoundingPipe
 	// DefaultPermeabilityFromUse is true when the file gave no permeability
 	// and the compartment's μ is the default of its use.

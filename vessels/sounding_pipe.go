@@ -8,7 +8,8 @@ import (
 // its tank is sounded, in plan. It must lie within the compartment's box;
 // a pipe that misses the tank where the hull cuts the box is reported when
 // a sounding is read (condition files). Nil when absent or refused: the
-// tank is then sounded at its middle (engine.DefaultSoundingPipe).
+// tank is then sounded at its lowest point (engine.DefaultSoundingPipe;
+// where the bottom is flat, in the middle of the flat).
 func (r *reader) soundingPipe(t *table, b engine.Box, boxOK bool) *engine.SoundingPipe {
 	raw, present := t.get("sounding_pipe")
 	if !present {
