@@ -72,6 +72,8 @@ type tankFull struct {
 	VCGM     float64 `json:"vcg_m"`
 }
 
+// fullTanks returns each tank of v full: its capacity μ × its volume inside
+// the hull (m³) and the centroid of that volume (ship frame, m).
 func fullTanks(v *engine.Vessel) []tankFull {
 	var out []tankFull
 	for _, i := range tanksOf(v) {
@@ -94,6 +96,8 @@ func liquidName(c *engine.Compartment) string {
 	return "sea water"
 }
 
+// liquidDensity is the density (t/m³) a tank's free-surface moment is
+// worked at: its liquid's, else water, the sea's (liquidName).
 func liquidDensity(c *engine.Compartment, water float64) float64 {
 	if c.Liquid != nil && c.Liquid.Density > 0 {
 		return c.Liquid.Density
@@ -101,12 +105,15 @@ func liquidDensity(c *engine.Compartment, water float64) float64 {
 	return water
 }
 
+// hydroColumns are the hydrostatic table's CSV columns, as verify reads them.
 var hydroColumns = []string{"draft_m", "displacement_t", "lcb_m", "vcb_m", "lcf_m", "tpc_t", "mct_tm", "kmt_m", "kml_m"}
 
+// hydroValues is row r's figures in the order of hydroColumns.
 func hydroValues(r engine.HydroRow) []float64 {
 	return []float64{r.DraftM, r.DisplacementT, r.LCBM, r.VCBM, r.LCFM, r.TPCt, r.MCTCtm, r.KMTM, r.KMLM}
 }
 
+// runTables runs `heelwatch tables` (tablesHelp) and returns its exit status.
 func runTables(args []string, stdout, stderr io.Writer) int {
 	fs := flag.NewFlagSet("heelwatch tables", flag.ContinueOnError)
 	fs.SetOutput(stderr)

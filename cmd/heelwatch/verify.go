@@ -74,6 +74,7 @@ func (t tolerance) at(ref float64) (float64, string) {
 	return v, basis
 }
 
+// hydroTolerances are the tolerances of the hydrostatic table's columns.
 var hydroTolerances = map[string]tolerance{
 	"displacement_t": {2, 0, "Δ"},
 	"lcb_m":          {1, 0.5, "LCB"},
@@ -85,6 +86,7 @@ var hydroTolerances = map[string]tolerance{
 	"kml_m":          {1, 0.5, "KML"},
 }
 
+// tankTolerances are the tolerances of the table of tanks full.
 var tankTolerances = map[string]tolerance{
 	"volume_m3": {2, 0, "volume"},
 	"lcg_m":     {1, 0.5, "LCG"},
