@@ -35,6 +35,9 @@ type bookletCSV struct {
 // a hydrostatic table is a few kilobytes.
 const maxBookletBytes = vessels.MaxFileBytes
 
+// readBookletCSV reads the booklet table at path (see bookletCSV). A row
+// whose fields do not match the header's is refused with its line; all
+// such problems are returned at once. The cells are read later (number).
 func readBookletCSV(path string) (*bookletCSV, error) {
 	data, err := readBookletFile(path)
 	if err != nil {
@@ -160,6 +163,7 @@ func (t *bookletCSV) columns(first string, known []string) error {
 	return errors.Join(problems...)
 }
 
+// contains reports whether s is one of list.
 func contains(list []string, s string) bool {
 	for _, x := range list {
 		if x == s {
