@@ -39,8 +39,13 @@ func boundedLeastSquares(x0, lo, hi, h []float64, maxIt int, enough float64, res
 			xp[j] += step
 			rp, ok := res(xp)
 			if !ok {
+				// The other way, if it stays within the bounds (the first
+				// step may already have been turned inward at a bound).
 				step = -step
 				xp[j] = x[j] + step
+				if xp[j] < lo[j] || xp[j] > hi[j] {
+					return x, r, true
+				}
 				if rp, ok = res(xp); !ok {
 					return x, r, true
 				}

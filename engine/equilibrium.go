@@ -449,12 +449,9 @@ func (pr *Problem) EquilibriumFrom(guess Plane, warm bool) (Position, error) {
 		}
 	}
 	// Which way does she go from upright? The lever at zero heel: positive
-	// (buoyancy to starboard of G) turns her to port. The level upright
+	// (buoyancy to starboard of G) turns her to port (fallSide). The level upright
 	// start tells the side well enough to accept a converged position.
-	side := 1.0
-	if pr.lever(pr.eval(start, false)) > 0 {
-		side = -1
-	}
+	side := pr.fallSide(pr.lever(pr.eval(start, false)))
 	if ok && pos.GMM > 0 && pos.HeelDeg*side > 0 {
 		return pos, nil
 	}
@@ -462,10 +459,7 @@ func (pr *Problem) EquilibriumFrom(guess Plane, warm bool) (Position, error) {
 	if err != nil {
 		return Position{}, err // already a *NoEquilibrium saying where
 	}
-	side = 1.0
-	if pr.lever(st0) > 0 {
-		side = -1
-	}
+	side = pr.fallSide(pr.lever(st0))
 	// March in heel from upright towards that side, 1° at a time, to the
 	// first heel where the lever turns her back: the position she comes to
 	// rest in (an angle of loll when GM is negative). With no lever at all
@@ -477,6 +471,7 @@ func (pr *Problem) EquilibriumFrom(guess Plane, warm bool) (Position, error) {
 		rlo, rhi float64
 	}
 	var best *cand
+	tol := fallTol * pr.v.Hull.BreadthM
 	prev, prevR := st0.p, pr.lever(st0)
 	for deg := 1; deg <= 89; deg++ {
 		h := side * float64(deg) * math.Pi / 180
@@ -485,7 +480,10 @@ func (pr *Problem) EquilibriumFrom(guess Plane, warm bool) (Position, error) {
 			break
 		}
 		r := pr.lever(st)
-		if side > 0 && prevR <= 0 && r > 0 || side < 0 && prevR >= 0 && r < 0 {
+		// A lever within round-off of zero (fallSide's tolerance) counts as
+		// none: upright with no lever and turned back at 1° is a rest near
+		// upright, on either side.
+		if side > 0 && prevR <= tol && r > 0 || side < 0 && prevR >= -tol && r < 0 {
 			best = &cand{h - side*math.Pi/180, h, prev, st.p, prevR, r}
 			break
 		}
@@ -662,4 +660,21 @@ func (pr *Problem) lever(s state) float64 {
 		return 0
 	}
 	return s.f[2] / (s.e.V * math.Sqrt(1+s.p.C*s.p.C))
+}
+
+// fallTol is how small a lever at zero heel is taken as none, as a
+// fraction of the breadth (round-off of the sums over the hull).
+const fallTol = 1e-9
+
+// fallSide returns the side a ship upright with lever r (m, lever at zero
+// heel; positive: buoyancy to starboard of G) goes to: +1 starboard, −1
+// port. A lever within round-off of zero (1e-9 of the breadth: a
+// condition symmetric about the centreline) is taken as none, and she is
+// taken to go to starboard, so that the side does not turn on the last
+// bit of a sum (the same rule whichever way the sums were added).
+func (pr *Problem) fallSide(r float64) float64 {
+	if r > fallTol*pr.v.Hull.BreadthM {
+		return -1
+	}
+	return 1
 }
