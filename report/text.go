@@ -143,7 +143,32 @@ func Text(w io.Writer, r Report) error {
 	textStrength(e, r)
 
 	e.line()
-	if h := a.Hand; h != nil {
+	textHand(e, a.Hand, a.HandWhy, p)
+	e.line()
+	textFlags(e, r.Flags())
+	textSpills(e, a.Spills)
+	if r.Remedies != nil {
+		e.line()
+		textRemedies(e, r.Remedies)
+	}
+	if len(a.Notes) > 0 {
+		e.line()
+		e.line("Notes")
+		for _, n := range a.Notes {
+			e.line("  ", n)
+		}
+	}
+	e.line()
+	for _, c := range Cautions() {
+		e.line(c)
+	}
+	return e.err
+}
+
+// textHand writes the hand method's working and its answers beside the
+// direct ones (p, nil when she does not float), or why it was not worked.
+func textHand(e *errWriter, h *engine.HandWorking, handWhy string, p *engine.Position) {
+	if h != nil {
 		e.line("Hand method (lost buoyancy, small angles)")
 		t := table{right: []bool{false, true, false}}
 		for _, s := range h.Steps {
@@ -177,18 +202,21 @@ func Text(w io.Writer, r Report) error {
 			e.line("  * not usable: beyond the hand method's range (past-small-angles, below); read the direct answer")
 		}
 	} else {
-		why := a.HandWhy
+		why := handWhy
 		if why == "" {
 			why = "not worked for this state"
 		}
 		e.line("Hand method: ", why)
 	}
 
-	e.line()
-	// The ship's flags, then the hand method's caveats under their own
-	// heading: they say how far to trust the method, not how the ship is.
+}
+
+// textFlags writes the ship's flags, then the hand method's caveats under
+// their own heading: they say how far to trust the method, not how the
+// ship is.
+func textFlags(e *errWriter, flags []engine.Flag) {
 	var ship, method []engine.Flag
-	for _, f := range r.Flags() {
+	for _, f := range flags {
 		if f.AboutHandMethod() {
 			method = append(method, f)
 		} else {
@@ -214,23 +242,6 @@ func Text(w io.Writer, r Report) error {
 		}
 		writeLines(e, t.lines("  "))
 	}
-	textSpills(e, a.Spills)
-	if r.Remedies != nil {
-		e.line()
-		textRemedies(e, r.Remedies)
-	}
-	if len(a.Notes) > 0 {
-		e.line()
-		e.line("Notes")
-		for _, n := range a.Notes {
-			e.line("  ", n)
-		}
-	}
-	e.line()
-	for _, c := range Cautions() {
-		e.line(c)
-	}
-	return e.err
 }
 
 func writeLines(e *errWriter, lines []string) {

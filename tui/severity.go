@@ -9,13 +9,7 @@ import (
 // wall-sided where the hand method assumes it. Such flags are shown only
 // where the hand working is (the hand key), so that they never push a flag
 // about the ship off a crowded screen.
-func handCaveat(f engine.Flag) bool {
-	switch f.Code {
-	case engine.FlagPastSmallAngles, engine.FlagNotWallSided:
-		return true
-	}
-	return false
-}
+func handCaveat(f engine.Flag) bool { return f.AboutHandMethod() }
 
 // splitFlags orders the flags danger, caution, notes (keeping the engine's
 // order within each) and sets the hand method's caveats apart.

@@ -323,10 +323,7 @@ func (r *reader) tankFill(t *table, v *engine.Vessel, info *Info, seen map[int]s
 		}
 		tf.Liquid.Fill = math.Min(vol/capM3, 1)
 	case "sounding_m":
-		tf.Pipe = c.SoundingPipe()
-		if info != nil && idx < len(info.Compartments) && info.Compartments[idx].SoundingPipe != nil {
-			tf.Pipe = *info.Compartments[idx].SoundingPipe
-		}
+		tf.Pipe = c.SoundingPipe() // the file's sounding_pipe, else at the tank's lowest point
 		full, err := c.FullSoundingM(tf.Pipe, slope)
 		if err != nil {
 			r.addf(p, "%v: give the compartment a sounding_pipe = [x, y] inside it in the vessel file", err)

@@ -39,8 +39,9 @@ func indexLines(src string) *lineIndex {
 // can run, so that it takes nothing from the decoder's time; otherwise
 // only when the index is asked for.
 type lineIndexing struct {
-	src  string
-	done chan *lineIndex // nil when not started
+	src   string
+	done  chan *lineIndex // nil when not started
+	fault any             // a panic of the scan on its goroutine, raised again by index
 }
 
 // startIndexLines begins indexing the lines of src.
@@ -48,7 +49,18 @@ func startIndexLines(src string) *lineIndexing {
 	li := &lineIndexing{src: src}
 	if runtime.GOMAXPROCS(0) >= 2 {
 		li.done = make(chan *lineIndex, 1)
-		go func() { li.done <- indexLines(src) }()
+		go func() {
+			// A fault of the scan is carried to the caller's goroutine,
+			// where the command's guard catches it, instead of ending the
+			// program from here.
+			defer func() {
+				if p := recover(); p != nil {
+					li.fault = p
+					li.done <- nil
+				}
+			}()
+			li.done <- indexLines(src)
+		}()
 	}
 	return li
 }
@@ -58,7 +70,11 @@ func (li *lineIndexing) index() *lineIndex {
 	if li.done == nil {
 		return indexLines(li.src)
 	}
-	return <-li.done
+	ix := <-li.done
+	if ix == nil {
+		panic(li.fault)
+	}
+	return ix
 }
 
 // drop waits for a scan begun (so that none outlives decode) and does

@@ -52,7 +52,10 @@ func runDashboard(vessel string, o dashboardOptions, stdout, stderr io.Writer) i
 	}
 	if o.reportDir != "" {
 		// Refused at start, as --log is: a folder that is not there is
-		// otherwise found only when the first report or save fails.
+		// otherwise found only when the first report or save fails. A
+		// folder that is not there is a usage error (exit 2); a log that
+		// cannot be written is a failed write (exit 1), as for every
+		// output.
 		if err := tui.CheckReportDir(o.reportDir); err != nil {
 			fmt.Fprintf(stderr, "heelwatch: --reports %s: %v\n", o.reportDir, err)
 			return exitUsage

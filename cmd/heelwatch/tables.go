@@ -26,7 +26,8 @@ Usage:
 hydrostatics: at even keel and upright, per draft: displacement, LCB, VCB
 (KB), LCF, TPC, MCTC, KMT, KML (columns as heelwatch verify reads them).
 tanks: each tank full (μ × its volume) and its centre. capacity: each tank
-level by level from empty to full: sounding above its lowest point, volume,
+level by level from empty to full: sounding at its sounding pipe (the file's
+sounding_pipe, else at the tank's lowest point), volume,
 centre (blank, or null, when empty), free-surface moment (its own liquid's
 density, given in the heading, the CSV's density_t_m3 column and the JSON's
 density_t_m3; sea water if none). JSON figures are rounded to 4 decimals.
