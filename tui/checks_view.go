@@ -2,6 +2,7 @@ package tui
 
 import (
 	"fmt"
+	"strings"
 
 	"heelwatch/engine"
 )
@@ -54,7 +55,20 @@ func (m model) criteriaLines(w int, withFlags bool) []string {
 	}
 	if len(cr) == 0 {
 		if len(m.v.CriteriaSets) > 0 {
-			lines = append(lines, st.Dim.Render("criteria: not yet available"))
+			// The sets named judge other states than this one (intact sets
+			// and a flooded ship, say), or the curve they need is missing.
+			why := "criteria: none of the file's sets (" + strings.Join(m.v.CriteriaSets, ", ") + ") applies to this state"
+			if engine.IsDamaged(m.damage) {
+				why = "criteria: none of the file's sets (" + strings.Join(m.v.CriteriaSets, ", ") + ") judges a flooded ship: no damage criteria are checked"
+			}
+			for _, n := range m.cur.Notes {
+				if strings.HasPrefix(n, "criteria") || strings.HasPrefix(n, "GZ curve") {
+					why = n
+				}
+			}
+			for _, l := range wrap(why, w) {
+				lines = append(lines, st.Dim.Render(l))
+			}
 		} else {
 			lines = append(lines, st.Dim.Render("criteria: the vessel file names none"))
 		}
