@@ -35,7 +35,7 @@ func TestHandNotUsableShown(t *testing.T) {
 	if a.Hand == nil || a.Hand.Usable() {
 		t.Fatalf("the case should give a hand answer that is not usable: %+v", a.Hand)
 	}
-	for _, size := range [][2]int{{80, 24}, {120, 40}} {
+	for _, size := range [][2]int{{80, 24}, {100, 30}, {120, 40}} {
 		m := newModel(nv, info, Options{Palette: "day"})
 		m.now, m.animate = fixedClock(), false
 		m = drive(t, m, tea.WindowSizeMsg{Width: size[0], Height: size[1]}, m.Init())
@@ -43,6 +43,13 @@ func TestHandNotUsableShown(t *testing.T) {
 		m = drive(t, mm.(model), nil, cmd)
 		m = press(t, m, "h")
 		view := m.View()
+		// Every heading of the hand answers says so (at 120×40 they stand
+		// under the figures, apart from the working).
+		for _, l := range strings.Split(view, "\n") {
+			if strings.Contains(l, "HAND METHOD") && !strings.Contains(l, "✗") && !strings.Contains(l, "NOT USABLE") {
+				t.Errorf("%v: a hand heading without the mark: %q", size, l)
+			}
+		}
 		if !strings.Contains(view, "NOT USABLE") && !strings.Contains(view, "HAND METHOD ✗") {
 			t.Errorf("%v: the hand panel does not say the hand answer is not usable:\n%s", size, view)
 		}

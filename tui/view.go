@@ -184,7 +184,11 @@ func (m model) wideBody() []string {
 	if m.hand.show && m.cur != nil {
 		// The hand method's answers right under the direct figures.
 		if m.cur.Hand != nil {
-			mid = append(mid, m.st.Heading.Render("HAND METHOD"))
+			if m.cur.Hand.Usable() {
+				mid = append(mid, m.st.Heading.Render("HAND METHOD"))
+			} else {
+				mid = append(mid, m.st.Danger.Render("HAND METHOD ✗ NOT USABLE: its heel and drafts"))
+			}
 			mid = append(mid, m.handShown().answers(l.posW)...)
 		} else {
 			mid = append(mid, m.st.Heading.Render("HAND METHOD"))
