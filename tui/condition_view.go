@@ -1,8 +1,11 @@
 package tui
 
 import (
+	"errors"
 	"fmt"
+	"io/fs"
 	"math"
+	"os"
 	"path/filepath"
 	"strconv"
 	"strings"
@@ -347,10 +350,20 @@ func (m model) seaRefusal(i int) string {
 	return name + " holds floodwater: its contents are the sea's while it is flooded, so its fill is not changed"
 }
 
-// defaultPath is the file a save offers: kind and the time, in the report
-// directory.
+// defaultPath is the file a save offers: kind and the time to the
+// second, in the report directory; never the name of a file already
+// there (a second save in the same second gets "-2", and so on), so that
+// taking the offer never writes over an earlier save.
 func (p conditionPanel) defaultPath(kind string, now time.Time) string {
-	return filepath.Join(p.dir, kind+"-"+now.UTC().Format("20060102-1504")+".toml")
+	base := filepath.Join(p.dir, kind+"-"+now.UTC().Format("20060102-150405"))
+	path := base + ".toml"
+	for k := 2; k < 1000; k++ {
+		if _, err := os.Lstat(path); errors.Is(err, fs.ErrNotExist) {
+			break
+		}
+		path = fmt.Sprintf("%s-%d.toml", base, k)
+	}
+	return path
 }
 
 func (m model) startTyping(what conditionInput, value string) (tea.Model, tea.Cmd, bool) {
