@@ -369,6 +369,13 @@ func (p conditionPanel) defaultPath(kind string, now time.Time) string {
 func (m model) startTyping(what conditionInput, value string) (tea.Model, tea.Cmd, bool) {
 	m.cond.typing = what
 	m.cond.note = ""
+	m.cond.field.Placeholder = ""
+	if what == condTank {
+		// A tank's contents are typed afresh (a figure typed after the
+		// old one would run into it: 70 then 55 read 7055); the fill now
+		// shows in the empty field.
+		m.cond.field.Placeholder, value = value+" % now", ""
+	}
 	m.cond.field.SetValue(value)
 	m.cond.field.CursorEnd()
 	m.cond.field.PromptStyle, m.cond.field.TextStyle = m.st.Prompt, m.st.Value

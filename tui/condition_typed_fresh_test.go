@@ -1,0 +1,24 @@
+package tui
+
+import (
+	"math"
+	"testing"
+)
+
+// TestTankFillTypedAfresh: e on a tank opens an empty field (the fill now
+// as its placeholder), so that typing 55 sets 55 %, not 7055 (officer
+// trial: the field opened holding "70").
+func TestTankFillTypedAfresh(t *testing.T) {
+	m := testModel(t, 120, 40)
+	m = press(t, m, "L")
+	m = condRowOf(t, m, "Wing tank 2 P")
+	m = press(t, m, "e")
+	if m.cond.field.Value() != "" {
+		t.Fatalf("the field opened holding %q", m.cond.field.Value())
+	}
+	m = press(t, m, "5", "5", "enter")
+	i := m.cond.rows()[m.cond.sel].tank
+	if l := m.v.Compartments[i].Liquid; l == nil || math.Abs(l.Fill-0.55) > 1e-12 {
+		t.Errorf("fill after typing 55: %+v (note %q)", l, m.cond.note)
+	}
+}
