@@ -223,7 +223,11 @@ func flags(v *Vessel, d Damage, pos *Position, noEq *NoEquilibrium, hand *HandWo
 		}
 		switch noEq.Outcome {
 		case Sinks:
-			add(FlagWillSink, Danger, "There is no floating position: %s she sinks (%s). Only stopping the inflow or shedding weight can keep her afloat.", as, noEq.Reason)
+			remedy := "Only shedding weight can keep her afloat: she is loaded beyond what her hull can float."
+			if IsDamaged(d) {
+				remedy = "Only stopping the inflow or shedding weight can keep her afloat."
+			}
+			add(FlagWillSink, Danger, "There is no floating position: %s she sinks (%s). %s", as, noEq.Reason, remedy)
 		case Capsizes:
 			remedy := "Lowering G is the remedy"
 			if IsDamaged(d) {
@@ -296,7 +300,9 @@ func flags(v *Vessel, d Damage, pos *Position, noEq *NoEquilibrium, hand *HandWo
 		if o.Kind != "" {
 			what = o.Kind + " " + what
 		}
-		if o.IntoFlooded && !o.Weathertight {
+		if o.IntoFlooded {
+			// Weathertight or not: were it to give way, it would let the
+			// sea only into a space that holds sea water already.
 			add(FlagOpeningIntoFlooded, Info, "The %s %s is %.2f m under water, but it leads into %s, which is flooded already: no further flooding through it.",
 				what, flagPoint(o.X, o.Y, o.Z, L), -o.HeightM, o.LeadsTo)
 			continue

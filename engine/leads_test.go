@@ -1,6 +1,7 @@
 package engine_test
 
 import (
+	"strings"
 	"testing"
 
 	"heelwatch/engine"
@@ -81,4 +82,56 @@ func TestOpeningIntoFloodedSpace(t *testing.T) {
 		Openings: []engine.Opening{{Name: "vent", X: 5, Z: 3, LeadsTo: "nowhere"}}}); err == nil {
 		t.Error("NewVessel took an opening leading to no compartment")
 	}
+}
+
+// TestWeathertightIntoFloodedSpace: the same air pipe fitted with a
+// weathertight head and leading into the tank already open to the sea:
+// were the head to give way the sea would reach only water, so it is a
+// note (opening-into-flooded), not a caution to check the closure.
+func TestWeathertightIntoFloodedSpace(t *testing.T) {
+	v, d := leadsBarge(t, "Wing tank S")
+	v.Openings[0].Weathertight = true
+	a := engine.Assess(v, d)
+	if a.Position == nil || !a.Position.Openings[0].Immersed() {
+		t.Fatal("the pipe is not under water: the test wants it under")
+	}
+	var codes []string
+	for _, f := range a.Flags {
+		codes = append(codes, f.Code)
+		if f.Code == engine.FlagClosure {
+			t.Errorf("closure caution for a closure into a flooded space: %s", f.Message)
+		}
+	}
+	found := false
+	for _, c := range codes {
+		found = found || c == engine.FlagOpeningIntoFlooded
+	}
+	if !found {
+		t.Errorf("no %s note: %v", engine.FlagOpeningIntoFlooded, codes)
+	}
+}
+
+// TestIntactSinksNamesNoInflow: a box barge loaded beyond what her hull
+// floats, nothing flooded: the will-sink flag must not speak of an inflow
+// there is none of.
+func TestIntactSinksNamesNoInflow(t *testing.T) {
+	h, err := engine.NewBoxHull(60, 12, 5)
+	if err != nil {
+		t.Fatal(err)
+	}
+	v, err := engine.NewVessel(engine.Vessel{Name: "overloaded barge (invented)", Hull: h,
+		Weights: []engine.Weight{{Name: "cargo", MassT: 60 * 12 * 5.2 * engine.SeaWaterDensity, LCGM: 30, VCGM: 3}}})
+	if err != nil {
+		t.Fatal(err)
+	}
+	a := engine.Assess(v, v.Intact())
+	for _, f := range a.Flags {
+		if f.Code == engine.FlagWillSink {
+			if strings.Contains(f.Message, "inflow") || !strings.Contains(f.Message, "shedding weight") {
+				t.Errorf("intact will-sink: %s", f.Message)
+			}
+			return
+		}
+	}
+	t.Errorf("no %s flag: %+v", engine.FlagWillSink, a.Flags)
 }

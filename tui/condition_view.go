@@ -345,7 +345,7 @@ func (m model) seaRefusal(i int) string {
 	case why == "":
 		return ""
 	case m.damage[i].Open:
-		return name + " is open to the sea: its contents are the sea's while it is open, so its fill is not changed (undo the damage first)"
+		return name + " is open to the sea: its contents are the sea's while it is open, so its fill is not changed (close the compartment first: space in the list)"
 	}
 	return name + " holds floodwater: its contents are the sea's while it is flooded, so its fill is not changed"
 }
