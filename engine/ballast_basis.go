@@ -33,9 +33,16 @@ func ballastBasisFlags(v *Vessel, d Damage) []Flag {
 		if !(m > 0.05) {
 			continue
 		}
+		// Pressed full, the water stays where it was: the righting moment
+		// Δ·GM is the same on either basis. Part full, its free surface
+		// no longer counts either (the space is the sea's).
+		tail := " (Δ·GM unchanged)"
+		if _, _, _, _, fsm := v.TankContents(i); fsm > 0 {
+			tail = ", without its free surface"
+		}
 		out = append(out, Flag{Code: FlagBallastHoled, Severity: Info, Message: fmt.Sprintf(
-			"%s is holed: its %.0f t of %s left the ship weight; GM is of the lighter ship.",
-			c.Name, m, c.Liquid.Name)})
+			"%s is holed: its %.0f t of %s left the ship weight; GM is of the lighter ship%s.",
+			c.Name, m, c.Liquid.Name, tail)})
 	}
 	return out
 }

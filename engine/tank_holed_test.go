@@ -156,6 +156,15 @@ func TestHoledBallastSaysTheBasis(t *testing.T) {
 	if want := fmt.Sprintf("its %.0f t of sea water ballast left the ship weight", lost); !strings.Contains(note.Message, want) {
 		t.Errorf("note %q does not say %q", note.Message, want)
 	}
+	if !strings.Contains(note.Message, "(Δ·GM unchanged)") {
+		t.Errorf("full tank: note %q does not say Δ·GM is unchanged", note.Message)
+	}
+	half := holedTankBarge(t, engine.Liquid{Name: "sea water ballast", Density: engine.SeaWaterDensity, Fill: 0.5})
+	for _, f := range engine.Assess(half, d).Flags {
+		if f.Code == engine.FlagBallastHoled && !strings.Contains(f.Message, "without its free surface") {
+			t.Errorf("half-full tank: note %q does not say its free surface went with it", f.Message)
+		}
+	}
 	for _, c := range []struct {
 		liq  engine.Liquid
 		what string
