@@ -511,6 +511,7 @@ func flagWallSided(h *Hull, p Plane) string {
 		return ""
 	}
 	worst, msg := 0.0, ""
+	var band wallBand
 	for _, st := range h.stations {
 		o := st.Offsets
 		zk, zd := o[0].Z, o[len(o)-1].Z
@@ -520,8 +521,8 @@ func flagWallSided(h *Hull, p Plane) string {
 		}
 		y0 := flagHalfBreadth(o, zc)
 		lo, hi := zc-t*y0, zc+t*y0
-		where := flagWhere(st.X, h.LengthM)
 		if hi > zd || lo < zk {
+			where := flagWhere(st.X, h.LengthM)
 			if !math.IsInf(worst, 1) {
 				worst = math.Inf(1)
 				if hi > zd {
@@ -544,12 +545,19 @@ func flagWallSided(h *Hull, p Plane) string {
 		}
 		dev := math.Max(y0-ymin, ymax-y0) / half
 		if dev > FlagWallSidedPart && dev > worst {
-			worst = dev
-			msg = fmt.Sprintf("Between the upright and the heeled waterline the hull is not wall-sided %s: the half-breadth runs from %.2f to %.2f m across that band (%.1f %% of the half-breadth). The hand method and the wall-sided formula do not describe her; trust the direct solution.", where, ymin, ymax, 100*dev)
+			worst, band = dev, wallBand{st.X, ymin, ymax}
 		}
+	}
+	if msg == "" && worst > 0 {
+		// Worded once, for the worst station.
+		msg = fmt.Sprintf("Between the upright and the heeled waterline the hull is not wall-sided %s: the half-breadth runs from %.2f to %.2f m across that band (%.1f %% of the half-breadth). The hand method and the wall-sided formula do not describe her; trust the direct solution.", flagWhere(band.x, h.LengthM), band.ymin, band.ymax, 100*worst)
 	}
 	return msg
 }
+
+// wallBand is a station's half-breadths across the band between the
+// upright and the heeled waterline (flagWallSided).
+type wallBand struct{ x, ymin, ymax float64 }
 
 // UprightGM returns the GM of damage state d with the ship held upright at
 // free trim (GM₀): the GM that decides between a list and a loll, and the

@@ -404,14 +404,17 @@ func firstImmersion(sgn float64, heels []float64, sol []solvedHeel, pts []immers
 	if len(pts) == 0 {
 		return 90, ""
 	}
+	// The lowest point's height above the plane: the heights along the
+	// normal are the vertical ones over one common factor (Plane.Height),
+	// so the least is found on the vertical ones and divided once.
 	lowest := func(p Plane) (float64, int) {
 		m, im := math.Inf(1), -1
 		for i, q := range pts {
-			if h := p.Height(q.x, q.y, q.z); h < m {
+			if h := q.z - (p.A + p.B*q.x + p.C*q.y); h < m {
 				m, im = h, i
 			}
 		}
-		return m, im
+		return m / math.Sqrt(1+p.B*p.B+p.C*p.C), im
 	}
 	for k := range heels {
 		h, i := lowest(sol[k].p)
