@@ -22,3 +22,17 @@ func TestTankFillTypedAfresh(t *testing.T) {
 		t.Errorf("fill after typing 55: %+v (note %q)", l, m.cond.note)
 	}
 }
+
+// TestTankFillDecimalComma: "55,5" is 55.5 %, as a permeability or a
+// booklet figure may be typed with a decimal comma.
+func TestTankFillDecimalComma(t *testing.T) {
+	m := testModel(t, 120, 40)
+	m = press(t, m, "L")
+	m = condRowOf(t, m, "Wing tank 2 P")
+	m = press(t, m, "e")
+	m = typed(t, m, "55,5")
+	i := m.cond.rows()[m.cond.sel].tank
+	if l := m.v.Compartments[i].Liquid; l == nil || math.Abs(l.Fill-0.555) > 1e-12 {
+		t.Errorf("fill after typing 55,5: %+v (note %q)", l, m.cond.note)
+	}
+}

@@ -488,6 +488,9 @@ func parseTankAmount(s string, c, b *engine.Compartment, rho float64) (float64, 
 			break
 		}
 	}
+	if strings.Count(t, ",") == 1 && !strings.Contains(t, ".") {
+		t = strings.Replace(t, ",", ".", 1) // a decimal comma, as in "55,5"
+	}
 	x, err := strconv.ParseFloat(t, 64)
 	if err != nil || math.IsNaN(x) || math.IsInf(x, 0) || x < 0 {
 		return 0, fmt.Sprintf("%q: give per cent of capacity (55), tonnes (120t), m³ (80m3) or a sounding (1.2m), 0 or more", s)
@@ -567,7 +570,7 @@ func parseWeight(s string, withName bool, h *engine.Hull) (engine.Weight, string
 		}
 	}
 	if len(fields) != 4 {
-		return w, "write four numbers: mass t, lcg m, tcg m (+ starboard), vcg m"
+		return w, "write four numbers: mass t, lcg m, tcg m (+ starboard), vcg m (decimals with a point: commas and spaces part the numbers)"
 	}
 	var v [4]float64
 	for i, f := range fields {
