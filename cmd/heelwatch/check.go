@@ -70,7 +70,7 @@ func runCheck(args []string, stdout, stderr io.Writer) int {
 // when its loading condition does not float intact.
 func summarise(w io.Writer, v *engine.Vessel, info *vessels.Info) int {
 	h := v.Hull
-	fmt.Fprintf(w, "%s — %s: no problems found\n", v.Name, source(info))
+	fmt.Fprintf(w, "%s — %s: no errors (the warnings below, if any, are things to mend)\n", v.Name, source(info))
 	if info.Description != "" {
 		fmt.Fprintf(w, "  %s\n", firstLine(info.Description))
 	}

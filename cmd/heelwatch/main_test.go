@@ -360,7 +360,7 @@ func TestCheckSummary(t *testing.T) {
 	if code != 0 {
 		t.Fatalf("exit status %d", code)
 	}
-	for _, want := range []string{"no problems found", "length 60.00 m, breadth 12.00 m, depth 6.00 m",
+	for _, want := range []string{"no errors (the warnings below", "length 60.00 m, breadth 12.00 m, depth 6.00 m",
 		"displacement 1636.8 t", "Wing tank P", "fresh water 40 %", "Hold", "dry cargo", "0.70", "360.0", "GM "} {
 		if !strings.Contains(out, want) {
 			t.Errorf("summary lacks %q:\n%s", want, out)
@@ -507,7 +507,7 @@ func TestCheckWarnsOfOpeningUnderWater(t *testing.T) {
 		t.Fatal(err)
 	}
 	_, out, _ := heelwatch(t, "check", path)
-	if !strings.Contains(out, "no problems found") || !strings.Contains(out, `WARNING`) || !strings.Contains(out, `"Wing void S vent"`) {
+	if !strings.Contains(out, "no errors (the warnings below") || !strings.Contains(out, `WARNING`) || !strings.Contains(out, `"Wing void S vent"`) {
 		t.Errorf("check does not warn of the vent under water:\n%s", out)
 	}
 	_, out, _ = heelwatch(t, "check", reportCase)
