@@ -63,3 +63,19 @@ func TestHandNotUsableShown(t *testing.T) {
 		}
 	}
 }
+
+// TestHandCaveatsSaidToBeTheMethods: with the hand working shown, the
+// method's caveats (Wing tank 2 S open: past-small-angles, not-wall-sided)
+// stand under a line saying they are about the method, since "no flags
+// raised" may stand just above them (officer trial at 80×24).
+func TestHandCaveatsSaidToBeTheMethods(t *testing.T) {
+	m := testModel(t, 80, 24)
+	m = openSpaces(t, m, "Wing tank 2 S")
+	m = press(t, m, "h")
+	if len(m.derived.hand) == 0 {
+		t.Skip("no caveat of the hand method in this state")
+	}
+	if view := m.View(); !strings.Contains(view, "the hand method's caveats") {
+		t.Errorf("the caveats are not said to be the method's:\n%s", view)
+	}
+}

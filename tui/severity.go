@@ -53,6 +53,12 @@ func (m model) severityWord() string {
 // mark of its severity: shown only where the hand working is.
 func (hp handPanel) caveatLines(w int) []string {
 	var out []string
+	if len(hp.caveats) > 0 {
+		// Said once: "no flags raised" above may stand over them.
+		for _, l := range wrap("the hand method's caveats (about the method, not flags of the ship):", w) {
+			out = append(out, hp.st.Dim.Render(l))
+		}
+	}
 	for _, f := range hp.caveats {
 		for k, l := range wrap(f.Message, w-2) {
 			if k == 0 {
