@@ -185,6 +185,19 @@ func (hp handPanel) answers(w int) []string {
 			// Heel with its side, as everywhere else on the screen.
 			show, unit = heelShort, ""
 		}
+		if label == "Trim" {
+			// Trim with its sense, not a sign to be decoded: "0.32 st"
+			// by the stern, "0.05 hd" by the head.
+			show = func(v float64) string {
+				switch r := math.Round(v*100) / 100; {
+				case r > 0:
+					return num(v, prec) + " st"
+				case r < 0:
+					return num(-v, prec) + " hd"
+				}
+				return "even"
+			}
+		}
 		d, apart := blank, blank
 		if p != nil {
 			d = show(dv(p))

@@ -75,7 +75,12 @@ func TestHandCaveatsSaidToBeTheMethods(t *testing.T) {
 	if len(m.derived.hand) == 0 {
 		t.Skip("no caveat of the hand method in this state")
 	}
-	if view := m.View(); !strings.Contains(view, "the hand method's caveats") {
+	view := m.View()
+	if !strings.Contains(view, "the hand method's caveats") {
 		t.Errorf("the caveats are not said to be the method's:\n%s", view)
+	}
+	// Her trim is by the stern: said so in the hand table, not by a sign.
+	if line := lineWith(view, "Trim "); !strings.Contains(line, " st") || strings.Contains(line, "-") {
+		t.Errorf("hand table's trim row: %q", line)
 	}
 }
