@@ -732,7 +732,13 @@ func (m model) saveCmd(path string, all bool) tea.Cmd {
 // totals, like the floating position's ship weight, leave it out.
 func (p conditionPanel) view(v *engine.Vessel, d engine.Damage, st *Styles, w, h int) []string {
 	title := "LOADING CONDITION"
-	if p.cond.Name != "" {
+	if mark := changeOnly(p.cond.Name); mark != "" {
+		// The mark of a change first, where a cut name cannot take it.
+		title += " " + mark
+		if n := unchangedName(p.cond.Name); n != "" {
+			title += ": " + n
+		}
+	} else if p.cond.Name != "" {
 		title += ": " + p.cond.Name
 	}
 	lines := []string{st.Heading.Render(titleFit(w, title, "L closes"))}
