@@ -36,3 +36,27 @@ func TestTankFillDecimalComma(t *testing.T) {
 		t.Errorf("fill after typing 55,5: %+v (note %q)", l, m.cond.note)
 	}
 }
+
+// TestConditionPanelKeysAnswer: home and end move the panel's own list
+// (not the compartments behind it), and ←→ on a tank says what moves
+// instead of doing nothing silently (officer trial).
+func TestConditionPanelKeysAnswer(t *testing.T) {
+	m := testModel(t, 120, 40)
+	m = press(t, m, "L")
+	sel := m.sel
+	m = press(t, m, "end")
+	if last := len(m.cond.rows()) - 1; m.cond.sel != last || m.sel != sel {
+		t.Errorf("end: panel row %d (want %d), list %d (was %d)", m.cond.sel, last, m.sel, sel)
+	}
+	m = press(t, m, "home")
+	if m.cond.sel != 0 {
+		t.Errorf("home: panel row %d", m.cond.sel)
+	}
+	if m.cond.rows()[0].tank < 0 {
+		t.Skip("the first row is not a tank")
+	}
+	m = press(t, m, "right")
+	if m.cond.note == "" {
+		t.Error("→ on a tank said nothing")
+	}
+}

@@ -73,6 +73,8 @@ var (
 	condSaveAllKey = key.NewBinding(key.WithKeys("S"), key.WithHelp("S", "save all"))
 	condUpKey      = key.NewBinding(key.WithKeys("up", "k"))
 	condDownKey    = key.NewBinding(key.WithKeys("down", "j"))
+	condFirstKey   = key.NewBinding(key.WithKeys("home"))
+	condLastKey    = key.NewBinding(key.WithKeys("end"))
 )
 
 // Messages.
@@ -238,6 +240,10 @@ func (m model) conditionKey(msg tea.KeyMsg) (tea.Model, tea.Cmd, bool) {
 		p.sel = max(0, p.sel-1)
 	case key.Matches(msg, condDownKey):
 		p.sel = min(len(rows)-1, p.sel+1)
+	case key.Matches(msg, condFirstKey):
+		p.sel = 0
+	case key.Matches(msg, condLastKey):
+		p.sel = max(len(rows)-1, 0)
 	case key.Matches(msg, condMoreKey), key.Matches(msg, condLessKey):
 		if row.tank < 0 {
 			return m, nil, true
@@ -264,6 +270,7 @@ func (m model) conditionKey(msg tea.KeyMsg) (tea.Model, tea.Cmd, bool) {
 		return mm, cmd, true
 	case key.Matches(msg, condAftKey), key.Matches(msg, condFwdKey):
 		if row.weight < 0 {
+			p.note = "←→ move a weight; a tank's contents change with + and −, or e to type them"
 			return m, nil, true
 		}
 		dx := 1.0
