@@ -35,7 +35,6 @@ type conditionPanel struct {
 	cond   *vessels.Condition // the condition now (the panel's own copy)
 	taken  *vessels.Condition // the condition the ship is loaded with: what undo goes back to
 	named  string             // the condition's name before any change (condition_name.go)
-	resume *vessels.State     // a state to take up at start, nil once taken
 	source string             // where the ship came from, for a state file ("freighter" or a path)
 	dir    string             // where files are saved by default
 	sel    int                // the row chosen: tanks first, then weights
@@ -43,7 +42,6 @@ type conditionPanel struct {
 	field  textinput.Model    // the value typed
 	note   string             // the last thing done or refused, one line
 	gen    int                // the condition's number, newest last (baselines of older ones are dropped)
-	start  tea.Cmd            // what taking up a saved state starts with (Init runs it)
 }
 
 type conditionInput int
